@@ -29242,95 +29242,6 @@ module.exports = {
 
 /***/ }),
 
-/***/ 4823:
-/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
-
-/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   D0: () => (/* binding */ evaluateBase),
-/* harmony export */   MZ: () => (/* binding */ ACTION_FETCH_HINT)
-/* harmony export */ });
-/* unused harmony export CLI_FETCH_HINT */
-/* harmony import */ var node_fs_promises__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(1455);
-/* harmony import */ var node_fs_promises__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_fs_promises__WEBPACK_IMPORTED_MODULE_0__);
-/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(6760);
-/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1___default = /*#__PURE__*/__nccwpck_require__.n(node_path__WEBPACK_IMPORTED_MODULE_1__);
-/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(4296);
-/* harmony import */ var _run_base_comparison_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(5148);
-/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(6418);
-/* harmony import */ var _repo_git_repository_js__WEBPACK_IMPORTED_MODULE_5__ = __nccwpck_require__(4029);
-/**
- * Evaluates every model as it was on a base commit, read with git from that commit (settings
- * file, descriptors and data alike), so that the head run can compare with it. Used by the
- * action on pull requests and by `fitgate check --base <ref>`. A base that cannot be read or
- * checked never stops the head run: it becomes one note.
- */
-
-
-
-
-
-
-/** Hint for the action: how to make the base commit available. */
-const ACTION_FETCH_HINT = 'fetch it with `fetch-depth: 2` on actions/checkout (a pull_request checkout is the merge commit, whose first parent is the base). Models are not compared with the base branch in this run.';
-/** Hint for the command line. */
-const CLI_FETCH_HINT = 'fetch it (for example `git fetch origin <branch>`) or name a commit that exists locally. Models are not compared with a base in this run.';
-/**
- * The head run's options from the base commit: the baseline by model name with each base model's
- * data files (to match renamed models) and the base SHA, or one note saying why there is no
- * comparison.
- * @param settings the head run's settings (the same settings file path and descriptors are read at the base)
- * @param revision the base commit: a SHA or any revision git understands
- * @param options the hint shown when git does not have the commit
- */
-async function evaluateBase(settings, revision, options) {
-    const short = /^[0-9a-f]{40,64}$/.test(revision) ? revision.slice(0, 7) : revision;
-    const top = await (0,_repo_git_repository_js__WEBPACK_IMPORTED_MODULE_5__/* .tryGitTopLevel */ .ZS)(settings.root);
-    if (top === null)
-        return {
-            notes: [
-                `base commit ${short} is not available: ${settings.root} is not inside a git work tree. Models are not compared with a base in this run.`,
-            ],
-        };
-    const sha = await (0,_repo_git_repository_js__WEBPACK_IMPORTED_MODULE_5__/* .tryResolveCommit */ .Fl)(settings.root, revision);
-    if (sha === null)
-        return { notes: [`base commit ${short} is not available; ${options.fetchHint}`] };
-    const prefix = node_path__WEBPACK_IMPORTED_MODULE_1___default().relative(await (0,node_fs_promises__WEBPACK_IMPORTED_MODULE_0__.realpath)(top), await (0,node_fs_promises__WEBPACK_IMPORTED_MODULE_0__.realpath)(settings.root))
-        .split((node_path__WEBPACK_IMPORTED_MODULE_1___default().sep))
-        .join('/');
-    const repo = (0,_repo_git_repository_js__WEBPACK_IMPORTED_MODULE_5__/* .createGitRepository */ .Zd)({ cwd: settings.root, commit: sha, prefix });
-    try {
-        // Explicitly named descriptors that do not exist at the base are new in the head.
-        const descriptors = [];
-        for (const d of settings.descriptors)
-            if (await repo.isFile(d))
-                descriptors.push(d);
-        const baseline = new Map();
-        const baselineData = new Map();
-        if (settings.descriptors.length === 0 || descriptors.length > 0) {
-            const configThere = await repo.isFile(settings.config);
-            if (configThere || !settings.configExplicit) {
-                // The data files of each base model, to find it again when a pull request renames and moves it.
-                const onDescriptors = (loaded) => {
-                    for (const d of loaded)
-                        baselineData.set(d.name, (0,_run_base_comparison_js__WEBPACK_IMPORTED_MODULE_3__/* .dataKey */ .gf)(d));
-                };
-                const base = await (0,_run_pipeline_js__WEBPACK_IMPORTED_MODULE_4__/* .runPipeline */ .a)({ ...settings, descriptors }, repo, { onDescriptors });
-                for (const m of base.models)
-                    baseline.set(m.name, m);
-            }
-        }
-        return { baseline, baselineData, baseCommit: sha, notes: [] };
-    }
-    catch (error) {
-        return {
-            notes: [`base commit ${sha.slice(0, 7)} could not be checked (${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .errorMessage */ .gJ)(error)}); models are not compared with it in this run.`],
-        };
-    }
-}
-
-
-/***/ }),
-
 /***/ 1151:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
@@ -30032,7 +29943,7 @@ async function reviewSuggestions(api, result, source, commit) {
 
 /***/ }),
 
-/***/ 3992:
+/***/ 1550:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -30042,7 +29953,8 @@ __nccwpck_require__.d(__webpack_exports__, {
   NR: () => (/* binding */ checksFor),
   Sd: () => (/* binding */ findCheck),
   k_: () => (/* binding */ runCheck),
-  Rc: () => (/* binding */ runClassifierCheck)
+  Rc: () => (/* binding */ runClassifierCheck),
+  KK: () => (/* binding */ runPredictionsCheck)
 });
 
 // UNUSED EXPORTS: registryLimitKeys
@@ -30051,6 +29963,8 @@ __nccwpck_require__.d(__webpack_exports__, {
 var result = __nccwpck_require__(1628);
 // EXTERNAL MODULE: ./src/core/format.ts
 var format = __nccwpck_require__(6228);
+// EXTERNAL MODULE: ./src/core/errors.ts
+var errors = __nccwpck_require__(4296);
 // EXTERNAL MODULE: ./src/core/json.ts
 var json = __nccwpck_require__(6153);
 ;// CONCATENATED MODULE: ./src/checks/classifier/measures.ts
@@ -30059,6 +29973,7 @@ var json = __nccwpck_require__(6153);
  * each figure is the classification counterpart of the regression one, from the log-loss
  * (mean -[y log p + (1 - y) log(1 - p)]) where the regression check uses the RMSE.
  */
+
 
 
 
@@ -30117,7 +30032,10 @@ function classifierCrossValidation({ crossValidation: cv, train }) {
 function classifierLeakage({ leakage, design }) {
     if (design.inputs.length === 0)
         return { value: null, reason: 'not-applicable', message: 'the model reads no input column, so no row can repeat' };
-    const shown = leakage.examples.map((e) => `hold-out line ${e.holdoutLine} = training line ${e.trainLine}`).join(', ');
+    const of = (file) => (file === undefined ? '' : ` of ${(0,errors/* clip */.$Q)(file)}`);
+    const shown = leakage.examples
+        .map((e) => `hold-out line ${e.holdoutLine}${of(e.holdoutFile)} = training line ${e.trainLine}${of(e.trainFile)}`)
+        .join(', ');
     return {
         value: leakage.duplicates,
         message: leakage.duplicates === 0
@@ -30203,7 +30121,187 @@ function classifierComplexity({ complexity: sweep }) {
     };
 }
 
+// EXTERNAL MODULE: ./src/diagnostics/regression-metrics.ts
+var regression_metrics = __nccwpck_require__(155);
+;// CONCATENATED MODULE: ./src/checks/predictions/measures.ts
+/**
+ * How the checks that need only predictions measure a model trained elsewhere
+ * (Check.measurePredictions): the same figures as for a model of terms, from the predictions of
+ * the training and hold-out rows; log-loss where a classifier's checks use it.
+ */
+
+
+
+
+
+/** Advice for a model trained elsewhere: the change is made in the tool that trained it. */
+const ELSEWHERE_ADVICE = 'Regularise the model in the tool that trained it (shallower or fewer trees, early stopping, dropout, weight decay, fewer inputs) and write its predictions again, so that the training rows are no longer predicted far better than new rows.';
+const FOR_REGRESSION = { value: null, reason: 'not-for-classification', message: 'applies to regression models only' };
+/** `generalisation-gap`: hold-out RMSE / training RMSE (classifiers: hold-out / training log-loss). */
+function predictionsGap({ regression, classifier }) {
+    if (classifier !== null) {
+        const value = (0,regression_metrics/* gapRatio */.yr)(classifier.train.logLoss, classifier.holdout.logLoss);
+        return {
+            value,
+            message: `hold-out log-loss ${(0,format/* formatNumber */.Z)(classifier.holdout.logLoss)} is ${(0,format/* formatNumber */.Z)(value)} times the training log-loss ${(0,format/* formatNumber */.Z)(classifier.train.logLoss)}`,
+            metrics: { gap_ratio: value },
+            advice: ELSEWHERE_ADVICE,
+        };
+    }
+    const r = regression;
+    const value = (0,regression_metrics/* gapRatio */.yr)(r.train.rmse, r.holdout.rmse);
+    return {
+        value,
+        message: `hold-out RMSE ${(0,format/* formatNumber */.Z)(r.holdout.rmse)} is ${(0,format/* formatNumber */.Z)(value)} times the training RMSE ${(0,format/* formatNumber */.Z)(r.train.rmse)}`,
+        advice: ELSEWHERE_ADVICE,
+    };
+}
+/** `parameter-ratio`: stated parameters / training rows; skipped when `parameters` is not given. */
+function predictionsParameterRatio({ parameters, rows, descriptor }) {
+    if (parameters === null)
+        return notStated(descriptor);
+    const value = parameters / rows.train;
+    return {
+        value,
+        message: `${parameters} stated parameters for ${rows.train} training rows (${(0,format/* formatNumber */.Z)(value)} per row)`,
+        line: descriptor.parametersLine ?? undefined,
+        detail: { counted: 'stated', parameters },
+        advice: 'Use a smaller model in the tool that trained it (fewer trees, leaves or units), or add training rows; if the stated count is too high, correct `parameters`.',
+    };
+}
+/** `events-per-parameter` (classifiers): min(positives, negatives) / stated parameters. */
+function predictionsEventsPerParameter({ parameters, classifier, descriptor }) {
+    if (classifier === null)
+        return { value: null, reason: 'not-for-regression', message: 'applies to classifiers only' };
+    if (parameters === null)
+        return notStated(descriptor);
+    const { positives, negatives } = classifier.train;
+    const events = Math.min(positives, negatives);
+    const value = events / parameters;
+    return {
+        value,
+        message: `${events} training rows of the smaller class (${positives} positive, ${negatives} negative) for ${parameters} stated parameters: ${(0,format/* formatNumber */.Z)(value)} per parameter`,
+        line: descriptor.parametersLine ?? undefined,
+        metrics: { events_per_parameter: value },
+    };
+}
+function notStated(descriptor) {
+    return {
+        value: null,
+        reason: 'not-stated',
+        message: 'the descriptor states no `parameters` for this model trained elsewhere, so there is no count to judge',
+        line: descriptor.predictions?.line,
+    };
+}
+/** `calibration-slope` (classifiers): the logistic recalibration of the hold-out probabilities. */
+function predictionsCalibration({ classifier }) {
+    if (classifier === null)
+        return { value: null, reason: 'not-for-regression', message: 'applies to classifiers only' };
+    const { calibration, holdout } = classifier;
+    const figures = (0,json/* jsonMetrics */.Gc)({ calibration_slope: calibration.slope, calibration_intercept: calibration.intercept });
+    if (Number.isNaN(calibration.slope)) {
+        return {
+            value: null,
+            reason: 'not-identified',
+            message: `the hold-out rows (${holdout.positives} positive, ${holdout.negatives} negative) hold one class only or constant probabilities`,
+            metrics: figures,
+        };
+    }
+    return {
+        value: calibration.slope,
+        message: `hold-out calibration slope ${(0,format/* formatNumber */.Z)(calibration.slope)}, intercept ${(0,format/* formatNumber */.Z)(calibration.intercept)}${calibration.converged ? '' : ' (the recalibration did not converge: the hold-out rows are separated by the predictions)'}`,
+        metrics: figures,
+    };
+}
+/** `base-change`: relative change of the hold-out RMSE (classifiers: log-loss) against the base commit. */
+function predictionsBaseChange({ regression, classifier, baseline }) {
+    if (!baseline)
+        return { value: null, reason: 'no-base', message: 'no model of this name to compare with on the base commit' };
+    const key = classifier !== null ? 'holdout_log_loss' : 'holdout_rmse';
+    const raw = baseline.metrics?.[key];
+    const base = typeof raw === 'number' || typeof raw === 'string' ? (0,result/* fromJsonNumber */.M)(raw) : Number.NaN;
+    if (Number.isNaN(base))
+        return { value: null, reason: 'base-not-checked', message: 'the model could not be checked on the base commit' };
+    const head = classifier !== null ? classifier.holdout.logLoss : regression.holdout.rmse;
+    const value = base === 0 ? (head === 0 ? 0 : Infinity) : (head - base) / base;
+    const what = classifier !== null ? 'hold-out log-loss' : 'hold-out RMSE';
+    return {
+        value,
+        message: `${what} ${(0,format/* formatNumber */.Z)(head)} against ${(0,format/* formatNumber */.Z)(base)} on the base commit`,
+        detail: { [`base_${key}`]: base },
+    };
+}
+/** `leakage`: hold-out rows that repeat a training row in the named inputs. */
+function predictionsLeakage({ leakage, inputs, files, descriptor }) {
+    if (leakage === null) {
+        return {
+            value: null,
+            reason: 'no-inputs',
+            message: 'the descriptor names no input columns (`predictions.inputs`), so rows cannot be compared',
+            line: descriptor.predictions?.line,
+        };
+    }
+    const columns = inputs.map((c) => (0,errors/* clip */.$Q)(c)).join(', ');
+    const metrics = { leaked_rows: leakage.fullMatches, holdout_rows_in_training: leakage.inputMatches };
+    const detail = {
+        columns: [...inputs],
+        holdout_rows: leakage.holdoutRows,
+        input_matches: leakage.inputMatches,
+        target_matches: leakage.fullMatches,
+        holdout_lines: leakage.holdoutLines,
+        train_lines: leakage.trainLines,
+        holdout_file: files.holdout,
+        train_file: files.train,
+    };
+    if (leakage.inputMatches === 0)
+        return { value: 0, message: `no hold-out row of ${leakage.holdoutRows} repeats a training row in ${columns}`, metrics, detail };
+    const more = leakage.inputMatches > leakage.holdoutLines.length ? ', …' : '';
+    return {
+        value: leakage.inputMatches,
+        message: `${leakage.inputMatches} of ${leakage.holdoutRows} hold-out rows repeat a training row in ${columns} (${leakage.fullMatches} with the same target): ${(0,errors/* clip */.$Q)(files.holdout)} lines ${leakage.holdoutLines.join(', ')}${more}; first matching training rows: ${(0,errors/* clip */.$Q)(files.train)} lines ${leakage.trainLines.join(', ')}${more}`,
+        metrics,
+        detail,
+    };
+}
+/** `swing` (regression): how far the predictions of the observed rows leave the training target band. */
+function predictionsSwing({ spread, classifier }) {
+    if (classifier !== null)
+        return FOR_REGRESSION;
+    const detail = (0,json/* jsonMetrics */.Gc)({
+        band_low: spread.band[0],
+        band_high: spread.band[1],
+        predicted_low: spread.predicted[0],
+        predicted_high: spread.predicted[1],
+        rows: spread.rows,
+    });
+    if (Number.isNaN(spread.value))
+        return { value: null, reason: 'not-applicable', message: 'the training target is constant, so its band has no width', detail };
+    const band = `[${(0,format/* formatNumber */.Z)(spread.band[0])}, ${(0,format/* formatNumber */.Z)(spread.band[1])}]`;
+    return {
+        value: spread.value,
+        reason: 'observed-rows',
+        message: spread.worst === null
+            ? `the predictions of the ${spread.rows} training and hold-out rows stay inside the training target band ${band} (observed rows only: a model trained elsewhere cannot be scanned between them)`
+            : `the predictions of the ${spread.rows} training and hold-out rows leave the training target band ${band} by ${(0,format/* formatNumber */.Z)(spread.value)} band widths (prediction ${(0,format/* formatNumber */.Z)(spread.worst.prediction)} on line ${spread.worst.line} of ${(0,errors/* clip */.$Q)(spread.worst.file)}; observed rows only)`,
+        metrics: { swing: spread.value },
+        detail,
+    };
+}
+/** `holdout-r2`, `holdout-rmse`, `holdout-mae` (regression): the hold-out figure. */
+function predictionsHoldout(figure) {
+    return ({ regression }) => {
+        if (regression === null)
+            return FOR_REGRESSION;
+        const value = regression.holdout[figure];
+        if (figure === 'r2' && Number.isNaN(value))
+            return { value: null, reason: 'not-applicable', message: 'the hold-out target is constant, so R^2 is not defined' };
+        const name = figure === 'r2' ? 'R^2' : figure.toUpperCase();
+        return { value, message: `hold-out ${name} is ${(0,format/* formatNumber */.Z)(value)}` };
+    };
+}
+
 ;// CONCATENATED MODULE: ./src/checks/base-change.ts
+
 
 
 
@@ -30227,6 +30325,7 @@ const check = {
     advice: 'Find what made the hold-out error grow since the base commit (added terms, a smaller ridge penalty, changed rows) and undo it, or raise `base_change` when the change is intended.',
     line: (d) => d.termsLine,
     measureClassifier: classifierBaseChange,
+    measurePredictions: predictionsBaseChange,
     measure({ metrics, baseline }) {
         if (!baseline)
             return { value: null, reason: 'no-base', message: 'no model of this name to compare with on the base commit' };
@@ -30266,16 +30365,23 @@ const chi_square_check = {
   noise, not only the signal (it overfits), or the sigmas are too large.
 - The same sum over the hold-out rows divided by their count (no parameter was fitted to them) is
   reported as metric \`holdout_chi_square\`; the training figure as \`train_chi_square\`. Detail:
-  \`dof\`, \`holdout_rows\`.`,
+  \`dof\`, \`holdout_rows\`.
+- With \`data.target_transform\`: on the original scale (the default \`limits_scale\`) y against the
+  back-transformed predictions with sigma as written; on the transformed scale g(y) against the fit
+  with sigma_t = |g'(y)| sigma (the delta method; docs/fitting.md).`,
     advice: 'Far below 1: simplify the model (it fits the noise) or check that the sigmas are not overstated; far above 1: the model misses structure or the sigmas are understated.',
     line: (d) => (d.data.weighting?.kind === 'sigma' ? d.data.weighting.line : d.data.lines.target),
-    measure({ train, holdout, predictions, design }) {
+    measure({ train, holdout, predictions, design, targetScale }) {
         if (train.sigma === undefined || holdout.sigma === undefined) {
             return { value: null, reason: 'not-applicable', message: 'the model gives no `data.sigma`, so there is no chi-square to compute' };
         }
         const dof = train.rows - design.p;
-        const value = (0,weighted_metrics/* reducedChiSquare */.G)(train.y, predictions.train, train.sigma, train.rows, dof);
-        const held = (0,weighted_metrics/* reducedChiSquare */.G)(holdout.y, predictions.holdout, holdout.sigma, holdout.rows, holdout.rows);
+        // A transformed target: the figures of the scale the limits judge (data/target-transform.ts says how sigma transforms).
+        const scaled = targetScale ? targetScale[targetScale.limitsScale] : null;
+        const value = scaled ? scaled.trainChiSquare : (0,weighted_metrics/* reducedChiSquare */.G)(train.y, predictions.train, train.sigma, train.rows, dof);
+        const held = scaled
+            ? scaled.holdoutChiSquare
+            : (0,weighted_metrics/* reducedChiSquare */.G)(holdout.y, predictions.holdout, holdout.sigma, holdout.rows, holdout.rows);
         if (Number.isNaN(value)) {
             return {
                 value: null,
@@ -30293,8 +30399,6 @@ const chi_square_check = {
 };
 /* harmony default export */ const chi_square = (chi_square_check);
 
-// EXTERNAL MODULE: ./src/core/errors.ts
-var errors = __nccwpck_require__(4296);
 ;// CONCATENATED MODULE: ./src/checks/coefficient-size.ts
 /**
  * `coefficient-size`: the largest standardised coefficient.
@@ -30337,6 +30441,7 @@ const coefficient_size_check = {
 ;// CONCATENATED MODULE: ./src/checks/generalisation-gap.ts
 
 
+
 const generalisation_gap_check = {
     id: 'generalisation-gap',
     title: 'Generalisation gap',
@@ -30353,6 +30458,7 @@ const generalisation_gap_check = {
     advice: 'Use fewer or wider basis functions, a lower degree, or a larger ridge penalty, so that the training error stops falling below the hold-out error.',
     line: (d) => d.fit.line,
     measureClassifier: classifierGap,
+    measurePredictions: predictionsGap,
     measure({ metrics }) {
         return {
             value: metrics.gapRatio,
@@ -30363,6 +30469,7 @@ const generalisation_gap_check = {
 /* harmony default export */ const generalisation_gap = (generalisation_gap_check);
 
 ;// CONCATENATED MODULE: ./src/checks/holdout-mae.ts
+
 
 const holdout_mae_check = {
     id: 'holdout-mae',
@@ -30377,6 +30484,7 @@ const holdout_mae_check = {
   the RMSE. Metric \`holdout_mae\`.`,
     advice: 'The typical hold-out error is above what the model may have: improve the model (inputs, terms) or agree on a looser limit.',
     line: (d) => d.fit.line,
+    measurePredictions: predictionsHoldout('mae'),
     measure({ metrics }) {
         return { value: metrics.holdoutMae, message: `hold-out MAE is ${(0,format/* formatNumber */.Z)(metrics.holdoutMae)}` };
     },
@@ -30384,6 +30492,7 @@ const holdout_mae_check = {
 /* harmony default export */ const holdout_mae = (holdout_mae_check);
 
 ;// CONCATENATED MODULE: ./src/checks/holdout-r2.ts
+
 
 const holdout_r2_check = {
     id: 'holdout-r2',
@@ -30401,6 +30510,7 @@ const holdout_r2_check = {
   is, not whether it overfits. Metric \`holdout_r2\`.`,
     advice: 'The model explains too little of the hold-out variation: add the inputs or terms it is missing, or lower the floor if the data cannot support it.',
     line: (d) => d.fit.line,
+    measurePredictions: predictionsHoldout('r2'),
     measure({ metrics }) {
         if (Number.isNaN(metrics.holdoutR2)) {
             return { value: null, reason: 'not-applicable', message: 'the hold-out target is constant, so R^2 is not defined' };
@@ -30411,6 +30521,7 @@ const holdout_r2_check = {
 /* harmony default export */ const holdout_r2 = (holdout_r2_check);
 
 ;// CONCATENATED MODULE: ./src/checks/holdout-rmse.ts
+
 
 const holdout_rmse_check = {
     id: 'holdout-rmse',
@@ -30425,12 +30536,15 @@ const holdout_rmse_check = {
   whether the model is accurate enough for its use, not whether it overfits. Metric \`holdout_rmse\`.`,
     advice: 'The hold-out error is above what the model may have: improve the model (inputs, terms) or agree on a looser limit.',
     line: (d) => d.fit.line,
+    measurePredictions: predictionsHoldout('rmse'),
     measure({ metrics }) {
         return { value: metrics.holdoutRmse, message: `hold-out RMSE is ${(0,format/* formatNumber */.Z)(metrics.holdoutRmse)}` };
     },
 };
 /* harmony default export */ const holdout_rmse = (holdout_rmse_check);
 
+// EXTERNAL MODULE: ./src/data/model-data.ts
+var model_data = __nccwpck_require__(9642);
 // EXTERNAL MODULE: ./src/config/generated/limit-keys.ts
 var limit_keys = __nccwpck_require__(7672);
 ;// CONCATENATED MODULE: ./src/config/init-files.ts
@@ -30543,6 +30657,11 @@ function settingsText(schema, pattern) {
 }
 
 ;// CONCATENATED MODULE: ./src/checks/parameter-ratio.ts
+/**
+ * `parameter-ratio`: fitted parameters per training row.
+ */
+
+
 
 
 const LIMIT_KEY = 'params_per_sample';
@@ -30574,20 +30693,21 @@ const parameter_ratio_check = {
   df = trace of the hat matrix = sum_j d_j^2 / (d_j^2 + lambda) (ESL eq. 3.50).`,
     advice: ADVICE,
     line: (d) => (d.fit.parameterCount === 'effective' ? d.fit.ridgeLine : d.termsLine),
+    measurePredictions: predictionsParameterRatio,
     measure({ metrics, design, train, fit, descriptor }) {
         if (descriptor.fit.parameterCount === 'effective') {
             const df = fit.degreesOfFreedom;
-            const ratio = df / train.rows;
+            const ratio = df / (0,model_data/* trainingRows */.E)(train);
             return {
                 value: ratio,
                 reason: 'effective',
-                message: `${(0,format/* formatNumber */.Z)(df)} effective parameters (of ${design.p} columns) for ${train.rows} training rows (${(0,format/* formatNumber */.Z)(ratio)} per row)`,
+                message: `${(0,format/* formatNumber */.Z)(df)} effective parameters (of ${design.p} columns) for ${(0,model_data/* trainingRows */.E)(train)} training rows (${(0,format/* formatNumber */.Z)(ratio)} per row)`,
                 detail: { counted: 'effective', effective_df: df, columns: design.p },
             };
         }
         return {
             value: metrics.paramsPerSample,
-            message: `${design.p} parameters for ${train.rows} training rows (${(0,format/* formatNumber */.Z)(metrics.paramsPerSample)} per row)`,
+            message: `${design.p} parameters for ${(0,model_data/* trainingRows */.E)(train)} training rows (${(0,format/* formatNumber */.Z)(metrics.paramsPerSample)} per row)`,
             detail: { counted: 'columns', columns: design.p },
             ...ruleAdvice(descriptor.limits[LIMIT_KEY], metrics.paramsPerSample),
         };
@@ -30655,8 +30775,14 @@ const complexity_check = {
 - Figure: the current setting's k-fold CV RMSE / the suggested setting's (1 or less when the current
   setting is as good). The default warns above 1.5: the suggestion is then clearly better,
   not only simpler; a notice alone is given otherwise, and the check never fails by default.
+- Weighted models (\`data.weight\`, \`data.sigma\`): every setting is the weighted fit (rows scaled by
+  sqrt(w), weights divided by their mean over the rows used), and the errors are weighted: the fold
+  MSEs are sum w r^2 over the fold divided by its rows, cv_rmse = sqrt(sum w r^2 / sum w) (Björck,
+  Numerical Methods for Least Squares Problems, 1996, section 4.4.1).
 - Above 50,000 training rows a degree or width sweep uses a subsample of 50,000 rows at an even
-  stride through the file (detail \`subsampled: true\`); a ridge sweep always uses every row.
+  stride through the file (detail \`subsampled: true\`); a ridge sweep always uses every row. A
+  training file read as a stream (docs/scale.md) is swept on its seeded sample of at most 100,000
+  rows, a ridge sweep too, with folds of the sample's own (\`subsampled: true\`).
 - Metrics: \`suggested_setting\`, \`suggested_cv_rmse\`. Detail: \`setting\` (\`degree\`, \`width\`,
   \`knots\`, \`harmonics\` or \`ridge\`), \`folds\`, \`rows\`, \`subsampled\`, \`rule\`, indices \`chosen\`, \`best\`, \`current\`, and \`curve\`:
   \`[{ setting, label, parameters, cv_rmse, mean_mse, se_mse, current, failed? }]\`, simplest first.`,
@@ -30668,7 +30794,10 @@ const complexity_check = {
         if (scoreOnly)
             return scoreOnly;
         const { descriptor, design, train, fit } = context;
-        const sweep = (0,complexity/* sweepComplexity */.j6)(descriptor, design, train, fit, { factors: () => context.analyses.foldFactors() });
+        // A streamed model's rows at hand are its sample (data/row-source.ts): the sweep runs on the
+        // sample with folds of its own, not on the fold factors of every row.
+        const sampled = train.sampleOf !== undefined && train.sampleOf > train.rows;
+        const sweep = (0,complexity/* sweepComplexity */.j6)(descriptor, design, train, fit, sampled ? { sampled: true } : { factors: () => context.analyses.foldFactors() });
         if (sweep === null || sweep.chosen < 0 || sweep.current < 0) {
             return { value: null, reason: 'not-applicable', message: 'the model has no complexity setting to sweep, or too few rows' };
         }
@@ -30696,7 +30825,11 @@ const complexity_check = {
                 ...(c.failed ? { failed: c.failed } : {}),
             })),
         });
-        const sub = sweep.subsampled ? ` (on an even-stride subsample of ${sweep.rows} rows)` : '';
+        const sub = sampled
+            ? ` (on a seeded sample of ${sweep.rows} of ${train.sampleOf} rows)`
+            : sweep.subsampled
+                ? ` (on an even-stride subsample of ${sweep.rows} rows)`
+                : '';
         if (sweep.chosen === sweep.current) {
             return {
                 value,
@@ -30787,13 +30920,12 @@ const conditioning_check = {
 };
 /* harmony default export */ const conditioning = (conditioning_check);
 
-// EXTERNAL MODULE: ./src/diagnostics/regression-metrics.ts
-var regression_metrics = __nccwpck_require__(155);
 ;// CONCATENATED MODULE: ./src/checks/cross-validation.ts
 /**
  * `cross-validation`: k-fold cross-validation RMSE / training RMSE, with leave-one-out (PRESS),
  * GCV and the effective degrees of freedom in the model's metrics.
  */
+
 
 
 
@@ -30829,7 +30961,10 @@ const cross_validation_check = {
   p for least squares of full rank.
 - Metrics: \`cv_rmse\`, \`loocv_rmse\`, \`gcv\`, \`effective_df\`, \`effective_df_per_sample\`, \`cv_folds\`.
   Detail: \`folds\`, \`fold_order\`, \`seed\`, \`fold_rows\`, \`fold_rmse\`, \`cv_rmse\`, \`loocv_rmse\`, \`press\`,
-  \`gcv\`, \`effective_df\`, \`parameters\`, \`max_leverage\`, \`rows_with_leverage_one\`.`,
+  \`gcv\`, \`effective_df\`, \`parameters\`, \`max_leverage\`, \`rows_with_leverage_one\`.
+- With \`data.target_transform\` judged on the original scale (the default): the figure and metric
+  \`cv_rmse\` back-transform each row's out-of-fold prediction; the detail, leave-one-out and GCV stay on
+  the transformed scale (docs/fitting.md).`,
     advice: 'Use fewer or wider basis functions, a lower degree or a larger ridge penalty until the cross-validation error comes close to the training error.',
     line: (d) => d.fit.line,
     measureClassifier: classifierCrossValidation,
@@ -30845,7 +30980,7 @@ const cross_validation_check = {
             loocv_rmse: cv.loocvRmse,
             gcv: cv.gcv,
             effective_df: effectiveDf,
-            effective_df_per_sample: effectiveDf / train.rows,
+            effective_df_per_sample: effectiveDf / (0,model_data/* trainingRows */.E)(train),
             cv_folds: cv.k,
         };
         const detail = {
@@ -30872,24 +31007,31 @@ const cross_validation_check = {
                 detail: (0,json/* jsonRecord */.eJ)(detail),
             };
         }
-        const ratio = (0,regression_metrics/* gapRatio */.yr)(metrics.trainRmse, cv.cvRmse);
+        // A transformed target judged on the original scale: the back-transformed out-of-fold predictions (metrics are on that scale too).
+        const scale = context.targetScale ?? null;
+        const cvRmse = scale !== null && scale.limitsScale === 'original' ? scale.original.cvRmse : cv.cvRmse;
+        const ratio = (0,regression_metrics/* gapRatio */.yr)(metrics.trainRmse, cvRmse);
         const loo = cv.rowsWithLeverageOne > 0
             ? `infinite (${cv.rowsWithLeverageOne} rows with leverage 1: the fit interpolates them)`
             : (0,format/* formatNumber */.Z)(cv.loocvRmse);
         return {
             value: ratio,
-            message: `${cv.k}-fold CV RMSE ${(0,format/* formatNumber */.Z)(cv.cvRmse)} (${folds.order}${folds.order === 'shuffled' ? `, seed ${folds.seed}` : ''}) is ${(0,format/* formatNumber */.Z)(ratio)} times the training RMSE ${(0,format/* formatNumber */.Z)(metrics.trainRmse)}; leave-one-out RMSE ${loo}, GCV ${(0,format/* formatNumber */.Z)(cv.gcv)}, effective degrees of freedom ${(0,format/* formatNumber */.Z)(effectiveDf)} of ${design.p} parameters`,
-            metrics: (0,json/* jsonMetrics */.Gc)({ cv_rmse: cv.cvRmse, ...figures }),
+            message: `${cv.k}-fold CV RMSE ${(0,format/* formatNumber */.Z)(cvRmse)}${scale !== null ? ` on the ${scale.limitsScale} scale of the target` : ''} (${folds.order}${folds.order === 'shuffled' ? `, seed ${folds.seed}` : ''}) is ${(0,format/* formatNumber */.Z)(ratio)} times the training RMSE ${(0,format/* formatNumber */.Z)(metrics.trainRmse)}; leave-one-out RMSE ${loo}, GCV ${(0,format/* formatNumber */.Z)(cv.gcv)}, effective degrees of freedom ${(0,format/* formatNumber */.Z)(effectiveDf)} of ${design.p} parameters`,
+            metrics: (0,json/* jsonMetrics */.Gc)({ cv_rmse: cvRmse, ...figures }),
             detail: (0,json/* jsonRecord */.eJ)(detail),
         };
     },
 };
 /* harmony default export */ const cross_validation = (cross_validation_check);
 
+// EXTERNAL MODULE: ./src/data/data-parts.ts
+var data_parts = __nccwpck_require__(6837);
 ;// CONCATENATED MODULE: ./src/checks/leakage.ts
 /**
  * `leakage`: hold-out rows that repeat a training row.
  */
+
+
 
 
 const leakage_check = {
@@ -30905,7 +31047,8 @@ const leakage_check = {
   some training row (exact comparison of the parsed numbers, -0 equal to 0; found through a hash of
   the values' bit patterns, confirmed value by value). The message says how many of them repeat the
   target too, and names the first 5 lines of the hold-out file and the first matching training line
-  of each.
+  of each. A training file read as a stream (docs/scale.md) is compared row by row in full: its rows
+  stream past the hold-out rows' hash table in the scoring pass.
 - Metrics: \`holdout_rows_in_training\` (the figure) and \`leaked_rows\`: hold-out rows equal to a
   training row in the inputs and the target. Only the model's columns are compared: a column of the
   file that no term reads does not count (a comparison on every column of the files can give a
@@ -30913,10 +31056,12 @@ const leakage_check = {
 - Models whose inputs take few distinct values (counts, categories coded as numbers) repeat inputs
   by nature: set \`leakage\` to a tolerated count or \`off\` for them.
 - Detail: \`columns\`, \`holdout_rows\`, \`input_matches\`, \`target_matches\`, \`holdout_lines\`,
-  \`train_lines\`, \`holdout_file\`, \`train_file\`.`,
+  \`train_lines\`, \`holdout_file\`, \`train_file\`; with data read from parts, the lines are each part's own
+  and \`holdout_line_files\` / \`train_line_files\` name the part of each.`,
     advice: 'Remove the repeated rows from the hold-out file (or from the training file) so that the hold-out rows are new to the fit.',
     line: (d) => d.data.lines.holdout,
     measureClassifier: classifierLeakage,
+    measurePredictions: predictionsLeakage,
     measure(context) {
         const { holdout, train, design } = context;
         if (design.inputs.length === 0) {
@@ -30929,10 +31074,13 @@ const leakage_check = {
             holdout_rows: leak.holdoutRows,
             input_matches: leak.inputMatches,
             target_matches: leak.fullMatches,
-            holdout_lines: leak.holdoutLines,
-            train_lines: leak.trainLines,
+            holdout_lines: (0,data_parts/* partLines */.TG)(holdout, leak.holdoutLines)?.lines ?? leak.holdoutLines,
+            train_lines: (0,data_parts/* partLines */.TG)(train, leak.trainLines)?.lines ?? leak.trainLines,
             holdout_file: holdout.file,
             train_file: train.file,
+            // Read from parts: the part of each listed line (the lines are each part's own).
+            ...(holdout.parts !== undefined ? { holdout_line_files: (0,data_parts/* partLines */.TG)(holdout, leak.holdoutLines)?.files } : {}),
+            ...(train.parts !== undefined ? { train_line_files: (0,data_parts/* partLines */.TG)(train, leak.trainLines)?.files } : {}),
         };
         if (leak.inputMatches === 0) {
             return {
@@ -30942,7 +31090,7 @@ const leakage_check = {
                 detail,
             };
         }
-        const lines = (file, ls) => `${(0,errors/* clip */.$Q)(file)} line${ls.length > 1 ? 's' : ''} ${ls.join(', ')}${leak.inputMatches > ls.length ? ', …' : ''}`;
+        const lines = (data, ls) => `${(0,data_parts/* linesText */.zu)(data, ls)}${leak.inputMatches > ls.length ? ', …' : ''}`;
         const target = leak.fullMatches === leak.inputMatches
             ? 'all with the same target'
             : leak.fullMatches === 0
@@ -30950,7 +31098,7 @@ const leakage_check = {
                 : `${leak.fullMatches} with the same target`;
         return {
             value: leak.inputMatches,
-            message: `${leak.inputMatches} of ${leak.holdoutRows} hold-out rows repeat a training row in ${design.inputs.map((c) => (0,errors/* clip */.$Q)(c)).join(', ')} (${target}): ${lines(holdout.file, leak.holdoutLines)}; first matching training rows: ${lines(train.file, leak.trainLines)}`,
+            message: `${leak.inputMatches} of ${leak.holdoutRows} hold-out rows repeat a training row in ${design.inputs.map((c) => (0,errors/* clip */.$Q)(c)).join(', ')} (${target}): ${lines(holdout, leak.holdoutLines)}; first matching training rows: ${lines(train, leak.trainLines)}`,
             metrics,
             detail,
         };
@@ -30986,7 +31134,7 @@ const reproducibility_check = {
     advice: 'Refit the model from the committed data and ship the new coefficients, or restore the data and terms the shipped coefficients came from.',
     line: (d) => d.coefficientsLine ?? d.nameLine,
     measureClassifier: classifierReproducibility,
-    measure({ shipped, predictions, holdout, metrics, descriptor }) {
+    measure({ shipped, predictions, holdout, metrics, descriptor, targetScale }) {
         const scoreOnly = skipWhenScoreOnly(descriptor);
         if (scoreOnly)
             return scoreOnly;
@@ -31007,18 +31155,21 @@ const reproducibility_check = {
         const spread = hi - lo;
         const value = spread > 0 ? diff / spread : diff === 0 ? 0 : Infinity;
         const shippedRmse = shipped.holdout.rmse;
+        // Shipped and refit are compared on the fit's own scale (a transformed target's too).
+        const refitRmse = targetScale ? targetScale.transformed.holdoutRmse : metrics.holdoutRmse;
         const coefDiff = shipped.maxCoefficientDifference;
         return {
             value,
-            message: `shipped and refit predictions differ by up to ${(0,format/* formatNumber */.Z)(diff)} on the hold-out rows (${(0,format/* formatNumber */.Z)(value * 100)} % of the training target's range ${(0,format/* formatNumber */.Z)(spread)}${row >= 0 ? `, ${(0,errors/* clip */.$Q)(holdout.file)} line ${holdout.lines[row]}` : ''}); hold-out RMSE shipped ${(0,format/* formatNumber */.Z)(shippedRmse)}, refit ${(0,format/* formatNumber */.Z)(metrics.holdoutRmse)}`,
+            message: `shipped and refit predictions differ by up to ${(0,format/* formatNumber */.Z)(diff)} on the hold-out rows (${(0,format/* formatNumber */.Z)(value * 100)} % of the training target's range ${(0,format/* formatNumber */.Z)(spread)}${row >= 0 ? `, ${(0,data_parts/* linesText */.zu)(holdout, [holdout.lines[row]])}` : ''}); hold-out RMSE shipped ${(0,format/* formatNumber */.Z)(shippedRmse)}, refit ${(0,format/* formatNumber */.Z)(refitRmse)}`,
             metrics: { shipped_prediction_difference: (0,result/* jsonNumber */.qj)(value) },
             detail: (0,json/* jsonRecord */.eJ)({
                 max_prediction_difference: diff,
                 target_range: spread,
-                at_line: row >= 0 ? holdout.lines[row] : null,
+                at_line: row >= 0 ? (0,data_parts/* placeOfLine */.xX)(holdout, holdout.lines[row]).line : null,
+                ...(holdout.parts !== undefined && row >= 0 ? { at_file: (0,data_parts/* placeOfLine */.xX)(holdout, holdout.lines[row]).file } : {}),
                 shipped_holdout_rmse: shippedRmse,
-                refit_holdout_rmse: metrics.holdoutRmse,
-                holdout_rmse_ratio: shippedRmse / metrics.holdoutRmse,
+                refit_holdout_rmse: refitRmse,
+                holdout_rmse_ratio: shippedRmse / refitRmse,
                 max_coefficient_difference: coefDiff,
             }),
         };
@@ -31030,6 +31181,7 @@ const reproducibility_check = {
 /**
  * `swing`: how far predictions between the training samples leave the band of training targets.
  */
+
 
 
 
@@ -31084,7 +31236,8 @@ const swing_check = {
   inputs at their training medians (the 4,000 gaps shared evenly: the widest ceil(4,000 /
   inputs) gaps of each input), plus 8 points on each segment between a training row and each of
   its 3 nearest neighbours (Euclidean distance on the inputs divided by their standard deviations;
-  at most 1,000 rows, taken at an even stride through the file).
+  at most 1,000 rows, taken at an even stride through the file). A training file read as a stream
+  (docs/scale.md) is scanned on its seeded sample of at most 100,000 rows (then thinned as above).
 - Why: a model that interpolates its samples with a high-degree polynomial or narrow radial bumps
   can pass through every sample and still predict absurd values between them (Runge's phenomenon,
   Runge 1901, Zeitschrift für Mathematik und Physik 46).
@@ -31094,9 +31247,11 @@ const swing_check = {
   pointsPerSegment }\` or null for one input) and \`curves\`: one per input with a spread,
   \`{ input, others: { <input>: median }, range: [min x, max x], x: number[], prediction: number[] }\`,
   x ascending over the range and both margins, at most 400 points (thinned evenly, always keeping the
-  largest and smallest prediction).`,
+  largest and smallest prediction; in a run of over 100 models, 400 x 100 / models, at least 25: see
+  reports.md).`,
     advice: 'Lower the degree, widen or thin the radial centres, or add a ridge penalty so that the curve stops swinging between the samples.',
     line: (d) => d.termsLine,
+    measurePredictions: predictionsSwing,
     measure(context) {
         const swing = context.analyses.swing();
         if (Number.isNaN(swing.inside)) {
@@ -31170,6 +31325,7 @@ const swing_beyond_check = {
 ;// CONCATENATED MODULE: ./src/checks/calibration-slope.ts
 
 
+
 const calibration_slope_check = {
     id: 'calibration-slope',
     title: 'Calibration slope',
@@ -31186,6 +31342,7 @@ const calibration_slope_check = {
     advice: 'Add a ridge penalty (`fit.ridge`) or use fewer terms so that the probabilities stop being over-confident on new rows.',
     line: (d) => d.fit.line,
     tasks: ['classification'],
+    measurePredictions: predictionsCalibration,
     measure: () => ({ value: null, reason: 'not-for-regression', message: 'applies to classifiers only' }),
     measureClassifier({ calibration, holdout }) {
         const figures = (0,json/* jsonMetrics */.Gc)({ calibration_slope: calibration.slope, calibration_intercept: calibration.intercept });
@@ -31208,6 +31365,7 @@ const calibration_slope_check = {
 
 ;// CONCATENATED MODULE: ./src/checks/events-per-parameter.ts
 
+
 const events_per_parameter_check = {
     id: 'events-per-parameter',
     title: 'Events per parameter',
@@ -31224,6 +31382,7 @@ const events_per_parameter_check = {
     advice: 'Use fewer terms or a lower degree, or collect more rows of the rarer class.',
     line: (d) => d.termsLine,
     tasks: ['classification'],
+    measurePredictions: predictionsEventsPerParameter,
     measure: () => ({ value: null, reason: 'not-for-regression', message: 'applies to classifiers only' }),
     measureClassifier({ train, design }) {
         const events = Math.min(train.positives, train.negatives);
@@ -31238,6 +31397,7 @@ const events_per_parameter_check = {
 /* harmony default export */ const events_per_parameter = (events_per_parameter_check);
 
 ;// CONCATENATED MODULE: ./src/checks/separation.ts
+
 const separation_check = {
     id: 'separation',
     title: 'Separation',
@@ -31260,12 +31420,14 @@ const separation_check = {
     line: (d) => d.termsLine,
     tasks: ['classification'],
     measure: () => ({ value: null, reason: 'not-for-regression', message: 'applies to classifiers only' }),
-    measureClassifier({ separation, design, descriptor }) {
+    measureClassifier({ separation, design, descriptor, trainSource }) {
+        const own = trainSource === undefined ? null : (0,data_parts/* partLines */.TG)(trainSource, separation.lines);
         const columns = separation.columns.map((j) => `\`${design.columnNames[j]}\``).join(', ');
         const detail = {
             kind: separation.kind,
             separated_rows: separation.separatedRows,
-            lines: separation.lines,
+            lines: own?.lines ?? separation.lines,
+            ...(own !== null ? { line_files: own.files } : {}),
             columns: separation.columns.map((j) => design.columnNames[j]),
             direction: separation.direction,
             exact: separation.exact,
@@ -31281,7 +31443,8 @@ const separation_check = {
         }
         const penalised = descriptor.fit.ridge > 0;
         const value = separation.kind === 'complete' && !penalised ? 2 : 1;
-        const lines = separation.lines.slice(0, 10).join(', ') + (separation.separatedRows > 10 ? ', …' : '');
+        const lines = (trainSource === undefined ? separation.lines.slice(0, 10).join(', ') : (0,data_parts/* linesText */.zu)(trainSource, separation.lines.slice(0, 10))) +
+            (separation.separatedRows > 10 ? ', …' : '');
         return {
             value,
             message: `${separation.kind} separation: ${separation.separatedRows} training rows (lines ${lines}) are separated along ${columns}${penalised ? '; the ridge penalty keeps the coefficients finite' : '; the maximum-likelihood coefficients are infinite'}`,
@@ -31292,74 +31455,8 @@ const separation_check = {
 };
 /* harmony default export */ const separation = (separation_check);
 
-// EXTERNAL MODULE: ./src/design/blocks.ts
-var blocks = __nccwpck_require__(7254);
-// EXTERNAL MODULE: ./src/diagnostics/column-median.ts
-var column_median = __nccwpck_require__(8455);
-// EXTERNAL MODULE: ./src/diagnostics/swing.ts + 1 modules
-var diagnostics_swing = __nccwpck_require__(309);
-;// CONCATENATED MODULE: ./src/diagnostics/spikes.ts
-
-
-
-/** Largest number of rows whose targets make up the data variation (an even-stride sample above it). */
-const SPIKE_MAX_ROWS = 20_000;
-/**
- * Measures the spike figure of a fitted model.
- * @param design the fitted design
- * @param train training rows (inputs in `design.inputs` order)
- * @param coefficients fitted coefficients (length p)
- */
-function measureSpikes(design, train, coefficients) {
-    const n = train.rows;
-    const medians = train.inputs.map((col) => (0,column_median/* columnMedian */.z)(col, n));
-    const perInput = [];
-    let ratio = Number.NaN;
-    let worst = null;
-    design.inputs.forEach((name, c) => {
-        // Category inputs have no order between their levels: no variation along them to compare.
-        if (design.terms.some((t) => t.discreteValues !== undefined && t.inputs.includes(name)))
-            return;
-        const grid = (0,diagnostics_swing/* inputGrid */.ll)(train.inputs[c].subarray(0, n)).inside;
-        if (grid.length < 2)
-            return;
-        const columns = design.inputs.map((_, k) => (k === c ? grid : new Float64Array(grid.length).fill(medians[k])));
-        const curve = (0,blocks/* predictRows */.tp)(design, { inputs: columns, rows: grid.length }, coefficients);
-        const curveVariation = totalVariation(curve, curve.length);
-        const dataVariation = targetVariation(train.inputs[c], train.y, n);
-        const r = dataVariation > 0 ? curveVariation / dataVariation : Number.NaN;
-        perInput.push({ input: name, curveVariation, dataVariation, ratio: r });
-        if (!Number.isNaN(r) && (Number.isNaN(ratio) || r > ratio)) {
-            ratio = r;
-            worst = name;
-        }
-    });
-    return { ratio, worst, perInput };
-}
-/** sum |v[k+1] - v[k]| over the first m values (one loop; see DEVELOPERS.md, "Writing hot loops"). */
-function totalVariation(v, m) {
-    let s = 0;
-    for (let k = 1; k < m; k++)
-        s += Math.abs(v[k] - v[k - 1]);
-    return s;
-}
-/** Total variation of the mean target over the input's distinct values in ascending order. */
-function targetVariation(x, y, n) {
-    const m = Math.min(n, SPIKE_MAX_ROWS);
-    const rows = Array.from({ length: m }, (_, t) => (m === n ? t : Math.floor((t * n) / m)));
-    rows.sort((a, b) => x[a] - x[b]);
-    const means = [];
-    for (let s = 0; s < m;) {
-        let e = s;
-        let sum = 0;
-        while (e < m && x[rows[e]] === x[rows[s]])
-            sum += y[rows[e++]];
-        means.push(sum / (e - s));
-        s = e;
-    }
-    return totalVariation(Float64Array.from(means), means.length);
-}
-
+// EXTERNAL MODULE: ./src/diagnostics/spikes.ts
+var diagnostics_spikes = __nccwpck_require__(6873);
 ;// CONCATENATED MODULE: ./src/checks/swing-spikes.ts
 /**
  * `swing-spikes`: spikes inside the band (the curve's total variation between the samples against the targets' own).
@@ -31385,17 +31482,26 @@ const swing_spikes_check = {
 - Figure, for each input with two distinct training values (the other inputs at their training medians,
   as the swing curves): TV_f = sum |f(g_(k+1)) - f(g_k)| over the points \`swing\` scans inside the
   training range, TV_y = sum |ybar_(j+1) - ybar_j| over the input's distinct training values ascending
-  (ybar_j the mean target at the j-th value; above 20,000 rows an even-stride sample of 20,000), and
+  (ybar_j the mean target at the j-th value, weighted sum w y / sum w for weighted models; above 20,000 rows an even-stride sample of 20,000; of a
+  training file read as a stream, docs/scale.md, its seeded sample of at most 100,000 rows), and
   the ratio TV_f / TV_y; the figure is the largest ratio. Total variation: the sum of absolute
   increments (Jordan 1881). With several inputs TV_y also holds the other inputs' effects, so the
   figure is lenient there.
 - Metric \`swing_spikes\`. Detail: \`worst\` (the input) and \`inputs\`:
   \`[{ input, curve_variation, data_variation, ratio }]\`. The swing curves in the \`swing\` outcome show
-  the spikes.`,
+  the spikes; when the check warns or fails, the HTML charts mark the intervals between neighbouring
+  training values where the curve goes up and down more than the limit allows (docs/reports.md).
+- A model with \`data.target_transform\` is judged on the scale \`data.limits_scale\` names: on the
+  original one (the default) the curve is back-transformed and TV_y is that of the target as written.`,
     advice: 'Widen or thin the radial centres, lower the degree or the knot count, or add a ridge penalty, so that the curve stops jumping to each sample.',
     line: (d) => d.termsLine,
     measure(context) {
-        const spikes = measureSpikes(context.design, context.train, context.fit.coefficients);
+        // A transformed target judged on the original scale: back-transformed curve, targets as written.
+        const scale = context.targetScale ?? null;
+        const original = scale !== null && scale.limitsScale === 'original'
+            ? { kind: scale.transform, y: scale.originalRows.train.y, weights: scale.originalRows.train.weights }
+            : undefined;
+        const spikes = (0,diagnostics_spikes/* measureSpikes */.Gm)(context.design, context.train, context.fit.coefficients, original);
         if (Number.isNaN(spikes.ratio)) {
             return {
                 value: null,
@@ -31557,6 +31663,31 @@ function runClassifierCheck(check, context) {
     }
     return judgeCheck(check, context.descriptor, () => measure.call(check, context));
 }
+/**
+ * Runs one check on a model trained elsewhere (`predictions`): its `measurePredictions`; a check
+ * without one needs a refit or coefficients and is skipped with `<id>/needs-refit`; a check not
+ * for the model's task is skipped as for models of terms.
+ */
+function runPredictionsCheck(check, context) {
+    const { descriptor } = context;
+    const measure = check.measurePredictions;
+    if (!appliesTo(check, descriptor.task)) {
+        return judgeCheck(check, descriptor, () => ({
+            value: null,
+            reason: descriptor.task === 'classification' ? 'not-for-classification' : 'not-for-regression',
+            message: descriptor.task === 'classification' ? 'applies to regression models only' : 'applies to classifiers only',
+        }));
+    }
+    if (measure === undefined) {
+        return judgeCheck(check, descriptor, () => ({
+            value: null,
+            reason: 'needs-refit',
+            message: "skipped: this check needs a refit or the model's coefficients, and the model was trained elsewhere (`predictions`: fitgate has its predictions only)",
+            line: descriptor.predictions?.line,
+        }));
+    }
+    return judgeCheck(check, descriptor, () => measure.call(check, context));
+}
 /** The checks that apply to a task, in report order (a regression model's report lists only these). */
 function checksFor(task) {
     return CHECKS.filter((c) => task === 'classification' || appliesTo(c, task));
@@ -31603,6 +31734,234 @@ function judgeCheck(check, descriptor, measure) {
 
 /***/ }),
 
+/***/ 8761:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   DB: () => (/* binding */ resolveDataFile),
+/* harmony export */   IJ: () => (/* binding */ dataFilesField),
+/* harmony export */   qy: () => (/* binding */ dataFiles),
+/* harmony export */   t2: () => (/* binding */ resolveDataPaths)
+/* harmony export */ });
+/* unused harmony exports MAX_DATA_PARTS, DATA_PATH_ERROR, compareCodePoints */
+/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(4296);
+/* harmony import */ var _repo_glob_pattern_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(955);
+/* harmony import */ var _repo_repo_path_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(3856);
+/* harmony import */ var _schema_errors_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(1288);
+/**
+ * `data.train` and `data.holdout` as written to the data files they name: one CSV path (as
+ * always), a list of parts, or a glob relative to the descriptor's folder.
+ *
+ * - A string that names a file (after resolving it against the descriptor's folder) is that one
+ *   file. Otherwise a string holding `*`, `?`, `[` or `{` is a glob, matched with the repository's
+ *   own matcher and walk (repo/glob-pattern.ts, repo/tree-walk.ts: `*` within one path segment,
+ *   `**` across segments, no leading dots, links to folders never entered). A glob must match at
+ *   least one file; a `..` segment or an absolute pattern is refused at its line, as for the
+ *   `models` patterns of the settings file, and so is a glob under a descriptor folder whose
+ *   name holds a glob character (write a list there).
+ * - A list holds paths or globs, one per item; the parts are the union of what they name.
+ * - Every part is resolved and checked like a single data file: inside the repository (links
+ *   included: a link leading outside is refused at the item's line), a regular file; naming the
+ *   same file twice is an error.
+ * - The parts are read in code-point order of their repository-relative paths
+ *   ({@link compareCodePoints}), whatever order the list or the walk gives; at most
+ *   {@link MAX_DATA_PARTS} parts.
+ */
+
+
+
+
+/** Most parts one of `data.train` / `data.holdout` may name (a documented constant of our choosing: each part is opened and checked in turn). */
+const MAX_DATA_PARTS = 1000;
+/** Stable codes of the errors this module throws (besides the repository's `path-outside`). */
+const DATA_PATH_ERROR = Object.freeze({
+    missing: 'file-missing',
+    notAFile: _repo_repo_path_js__WEBPACK_IMPORTED_MODULE_2__/* .NOT_A_FILE */ .bd,
+    globEmpty: 'data-glob-empty',
+    globOutside: 'path-outside',
+    globRefused: 'data-glob',
+    tooManyParts: 'data-parts',
+    repeated: 'data-parts',
+});
+/** Characters that make a data path a glob (when it does not name a file as written). */
+const GLOB_CHARACTERS = /[*?[{]/;
+/**
+ * Compares two strings by Unicode code point (not by UTF-16 code unit, as `<` does: the two
+ * differ for characters beyond U+FFFF). The reading order of data parts.
+ *
+ * @returns negative, 0 or positive as `a` sorts before, with or after `b`
+ */
+function compareCodePoints(a, b) {
+    let i = 0;
+    let j = 0;
+    while (i < a.length && j < b.length) {
+        const x = a.codePointAt(i);
+        const y = b.codePointAt(j);
+        if (x !== y)
+            return x - y;
+        i += x > 0xffff ? 2 : 1;
+        j += y > 0xffff ? 2 : 1;
+    }
+    return a.length - i - (b.length - j);
+}
+/**
+ * The data files one of `data.train` / `data.holdout` names.
+ *
+ * @param repo the repository
+ * @param doc the descriptor's parsed YAML (for the lines of the key and of list items)
+ * @param descriptorPath repository-relative descriptor path
+ * @param which `train` or `holdout` (the key read; with `data.split` the caller reads `train` once)
+ * @param written the value as written: a path, a glob, or a list of them
+ * @returns `single`: the one resolved path (a string that names a file); `parts`: the resolved
+ *   parts in code-point order (a list or a glob, even when it names one file)
+ * @throws InputError `file-missing`, `not-a-file`, `path-outside`, `data-glob-empty`,
+ *   `data-glob`, `data-parts`, `glob-too-complex`, `glob-too-large`, each at the line of the key or item
+ */
+async function resolveDataPaths(repo, doc, descriptorPath, which, written) {
+    const folder = descriptorPath.includes('/') ? descriptorPath.slice(0, descriptorPath.lastIndexOf('/')) : '';
+    if (typeof written === 'string') {
+        const key = ['data', which];
+        if (!GLOB_CHARACTERS.test(written))
+            return { single: await resolveDataFile(repo, doc, descriptorPath, key, written) };
+        const direct = await namesFile(repo, doc, descriptorPath, key, written);
+        if (direct !== null)
+            return { single: direct };
+        return { parts: finish(doc, descriptorPath, key, await globParts(repo, doc, descriptorPath, folder, key, written), null) };
+    }
+    const found = [];
+    const itemOf = [];
+    for (const [index, item] of written.entries()) {
+        const key = ['data', which, index];
+        const direct = GLOB_CHARACTERS.test(item) ? await namesFile(repo, doc, descriptorPath, key, item) : null;
+        const paths = direct !== null
+            ? [direct]
+            : GLOB_CHARACTERS.test(item)
+                ? await globParts(repo, doc, descriptorPath, folder, key, item)
+                : [await resolveDataFile(repo, doc, descriptorPath, key, item)];
+        for (const path of paths) {
+            found.push(path);
+            itemOf.push(index);
+            if (found.length > MAX_DATA_PARTS) {
+                throw (0,_schema_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .errorAt */ .Os)(doc, descriptorPath, DATA_PATH_ERROR.tooManyParts, key, `\`data.${which}\` names more than ${MAX_DATA_PARTS} parts; expected at most ${MAX_DATA_PARTS} (join small parts into larger files)`);
+            }
+        }
+    }
+    return { parts: finish(doc, descriptorPath, ['data', which], found, itemOf) };
+}
+/** Sorts the parts by code point; refuses a file named twice (at the later item) and too many parts. */
+function finish(doc, file, key, paths, itemOf) {
+    if (paths.length > MAX_DATA_PARTS) {
+        throw (0,_schema_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .errorAt */ .Os)(doc, file, DATA_PATH_ERROR.tooManyParts, key, `the glob matches ${paths.length} files; expected at most ${MAX_DATA_PARTS} parts (join small parts into larger files)`);
+    }
+    const firstAt = new Map();
+    for (const [k, path] of paths.entries()) {
+        const seen = firstAt.get(path);
+        if (seen !== undefined) {
+            const at = itemOf === null ? key : [...key, itemOf[k]];
+            throw (0,_schema_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .errorAt */ .Os)(doc, file, DATA_PATH_ERROR.repeated, at, `${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(path)} is named again (already by item ${(itemOf?.[seen] ?? 0) + 1}); expected each part once, or its rows would count twice`);
+        }
+        firstAt.set(path, k);
+    }
+    return [...paths].sort(compareCodePoints);
+}
+/**
+ * One data (or predictions side) file as written: resolved inside the repository (relative to the
+ * descriptor's folder) and checked to be a regular file.
+ * @throws InputError `path-outside`, `data-missing`, `not-a-file` at the key's value
+ */
+async function resolveDataFile(repo, doc, file, key, written) {
+    const at = doc.valuePositionOf(key);
+    const where = { line: at?.line ?? 1, column: at?.column ?? 1, key: keyText(key) };
+    const resolved = await repo.resolve(file, written, where);
+    const kind = await repo.entryKind(resolved);
+    if (kind === 'missing') {
+        throw (0,_schema_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .errorAt */ .Os)(doc, file, DATA_PATH_ERROR.missing, key, `${(0,_schema_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .showValue */ .vp)(written)} (${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .clip */ .$Q)(resolved)}) is not a file in ${repo.label}; expected a CSV path relative to this descriptor's folder`);
+    }
+    if (kind !== 'file') {
+        throw (0,_schema_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .errorAt */ .Os)(doc, file, DATA_PATH_ERROR.notAFile, key, `${(0,_schema_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .showValue */ .vp)(written)} (${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .clip */ .$Q)(resolved)}) ${(0,_repo_repo_path_js__WEBPACK_IMPORTED_MODULE_2__/* .kindWords */ .Gk)(kind)}; expected a CSV file relative to this descriptor's folder`);
+    }
+    return resolved;
+}
+/** The resolved path when `written` (holding glob characters) names a regular file as it stands, else null. */
+async function namesFile(repo, doc, file, key, written) {
+    // Resolved as a path first (`../data/odd[1].csv` is that file when it names one); a path that leaves the repository names none.
+    const at = doc.valuePositionOf(key);
+    let resolved;
+    try {
+        resolved = await repo.resolve(file, written, { line: at?.line ?? 1, column: at?.column ?? 1, key: keyText(key) });
+    }
+    catch (error) {
+        if (error instanceof _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz)
+            return null;
+        throw error;
+    }
+    return (await repo.entryKind(resolved)) === 'file' ? resolved : null;
+}
+/** The files a glob relative to the descriptor's folder matches, each checked as {@link oneFile} does. */
+async function globParts(repo, doc, file, folder, key, pattern) {
+    const problem = (0,_repo_glob_pattern_js__WEBPACK_IMPORTED_MODULE_1__.patternProblem)(pattern);
+    if (problem !== null) {
+        throw (0,_schema_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .errorAt */ .Os)(doc, file, problem.kind === 'outside' ? DATA_PATH_ERROR.globOutside : 'glob-too-complex', key, `${problem.message.replace('relative to the repository root', "relative to this descriptor's folder")}`);
+    }
+    if (GLOB_CHARACTERS.test(folder) || folder.includes('}') || folder.includes(']')) {
+        throw (0,_schema_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .errorAt */ .Os)(doc, file, DATA_PATH_ERROR.globRefused, key, `the descriptor's folder ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(folder)} holds a glob character, so a glob below it cannot be matched as written; expected a list of the part files`);
+    }
+    const full = folder === '' ? pattern.replace(/\\/g, '/') : `${folder}/${pattern.replace(/\\/g, '/')}`;
+    let found;
+    try {
+        found = await repo.glob([full]);
+    }
+    catch (error) {
+        if (!(error instanceof _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz))
+            throw error;
+        throw (0,_schema_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .errorAt */ .Os)(doc, file, error.code, key, `glob ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(pattern)}: ${error.message}`);
+    }
+    if (found.paths.length === 0) {
+        const links = found.notEntered.length > 0
+            ? `; ${found.notEntered
+                .slice(0, 3)
+                .map((l) => (0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .clip */ .$Q)(l))
+                .join(', ')} ${found.notEntered.length === 1 ? 'is a symbolic link' : 'are symbolic links'} to a folder, never followed`
+            : '';
+        throw (0,_schema_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .errorAt */ .Os)(doc, file, DATA_PATH_ERROR.globEmpty, key, `glob ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(pattern)} matches no file in ${repo.label} (relative to this descriptor's folder); expected at least one data file${links}`);
+    }
+    if (found.paths.length > MAX_DATA_PARTS) {
+        throw (0,_schema_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .errorAt */ .Os)(doc, file, DATA_PATH_ERROR.tooManyParts, key, `glob ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(pattern)} matches ${found.paths.length} files; expected at most ${MAX_DATA_PARTS} parts (join small parts into larger files)`);
+    }
+    const out = [];
+    for (const match of found.paths) {
+        // Relative to the descriptor's folder again, so that it is resolved (links included) as any data path.
+        const relative = folder === '' ? match : match.slice(folder.length + 1);
+        out.push(await resolveDataFile(repo, doc, file, key, relative));
+    }
+    return out;
+}
+function keyText(key) {
+    return key.map((k, i) => (typeof k === 'number' ? `[${k}]` : i === 0 ? k : `.${k}`)).join('');
+}
+/**
+ * The files one side of a loaded descriptor reads: its parts, or its one file.
+ *
+ * @param data the loaded descriptor's `data`
+ * @param which `train` or `holdout`
+ */
+function dataFiles(data, which) {
+    const parts = which === 'train' ? data.trainParts : data.holdoutParts;
+    return parts !== undefined ? [...parts] : [data[which]];
+}
+/**
+ * The report's `data` field of a model: both sides' files, present only when either side is read
+ * from parts (an empty object otherwise, so that reports of one file per side keep their shape).
+ */
+function dataFilesField(data) {
+    if (data.trainParts === undefined && data.holdoutParts === undefined)
+        return {};
+    return { data: { train: dataFiles(data, 'train'), holdout: dataFiles(data, 'holdout') } };
+}
+
+
+/***/ }),
+
 /***/ 7672:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
@@ -31631,6 +31990,385 @@ const LIMIT_KEYS = Object.freeze([
     { key: "events_per_parameter", defaultSpec: 10, direction: "below", description: "Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit." },
     { key: "calibration_slope", defaultSpec: { "warn": 0.8, "fail": 0.6 }, direction: "below", description: "Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit." },
 ]);
+
+
+/***/ }),
+
+/***/ 1288:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+
+// EXPORTS
+__nccwpck_require__.d(__webpack_exports__, {
+  $n: () => (/* binding */ SCHEMA_ERROR_CODE),
+  Os: () => (/* binding */ errorAt),
+  g$: () => (/* binding */ schemaError),
+  vp: () => (/* binding */ showValue)
+});
+
+// UNUSED EXPORTS: formatKeyPath
+
+// EXTERNAL MODULE: ./src/core/errors.ts
+var core_errors = __nccwpck_require__(4296);
+;// CONCATENATED MODULE: ./src/core/nearest.ts
+/**
+ * "Did you mean": the allowed word nearest to a mistyped one, by the optimal-string-alignment
+ * distance (insertions, deletions, substitutions and swaps of two neighbours, each costing 1;
+ * Damerau 1964, restricted form).
+ */
+/** Words longer than this are not compared (the cost grows with the product of the lengths). */
+const MAX_LENGTH = 64;
+/**
+ * Edit distance between `a` and `b` with adjacent swaps (optimal string alignment), or
+ * `Infinity` when either is longer than 64 characters.
+ */
+function editDistance(a, b) {
+    if (a.length > MAX_LENGTH || b.length > MAX_LENGTH)
+        return Number.POSITIVE_INFINITY;
+    const rows = a.length + 1;
+    const cols = b.length + 1;
+    const d = new Array(rows * cols).fill(0);
+    for (let i = 0; i < rows; i++)
+        d[i * cols] = i;
+    for (let j = 0; j < cols; j++)
+        d[j] = j;
+    for (let i = 1; i < rows; i++) {
+        for (let j = 1; j < cols; j++) {
+            const cost = a[i - 1] === b[j - 1] ? 0 : 1;
+            let best = Math.min(d[(i - 1) * cols + j] + 1, d[i * cols + j - 1] + 1, d[(i - 1) * cols + j - 1] + cost);
+            if (i > 1 && j > 1 && a[i - 1] === b[j - 2] && a[i - 2] === b[j - 1])
+                best = Math.min(best, d[(i - 2) * cols + j - 2] + 1);
+            d[i * cols + j] = best;
+        }
+    }
+    return d[rows * cols - 1];
+}
+/**
+ * The candidate nearest to `word` (case ignored), when it is close enough to be a typo: at most
+ * 1 edit for words of up to 4 characters, 2 up to 8, 3 beyond. Ties go to the earlier candidate.
+ * Returns null when none is close enough or `word` is itself a candidate.
+ */
+function nearestWord(word, candidates) {
+    const lower = word.toLowerCase();
+    const allowed = lower.length <= 4 ? 1 : lower.length <= 8 ? 2 : 3;
+    let best = null;
+    let bestDistance = allowed + 1;
+    for (const candidate of candidates) {
+        if (candidate === word)
+            return null;
+        const distance = editDistance(lower, candidate.toLowerCase());
+        if (distance < bestDistance) {
+            best = candidate;
+            bestDistance = distance;
+        }
+    }
+    return best;
+}
+
+// EXTERNAL MODULE: ./src/core/extremes.ts
+var extremes = __nccwpck_require__(398);
+;// CONCATENATED MODULE: ./src/config/schema-errors.ts
+/**
+ * Turns ajv's validation errors into the one most useful {@link InputError}: the first problem
+ * in document order (and within it the deepest), with the file, line, column, key path, the
+ * bad value (quoted, cut) and what the schema expected.
+ */
+
+
+
+/** Code of every schema violation. */
+const SCHEMA_ERROR_CODE = 'schema';
+/**
+ * Formats a key path as written in messages: `terms[1].rbf.width`.
+ *
+ * @param path map keys and list indexes; the empty path gives the empty string
+ */
+function formatKeyPath(path) {
+    let out = '';
+    for (const segment of path) {
+        if (typeof segment === 'number')
+            out += `[${segment}]`;
+        else
+            out += out === '' ? segment : `.${segment}`;
+    }
+    return out;
+}
+/**
+ * An InputError at a key path of a parsed document.
+ *
+ * @param doc the parsed document (for positions)
+ * @param file repository-relative path
+ * @param code stable error code
+ * @param path key path the problem is about
+ * @param message what is wrong and what was expected
+ * @param pointAt `value` (default) points at the value, `key` at the key, `parent` at the parent's key
+ */
+function errorAt(doc, file, code, path, message, pointAt = 'value') {
+    const position = locate(doc, path, pointAt);
+    const key = formatKeyPath(path);
+    return new core_errors/* InputError */.dz(code, message, { file, ...(position ?? {}), ...(key !== '' ? { key } : {}) });
+}
+/** Quotes a user value for a message; non-finite numbers as YAML writes them. */
+function showValue(value) {
+    if (typeof value === 'number' && !Number.isFinite(value))
+        return Number.isNaN(value) ? '.nan' : value > 0 ? '.inf' : '-.inf';
+    if (value instanceof Uint8Array)
+        return 'binary data';
+    if (value === null)
+        return 'nothing (null)';
+    return (0,core_errors/* quoteValue */.cl)(value);
+}
+/**
+ * The single most specific InputError for a failed validation.
+ *
+ * @param errors ajv errors (compiled with `allErrors` and `verbose`)
+ * @param doc the parsed document the errors are about
+ * @param file repository-relative path
+ */
+function schemaError(errors, doc, file) {
+    const issues = resolveAlternatives(errors).flatMap((e) => toIssue(e, doc.value));
+    if (issues.length === 0)
+        return new core_errors/* InputError */.dz(SCHEMA_ERROR_CODE, 'does not match its schema', { file });
+    // First in document order; within its subtree, the deepest.
+    const placed = issues.map((issue, index) => ({ issue, index, at: locate(doc, issue.path, issue.pointAt) ?? { line: 0, column: 0 } }));
+    placed.sort((a, b) => a.at.line - b.at.line || a.at.column - b.at.column || a.index - b.index);
+    const first = placed[0];
+    let chosen = first;
+    for (const candidate of placed) {
+        if (isPrefix(first.issue.path, candidate.issue.path) && candidate.issue.path.length > chosen.issue.path.length)
+            chosen = candidate;
+    }
+    const { issue } = chosen;
+    return errorAt(doc, file, SCHEMA_ERROR_CODE, issue.path, issue.message, issue.pointAt);
+}
+function isPrefix(prefix, path) {
+    return prefix.length <= path.length && prefix.every((s, i) => s === path[i]);
+}
+function locate(doc, path, pointAt) {
+    let target = pointAt === 'parent' ? path.slice(0, -1) : path;
+    let position = pointAt === 'value' ? doc.valuePositionOf(target) : doc.positionOf(target);
+    while (position === null && target.length > 0) {
+        target = target.slice(0, -1);
+        position = doc.positionOf(target);
+    }
+    return position;
+}
+/** Replaces each failed oneOf/anyOf and its branch errors by the errors of the branch the user meant, or one "expected one of" error. */
+function resolveAlternatives(errors) {
+    const alternatives = errors
+        .filter((e) => e.keyword === 'oneOf' || e.keyword === 'anyOf')
+        .sort((a, b) => a.schemaPath.length - b.schemaPath.length);
+    if (alternatives.length === 0)
+        return errors;
+    const outer = alternatives[0];
+    const prefix = `${outer.schemaPath}/`;
+    const inside = errors.filter((e) => e.schemaPath.startsWith(prefix));
+    const rest = errors.filter((e) => e !== outer && !e.schemaPath.startsWith(prefix));
+    const branches = new Map();
+    for (const e of inside) {
+        const index = Number.parseInt(e.schemaPath.slice(prefix.length), 10);
+        branches.set(index, [...(branches.get(index) ?? []), e]);
+    }
+    const matchingType = [...branches.entries()].filter(([, list]) => !list.some((e) => e.instancePath === outer.instancePath && (e.keyword === 'type' || e.keyword === 'const' || e.keyword === 'enum')));
+    const score = (list) => [(0,extremes/* maxOf */._)(list.map((e) => effectiveDepth(e))), -list.length];
+    let best = null;
+    let tie = false;
+    for (const [, list] of matchingType) {
+        if (best === null) {
+            best = list;
+            continue;
+        }
+        const [d1, n1] = score(list);
+        const [d0, n0] = score(best);
+        if (d1 > d0 || (d1 === d0 && n1 > n0)) {
+            best = list;
+            tie = false;
+        }
+        else if (d1 === d0 && n1 === n0) {
+            tie = true;
+        }
+    }
+    const chosen = best !== null && !tie ? best : [alternativesError(outer)];
+    return resolveAlternatives([...rest, ...chosen]);
+}
+/** A stand-in error listing the forms of a failed oneOf/anyOf. */
+function alternativesError(outer) {
+    const forms = Array.isArray(outer.schema) ? outer.schema.map((s) => s.title ?? 'another form') : [];
+    return { ...outer, keyword: 'x-alternatives', params: { forms } };
+}
+function effectiveDepth(e) {
+    const depth = e.instancePath === '' ? 0 : e.instancePath.split('/').length - 1;
+    return e.keyword === 'required' || e.keyword === 'additionalProperties' || e.keyword === 'propertyNames' ? depth + 1 : depth;
+}
+/** JSON pointer to a key path; numbers where the data there is a list. */
+function pointerToPath(pointer, root) {
+    if (pointer === '')
+        return [];
+    const path = [];
+    let node = root;
+    for (const raw of pointer.slice(1).split('/')) {
+        const segment = raw.replace(/~1/g, '/').replace(/~0/g, '~');
+        if (Array.isArray(node)) {
+            const index = Number(segment);
+            path.push(index);
+            node = node[index];
+        }
+        else {
+            path.push(segment);
+            node = node !== null && typeof node === 'object' ? node[segment] : undefined;
+        }
+    }
+    return path;
+}
+const TYPE_WORDS = {
+    number: 'a number',
+    integer: 'an integer',
+    string: 'text',
+    object: 'a mapping (key: value)',
+    array: 'a list',
+    boolean: 'true or false',
+    null: 'nothing',
+};
+const PATTERN_WORDS = {
+    '^[A-Za-z0-9._-]+$': 'only letters, digits, `-`, `_` or `.`',
+};
+function orList(items) {
+    if (items.length <= 1)
+        return items.join('');
+    return `${items.slice(0, -1).join(', ')} or ${items[items.length - 1]}`;
+}
+function toIssue(e, root) {
+    const path = pointerToPath(e.instancePath, root);
+    const parent = (e.parentSchema ?? {});
+    const got = `got ${showValue(e.data)}`;
+    const params = e.params;
+    const keys = Object.keys(parent.properties ?? {});
+    const isTerm = Array.isArray(parent.propertyNames?.enum) && parent.maxProperties === 1;
+    const kinds = (parent.propertyNames?.enum ?? []).map(String);
+    switch (e.keyword) {
+        case 'type': {
+            const types = (Array.isArray(params.type) ? params.type : String(params.type).split(','));
+            let expected = orList(types.map((t) => TYPE_WORDS[t] ?? t));
+            if (typeof e.data === 'number' && !Number.isFinite(e.data))
+                expected = `a finite ${types.includes('integer') ? 'integer' : 'number'}`;
+            if (types.includes('object') && isTerm)
+                expected = `a mapping with one key, the term kind (${orList(kinds)})`;
+            else if (types.includes('object') && keys.length > 0)
+                expected += ` with keys among: ${keys.join(', ')}`;
+            return [{ path, pointAt: 'value', message: `expected ${expected}, ${got}` }];
+        }
+        case 'enum':
+            if (e.propertyName !== undefined)
+                return []; // reported by propertyNames
+            return [
+                { path, pointAt: 'value', message: `expected one of: ${params.allowedValues.map(String).join(', ')}, ${got}` },
+            ];
+        case 'const':
+            return [{ path, pointAt: 'value', message: `expected \`${(0,core_errors/* clip */.$Q)(String(params.allowedValue))}\`, ${got}` }];
+        case 'minimum':
+        case 'maximum':
+        case 'exclusiveMinimum':
+        case 'exclusiveMaximum':
+            return [{ path, pointAt: 'value', message: `expected ${boundsText(parent)}, ${got}` }];
+        case 'multipleOf':
+            return [{ path, pointAt: 'value', message: `expected a multiple of ${String(params.multipleOf)}, ${got}` }];
+        case 'minLength':
+            return [
+                {
+                    path,
+                    pointAt: 'value',
+                    message: `expected ${params.limit === 1 ? 'non-empty text' : `text of at least ${String(params.limit)} characters`}, ${got}`,
+                },
+            ];
+        case 'maxLength':
+            return [
+                {
+                    path,
+                    pointAt: 'value',
+                    message: `expected text of at most ${String(params.limit)} characters, got ${String(e.data).length} characters`,
+                },
+            ];
+        case 'pattern': {
+            const pattern = String(params.pattern);
+            return [{ path, pointAt: 'value', message: `expected ${PATTERN_WORDS[pattern] ?? `text matching ${pattern}`}, ${got}` }];
+        }
+        case 'minItems':
+            return [
+                {
+                    path,
+                    pointAt: 'value',
+                    message: `expected ${params.limit === 1 ? 'a non-empty list' : `a list of at least ${String(params.limit)} items`}, ${got}`,
+                },
+            ];
+        case 'maxItems':
+            return [
+                {
+                    path,
+                    pointAt: 'value',
+                    message: `expected a list of at most ${String(params.limit)} items, got ${Array.isArray(e.data) ? e.data.length : '?'} items`,
+                },
+            ];
+        case 'required': {
+            const missing = String(params.missingProperty);
+            // A key present but not allowed that is a near miss of the missing one is the likely typo.
+            const present = e.data !== null && typeof e.data === 'object' && !Array.isArray(e.data) ? Object.keys(e.data).filter((k) => !keys.includes(k)) : [];
+            const typo = present.find((k) => nearestWord(k, [missing]) === missing);
+            const hint = typo !== undefined ? ` (did you mean \`${missing}\` instead of ${(0,core_errors/* quoteValue */.cl)(typo, 40)}?)` : '';
+            return [
+                {
+                    path: [...path, missing],
+                    pointAt: 'parent',
+                    message: `missing key \`${(0,core_errors/* clip */.$Q)(missing)}\`${hint}; required keys: ${(parent.required ?? [missing]).join(', ')}`,
+                },
+            ];
+        }
+        case 'additionalProperties': {
+            const extra = String(params.additionalProperty);
+            const near = nearestWord(extra, keys);
+            const hint = near !== null ? ` (did you mean \`${near}\`?)` : '';
+            return [
+                { path: [...path, extra], pointAt: 'key', message: `unknown key \`${(0,core_errors/* clip */.$Q)(extra)}\`${hint}; expected one of: ${keys.join(', ')}` },
+            ];
+        }
+        case 'propertyNames': {
+            const name = String(params.propertyName);
+            const what = isTerm ? 'term kind' : 'key';
+            return [
+                { path: [...path, name], pointAt: 'key', message: `unknown ${what} \`${(0,core_errors/* clip */.$Q)(name)}\`; expected one of: ${kinds.join(', ')}` },
+            ];
+        }
+        case 'minProperties':
+        case 'maxProperties': {
+            const present = e.data !== null && typeof e.data === 'object' ? Object.keys(e.data) : [];
+            if (isTerm) {
+                const has = present.length === 0 ? 'no key' : `${present.length} keys (${present.join(', ')})`;
+                return [{ path, pointAt: 'value', message: `a term has exactly one key, the term kind (${orList(kinds)}); got ${has}` }];
+            }
+            return [{ path, pointAt: 'value', message: `expected at least one of: ${keys.join(', ')}, ${got}` }];
+        }
+        case 'x-alternatives':
+            return [{ path, pointAt: 'value', message: `expected one of: ${orList(params.forms)}, ${got}` }];
+        case 'oneOf':
+            return [{ path, pointAt: 'value', message: `matches more than one form; ${got}` }];
+        default:
+            return [{ path, pointAt: 'value', message: `${e.message ?? 'is not valid'}, ${got}` }];
+    }
+}
+function boundsText(schema) {
+    const what = schema.type === 'integer' ? 'an integer' : 'a number';
+    const parts = [];
+    if (schema.minimum !== undefined && schema.maximum !== undefined)
+        return `${what} from ${schema.minimum} to ${schema.maximum}`;
+    if (schema.minimum !== undefined)
+        parts.push(`>= ${schema.minimum}`);
+    if (schema.exclusiveMinimum !== undefined)
+        parts.push(`> ${schema.exclusiveMinimum}`);
+    if (schema.maximum !== undefined)
+        parts.push(`<= ${schema.maximum}`);
+    if (schema.exclusiveMaximum !== undefined)
+        parts.push(`< ${schema.exclusiveMaximum}`);
+    return `${what} ${parts.join(' and ')}`;
+}
 
 
 /***/ }),
@@ -31963,10 +32701,30 @@ function* jsonPieces(value, options = {}) {
         return;
     yield* piecesOf(v, 0, options.depth ?? 4);
 }
+/**
+ * `JSON.stringify(value, null, 2)` with every line after the first indented `level` more steps:
+ * the value stringified inside `level` one-element arrays (whose lines JSON.stringify indents
+ * itself), the arrays' own brackets cut off. One native call, no second pass over the text.
+ */
+function indented(value, level) {
+    let wrapped = value;
+    for (let l = 0; l < level; l++)
+        wrapped = [wrapped];
+    const text = JSON.stringify(wrapped, null, 2) ?? 'null';
+    if (level === 0)
+        return text;
+    // Openers: `[` then a line break and one more step of indent per level; closers the mirror image.
+    let head = 0;
+    let tail = 0;
+    for (let l = 0; l < level; l++) {
+        head += 1 + 1 + INDENT.length * (l + 1);
+        tail += 1 + INDENT.length * l + 1;
+    }
+    return text.slice(head, text.length - tail);
+}
 function* piecesOf(value, level, depth) {
     if (value === null || typeof value !== 'object' || level >= depth) {
-        const text = JSON.stringify(value, null, 2) ?? 'null';
-        yield level === 0 ? text : text.replace(/\n/g, `\n${INDENT.repeat(level)}`);
+        yield indented(value, level);
         return;
     }
     const inner = INDENT.repeat(level + 1);
@@ -32603,6 +33361,114 @@ class ChunkBuilder {
 
 /***/ }),
 
+/***/ 6837:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   FE: () => (/* binding */ MAX_TABLE_LINE),
+/* harmony export */   TG: () => (/* binding */ partLines),
+/* harmony export */   ui: () => (/* binding */ lineOfFile),
+/* harmony export */   xX: () => (/* binding */ placeOfLine),
+/* harmony export */   xq: () => (/* binding */ partsLabel),
+/* harmony export */   zu: () => (/* binding */ linesText)
+/* harmony export */ });
+/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(4296);
+/**
+ * A table read from several files (`data.train: [part-1.csv, part-2.csv]` or a glob): where each
+ * row comes from.
+ *
+ * The parts are read in the order given (the descriptor loader sorts them) and concatenated. A
+ * row's place is kept in the one `lines` array every stage already carries, as a table-wide
+ * line: the part's own 1-based line plus the part's `lineOffset`, where the first part's offset
+ * is 0 and each next part's offset is the previous offset plus the previous part's last data line
+ * (at least 1). Table-wide lines therefore rise strictly from part to part, and
+ * {@link placeOfLine} turns one back into the part's path and its own line. A table read from one
+ * file has no parts list, and its lines are the file's lines, as before.
+ */
+
+/** Largest table-wide line (lines are kept in an Int32Array). */
+const MAX_TABLE_LINE = 2 ** 31 - 1;
+/**
+ * The part file and its own line of a table-wide line.
+ *
+ * @param data the table's `file` and, when read from several files, its `parts`
+ * @param line a table-wide line (a value of the table's `lines`)
+ * @returns `{ file, line }` as written in the part; the table's file and the line unchanged when it has no parts
+ */
+function placeOfLine(data, line) {
+    const parts = data.parts;
+    if (parts === undefined || parts.length === 0)
+        return { file: data.file, line };
+    // The last part whose offset is below the line (offsets rise strictly; lines are >= 1).
+    let lo = 0;
+    let hi = parts.length - 1;
+    while (lo < hi) {
+        const mid = (lo + hi + 1) >> 1;
+        if (parts[mid].lineOffset < line)
+            lo = mid;
+        else
+            hi = mid - 1;
+    }
+    return { file: parts[lo].file, line: line - parts[lo].lineOffset };
+}
+/**
+ * `line L of FILE` for a table-wide line, the file cut to 80 characters (clip).
+ *
+ * @param data as for {@link placeOfLine}
+ * @param line a table-wide line
+ */
+function lineOfFile(data, line) {
+    const place = placeOfLine(data, line);
+    return `line ${place.line} of ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .clip */ .$Q)(place.file)}`;
+}
+/**
+ * A list of table-wide lines as text grouped by file, in the order given: `a.csv lines 3, 5` or,
+ * across parts, `p-1.csv lines 3, 5; p-2.csv line 2`.
+ *
+ * @param data as for {@link placeOfLine}
+ * @param lines table-wide lines
+ */
+function linesText(data, lines) {
+    const groups = [];
+    for (const line of lines) {
+        const place = placeOfLine(data, line);
+        const last = groups[groups.length - 1];
+        if (last !== undefined && last.file === place.file)
+            last.lines.push(place.line);
+        else
+            groups.push({ file: place.file, lines: [place.line] });
+    }
+    return groups.map((g) => `${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .clip */ .$Q)(g.file)} line${g.lines.length === 1 ? '' : 's'} ${g.lines.join(', ')}`).join('; ');
+}
+/**
+ * The label of a table read from parts, for messages: the first part's path and how many more
+ * (`train/p-1.csv (+2 more parts)`); the path itself for one part.
+ *
+ * @param paths the parts, in reading order (at least one)
+ */
+function partsLabel(paths) {
+    if (paths.length <= 1)
+        return paths[0] ?? '';
+    return `${paths[0]} (+${paths.length - 1} more part${paths.length === 2 ? '' : 's'})`;
+}
+/**
+ * Table-wide lines as each part's own lines, with the part of each: for report details of a
+ * table read from parts (`{ lines, files }`, parallel lists). Null for a table of one file
+ * (whose lines are its own already), so that such reports keep their shape.
+ *
+ * @param data as for {@link placeOfLine}
+ * @param lines table-wide lines
+ */
+function partLines(data, lines) {
+    if (data.parts === undefined)
+        return null;
+    const places = lines.map((line) => placeOfLine(data, line));
+    return { lines: places.map((p) => p.line), files: places.map((p) => p.file) };
+}
+
+
+/***/ }),
+
 /***/ 5383:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
@@ -32821,14 +33687,136 @@ function encodingError(file, line, utf16) {
 
 /***/ }),
 
+/***/ 9642:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   E: () => (/* binding */ trainingRows)
+/* harmony export */ });
+/**
+ * The columns of one model's rows: what the loader produces and every later stage reads.
+ */
+/** The number of training rows a figure should count: the file's rows, also for a sample of them. */
+function trainingRows(data) {
+    return data.sampleOf ?? data.rows;
+}
+
+
+/***/ }),
+
+/***/ 1938:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   I: () => (/* binding */ inverseTarget),
+/* harmony export */   mZ: () => (/* binding */ transformTables)
+/* harmony export */ });
+/* unused harmony exports forwardTarget, targetSlope, inTargetDomain, transformTarget */
+/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(4296);
+
+/** g(y). */
+function forwardTarget(kind, y) {
+    return kind === 'log' ? Math.log(y) : kind === 'log1p' ? Math.log1p(y) : Math.sqrt(y);
+}
+/** The back-transform of a prediction t: exp(t), expm1(t) or max(t, 0)^2 (a median of y; see the module comment). */
+function inverseTarget(kind, t) {
+    if (kind === 'log')
+        return Math.exp(t);
+    if (kind === 'log1p')
+        return Math.expm1(t);
+    return t > 0 ? t * t : 0;
+}
+/** g'(y): 1 / y, 1 / (1 + y) or 1 / (2 sqrt(y)). */
+function targetSlope(kind, y) {
+    return kind === 'log' ? 1 / y : kind === 'log1p' ? 1 / (1 + y) : 1 / (2 * Math.sqrt(y));
+}
+/** Whether y is inside g's domain (for sqrt with uncertainties, above 0: g' is infinite at 0). */
+function inTargetDomain(kind, y, withSigma) {
+    if (kind === 'log')
+        return y > 0;
+    if (kind === 'log1p')
+        return y > -1;
+    return withSigma ? y > 0 : y >= 0;
+}
+const DOMAIN = {
+    log: 'a value above 0',
+    log1p: 'a value above -1',
+    sqrt: 'a value of 0 or more',
+};
+/**
+ * The rows with their target transformed (and, with `data.sigma`, sigma_t = g'(y) sigma and the
+ * weights 1 / sigma_t^2), and the target as written.
+ * @param data the rows as read
+ * @param kind the transform
+ * @param target the target column's name (for messages)
+ * @throws InputError `target-domain` naming the file, line, column and value of the first target
+ *   outside the transform's domain
+ */
+function transformTarget(data, kind, target) {
+    const withSigma = data.sigma !== undefined;
+    const n = data.rows;
+    const i = firstOutside(data.y, n, kind, withSigma);
+    if (i >= 0) {
+        const expected = withSigma && kind === 'sqrt' ? 'a value above 0 (with `data.sigma` the slope of sqrt must be finite)' : DOMAIN[kind];
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz('target-domain', `the target \`${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .clip */ .$Q)(target)}\` is ${data.y[i]} on line ${data.lines[i]} of ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .clip */ .$Q)(data.file)}, outside the domain of \`data.target_transform: ${kind}\`; expected ${expected}`, { file: data.file, line: data.lines[i], key: target });
+    }
+    const y = new Float64Array(n);
+    forwardInto(kind, data.y, n, y);
+    const original = {
+        y: data.y.subarray(0, n),
+        ...(data.weights !== undefined ? { weights: data.weights } : {}),
+        ...(data.sigma !== undefined ? { sigma: data.sigma } : {}),
+    };
+    if (data.sigma === undefined)
+        return { data: { ...data, y }, original };
+    const sigma = new Float64Array(n);
+    const weights = new Float64Array(n);
+    sigmaInto(kind, data.y, data.sigma, n, sigma, weights);
+    return { data: { ...data, y, sigma, weights }, original };
+}
+// One loop per function (see DEVELOPERS.md, "Writing hot loops").
+function firstOutside(y, n, kind, withSigma) {
+    for (let i = 0; i < n; i++)
+        if (!inTargetDomain(kind, y[i], withSigma))
+            return i;
+    return -1;
+}
+function forwardInto(kind, y, n, out) {
+    for (let i = 0; i < n; i++)
+        out[i] = forwardTarget(kind, y[i]);
+}
+function sigmaInto(kind, y, s, n, sigma, weights) {
+    for (let i = 0; i < n; i++) {
+        const st = Math.abs(targetSlope(kind, y[i])) * s[i];
+        sigma[i] = st;
+        weights[i] = 1 / (st * st);
+    }
+}
+/**
+ * Both files' rows with their targets transformed (see {@link transformTarget}), the training
+ * input columns unchanged, and the targets as written.
+ * @throws InputError `target-domain` (see {@link transformTarget})
+ */
+function transformTables(tables, kind, target) {
+    const train = transformTarget(tables.train, kind, target);
+    const holdout = transformTarget(tables.holdout, kind, target);
+    return {
+        tables: { ...tables, train: train.data, holdout: holdout.data },
+        original: { train: train.original, holdout: holdout.original },
+    };
+}
+
+
+/***/ }),
+
 /***/ 7254:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
 /* harmony export */   aN: () => (/* binding */ forEachBlock),
+/* harmony export */   h1: () => (/* binding */ blockRows),
 /* harmony export */   tp: () => (/* binding */ predictRows)
 /* harmony export */ });
-/* unused harmony export blockRows */
 /* harmony import */ var _kernels_index_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(8667);
 
 /**
@@ -33593,8 +34581,10 @@ function createTerm(spec, training, file, levels = new Map()) {
 /* harmony export */   Yv: () => (/* binding */ transformedTerm)
 /* harmony export */ });
 /* unused harmony export inTransformDomain */
-/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(4296);
-/* harmony import */ var _stats_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(6801);
+/* harmony import */ var _data_data_parts_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(6837);
+/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(4296);
+/* harmony import */ var _stats_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(6801);
+
 
 
 /** Whether t is defined at v. */
@@ -33634,7 +34624,8 @@ function checkTransformDomain(spec, inputs, data, order) {
         const i = firstOutside(col, data.rows, transform);
         if (i < 0)
             continue;
-        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz('transform-domain', `column \`${name}\` is ${col[i]} on line ${data.lines[i]} of ${data.file}, outside the domain of \`transform: ${transform}\` of the ${spec.kind} term on line ${spec.line}; expected ${DOMAIN[transform]}`, { file: data.file, line: data.lines[i], key: name });
+        const place = (0,_data_data_parts_js__WEBPACK_IMPORTED_MODULE_0__/* .placeOfLine */ .xX)(data, data.lines[i]);
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz('transform-domain', `column \`${name}\` is ${col[i]} on line ${place.line} of ${place.file}, outside the domain of \`transform: ${transform}\` of the ${spec.kind} term on line ${spec.line}; expected ${DOMAIN[transform]}`, { file: place.file, line: place.line, key: name });
     }
 }
 /** Index of the first of n values outside the domain, or -1 (one loop; see DEVELOPERS.md, "Writing hot loops"). */
@@ -33689,9 +34680,9 @@ function transformedTerm(spec, training, file, inputs, build) {
     const columns = new Map();
     for (const name of inputs) {
         const x = training.get(name);
-        const { mean, sd } = (0,_stats_js__WEBPACK_IMPORTED_MODULE_1__/* .meanAndSd */ .ud)(x);
+        const { mean, sd } = (0,_stats_js__WEBPACK_IMPORTED_MODULE_2__/* .meanAndSd */ .ud)(x);
         if (transform === 'standardise' && !(sd > 0)) {
-            throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz('constant-input', `column \`${name}\` is constant in the training data, so \`transform: standardise\` would divide by 0; drop the transform or the term`, { file, line: spec.line, key: 'transform' });
+            throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz('constant-input', `column \`${name}\` is constant in the training data, so \`transform: standardise\` would divide by 0; drop the transform or the term`, { file, line: spec.line, key: 'transform' });
         }
         shift.push(mean);
         scale.push(sd);
@@ -33716,6 +34707,67 @@ function transformedTerm(spec, training, file, inputs, build) {
                 return scratch[k].subarray(0, m);
             });
             inner.fill(views, m, out, offset);
+        },
+    };
+}
+
+
+/***/ }),
+
+/***/ 9416:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   Uo: () => (/* binding */ weightedDesign),
+/* harmony export */   hx: () => (/* binding */ scaleBlockRows),
+/* harmony export */   on: () => (/* binding */ rowScaling)
+/* harmony export */ });
+/**
+ * sqrt(w) and sqrt(w) y of a model's rows, or null when the rows carry no weights. The weights
+ * are first divided by their mean (the fit does not change when every weight is multiplied by
+ * one constant), so that the scaled problem's mean squared errors (cross-validation, leave-one-out)
+ * are weighted mean squared errors sum w r^2 / sum w on the same footing as the weighted RMSE.
+ */
+function rowScaling(data) {
+    if (data.weights === undefined)
+        return null;
+    const sqrtW = new Float64Array(data.rows);
+    const y = new Float64Array(data.rows);
+    let total = 0;
+    for (let i = 0; i < data.rows; i++)
+        total += data.weights[i];
+    const mean = total / data.rows;
+    for (let i = 0; i < data.rows; i++) {
+        sqrtW[i] = Math.sqrt(data.weights[i] / mean);
+        y[i] = sqrtW[i] * data.y[i];
+    }
+    return { sqrtW, y };
+}
+/**
+ * Multiplies each of the m rows of a column-major m x p block (rows start .. start+m-1 of the
+ * data) by sqrt(w) in place.
+ */
+function scaleBlockRows(X, m, p, sqrtW, start) {
+    for (let j = 0; j < p; j++)
+        scaleColumn(X, j * m, m, sqrtW, start);
+}
+/** X[at + i] *= s[start + i] for i < m (one loop; see DEVELOPERS.md, "Writing hot loops"). */
+function scaleColumn(X, at, m, s, start) {
+    for (let i = 0; i < m; i++)
+        X[at + i] *= s[start + i];
+}
+/**
+ * The design of the scaled problem: the same columns, each row filled by `design` and multiplied
+ * by sqrt(w) of its row (`fill`'s `start` indexes `scaling.sqrtW`). Only for the rows the
+ * scaling was made from.
+ */
+function weightedDesign(design, scaling) {
+    return {
+        ...design,
+        fill(inputs, start, m, out) {
+            const filled = design.fill(inputs, start, m, out);
+            scaleBlockRows(filled, m, design.p, scaling.sqrtW, start);
+            return filled;
         },
     };
 }
@@ -34001,6 +35053,8 @@ var cross_validation = __nccwpck_require__(4733);
 var diagnostics_folds = __nccwpck_require__(9236);
 // EXTERNAL MODULE: ./src/core/deadline.ts
 var deadline = __nccwpck_require__(6343);
+// EXTERNAL MODULE: ./src/design/weighted-design.ts
+var weighted_design = __nccwpck_require__(9416);
 ;// CONCATENATED MODULE: ./src/diagnostics/complexity.ts
 /**
  * The simpler model to use: sweep a model's main complexity setting, cross-validate each setting
@@ -34008,6 +35062,7 @@ var deadline = __nccwpck_require__(6343);
  * the best (Hastie, Tibshirani & Friedman, The Elements of Statistical Learning, 2nd ed., 2009,
  * section 7.10, the "one-standard-error" rule).
  */
+
 
 
 
@@ -34163,7 +35218,12 @@ function subsample(data, m) {
             out[t] = col[Math.floor((t * n) / m)];
         return out;
     };
-    return { inputs: data.inputs.map(pick), y: pick(data.y), rows: m };
+    return {
+        inputs: data.inputs.map(pick),
+        y: pick(data.y),
+        rows: m,
+        ...(data.weights !== undefined ? { weights: pick(data.weights) } : {}),
+    };
 }
 /**
  * coefficients[s][f]: the fit without fold f under penalty s. One SVD per fold serves every
@@ -34198,6 +35258,10 @@ function sweepCoefficients(complements, lambdas, penalised) {
  * - Else the first radial term: widths current x 2^t, t = -2 .. 4; simplest = widest.
  *   Degree and width settings each build their own design: two passes over the rows each, on
  *   an even-stride subsample above `maxRows` rows.
+ * - Weighted rows (`train.weights`): every setting is the weighted fit, through the rows scaled by
+ *   sqrt(w) with the weights divided by their mean over the rows used (design/weighted-design.ts),
+ *   so each fold's errors are weighted and cv_rmse = sqrt(sum w r^2 / sum w) over the out-of-fold
+ *   residuals r (the ridge sweep gets the same from the model's own weighted fold factors).
  *
  * @param descriptor the model (fit options, term lines)
  * @param design the fitted design
@@ -34212,9 +35276,10 @@ function sweepComplexity(descriptor, design, train, fit, options = {}) {
         return null;
     const maxRows = options.maxRows ?? SWEEP_MAX_ROWS;
     // A ridge sweep needs no pass over the rows once the fold factors exist, so it uses every row.
-    const subsampled = target.kind !== 'ridge' && train.rows > maxRows;
-    const rows = subsampled ? subsample(train, maxRows) : train;
-    const folds = (0,diagnostics_folds/* assignFolds */.o)(rows.rows, descriptor.fit.folds, descriptor.fit.foldOrder, descriptor.fit.seed);
+    const thinned = target.kind !== 'ridge' && train.rows > maxRows;
+    const rows = thinned ? subsample(train, maxRows) : train;
+    const subsampled = thinned || options.sampled === true;
+    const folds = (0,diagnostics_folds/* assignFolds */.oF)(rows.rows, descriptor.fit.folds, descriptor.fit.foldOrder, descriptor.fit.seed);
     if (folds.k < 2)
         return null;
     const ridge = descriptor.fit.ridge;
@@ -34247,6 +35312,8 @@ function sweepComplexity(descriptor, design, train, fit, options = {}) {
         lambdas.forEach((l, s) => curve.push(pointFrom(l, `ridge ${formatSetting(l)}`, p, sse[s], s === lambdas.indexOf(ridge))));
     }
     else {
+        const scaling = (0,weighted_design/* rowScaling */.on)(rows);
+        const scaledRows = scaling === null ? rows : { inputs: rows.inputs, y: scaling.y, rows: rows.rows };
         const trainColumns = new Map(design.inputs.map((name, c) => [name, train.inputs[c]]));
         const spec = design.terms[target.term].spec;
         const settings = [];
@@ -34294,9 +35361,11 @@ function sweepComplexity(descriptor, design, train, fit, options = {}) {
                 continue;
             }
             try {
-                const factors = (0,cross_validation/* complementFactors */.Zd)((0,cross_validation/* foldFactors */.Y6)(d, rows, folds));
+                // Weighted rows: the fit of the rows scaled by sqrt(w) (errors sqrt(w) r).
+                const dw = scaling === null ? d : (0,weighted_design/* weightedDesign */.Uo)(d, scaling);
+                const factors = (0,cross_validation/* complementFactors */.Zd)((0,cross_validation/* foldFactors */.Y6)(dw, scaledRows, folds));
                 const coefficients = (0,cross_validation/* complementCoefficients */.dn)(factors, [ridge], d.penalised);
-                const { sse } = (0,cross_validation/* outOfFoldErrors */.Yo)(d, rows, folds, coefficients);
+                const { sse } = (0,cross_validation/* outOfFoldErrors */.Yo)(dw, scaledRows, folds, coefficients);
                 curve.push(pointFrom(value, label, d.p, sse[0], current));
             }
             catch (error) {
@@ -34339,6 +35408,7 @@ function sweepComplexity(descriptor, design, train, fit, options = {}) {
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
 /* harmony export */   $l: () => (/* binding */ summariseFolds),
 /* harmony export */   DJ: () => (/* binding */ crossValidate),
+/* harmony export */   OY: () => (/* binding */ CrossValidationScorer),
 /* harmony export */   UN: () => (/* binding */ FoldFactorBuilder),
 /* harmony export */   Y6: () => (/* binding */ foldFactors),
 /* harmony export */   Yo: () => (/* binding */ outOfFoldErrors),
@@ -34351,7 +35421,9 @@ function sweepComplexity(descriptor, design, train, fit, options = {}) {
 /* harmony import */ var _fit_index_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(2450);
 /* harmony import */ var _design_blocks_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(7254);
 /* harmony import */ var _kernels_index_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(8667);
+/* harmony import */ var _folds_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(9236);
 /* harmony import */ var _core_deadline_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(6343);
+
 
 
 
@@ -34388,11 +35460,11 @@ class FoldFactorBuilder {
      * @param y targets of the whole data set (indexed from `start`)
      * @param start first row
      * @param m rows in the block
+     * @param foldOf fold of each row, indexed like `y`; default the folds' own table
      */
-    add(X, y, start, m) {
+    add(X, y, start, m, foldOf = this.#folds.foldOf) {
         const p = this.#p;
         const k = this.#folds.k;
-        const foldOf = this.#folds.foldOf;
         if (m === 0)
             return;
         const first = foldOf[start];
@@ -34546,13 +35618,16 @@ function outOfFoldErrorsFromFactors(perFold, coefficients) {
  * @param folds fold of each row
  * @param coefficients coefficients[s][f]: length-p coefficients of setting s fitted without fold f
  * @param visit called with each block (column-major m x p), its first row and m
+ * @param rowFolds for one chunk of a streamed model: its rows' folds (indexed like `data`) and
+ *   the sse table to add into (returned); default the folds' own table and a new sse table
  */
-function outOfFoldErrors(design, data, folds, coefficients, visit) {
+function outOfFoldErrors(design, data, folds, coefficients, visit, rowFolds) {
     const p = design.p;
     const k = folds.k;
     const S = coefficients.length;
-    const sse = Array.from({ length: S }, () => new Array(k).fill(0));
-    const foldOf = folds.foldOf;
+    // A streamed model's chunks add into one running table (rowFolds.sse), each with its rows' folds.
+    const sse = rowFolds?.sse ?? Array.from({ length: S }, () => new Array(k).fill(0));
+    const foldOf = rowFolds?.foldOf ?? folds.foldOf;
     // W[s][j * k + f]: coefficient j of setting s fitted without fold f (one flat table per setting).
     const tables = coefficients.map((bySet) => {
         const t = new Float64Array(p * k);
@@ -34629,86 +35704,136 @@ function complementCoefficients(complements, ridges, penalised) {
  * @param options per-fold factors already built, and a buffer for the training predictions (default none)
  */
 function crossValidate(design, data, fit, folds, options = {}) {
-    const n = data.rows;
-    const p = design.p;
-    const k = folds.k;
-    const kfold = k >= 2;
-    let coefficients = [];
-    if (kfold) {
-        const complements = options.complements ?? complementFactors(options.factors ?? foldFactors(design, data, folds));
-        coefficients = complementCoefficients(complements, [fit.ridge], fit.penalised);
+    const scorer = new CrossValidationScorer(design, fit, folds, {
+        ...options,
+        factors: options.factors ?? (options.complements || folds.k < 2 ? undefined : foldFactors(design, data, folds)),
+    });
+    scorer.addRows(data, options.predictions);
+    return scorer.finish(data.rows);
+}
+/**
+ * The scoring pass of {@link crossValidate} over rows that arrive in chunks (a streamed model,
+ * data/row-source.ts): {@link addRows} per chunk in file order, then {@link finish}. Fed the whole
+ * rows as one chunk it is {@link crossValidate}, addition for addition.
+ */
+class CrossValidationScorer {
+    #design;
+    #fit;
+    #folds;
+    #coefficients;
+    #sse;
+    #press = 0;
+    #rss = 0;
+    #leverageSum = 0;
+    #maxLeverage = 0;
+    #rowsWithLeverageOne = 0;
+    #h = new Float64Array(0);
+    #pred = new Float64Array(0);
+    #ids = new Int32Array(0);
+    #rows = 0;
+    /**
+     * @param design the model's design
+     * @param fit the full fit
+     * @param folds fold assignment of every row (in-memory or streamed)
+     * @param options the per-fold factors or their complements (one of them is needed for k >= 2)
+     */
+    constructor(design, fit, folds, options) {
+        this.#design = design;
+        this.#fit = fit;
+        this.#folds = folds;
+        let coefficients = [];
+        if (folds.k >= 2) {
+            const complements = options.complements ?? complementFactors(options.factors ?? []);
+            coefficients = complementCoefficients(complements, [fit.ridge], fit.penalised);
+        }
+        this.#coefficients = coefficients;
+        this.#sse = coefficients.map(() => new Array(folds.k).fill(0));
     }
-    const w = fit.coefficients;
-    const out = options.predictions;
-    let press = 0;
-    let rss = 0;
-    let leverageSum = 0;
-    let maxLeverage = 0;
-    let rowsWithLeverageOne = 0;
-    let h = new Float64Array(0);
-    let pred = new Float64Array(0);
-    const visit = (X, start, m) => {
-        if (h.length < m) {
-            h = new Float64Array(m);
-            pred = new Float64Array(m);
-        }
-        (0,_fit_index_js__WEBPACK_IMPORTED_MODULE_0__/* .leveragesInto */ .lG)(fit, X, m, h);
-        pred.fill(0, 0, m);
-        (0,_kernels_index_js__WEBPACK_IMPORTED_MODULE_2__/* .addProducts */ .kD)(pred, 0, X, m, w, p);
-        if (out !== undefined)
-            out.set(pred.subarray(0, m), start);
-        // The sums run in locals and are stored once per block: the same additions in the same order,
-        // without boxing a number into the closure's context on every row.
-        let blockRss = rss;
-        let blockPress = press;
-        let blockLeverageSum = leverageSum;
-        let blockMaxLeverage = maxLeverage;
-        let blockOnes = rowsWithLeverageOne;
-        const y = data.y;
-        for (let i = 0; i < m; i++) {
-            const e = y[start + i] - pred[i];
-            blockRss += e * e;
-            const hi = h[i];
-            blockLeverageSum += hi;
-            if (hi > blockMaxLeverage)
-                blockMaxLeverage = hi;
-            if (1 - hi <= LEVERAGE_ONE_TOLERANCE) {
-                blockOnes++;
-                blockPress = Infinity;
+    /**
+     * Scores the next chunk of rows (rows #rows .. #rows + data.rows - 1 of the model).
+     * @param predictions when given (length >= data.rows), receives the full fit's predictions
+     */
+    addRows(data, predictions) {
+        const { p } = this.#design;
+        const fit = this.#fit;
+        const w = fit.coefficients;
+        const first = this.#rows;
+        if (this.#ids.length < data.rows && this.#folds.streamed === true)
+            this.#ids = new Int32Array(data.rows);
+        const foldOf = (0,_folds_js__WEBPACK_IMPORTED_MODULE_4__/* .foldIdsOf */ .Fe)(this.#folds, first, data.rows, this.#ids);
+        const visit = (X, start, m) => {
+            if (this.#h.length < m) {
+                this.#h = new Float64Array(m);
+                this.#pred = new Float64Array(m);
             }
-            else {
-                const loo = e / (1 - hi);
-                blockPress += loo * loo;
+            const h = this.#h;
+            const pred = this.#pred;
+            (0,_fit_index_js__WEBPACK_IMPORTED_MODULE_0__/* .leveragesInto */ .lG)(fit, X, m, h);
+            pred.fill(0, 0, m);
+            (0,_kernels_index_js__WEBPACK_IMPORTED_MODULE_2__/* .addProducts */ .kD)(pred, 0, X, m, w, p);
+            if (predictions !== undefined)
+                predictions.set(pred.subarray(0, m), start);
+            // The sums run in locals and are stored once per block: the same additions in the same order,
+            // without boxing a number into the closure's context on every row.
+            let blockRss = this.#rss;
+            let blockPress = this.#press;
+            let blockLeverageSum = this.#leverageSum;
+            let blockMaxLeverage = this.#maxLeverage;
+            let blockOnes = this.#rowsWithLeverageOne;
+            const y = data.y;
+            for (let i = 0; i < m; i++) {
+                const e = y[start + i] - pred[i];
+                blockRss += e * e;
+                const hi = h[i];
+                blockLeverageSum += hi;
+                if (hi > blockMaxLeverage)
+                    blockMaxLeverage = hi;
+                if (1 - hi <= LEVERAGE_ONE_TOLERANCE) {
+                    blockOnes++;
+                    blockPress = Infinity;
+                }
+                else {
+                    const loo = e / (1 - hi);
+                    blockPress += loo * loo;
+                }
             }
-        }
-        rss = blockRss;
-        press = blockPress;
-        leverageSum = blockLeverageSum;
-        maxLeverage = blockMaxLeverage;
-        rowsWithLeverageOne = blockOnes;
-    };
-    const { sse } = outOfFoldErrors(design, data, folds, coefficients, visit);
-    const summary = kfold ? summariseFolds(sse[0], folds.sizes) : null;
-    const df = fit.degreesOfFreedom;
-    const gcvDenominator = 1 - df / n;
-    const gcv = n === 0 ? Number.NaN : gcvDenominator > LEVERAGE_ONE_TOLERANCE ? rss / n / (gcvDenominator * gcvDenominator) : Infinity;
-    return {
-        k,
-        foldSizes: [...folds.sizes],
-        cvRmse: summary ? summary.cvRmse : Number.NaN,
-        foldRmse: summary ? summary.foldMse.map(Math.sqrt) : [],
-        meanMse: summary ? summary.meanMse : Number.NaN,
-        seMse: summary ? summary.seMse : Number.NaN,
-        loocvRmse: n > 0 ? Math.sqrt(press / n) : Number.NaN,
-        press,
-        gcv,
-        effectiveDf: df,
-        leverageSum,
-        maxLeverage,
-        rowsWithLeverageOne,
-        rss,
-        n,
-    };
+            this.#rss = blockRss;
+            this.#press = blockPress;
+            this.#leverageSum = blockLeverageSum;
+            this.#maxLeverage = blockMaxLeverage;
+            this.#rowsWithLeverageOne = blockOnes;
+        };
+        outOfFoldErrors(this.#design, data, this.#folds, this.#coefficients, visit, { foldOf, sse: this.#sse });
+        this.#rows += data.rows;
+    }
+    /** The figures over every row added; `n` is their count. */
+    finish(n = this.#rows) {
+        const folds = this.#folds;
+        const k = folds.k;
+        const summary = k >= 2 ? summariseFolds(this.#sse[0], folds.sizes) : null;
+        const df = this.#fit.degreesOfFreedom;
+        const rss = this.#rss;
+        const press = this.#press;
+        const gcvDenominator = 1 - df / n;
+        const gcv = n === 0 ? Number.NaN : gcvDenominator > LEVERAGE_ONE_TOLERANCE ? rss / n / (gcvDenominator * gcvDenominator) : Infinity;
+        return {
+            k,
+            foldSizes: [...folds.sizes],
+            cvRmse: summary ? summary.cvRmse : Number.NaN,
+            foldRmse: summary ? summary.foldMse.map(Math.sqrt) : [],
+            meanMse: summary ? summary.meanMse : Number.NaN,
+            seMse: summary ? summary.seMse : Number.NaN,
+            loocvRmse: n > 0 ? Math.sqrt(press / n) : Number.NaN,
+            press,
+            gcv,
+            effectiveDf: df,
+            leverageSum: this.#leverageSum,
+            maxLeverage: this.#maxLeverage,
+            rowsWithLeverageOne: this.#rowsWithLeverageOne,
+            rss,
+            n,
+        };
+    }
 }
 
 
@@ -34718,7 +35843,9 @@ function crossValidate(design, data, fit, folds, options = {}) {
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   o: () => (/* binding */ assignFolds)
+/* harmony export */   Fe: () => (/* binding */ foldIdsOf),
+/* harmony export */   g7: () => (/* binding */ streamedFolds),
+/* harmony export */   oF: () => (/* binding */ assignFolds)
 /* harmony export */ });
 /* unused harmony export foldSizes */
 /* harmony import */ var _random_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(5089);
@@ -34771,6 +35898,103 @@ function markFold(foldOf, perm, pos, size, f) {
     for (let c = 0; c < size; c++, at++)
         foldOf[perm === null ? at : perm[at]] = f;
     return at;
+}
+/**
+ * Folds of n rows without a per-row table, for a model whose rows stream from its file
+ * (data/row-source.ts): memory independent of n. Fold sizes are {@link foldSizes}(n, k) as in
+ * {@link assignFolds}. `blocks` gives the same folds as {@link assignFolds}. `shuffled` puts row i
+ * at position pi(i) of a seeded pseudo-random permutation pi of 0..n-1 computed from i alone (a
+ * four-round balanced Feistel network over the smallest even power of two >= n, with
+ * {@link mix32} of the seed, round and half as round function, walked along its cycle until the
+ * value falls below n: "cycle walking", Black & Rogaway, "Ciphers with arbitrary finite domains",
+ * CT-RSA 2002); consecutive runs of positions form the folds, as in {@link assignFolds}. The
+ * shuffled folds therefore differ from the in-memory shuffle's (a Fisher-Yates permutation needs
+ * n integers of memory), while sizes, seed and order keep their meaning.
+ *
+ * @param n rows (a non-negative integer)
+ * @param k requested folds; reduced to n when n < k, at least 1
+ */
+function streamedFolds(n, k, order, seed) {
+    if (!Number.isInteger(n) || n < 0)
+        throw new RangeError(`streamedFolds: n must be a non-negative integer, got ${String(n)}`);
+    if (!Number.isInteger(k) || k < 1)
+        throw new RangeError(`streamedFolds: k must be a positive integer, got ${String(k)}`);
+    const kk = Math.max(1, Math.min(k, n));
+    return { k: kk, foldOf: new Int32Array(0), sizes: foldSizes(n, kk), order, seed, rows: n, streamed: true };
+}
+/**
+ * The folds of rows start .. start+m-1: a view of `folds.foldOf` for in-memory folds, else
+ * computed into `out` (length >= m) for {@link streamedFolds}.
+ */
+function foldIdsOf(folds, start, m, out) {
+    if (folds.streamed !== true)
+        return folds.foldOf.subarray(start, start + m);
+    const n = folds.rows ?? 0;
+    // First position of each fold after fold 0: a position's fold is the number of these <= it.
+    const bounds = new Float64Array(folds.k);
+    let at = 0;
+    for (let f = 0; f < folds.k; f++) {
+        at += folds.sizes[f];
+        bounds[f] = at;
+    }
+    if (folds.order === 'blocks')
+        blockFolds(bounds, start, m, out);
+    else
+        shuffledFolds(bounds, n, folds.seed, start, m, out);
+    return out.subarray(0, m);
+}
+/** out[i] = fold of position start + i, for contiguous folds ending at `bounds`. */
+function blockFolds(bounds, start, m, out) {
+    let f = 0;
+    while (f < bounds.length - 1 && bounds[f] <= start)
+        f++;
+    for (let i = 0; i < m; i++) {
+        while (f < bounds.length - 1 && bounds[f] <= start + i)
+            f++;
+        out[i] = f;
+    }
+}
+/** out[i] = fold of position pi(start + i) (see {@link streamedFolds}). */
+function shuffledFolds(bounds, n, seed, start, m, out) {
+    let bits = 2;
+    while (2 ** bits < n)
+        bits += 2;
+    const half = bits / 2;
+    const mask = 2 ** half - 1;
+    const key = (0,_random_js__WEBPACK_IMPORTED_MODULE_0__/* .mix32 */ .QV)(Math.trunc(seed) >>> 0);
+    for (let i = 0; i < m; i++) {
+        const position = feistelIndex(start + i, n, half, mask, key);
+        // Binary search of the fold whose positions hold it.
+        let lo = 0;
+        let hi = bounds.length - 1;
+        while (lo < hi) {
+            const mid = (lo + hi) >>> 1;
+            if (bounds[mid] <= position)
+                lo = mid + 1;
+            else
+                hi = mid;
+        }
+        out[i] = lo;
+    }
+}
+/**
+ * pi(x) for x < n: the Feistel permutation of 0 .. 4^half - 1 applied until the value is below n
+ * (it returns to x along its cycle at the latest, so the loop ends; on average it takes fewer
+ * than 4 steps, as 4^half < 4n).
+ */
+function feistelIndex(x, n, half, mask, key) {
+    let v = x;
+    do {
+        let left = Math.floor(v / 2 ** half);
+        let right = v % 2 ** half;
+        for (let round = 0; round < 4; round++) {
+            const next = (left ^ ((0,_random_js__WEBPACK_IMPORTED_MODULE_0__/* .mix32 */ .QV)((key ^ Math.imul(round + 1, 0x9e3779b1) ^ Math.imul(right, 0x85ebca6b)) >>> 0) & mask)) >>> 0;
+            left = right;
+            right = next;
+        }
+        v = left * 2 ** half + right;
+    } while (v >= n);
+    return v;
 }
 
 
@@ -35099,6 +36323,197 @@ function gapRatio(trainRmse, holdoutRmse) {
 
 /***/ }),
 
+/***/ 6873:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   Gm: () => (/* binding */ measureSpikes),
+/* harmony export */   jN: () => (/* binding */ spikeIntervals)
+/* harmony export */ });
+/* unused harmony exports SPIKE_MAX_ROWS, SPIKE_MAX_GAPS, SPIKE_POINTS_PER_GAP */
+/* harmony import */ var _design_blocks_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(7254);
+/* harmony import */ var _column_median_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(8455);
+/* harmony import */ var _swing_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(309);
+/* harmony import */ var _data_target_transform_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(1938);
+
+
+
+
+/** Largest number of rows whose targets make up the data variation (an even-stride sample above it). */
+const SPIKE_MAX_ROWS = 20_000;
+/**
+ * Measures the spike figure of a fitted model.
+ * @param design the fitted design
+ * @param train training rows (inputs in `design.inputs` order; with `weights`, the data variation
+ *   uses weighted means, see {@link meanTargets})
+ * @param coefficients fitted coefficients (length p)
+ * @param original a model fitted on t = g(y) judged on the original scale: the transform (the
+ *   curve is back-transformed) and the training targets as written (the data variation is theirs);
+ *   default none (the fit's own scale)
+ */
+function measureSpikes(design, train, coefficients, original) {
+    const n = train.rows;
+    const medians = train.inputs.map((col) => (0,_column_median_js__WEBPACK_IMPORTED_MODULE_1__/* .columnMedian */ .z)(col, n));
+    const perInput = [];
+    let ratio = Number.NaN;
+    let worst = null;
+    design.inputs.forEach((name, c) => {
+        // Category inputs have no order between their levels: no variation along them to compare.
+        if (design.terms.some((t) => t.discreteValues !== undefined && t.inputs.includes(name)))
+            return;
+        const grid = (0,_swing_js__WEBPACK_IMPORTED_MODULE_2__/* .inputGrid */ .ll)(train.inputs[c].subarray(0, n)).inside;
+        if (grid.length < 2)
+            return;
+        const columns = design.inputs.map((_, k) => (k === c ? grid : new Float64Array(grid.length).fill(medians[k])));
+        const curve = (0,_design_blocks_js__WEBPACK_IMPORTED_MODULE_0__/* .predictRows */ .tp)(design, { inputs: columns, rows: grid.length }, coefficients);
+        if (original !== undefined)
+            for (let i = 0; i < curve.length; i++)
+                curve[i] = (0,_data_target_transform_js__WEBPACK_IMPORTED_MODULE_3__/* .inverseTarget */ .I)(original.kind, curve[i]);
+        const curveVariation = totalVariation(curve, curve.length);
+        const dataVariation = targetVariation(train.inputs[c], original?.y ?? train.y, n, original ? original.weights : train.weights);
+        const r = dataVariation > 0 ? curveVariation / dataVariation : Number.NaN;
+        perInput.push({ input: name, curveVariation, dataVariation, ratio: r });
+        if (!Number.isNaN(r) && (Number.isNaN(ratio) || r > ratio)) {
+            ratio = r;
+            worst = name;
+        }
+    });
+    return { ratio, worst, perInput };
+}
+/** sum |v[k+1] - v[k]| over the first m values (one loop; see DEVELOPERS.md, "Writing hot loops"). */
+function totalVariation(v, m) {
+    let s = 0;
+    for (let k = 1; k < m; k++)
+        s += Math.abs(v[k] - v[k - 1]);
+    return s;
+}
+/** Total variation of the (weighted) mean target over the input's distinct values in ascending order. */
+function targetVariation(x, y, n, weights) {
+    const { means } = meanTargets(x, y, n, weights);
+    return totalVariation(Float64Array.from(means), means.length);
+}
+/** Most intervals {@link spikeIntervals} examines (the widest, when an input has more gaps). */
+const SPIKE_MAX_GAPS = 4000;
+/** Points inside each interval at which the curve is evaluated (besides its two ends). */
+const SPIKE_POINTS_PER_GAP = 8;
+/**
+ * The intervals between neighbouring distinct training values of input c where the curve (the
+ * other inputs at their training medians, as {@link measureSpikes}) goes up and down more than
+ * `limit` times what the interval allows: TV_f over [x_j, x_(j+1)] (the curve at both ends and
+ * {@link SPIKE_POINTS_PER_GAP} even points between) above
+ * limit * max(|f(x_(j+1)) - f(x_j)|, |ybar_(j+1) - ybar_j|, TV_y / gaps), with ybar_j the mean
+ * target at the j-th distinct value (an even-stride sample of {@link SPIKE_MAX_ROWS} rows above it)
+ * and TV_y / gaps the data's mean step. A curve that only rises or only falls over the interval has
+ * TV_f equal to its net change, so a steep but monotone stretch is never marked; the data's steps
+ * keep a flat stretch of data from marking every small wiggle. Our own rule for the charts, in the spirit of the
+ * `swing-spikes` figure (which sums the same variations over the whole range); not a published one.
+ * At most {@link SPIKE_MAX_GAPS} intervals are examined (the widest). Ascending by `from`.
+ *
+ * @param design the fitted design
+ * @param train training rows (inputs in `design.inputs` order)
+ * @param coefficients fitted coefficients (length p)
+ * @param c index of the input in `design.inputs`
+ * @param limit the factor (the `swing-spikes` warning limit, else its fail limit)
+ * @param original as in {@link measureSpikes}: back-transform the curve and compare with y as written
+ */
+function spikeIntervals(design, train, coefficients, c, limit, original) {
+    const n = train.rows;
+    if (!(limit > 0) || c < 0 || c >= design.inputs.length)
+        return [];
+    const { values, means } = meanTargets(train.inputs[c], original?.y ?? train.y, n, original ? original.weights : train.weights);
+    const gaps = values.length - 1;
+    if (gaps < 1)
+        return [];
+    let dataVariation = 0;
+    for (let j = 0; j < gaps; j++)
+        dataVariation += Math.abs(means[j + 1] - means[j]);
+    const meanStep = dataVariation / gaps;
+    const chosen = widestGapIndices(values, SPIKE_MAX_GAPS);
+    const per = SPIKE_POINTS_PER_GAP + 2;
+    const grid = new Float64Array(chosen.length * per);
+    chosen.forEach((j, q) => {
+        for (let t = 0; t < per; t++)
+            grid[q * per + t] = values[j] + ((values[j + 1] - values[j]) * t) / (per - 1);
+    });
+    const medians = train.inputs.map((col) => (0,_column_median_js__WEBPACK_IMPORTED_MODULE_1__/* .columnMedian */ .z)(col, n));
+    const columns = design.inputs.map((_, k) => (k === c ? grid : new Float64Array(grid.length).fill(medians[k])));
+    const curve = (0,_design_blocks_js__WEBPACK_IMPORTED_MODULE_0__/* .predictRows */ .tp)(design, { inputs: columns, rows: grid.length }, coefficients);
+    if (original !== undefined)
+        for (let i = 0; i < curve.length; i++)
+            curve[i] = (0,_data_target_transform_js__WEBPACK_IMPORTED_MODULE_3__/* .inverseTarget */ .I)(original.kind, curve[i]);
+    const out = [];
+    chosen.forEach((j, q) => {
+        const variation = totalVariation(curve.subarray(q * per, (q + 1) * per), per);
+        const net = Math.abs(curve[(q + 1) * per - 1] - curve[q * per]);
+        const allowed = Math.max(net, Math.abs(means[j + 1] - means[j]), meanStep);
+        if (variation > limit * allowed)
+            out.push({ from: values[j], to: values[j + 1], curveVariation: variation, allowed });
+    });
+    return out;
+}
+/**
+ * The distinct values of x ascending (of an even-stride sample above {@link SPIKE_MAX_ROWS} rows)
+ * and the mean y at each: the plain mean, or with row weights the weighted mean sum w y / sum w (a
+ * value whose rows all weigh 0 is left out: it takes no part in the fit). Each value's targets are
+ * summed in row order (as a stable sort of the rows by value visits them): the sampled values are
+ * sorted once (a native typed-array sort), and each row finds its value's slot by binary search.
+ */
+function meanTargets(x, y, n, weights) {
+    const m = Math.min(n, SPIKE_MAX_ROWS);
+    const rows = new Int32Array(m);
+    for (let t = 0; t < m; t++)
+        rows[t] = m === n ? t : Math.floor((t * n) / m);
+    const sorted = new Float64Array(m);
+    for (let t = 0; t < m; t++)
+        sorted[t] = x[rows[t]];
+    sorted.sort();
+    // Distinct values to the front (-0 and +0 are one value, as to `===`).
+    let count = 0;
+    for (let i = 0; i < m; i++)
+        if (count === 0 || sorted[i] !== sorted[count - 1])
+            sorted[count++] = sorted[i];
+    const sums = new Float64Array(count);
+    const totals = new Float64Array(count);
+    for (let t = 0; t < m; t++) {
+        const r = rows[t];
+        const v = x[r];
+        let lo = 0;
+        let hi = count - 1;
+        while (lo < hi) {
+            const mid = (lo + hi) >> 1;
+            if (sorted[mid] < v)
+                lo = mid + 1;
+            else
+                hi = mid;
+        }
+        const w = weights === undefined ? 1 : weights[r];
+        sums[lo] += weights === undefined ? y[r] : w * y[r];
+        totals[lo] += w;
+    }
+    const values = [];
+    const means = [];
+    for (let j = 0; j < count; j++) {
+        if (Number.isFinite(sorted[j]) && totals[j] > 0) {
+            values.push(sorted[j]);
+            means.push(sums[j] / totals[j]);
+        }
+    }
+    return { values, means };
+}
+/** Indices j of the at most `max` widest gaps values[j]..values[j+1], ascending. */
+function widestGapIndices(values, max) {
+    const all = Array.from({ length: values.length - 1 }, (_, j) => j);
+    if (all.length <= max)
+        return all;
+    return all
+        .sort((a, b) => values[b + 1] - values[b] - (values[a + 1] - values[a]) || a - b)
+        .slice(0, max)
+        .sort((a, b) => a - b);
+}
+
+
+/***/ }),
+
 /***/ 309:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
@@ -35110,7 +36525,7 @@ __nccwpck_require__.d(__webpack_exports__, {
   Fj: () => (/* binding */ measureSwing)
 });
 
-// UNUSED EXPORTS: SWING_CURVE_NUMBERS, SWING_MIN_CURVE_POINTS, excursion, planSwing, scoreSwing
+// UNUSED EXPORTS: SWING_CURVE_NUMBERS, SWING_MIN_CURVE_POINTS, SWING_SHARED_MIN_CURVE_POINTS, excursion, planSwing, scoreSwing
 
 // EXTERNAL MODULE: ./src/design/design-matrix.ts
 var design_matrix = __nccwpck_require__(6566);
@@ -35310,11 +36725,14 @@ function considerNeighbour(flat, d, a, b, kk, best, bestIdx) {
 
 // EXTERNAL MODULE: ./src/core/deadline.ts
 var deadline = __nccwpck_require__(6343);
+// EXTERNAL MODULE: ./src/data/target-transform.ts
+var target_transform = __nccwpck_require__(1938);
 ;// CONCATENATED MODULE: ./src/diagnostics/swing.ts
 /**
  * Swing between and beyond samples: how far a model's predictions leave the band of observed
  * training targets on inputs between the training rows and just past their range.
  */
+
 
 
 
@@ -35340,6 +36758,8 @@ const SWING_DEFAULTS = Object.freeze({
 const SWING_CURVE_NUMBERS = 800;
 /** Fewest points a kept curve is thinned to. */
 const SWING_MIN_CURVE_POINTS = 100;
+/** Fewest points a kept curve is thinned to under a `curveShare` below 1. */
+const SWING_SHARED_MIN_CURVE_POINTS = 25;
 /**
  * Excursion of predictions outside the band [lo, hi] in units of its width:
  * max(0, max(pred) - hi, lo - min(pred)) / (hi - lo). NaN when hi <= lo or no predictions.
@@ -35392,7 +36812,7 @@ function gridFromSorted(sorted, n, options, work) {
     fillUniform(inside, uniform, lo, hi);
     const w = fillGaps(inside, uniform, distinct, gaps, per);
     const beyond = marginGrid(lo, hi, margin * width, marginPoints);
-    return { inside: unique(inside, w), beyond: unique(beyond, beyond.length) };
+    return { inside: uniqueOfRuns(inside, uniform, w), beyond: unique(beyond, beyond.length) };
 }
 // The loops of the grid are functions of their own, each a loop and its return (see
 // DEVELOPERS.md, "Writing hot loops").
@@ -35403,6 +36823,42 @@ function packDistinct(a, n) {
         if (count === 0 || a[i] !== a[count - 1])
             a[count++] = a[i];
     return count;
+}
+/**
+ * {@link unique} of xs[0..length) when xs[0..split) and xs[split..length) are each ascending (the
+ * uniform points and the gap points): one linear merge instead of a sort, with the sort's result
+ * (-0 before +0). Falls back to {@link unique} when a run is out of order or holds a NaN.
+ */
+function uniqueOfRuns(xs, split, length) {
+    if (!ascending(xs, 0, split) || !ascending(xs, split, length))
+        return unique(xs, length);
+    const out = new Float64Array(length);
+    mergeRuns(xs, split, length, out);
+    return out.slice(0, packDistinct(out, length));
+}
+/** True when xs[from..to) holds no NaN and is ascending in the order of the built-in sort. */
+function ascending(xs, from, to) {
+    for (let i = from; i < to; i++) {
+        const v = xs[i];
+        if (Number.isNaN(v) || (i > from && sortsBefore(v, xs[i - 1])))
+            return false;
+    }
+    return true;
+}
+/** out[0..length) = the merge of the ascending runs xs[0..split) and xs[split..length) (equal values: the first run's first). */
+function mergeRuns(xs, split, length, out) {
+    let i = 0;
+    let j = split;
+    for (let w = 0; w < length; w++) {
+        if (j >= length || (i < split && !sortsBefore(xs[j], xs[i])))
+            out[w] = xs[i++];
+        else
+            out[w] = xs[j++];
+    }
+}
+/** a < b in the order of the built-in typed-array sort (-0 before +0). */
+function sortsBefore(a, b) {
+    return a < b || (a === 0 && b === 0 && Object.is(a, -0) && !Object.is(b, -0));
 }
 /** The distinct values of xs[0..length), ascending (xs is reordered). */
 function unique(xs, length) {
@@ -35444,7 +36900,7 @@ function marginGrid(lo, hi, reach, count) {
 function widestGaps(distinct, maxGaps, work) {
     const count = distinct.length - 1;
     if (count <= maxGaps)
-        return Int32Array.from({ length: count }, (_, g) => g);
+        return allGaps(count);
     const widths = work !== undefined && work.length >= count ? work.subarray(0, count) : new Float64Array(count);
     gapWidths(distinct, count, widths);
     const threshold = (0,column_median/* selectKth */.I)(widths, count - maxGaps);
@@ -35453,6 +36909,13 @@ function widestGaps(distinct, maxGaps, work) {
     return out;
 }
 // One loop per function (see DEVELOPERS.md, "Writing hot loops").
+/** 0, 1, ..., count - 1. */
+function allGaps(count) {
+    const out = new Int32Array(count);
+    for (let g = 0; g < count; g++)
+        out[g] = g;
+    return out;
+}
 /** widths[g] = distinct[g + 1] - distinct[g] for g < count. */
 function gapWidths(distinct, count, widths) {
     for (let g = 0; g < count; g++)
@@ -35574,6 +37037,11 @@ function mergeAscending(ax, ap, bx, bp, xs, ps) {
             ps[dst] = bp[b++];
         }
     }
+}
+/** v[i] = g^-1(v[i]) for i < m (one loop; see DEVELOPERS.md, "Writing hot loops"). */
+function backTransformInPlace(v, m, kind) {
+    for (let i = 0; i < m; i++)
+        v[i] = (0,target_transform/* inverseTarget */.I)(kind, v[i]);
 }
 /** [index of the smallest, index of the largest] value (first of equals); [0, 0] when empty. */
 function extremeIndices(values) {
@@ -35713,10 +37181,12 @@ function planSwing(design, train, options = {}) {
         segments = { rows: s, neighbours: kk, pointsPerSegment: perSegment };
     }
     const maxCurves = options.maxCurves ?? SWING_DEFAULTS.maxCurves;
-    const maxCurvePoints = options.maxCurvePoints ??
-        Math.max(SWING_MIN_CURVE_POINTS, Math.min(SWING_DEFAULTS.maxCurvePoints, Math.floor(SWING_CURVE_NUMBERS / Math.max(1, Math.min(d, maxCurves)))));
+    const fullCurvePoints = Math.max(SWING_MIN_CURVE_POINTS, Math.min(SWING_DEFAULTS.maxCurvePoints, Math.floor(SWING_CURVE_NUMBERS / Math.max(1, Math.min(d, maxCurves)))));
+    const share = options.curveShare ?? 1;
+    const maxCurvePoints = options.maxCurvePoints ?? (share >= 1 ? fullCurvePoints : Math.max(SWING_SHARED_MIN_CURVE_POINTS, Math.floor(fullCurvePoints * share)));
+    const back = options.backTransform;
     return {
-        band: [ylo, yhi],
+        band: back === undefined ? [ylo, yhi] : [(0,target_transform/* inverseTarget */.I)(back, ylo), (0,target_transform/* inverseTarget */.I)(back, yhi)],
         medians,
         grids,
         segmentColumns,
@@ -35724,6 +37194,7 @@ function planSwing(design, train, options = {}) {
         margin: options.margin ?? SWING_DEFAULTS.margin,
         maxCurvePoints,
         maxCurves,
+        ...(back !== undefined ? { backTransform: back } : {}),
     };
 }
 /** The points (rows of `columns`) at which every term is defined: a segment between two levels of a category has no levels between them. */
@@ -35780,6 +37251,8 @@ function scoreSwing(plan, design, coefficients) {
     /** Scores points (predicted here unless their predictions are given); returns the predictions. */
     const score = (columns, m, where, given) => {
         const pred = given ?? (0,blocks/* predictRows */.tp)(design, { inputs: columns, rows: m }, coefficients);
+        if (plan.backTransform !== undefined)
+            backTransformInPlace(pred, m, plan.backTransform);
         if (m > 0) {
             const index = worstExcursionIndex(pred, m, ylo, yhi);
             const value = pointExcursion(pred[index], ylo, yhi);
@@ -35961,6 +37434,46 @@ function chiSquareSum(y, yhat, sigma, n) {
 
 /***/ }),
 
+/***/ 9752:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   k: () => (/* binding */ runCheck)
+/* harmony export */ });
+/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(8171);
+/* harmony import */ var _run_pool_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(2499);
+/* harmony import */ var _repo_fs_repository_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(4526);
+
+
+
+/**
+ * Runs the check of a repository on disk.
+ * @param settings the run's settings (`settings.root` is the repository's real path)
+ * @param options base commit, shard and worker threads
+ * @returns the Result (reporters format it; the entry sets the exit status)
+ * @throws InputError when the settings file or the list of descriptors is bad (nothing can be checked)
+ */
+async function runCheck(settings, options) {
+    let baseOptions = {};
+    if (options.base !== null) {
+        // Loaded when asked for, so that a plain check starts fast.
+        const { ACTION_FETCH_HINT, CLI_FETCH_HINT, evaluateBase } = await __nccwpck_require__.e(/* import() */ 823).then(__nccwpck_require__.bind(__nccwpck_require__, 4823));
+        baseOptions = await evaluateBase(settings, options.base, {
+            fetchHint: options.entry === 'action' ? ACTION_FETCH_HINT : CLI_FETCH_HINT,
+        });
+    }
+    return (0,_run_pipeline_js__WEBPACK_IMPORTED_MODULE_0__/* .runPipeline */ .a)(settings, (0,_repo_fs_repository_js__WEBPACK_IMPORTED_MODULE_2__/* .createFsRepository */ .E)(settings.root), {
+        ...baseOptions,
+        shard: options.shard,
+        jobs: options.jobs ?? (0,_run_pool_js__WEBPACK_IMPORTED_MODULE_1__/* .defaultJobs */ .yV)(),
+        exactJobs: options.jobs !== null,
+        root: settings.root,
+    });
+}
+
+
+/***/ }),
+
 /***/ 9939:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
@@ -36112,7 +37625,7 @@ function readInputs(cwd = process.cwd()) {
 
 /***/ }),
 
-/***/ 2766:
+/***/ 3172:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -36127,17 +37640,31 @@ var external_node_path_default = /*#__PURE__*/__nccwpck_require__.n(external_nod
 // EXTERNAL MODULE: ./src/core/errors.ts
 var errors = __nccwpck_require__(4296);
 // EXTERNAL MODULE: ./src/checks/index.ts + 24 modules
-var checks = __nccwpck_require__(3992);
+var checks = __nccwpck_require__(1550);
+// EXTERNAL MODULE: ./src/report/model-kind.ts
+var model_kind = __nccwpck_require__(698);
+// EXTERNAL MODULE: ./src/report/refit-compare.ts
+var refit_compare = __nccwpck_require__(3524);
 // EXTERNAL MODULE: ./src/core/format.ts
 var format = __nccwpck_require__(6228);
 // EXTERNAL MODULE: ./src/result/result.ts
 var result_result = __nccwpck_require__(1628);
 // EXTERNAL MODULE: ./src/report/escape.ts
 var report_escape = __nccwpck_require__(6412);
-// EXTERNAL MODULE: ./src/report/wording.ts
-var wording = __nccwpck_require__(5594);
-// EXTERNAL MODULE: ./src/core/extremes.ts
-var extremes = __nccwpck_require__(398);
+;// CONCATENATED MODULE: ./src/report/svg/class-label.ts
+/**
+ * A class label of a classifier as chart text: labels come from the user's CSV file, so at most
+ * {@link CLASS_LABEL_CHARS} characters of one are shown (cut with `…`); plain text, escaped by the
+ * frame like every other chart text.
+ */
+/** Most characters of a label shown in a chart. */
+const CLASS_LABEL_CHARS = 40;
+/** The label, cut to {@link CLASS_LABEL_CHARS} characters (by code point) with `…` when longer. */
+function classLabel(label) {
+    const chars = Array.from(label);
+    return chars.length <= CLASS_LABEL_CHARS ? label : `${chars.slice(0, CLASS_LABEL_CHARS - 1).join('')}…`;
+}
+
 ;// CONCATENATED MODULE: ./src/report/svg/palette.ts
 /**
  * Colours and marks of every chart. Colours come from the colour-blind-safe set of Okabe & Ito
@@ -36405,6 +37932,343 @@ function logScale(domain, range) {
     return Object.assign(f, { domain: [lo, hi], range, ticks, log: true });
 }
 
+;// CONCATENATED MODULE: ./src/report/svg/calibration-diagram.ts
+
+
+
+
+/** Marks (and the line through them) of one file's non-empty bins, with each bin's count as a label. */
+function binMarks(bins, series, sx, sy) {
+    const marks = [];
+    const labels = [];
+    let d = '';
+    const mark = series === 'train' ? trainMark : holdoutMark;
+    for (const b of bins) {
+        if (b.count === 0 || b.predicted === null || b.observed === null)
+            continue;
+        const x = sx(b.predicted);
+        const y = sy(b.observed);
+        marks.push(mark(x, y));
+        d += `${d ? 'L' : 'M'}${px(x)} ${px(y)}`;
+        // Training counts above the mark, hold-out counts below, so the two rarely overlap.
+        const dy = series === 'train' ? -7 : 15;
+        labels.push(`<text x="${px(x)}" y="${px(y + dy)}" text-anchor="middle">${b.count}</text>`);
+    }
+    const colour = series === 'train' ? COLOURS.train : COLOURS.holdout;
+    const style = series === 'train' ? TRAIN_STYLE : HOLDOUT_STYLE;
+    return {
+        markup: `<path d="${d}" fill="none" stroke="${colour}" stroke-width="1.2" stroke-opacity="0.6"${series === 'holdout' ? ` stroke-dasharray="${DASHES.limit}"` : ''}/><g data-series="${series}" data-count="${marks.length}" ${style}>${marks.join('')}</g>`,
+        labels: `<g class="counts" data-series="${series}" font-size="9.5" fill="${colour}">${labels.join('')}</g>`,
+        drawn: marks.length,
+    };
+}
+/** One file's bins in words. */
+function sentence(name, bins) {
+    const used = bins.filter((b) => b.count > 0 && b.predicted !== null && b.observed !== null);
+    if (used.length === 0)
+        return `${name}: no rows.`;
+    const list = used.map((b) => `${b.count} rows at ${b.predicted.toFixed(2)} predicted, ${b.observed.toFixed(2)} observed`);
+    return `${name}: ${list.join('; ')}.`;
+}
+/**
+ * Renders the calibration diagram of a classifier.
+ * @param chart the classifier's chart data (reads `calibration`)
+ */
+function calibrationDiagramChart(chart, options) {
+    const { id } = options;
+    const positive = classLabel(chart.positive);
+    const { x0, y0, x1, y1 } = plotArea();
+    const sx = linearScale([0, 1], [x0, x1]);
+    const sy = linearScale([0, 1], [y1, y0]);
+    const a = binMarks(chart.calibration.train, 'train', sx, sy);
+    const b = binMarks(chart.calibration.holdout, 'holdout', sx, sy);
+    const body = [
+        `<line class="diagonal" x1="${px(sx(0))}" y1="${px(sy(0))}" x2="${px(sx(1))}" y2="${px(sy(1))}" stroke="${COLOURS.reference}" stroke-width="1.2" stroke-dasharray="${DASHES.reference}"/>`,
+        a.markup,
+        b.markup,
+        a.labels,
+        b.labels,
+    ].join('');
+    const bins = chart.calibration.holdout.length;
+    return frame_frame({
+        id,
+        kind: 'calibration-diagram',
+        title: `Calibration: observed share of ${chart.target} = ${positive}`,
+        desc: `Observed share of positives (vertical) against the mean predicted probability (horizontal) in ${bins} equal-width bins of the predicted probability, the number of rows of each bin written beside its mark. ${sentence('Training rows (filled circles)', chart.calibration.train)} ${sentence('Hold-out rows (hollow squares)', chart.calibration.holdout)} Marks on the dotted diagonal are calibrated; hold-out marks flatter than the diagonal mean the predictions are too extreme.`,
+        x: sx,
+        y: sy,
+        xLabel: 'mean predicted probability',
+        yLabel: 'observed share positive',
+        body,
+        legend: [
+            { mark: LEGEND_TRAIN, label: 'training' },
+            { mark: LEGEND_HOLDOUT, label: 'hold-out' },
+            { mark: legendLine(COLOURS.reference, DASHES.reference, 1.2), label: 'calibrated' },
+        ],
+        data: { 'train-bins': a.drawn, 'holdout-bins': b.drawn, bins },
+    });
+}
+
+;// CONCATENATED MODULE: ./src/report/svg/points.ts
+
+/**
+ * Draws one series.
+ * @param series `train` (filled circles) or `holdout` (hollow squares)
+ * @param xs x values of the rows (null = not finite)
+ * @param ys y values of the rows
+ */
+function marks(series, xs, ys, sx, sy) {
+    const out = [];
+    let omitted = 0;
+    const mark = series === 'train' ? trainMark : holdoutMark;
+    for (let i = 0; i < ys.length; i++) {
+        const x = xs[i];
+        const y = ys[i];
+        if (x === null || y === null || x === undefined) {
+            omitted++;
+            continue;
+        }
+        out.push(mark(sx(x), sy(y)));
+    }
+    const style = series === 'train' ? TRAIN_STYLE : HOLDOUT_STYLE;
+    return {
+        markup: `<g data-series="${series}" data-count="${out.length}" ${style}>${out.join('')}</g>`,
+        drawn: out.length,
+        omitted,
+    };
+}
+/** `data-*` attributes stating rows, kept points and drawn marks of both series. */
+function pointData(train, holdout, a, b) {
+    return {
+        'train-rows': train.rows,
+        'train-shown': train.shown,
+        'train-points': a.drawn,
+        'train-omitted': a.omitted,
+        'holdout-rows': holdout.rows,
+        'holdout-shown': holdout.shown,
+        'holdout-points': b.drawn,
+        'holdout-omitted': b.omitted,
+    };
+}
+/** Sentence on thinning and omitted rows for a chart's description (empty when nothing to say). */
+function pointNote(train, holdout, a, b) {
+    const parts = [];
+    if (train.shown < train.rows)
+        parts.push(`${train.shown} of ${train.rows} training rows shown, evenly spaced through the file`);
+    if (holdout.shown < holdout.rows)
+        parts.push(`${holdout.shown} of ${holdout.rows} hold-out rows shown, evenly spaced through the file`);
+    if (a.omitted + b.omitted > 0)
+        parts.push(`${a.omitted + b.omitted} rows with values that are not finite are not drawn`);
+    return parts.length ? ` ${parts.join('; ')}.` : '';
+}
+
+// EXTERNAL MODULE: ./src/report/svg/units.ts
+var units = __nccwpck_require__(3332);
+;// CONCATENATED MODULE: ./src/report/svg/probability-curve.ts
+/**
+ * A classifier's predicted probability along one input: the curve over the input's training
+ * range and a margin with the other inputs at their training medians (dotted lines: the training
+ * range), and the rows as points at 0 (negative) and 1 (positive), training rows as filled
+ * circles and hold-out rows as hollow squares, jittered a little up or down so that stacked rows
+ * show as a band. A curve that jumps between 0 and 1 between neighbouring rows is the picture of
+ * separation or overfitting.
+ */
+
+
+
+
+
+
+
+/** Height of the jitter band of the points at 0 and 1, in probability units. */
+const JITTER = 0.035;
+/**
+ * The y value of each kept row: its label, moved towards the middle by up to {@link JITTER}
+ * (a fixed pattern by position, so the chart is the same on every run).
+ */
+function jittered(points) {
+    return points.label.map((l, i) => {
+        const offset = (((i * 7919) % 97) / 96) * JITTER;
+        return l === 1 ? 1 - offset : offset;
+    });
+}
+/**
+ * Renders the probability curve along one input.
+ * @param chart the classifier's chart data
+ * @param curve one entry of `chart.curves`
+ */
+function probabilityCurveChart(chart, curve, options) {
+    const { id } = options;
+    const positive = classLabel(chart.positive);
+    const negative = classLabel(chart.negative);
+    const { x0, y0, x1, y1 } = plotArea();
+    const c = chart.inputs.indexOf(curve.input);
+    const trainX = c >= 0 ? chart.train.x[c] : [];
+    const holdoutX = c >= 0 ? chart.holdout.x[c] : [];
+    const sx = linearScale(extent(curve.x, trainX, holdoutX) ?? [0, 1], [x0, x1]);
+    const sy = linearScale([-0.05, 1.05], [y1, y0]);
+    const a = marks('train', trainX, jittered(chart.train), sx, sy);
+    const b = marks('holdout', holdoutX, jittered(chart.holdout), sx, sy);
+    const t = chart.threshold;
+    const body = [
+        `<g stroke="${COLOURS.reference}" stroke-width="1" stroke-dasharray="1 3"><line x1="${px(sx(curve.range[0]))}" y1="${y0}" x2="${px(sx(curve.range[0]))}" y2="${y1}"/><line x1="${px(sx(curve.range[1]))}" y1="${y0}" x2="${px(sx(curve.range[1]))}" y2="${y1}"/></g>`,
+        `<line class="threshold" x1="${x0}" y1="${px(sy(t))}" x2="${x1}" y2="${px(sy(t))}" stroke="${COLOURS.reference}" stroke-width="1" stroke-dasharray="4 4"/>`,
+        a.markup,
+        b.markup,
+        `<path class="curve" d="${linePath(curve.x, curve.p, sx, sy)}" fill="none" stroke="${COLOURS.curve}" stroke-width="2" stroke-linejoin="round"/>`,
+    ].join('');
+    const others = Object.entries(curve.others)
+        .map(([k, v]) => `${k} = ${(0,format/* formatNumber */.Z)(v)}`)
+        .join(', ');
+    return frame_frame({
+        id,
+        kind: 'probability-curve',
+        title: `Probability of ${chart.target} = ${positive} along ${curve.input}`,
+        desc: `Predicted probability of ${chart.target} = ${positive} (vertical) as ${curve.input} runs from ${(0,format/* formatNumber */.Z)(curve.x[0])} to ${(0,format/* formatNumber */.Z)(curve.x[curve.x.length - 1])} (training range ${(0,format/* formatNumber */.Z)(curve.range[0])} to ${(0,format/* formatNumber */.Z)(curve.range[1])}, dotted lines)${others ? `, the other inputs at their training medians (${others})` : ''}; the dashed line is the threshold ${(0,format/* formatNumber */.Z)(t)}. ${a.drawn} training rows (filled circles) and ${b.drawn} hold-out rows (hollow squares) sit at 1 when ${positive} and at 0 when ${negative}, spread a little to show how many.${pointNote(chart.train, chart.holdout, a, b)}`,
+        x: sx,
+        y: sy,
+        xLabel: (0,units/* axisLabel */.M)(curve.input),
+        yLabel: `probability of ${positive}`,
+        body,
+        legend: [
+            { mark: legendLine(COLOURS.curve), label: others ? 'predicted, others at medians' : 'predicted' },
+            { mark: LEGEND_TRAIN, label: 'training' },
+            { mark: LEGEND_HOLDOUT, label: 'hold-out' },
+        ],
+        data: { input: curve.input, ...pointData(chart.train, chart.holdout, a, b) },
+    });
+}
+
+;// CONCATENATED MODULE: ./src/report/svg/roc-curve.ts
+/**
+ * The ROC curves of a classifier: true positive rate against false positive rate for the
+ * training rows (solid blue) and the hold-out rows (dashed vermillion), with the diagonal of a
+ * model that guesses. A training curve hugging the top left corner while the hold-out curve
+ * sags towards the diagonal is the picture of an overfit classifier.
+ */
+
+
+
+
+
+/** The area under a drawn (kept) curve by the trapezoid rule: the exact AUC when the curve was not thinned. */
+function drawnArea(curve) {
+    let area = 0;
+    for (let k = 1; k < curve.fpr.length; k++)
+        area += ((curve.fpr[k] - curve.fpr[k - 1]) * (curve.tpr[k] + curve.tpr[k - 1])) / 2;
+    return area;
+}
+/** One file's curve in words for the description. */
+function roc_curve_sentence(name, curve) {
+    if (curve.positives === 0 || curve.negatives === 0)
+        return `${name}: one class only (${curve.rows} rows), no curve.`;
+    const kept = curve.thinned
+        ? `${curve.fpr.length} of its ${curve.points} points drawn, every convex hull vertex kept`
+        : `${curve.points} points`;
+    return `${name}: ${curve.positives} positive and ${curve.negatives} negative rows, ${kept}, area under the drawn curve ${(0,format/* formatNumber */.Z)(drawnArea(curve), 4)}.`;
+}
+/**
+ * Renders the ROC chart of a classifier.
+ * @param chart the classifier's chart data (reads `roc`)
+ */
+function rocCurveChart(chart, options) {
+    const { id } = options;
+    const positive = classLabel(chart.positive);
+    const { x0, y0, x1, y1 } = plotArea();
+    const sx = linearScale([0, 1], [x0, x1]);
+    const sy = linearScale([0, 1], [y1, y0]);
+    const { train, holdout } = chart.roc;
+    const path = (curve, series, colour, dash) => `<path class="roc" data-series="${series}" data-count="${curve.fpr.length}" d="${linePath(curve.fpr, curve.tpr, sx, sy)}" fill="none" stroke="${colour}" stroke-width="2" stroke-linejoin="round"${dash ? ` stroke-dasharray="${dash}"` : ''}/>`;
+    const body = [
+        `<line class="diagonal" x1="${px(sx(0))}" y1="${px(sy(0))}" x2="${px(sx(1))}" y2="${px(sy(1))}" stroke="${COLOURS.reference}" stroke-width="1.2" stroke-dasharray="${DASHES.reference}"/>`,
+        path(train, 'train', COLOURS.train, null),
+        path(holdout, 'holdout', COLOURS.holdout, DASHES.limit),
+    ].join('');
+    return frame_frame({
+        id,
+        kind: 'roc-curve',
+        title: `ROC curves: ${chart.target} = ${positive}`,
+        desc: `True positive rate (vertical) against false positive rate (horizontal) as the probability threshold for "${positive}" falls from 1 to 0. ${roc_curve_sentence('Training rows (solid line)', train)} ${roc_curve_sentence('Hold-out rows (dashed line)', holdout)} The dotted diagonal is a model that guesses; a training curve far above the hold-out curve shows overfitting.`,
+        x: sx,
+        y: sy,
+        xLabel: 'false positive rate',
+        yLabel: 'true positive rate',
+        body,
+        legend: [
+            { mark: legendLine(COLOURS.train), label: 'training' },
+            { mark: legendLine(COLOURS.holdout, DASHES.limit), label: 'hold-out' },
+            { mark: legendLine(COLOURS.reference, DASHES.reference, 1.2), label: 'guessing' },
+        ],
+        data: {
+            'train-points': train.fpr.length,
+            'holdout-points': holdout.fpr.length,
+            'train-area': (0,format/* formatNumber */.Z)(drawnArea(train), 6),
+            'holdout-area': (0,format/* formatNumber */.Z)(drawnArea(holdout), 6),
+        },
+    });
+}
+
+;// CONCATENATED MODULE: ./src/report/classifier-html.ts
+/**
+ * The HTML report's part for a binary classifier (report/html.ts calls it): its facts line and
+ * its charts, the ROC curves, the calibration diagram and the predicted probability along each
+ * input, drawn from the pipeline's `classifier_charts` (nothing here computes a figure).
+ */
+
+
+
+
+
+
+function num(v) {
+    if (v === null || v === undefined || (typeof v === 'string' && v !== 'Infinity' && v !== '-Infinity' && v !== 'NaN'))
+        return '–';
+    return (0,report_escape/* escapeHtml */.ZD)((0,format/* formatNumber */.Z)((0,result_result/* fromJsonNumber */.M)(v)));
+}
+function figure(svg, caption) {
+    return `<figure>${svg}<figcaption>${(0,report_escape/* escapeHtml */.ZD)(caption)}</figcaption></figure>`;
+}
+/** The facts line of a classifier: rows, parameters, log-loss, AUC and calibration slope (HTML). */
+function classifierFacts(m) {
+    const x = m.metrics;
+    return (`<p class="facts"><span>training rows <b>${m.rows.train}</b></span><span>hold-out rows <b>${m.rows.holdout}</b></span><span>parameters <b>${m.parameters}</b></span>` +
+        `<span>log-loss <b>${num(x?.train_log_loss)}</b> / <b>${num(x?.holdout_log_loss)}</b> (training / hold-out)</span>` +
+        `<span>AUC <b>${num(x?.train_auc)}</b> / <b>${num(x?.holdout_auc)}</b></span><span>calibration slope <b>${num(x?.calibration_slope)}</b></span></p>`);
+}
+/** The chart figures of a classifier, in reading order. */
+function classifierCharts(chart, prefix) {
+    const out = [
+        figure(rocCurveChart(chart, { id: `${prefix}-roc` }), 'ROC curves of the training and hold-out rows; a training curve well above the hold-out curve shows overfitting.'),
+        figure(calibrationDiagramChart(chart, { id: `${prefix}-calibration` }), `Calibration: observed share of positives against the mean prediction in ${chart.calibration.holdout.length} equal-width bins, with the rows per bin.`),
+    ];
+    chart.curves.forEach((curve, k) => {
+        out.push(figure(probabilityCurveChart(chart, curve, { id: `${prefix}-probability-${k + 1}` }), `Predicted probability along ${curve.input}${chart.inputs.length > 1 ? ', the other inputs at their training medians' : ''}; rows at 1 (positive) and 0 (negative).`));
+    });
+    return out;
+}
+/** Notes above a classifier's charts: thinned rows and ROC curves, and inputs left without a curve (HTML; empty when none). */
+function classifierChartNotes(chart) {
+    const notes = [];
+    if (chart.train.thinned)
+        notes.push(`Training rows: ${chart.train.thinning}.`);
+    if (chart.holdout.thinned)
+        notes.push(`Hold-out rows: ${chart.holdout.thinning}.`);
+    for (const [name, roc] of [
+        ['training', chart.roc.train],
+        ['hold-out', chart.roc.holdout],
+    ]) {
+        if (roc.thinned)
+            notes.push(`The ${name} ROC curve: ${roc.fpr.length} of ${roc.points} points drawn, every vertex of its convex hull kept.`);
+    }
+    if ((chart.curvesLeftOut ?? 0) > 0)
+        notes.push(`Probability curves of the first ${chart.curves.length} inputs; ${chart.curvesLeftOut} more left out.`);
+    return notes.length ? `<p class="note">${notes.map(report_escape/* escapeHtml */.ZD).join(' ')}</p>` : '';
+}
+
+// EXTERNAL MODULE: ./src/report/wording.ts
+var wording = __nccwpck_require__(5594);
+// EXTERNAL MODULE: ./src/core/extremes.ts
+var extremes = __nccwpck_require__(398);
 ;// CONCATENATED MODULE: ./src/report/svg/coefficient-bars.ts
 /**
  * Standardised coefficients |w_j| sd(phi_j) / sd(y) as horizontal bars, one per non-intercept
@@ -36635,67 +38499,67 @@ function shortSha(commit) {
     return commit.replace(/[^0-9a-f]/gi, '').slice(0, 7);
 }
 
-;// CONCATENATED MODULE: ./src/report/svg/points.ts
-
+;// CONCATENATED MODULE: ./src/report/svg/spike-marks.ts
 /**
- * Draws one series.
- * @param series `train` (filled circles) or `holdout` (hollow squares)
- * @param xs x values of the rows (null = not finite)
- * @param ys y values of the rows
+ * Spike marks on a curve chart: the intervals between neighbouring training values where the curve
+ * varies more than the `swing-spikes` limit allows (chart data `spikes`, run/chart-data.ts), drawn
+ * as solid bars along the top edge of the plot area over each interval, so that they read apart
+ * from the hatched band regions (which span the whole height) without resting on colour alone.
  */
-function marks(series, xs, ys, sx, sy) {
-    const out = [];
-    let omitted = 0;
-    const mark = series === 'train' ? trainMark : holdoutMark;
-    for (let i = 0; i < ys.length; i++) {
-        const x = xs[i];
-        const y = ys[i];
-        if (x === null || y === null || x === undefined) {
-            omitted++;
-            continue;
-        }
-        out.push(mark(sx(x), sy(y)));
-    }
-    const style = series === 'train' ? TRAIN_STYLE : HOLDOUT_STYLE;
-    return {
-        markup: `<g data-series="${series}" data-count="${out.length}" ${style}>${out.join('')}</g>`,
-        drawn: out.length,
-        omitted,
-    };
+
+
+/** Bar colour: Okabe–Ito bluish green #009E73 (apart from the band's and the regions' colours). */
+const SPIKE_COLOUR = '#009E73';
+/** Height of a spike bar in px. */
+const spike_marks_BAR = 7;
+/** Intervals named in the text alternative, at most. */
+const NAMED = 5;
+/**
+ * The bars (a `<g class="spikes">` with one `<rect class="spike">` per interval, each at least
+ * 2 px wide), or an empty string when there are none.
+ * @param spikes the curve's spike marks (absent: none)
+ * @param sx the x scale
+ * @param top the plot area's top edge in px
+ */
+function spikeBars(spikes, sx, top) {
+    if (spikes === undefined || spikes.intervals.length === 0)
+        return '';
+    const bars = spikes.intervals.map((s) => {
+        const a = sx(s.from);
+        const b = sx(s.to);
+        return `<rect class="spike" data-from="${s.from}" data-to="${s.to}" x="${px(a)}" y="${top}" width="${px(Math.max(2, b - a))}" height="${spike_marks_BAR}"/>`;
+    });
+    return `<g class="spikes" data-count="${spikes.intervals.length}" fill="${SPIKE_COLOUR}">${bars.join('')}</g>`;
 }
-/** `data-*` attributes stating rows, kept points and drawn marks of both series. */
-function pointData(train, holdout, a, b) {
-    return {
-        'train-rows': train.rows,
-        'train-shown': train.shown,
-        'train-points': a.drawn,
-        'train-omitted': a.omitted,
-        'holdout-rows': holdout.rows,
-        'holdout-shown': holdout.shown,
-        'holdout-points': b.drawn,
-        'holdout-omitted': b.omitted,
-    };
+/** Legend picture of a spike bar. */
+const LEGEND_SPIKE = `<rect x="0" y="0" width="14" height="${spike_marks_BAR}" fill="${SPIKE_COLOUR}"/>`;
+/** Legend label of the spike bars. */
+function spikeLegendLabel(spikes) {
+    return `spikes (> ${(0,format/* formatNumber */.Z)(spikes.limit)}x)`;
 }
-/** Sentence on thinning and omitted rows for a chart's description (empty when nothing to say). */
-function pointNote(train, holdout, a, b) {
-    const parts = [];
-    if (train.shown < train.rows)
-        parts.push(`${train.shown} of ${train.rows} training rows shown, evenly spaced through the file`);
-    if (holdout.shown < holdout.rows)
-        parts.push(`${holdout.shown} of ${holdout.rows} hold-out rows shown, evenly spaced through the file`);
-    if (a.omitted + b.omitted > 0)
-        parts.push(`${a.omitted + b.omitted} rows with values that are not finite are not drawn`);
-    return parts.length ? ` ${parts.join('; ')}.` : '';
+/**
+ * One sentence for the chart's text alternative (with a leading space): how many intervals spike
+ * and the first few; an empty string when none do or the marks are absent.
+ */
+function spikeNote(spikes) {
+    if (spikes === undefined || spikes.intervals.length === 0)
+        return '';
+    const count = spikes.intervals.length + (spikes.left_out ?? 0);
+    const named = spikes.intervals
+        .slice(0, NAMED)
+        .map((s) => `${(0,format/* formatNumber */.Z)(s.from)} to ${(0,format/* formatNumber */.Z)(s.to)}`)
+        .join('; ');
+    const more = count > NAMED ? '; …' : '';
+    return ` Bars along the top mark ${count} interval${count === 1 ? '' : 's'} between neighbouring training values where the curve varies more than ${(0,format/* formatNumber */.Z)(spikes.limit)} times what the data allow (${named}${more}).`;
 }
 
-// EXTERNAL MODULE: ./src/report/svg/units.ts
-var units = __nccwpck_require__(3332);
 ;// CONCATENATED MODULE: ./src/report/svg/fit-curve.ts
 /**
  * Chart of a model of one input: the fitted curve over the whole scanned range, the observed
  * target band, hatched stretches where the curve leaves the band, training rows as filled
  * circles and hold-out rows as hollow squares.
  */
+
 
 
 
@@ -36732,7 +38596,7 @@ function fitCurveChart(chart, fit, options) {
         return `<rect class="region" data-side="${r.side}" x="${px(a)}" y="${y0}" width="${px(Math.max(1.5, b - a))}" height="${y1 - y0}" fill="url(#${id}-hatch)"/>`;
     })
         .join('');
-    body.push(`<g class="regions" data-count="${fit.regions.length}">${regions}</g>`);
+    body.push(`<g class="regions" data-count="${fit.regions.length}">${regions}</g>`, spikeBars(fit.spikes, sx, y0));
     // Training range edges: the curve past them is extrapolation.
     body.push(`<g stroke="${COLOURS.reference}" stroke-width="1" stroke-dasharray="1 3"><line x1="${px(sx(fit.range[0]))}" y1="${y0}" x2="${px(sx(fit.range[0]))}" y2="${y1}"/><line x1="${px(sx(fit.range[1]))}" y1="${y0}" x2="${px(sx(fit.range[1]))}" y2="${y1}"/></g>`);
     if (fit.base)
@@ -36749,6 +38613,8 @@ function fitCurveChart(chart, fit, options) {
     ];
     if (fit.regions.length > 0)
         legend.push({ mark: legendRegion(id), label: 'leaves band' });
+    if (fit.spikes && fit.spikes.intervals.length > 0)
+        legend.push({ mark: LEGEND_SPIKE, label: spikeLegendLabel(fit.spikes) });
     if (fit.base)
         legend.push(baseCurveLegend());
     const where = fit.regions.length
@@ -36756,7 +38622,7 @@ function fitCurveChart(chart, fit, options) {
         : ' The curve stays inside the band.';
     const desc = `Fitted ${chart.target} against ${fit.input} from ${(0,format/* formatNumber */.Z)(fit.x[0])} to ${(0,format/* formatNumber */.Z)(fit.x[fit.x.length - 1])} ` +
         `(training range ${(0,format/* formatNumber */.Z)(fit.range[0])} to ${(0,format/* formatNumber */.Z)(fit.range[1])}), with ${a.drawn} training rows as filled circles and ${b.drawn} hold-out rows as hollow squares. ` +
-        `Observed target band ${(0,format/* formatNumber */.Z)(blo)} to ${(0,format/* formatNumber */.Z)(bhi)}.${where}${fit.base ? baseCurveNote(fit.base) : ''}${pointNote(chart.train, chart.holdout, a, b)}`;
+        `Observed target band ${(0,format/* formatNumber */.Z)(blo)} to ${(0,format/* formatNumber */.Z)(bhi)}.${where}${spikeNote(fit.spikes)}${fit.base ? baseCurveNote(fit.base) : ''}${pointNote(chart.train, chart.holdout, a, b)}`;
     return frame_frame({
         id,
         kind: 'fit-curve',
@@ -36768,7 +38634,12 @@ function fitCurveChart(chart, fit, options) {
         yLabel: (0,units/* axisLabel */.M)(chart.target),
         body: body.join(''),
         legend,
-        data: { ...pointData(chart.train, chart.holdout, a, b), regions: fit.regions.length, source: fit.source },
+        data: {
+            ...pointData(chart.train, chart.holdout, a, b),
+            regions: fit.regions.length,
+            source: fit.source,
+            ...(fit.spikes ? { spikes: fit.spikes.intervals.length } : {}),
+        },
     });
 }
 
@@ -36778,6 +38649,7 @@ function fitCurveChart(chart, fit, options) {
  * input held at its training median, over the input's training range and a margin, with the
  * training values of the input as a rug of ticks under the curve.
  */
+
 
 
 
@@ -36805,6 +38677,7 @@ function partialCurveChart(chart, curve, options) {
         `<path class="rug" d="${ticks.join('')}" stroke="${COLOURS.train}" stroke-opacity="0.55" stroke-width="1"/>`,
         curve.base ? baseCurvePath(curve.base, sx, sy) : '',
         `<path class="curve" d="${linePath(curve.x, curve.y, sx, sy)}" fill="none" stroke="${COLOURS.curve}" stroke-width="2" stroke-linejoin="round"/>`,
+        spikeBars(curve.spikes, sx, y0),
     ].join('');
     const others = Object.entries(curve.others)
         .map(([k, v]) => `${k} = ${(0,format/* formatNumber */.Z)(v)}`)
@@ -36813,7 +38686,7 @@ function partialCurveChart(chart, curve, options) {
         id,
         kind: 'partial-curve',
         title: `Partial curve: ${chart.target} along ${curve.input}`,
-        desc: `Predicted ${chart.target} as ${curve.input} runs from ${(0,format/* formatNumber */.Z)(curve.x[0])} to ${(0,format/* formatNumber */.Z)(curve.x[curve.x.length - 1])} (training range ${(0,format/* formatNumber */.Z)(curve.range[0])} to ${(0,format/* formatNumber */.Z)(curve.range[1])}, dotted lines), with the other inputs at their training medians${others ? ` (${others})` : ''}. Ticks along the bottom mark the training values of ${curve.input}.${curve.base ? baseCurveNote(curve.base) : ''}`,
+        desc: `Predicted ${chart.target} as ${curve.input} runs from ${(0,format/* formatNumber */.Z)(curve.x[0])} to ${(0,format/* formatNumber */.Z)(curve.x[curve.x.length - 1])} (training range ${(0,format/* formatNumber */.Z)(curve.range[0])} to ${(0,format/* formatNumber */.Z)(curve.range[1])}, dotted lines), with the other inputs at their training medians${others ? ` (${others})` : ''}. Ticks along the bottom mark the training values of ${curve.input}.${spikeNote(curve.spikes)}${curve.base ? baseCurveNote(curve.base) : ''}`,
         x: sx,
         y: sy,
         xLabel: (0,units/* axisLabel */.M)(curve.input),
@@ -36822,9 +38695,10 @@ function partialCurveChart(chart, curve, options) {
         legend: [
             { mark: legendLine(COLOURS.curve), label: 'predicted, others at medians' },
             { mark: `<path d="M3 12V5M7 12V5M11 12V5" stroke="${COLOURS.train}" stroke-width="1"/>`, label: 'training values' },
+            ...(curve.spikes && curve.spikes.intervals.length > 0 ? [{ mark: LEGEND_SPIKE, label: spikeLegendLabel(curve.spikes) }] : []),
             ...(curve.base ? [baseCurveLegend()] : []),
         ],
-        data: { input: curve.input, 'rug-count': ticks.length },
+        data: { input: curve.input, 'rug-count': ticks.length, ...(curve.spikes ? { spikes: curve.spikes.intervals.length } : {}) },
     });
 }
 
@@ -36909,6 +38783,8 @@ function residualsChart(chart, options) {
     });
 }
 
+// EXTERNAL MODULE: ./src/report/target-scale-text.ts
+var target_scale_text = __nccwpck_require__(764);
 ;// CONCATENATED MODULE: ./src/report/html.ts
 /**
  * The HTML report: one self-contained page (inline CSS and SVG, no script, no network; a
@@ -36917,6 +38793,10 @@ function residualsChart(chart, options) {
  * repository is escaped with {@link escapeHtml}; charts come from the pipeline's chart data
  * (`ModelResult.charts`), so nothing here computes a figure.
  */
+
+
+
+
 
 
 
@@ -36977,7 +38857,7 @@ footer{margin-top:40px;font-size:.82rem;color:var(--muted)}
  footer{display:none}
 }
 `;
-function num(v) {
+function html_num(v) {
     if (v === null || v === undefined)
         return '–';
     return (0,report_escape/* escapeHtml */.ZD)((0,format/* formatNumber */.Z)((0,result_result/* fromJsonNumber */.M)(v)));
@@ -36991,9 +38871,9 @@ function verdictText(result) {
 function overviewRow(m, i) {
     const x = m.metrics;
     const over = m.checks.filter((c) => c.status === 'fail' || c.status === 'warn').map((c) => `<code>${(0,report_escape/* escapeHtml */.ZD)(c.id)}</code>`);
-    return (`<tr><td>${badge(m.verdict)}</td><td><a href="#model-${i + 1}">${(0,report_escape/* escapeHtml */.ZD)(m.name)}</a></td>` +
-        `<td class="num">${m.rows.train}</td><td class="num">${m.rows.holdout}</td><td class="num">${m.parameters}</td>` +
-        `<td class="num">${num(x?.holdout_rmse)}</td><td class="num">${num(x?.gap_ratio)}</td><td class="num">${num(x?.max_std_coefficient)}</td>` +
+    return (`<tr><td>${badge(m.verdict)}</td><td><a href="#model-${i + 1}">${(0,report_escape/* escapeHtml */.ZD)(m.name)}</a>${(0,report_escape/* escapeHtml */.ZD)((0,model_kind/* kindMark */.w6)(m))}</td>` +
+        `<td class="num">${m.rows.train}</td><td class="num">${m.rows.holdout}</td><td class="num">${(0,report_escape/* escapeHtml */.ZD)((0,model_kind/* parametersText */.Or)(m))}</td>` +
+        `<td class="num">${html_num(x?.holdout_rmse)}</td><td class="num">${html_num(x?.gap_ratio)}</td><td class="num">${html_num(x?.max_std_coefficient)}</td>` +
         `<td>${m.error ? 'could not be checked' : over.length ? over.join(', ') : '–'}</td></tr>`);
 }
 /** The overview table, one piece per row. */
@@ -37014,34 +38894,34 @@ function checksTable(m) {
             ? ` <span class="advice">Suggestion (line ${c.suggestion.line}): ${(0,report_escape/* escapeHtml */.ZD)(c.suggestion.text)}</span>`
             : '';
         return (`<tr data-check="${(0,report_escape/* escapeHtml */.ZD)(c.id)}" data-status="${(0,report_escape/* escapeHtml */.ZD)(c.status)}"><td>${(0,report_escape/* escapeHtml */.ZD)(title)}<br><code class="muted">${(0,report_escape/* escapeHtml */.ZD)(c.id)}</code></td><td>${badge(c.status)}</td>` +
-            `<td class="num">${num(c.value)}</td><td class="num">${(0,report_escape/* escapeHtml */.ZD)((0,wording/* limitText */.PW)(c))}</td><td class="num">${c.line}</td>` +
+            `<td class="num">${html_num(c.value)}</td><td class="num">${(0,report_escape/* escapeHtml */.ZD)((0,wording/* limitText */.PW)(c))}</td><td class="num">${c.line}</td>` +
             `<td class="finding">${(0,report_escape/* escapeHtml */.ZD)(c.message)}.${advice}${suggestion}</td></tr>`);
     });
     return ('<table class="checks"><thead><tr><th>Check</th><th>Status</th><th class="num">Value</th><th class="num">Limit</th><th class="num">Line</th><th>Finding</th></tr></thead>' +
         `<tbody>${rows.join('')}</tbody></table>`);
 }
-function figure(svg, caption, wide = false) {
+function html_figure(svg, caption, wide = false) {
     return `<figure${wide ? ' class="wide"' : ''}>${svg}<figcaption>${(0,report_escape/* escapeHtml */.ZD)(caption)}</figcaption></figure>`;
 }
 /** The charts of one model, in reading order. */
 function charts(chart, prefix) {
     const out = [];
     if (chart.fit) {
-        out.push(figure(fitCurveChart(chart, chart.fit, { id: `${prefix}-fit` }), 'The fitted curve over the scanned range (dotted lines: the training range). A curve that leaves the observed band between the samples is chasing noise.'));
+        out.push(html_figure(fitCurveChart(chart, chart.fit, { id: `${prefix}-fit` }), 'The fitted curve over the scanned range (dotted lines: the training range). A curve that leaves the observed band between the samples is chasing noise.'));
     }
     else {
-        out.push(figure(predictedActualChart(chart, { id: `${prefix}-pa` }), 'Predicted against actual values; hold-out points far from the dashed line while training points sit on it show overfitting.'));
+        out.push(html_figure(predictedActualChart(chart, { id: `${prefix}-pa` }), 'Predicted against actual values; hold-out points far from the dashed line while training points sit on it show overfitting.'));
     }
-    out.push(figure(residualsChart(chart, { id: `${prefix}-res` }), 'Residuals against fitted values.'));
+    out.push(html_figure(residualsChart(chart, { id: `${prefix}-res` }), 'Residuals against fitted values.'));
     chart.partials.forEach((curve, k) => {
-        out.push(figure(partialCurveChart(chart, curve, { id: `${prefix}-partial-${k + 1}` }), `Partial curve along ${curve.input}, the other inputs at their training medians.`));
+        out.push(html_figure(partialCurveChart(chart, curve, { id: `${prefix}-partial-${k + 1}` }), `Partial curve along ${curve.input}, the other inputs at their training medians.`));
     });
     if (chart.sweep) {
-        out.push(figure(cvCurveChart(chart.sweep, { id: `${prefix}-cv` }), 'Cross-validated error over the complexity sweep.'));
+        out.push(html_figure(cvCurveChart(chart.sweep, { id: `${prefix}-cv` }), 'Cross-validated error over the complexity sweep.'));
     }
     const bars = coefficientBarsChart(chart.coefficients, { id: `${prefix}-coef` });
     if (bars)
-        out.push(figure(bars, 'Standardised coefficients: the change in the prediction, in target standard deviations, for one standard deviation of each column.'));
+        out.push(html_figure(bars, 'Standardised coefficients: the change in the prediction, in target standard deviations, for one standard deviation of each column.'));
     return out;
 }
 function modelSection(m, index) {
@@ -37054,10 +38934,32 @@ function modelSection(m, index) {
         return parts.join('');
     }
     const x = m.metrics;
-    parts.push(`<p class="facts"><span>training rows <b>${m.rows.train}</b></span><span>hold-out rows <b>${m.rows.holdout}</b></span><span>parameters <b>${m.parameters}</b></span>` +
-        `<span>training RMSE <b>${num(x?.train_rmse)}</b></span><span>hold-out RMSE <b>${num(x?.holdout_rmse)}</b></span><span>gap ratio <b>${num(x?.gap_ratio)}</b></span></p>`);
+    parts.push(`<p class="facts"><span>training rows <b>${m.rows.train}</b></span><span>hold-out rows <b>${m.rows.holdout}</b></span><span>parameters <b>${(0,report_escape/* escapeHtml */.ZD)((0,model_kind/* parametersText */.Or)(m))}</b></span>` +
+        `<span>training RMSE <b>${html_num(x?.train_rmse)}</b></span><span>hold-out RMSE <b>${html_num(x?.holdout_rmse)}</b></span><span>gap ratio <b>${html_num(x?.gap_ratio)}</b></span></p>`);
+    // A classifier's facts are its log-loss, AUC and calibration slope instead.
+    if (x?.task === 'classification')
+        parts[parts.length - 1] = classifierFacts(m);
+    const kind = (0,model_kind/* kindLine */.J0)(m);
+    if (kind !== null)
+        parts.push(`<p class="note" data-kind="predictions">${(0,report_escape/* escapeHtml */.ZD)(kind)}</p>`);
+    const refit = (0,refit_compare/* refitCompareLine */.C)(m);
+    if (refit !== null)
+        parts.push(`<p class="note" data-refit-compare>${(0,report_escape/* escapeHtml */.ZD)(refit)}</p>`);
+    const scale = (0,target_scale_text/* targetScaleSentence */.tt)(m);
+    if (scale !== null) {
+        const head = target_scale_text/* TARGET_SCALE_HEADINGS */.x8.map((h, j) => `<th${j > 0 ? ' class="num"' : ''}>${(0,report_escape/* escapeHtml */.ZD)(h)}</th>`).join('');
+        const body = (0,target_scale_text/* targetScaleRows */.rY)(m)
+            .map((row) => `<tr>${row.map((c, j) => `<td${j > 0 ? ' class="num"' : ''}>${(0,report_escape/* escapeHtml */.ZD)(c)}</td>`).join('')}</tr>`)
+            .join('');
+        parts.push(`<p class="note">${(0,report_escape/* escapeHtml */.ZD)(scale)}.</p><table class="target-scale"><thead><tr>${head}</tr></thead><tbody>${body}</tbody></table>`);
+    }
     parts.push('<h3>Checks</h3>', checksTable(m));
-    if (m.charts) {
+    if (m.classifier_charts) {
+        const list = classifierCharts(m.classifier_charts, id);
+        parts.push('<h3>Charts</h3>', classifierChartNotes(m.classifier_charts));
+        parts.push(`<div class="charts" data-charts="${list.length}">${list.join('')}</div>`);
+    }
+    else if (m.charts) {
         const list = charts(m.charts, id);
         const thinned = [m.charts.train, m.charts.holdout].filter((s) => s.thinned);
         parts.push(`<h3>Charts</h3>`);
@@ -37176,6 +39078,9 @@ function suite(m, failOn) {
         }
     }
     const head = `  <testsuite${attrs({ name: m.name, tests: counts.tests, failures: counts.failures, errors: counts.errors, skipped: counts.skipped, file: m.descriptor })}`;
+    // A model trained elsewhere says so in the suite's properties (JUnit's place for facts of a suite).
+    if (m.kind)
+        cases.unshift(`    <properties>\n      <property${attrs({ name: 'kind', value: m.kind })}/>\n    </properties>`);
     return { xml: cases.length ? `${head}>\n${cases.join('\n')}\n  </testsuite>` : `${head}/>`, counts };
 }
 /**
@@ -37334,6 +39239,7 @@ function sarifLog(result, options = {}) {
                 partialFingerprints: { 'fitgateFinding/v1': fingerprint(m.name, c.id) },
                 properties: {
                     model: m.name,
+                    ...(m.kind ? { kind: m.kind } : {}),
                     code: c.code,
                     value: c.value === null ? null : (0,format/* formatNumber */.Z)((0,result_result/* fromJsonNumber */.M)(c.value)),
                     limit: c.limit,
@@ -39674,31 +41580,27 @@ function twoProductError(a, b, prod) {
 __nccwpck_require__.a(module, async (__webpack_handle_async_dependencies__, __webpack_async_result__) => { try {
 /* harmony import */ var _actions_core__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(6257);
 /* harmony import */ var _actions_github__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(157);
-/* harmony import */ var _action_base_commit_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(4823);
+/* harmony import */ var _entries_check_run_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(9752);
 /* harmony import */ var _action_comment_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(1151);
-/* harmony import */ var _action_event_js__WEBPACK_IMPORTED_MODULE_18__ = __nccwpck_require__(3566);
+/* harmony import */ var _action_event_js__WEBPACK_IMPORTED_MODULE_16__ = __nccwpck_require__(3566);
 /* harmony import */ var _action_review_suggestions_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(3464);
 /* harmony import */ var _action_outcome_js__WEBPACK_IMPORTED_MODULE_5__ = __nccwpck_require__(5505);
 /* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_6__ = __nccwpck_require__(4296);
 /* harmony import */ var _entries_inputs_js__WEBPACK_IMPORTED_MODULE_7__ = __nccwpck_require__(9939);
-/* harmony import */ var _run_pool_js__WEBPACK_IMPORTED_MODULE_8__ = __nccwpck_require__(2499);
-/* harmony import */ var _run_worker_role_js__WEBPACK_IMPORTED_MODULE_9__ = __nccwpck_require__(5280);
-/* harmony import */ var _entries_output_files_js__WEBPACK_IMPORTED_MODULE_10__ = __nccwpck_require__(2766);
-/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_11__ = __nccwpck_require__(6418);
-/* harmony import */ var _entries_safe_write_js__WEBPACK_IMPORTED_MODULE_12__ = __nccwpck_require__(5475);
-/* harmony import */ var _repo_fs_repository_js__WEBPACK_IMPORTED_MODULE_13__ = __nccwpck_require__(4526);
-/* harmony import */ var _report_annotations_js__WEBPACK_IMPORTED_MODULE_14__ = __nccwpck_require__(856);
-/* harmony import */ var _report_runner_commands_js__WEBPACK_IMPORTED_MODULE_15__ = __nccwpck_require__(673);
-/* harmony import */ var _report_summary_js__WEBPACK_IMPORTED_MODULE_16__ = __nccwpck_require__(5596);
-/* harmony import */ var _report_text_js__WEBPACK_IMPORTED_MODULE_17__ = __nccwpck_require__(5655);
+/* harmony import */ var _run_worker_role_js__WEBPACK_IMPORTED_MODULE_8__ = __nccwpck_require__(5280);
+/* harmony import */ var _entries_output_files_js__WEBPACK_IMPORTED_MODULE_9__ = __nccwpck_require__(3172);
+/* harmony import */ var _entries_safe_write_js__WEBPACK_IMPORTED_MODULE_10__ = __nccwpck_require__(5475);
+/* harmony import */ var _repo_fs_repository_js__WEBPACK_IMPORTED_MODULE_11__ = __nccwpck_require__(4526);
+/* harmony import */ var _report_annotations_js__WEBPACK_IMPORTED_MODULE_12__ = __nccwpck_require__(856);
+/* harmony import */ var _report_runner_commands_js__WEBPACK_IMPORTED_MODULE_13__ = __nccwpck_require__(673);
+/* harmony import */ var _report_summary_js__WEBPACK_IMPORTED_MODULE_14__ = __nccwpck_require__(5596);
+/* harmony import */ var _report_text_js__WEBPACK_IMPORTED_MODULE_15__ = __nccwpck_require__(5655);
 /**
  * The action's entry: read the inputs, compare with the base commit on pull requests, run the
  * same pipeline as the CLI, hand the Result to the reporters (annotations, log, job summary,
  * comment), set the outputs, and fail the step exactly when the CLI would exit 1 or 2.
  * The only place that calls `core.setFailed`.
  */
-
-
 
 
 
@@ -39732,11 +41634,11 @@ function setOutputs(outputs) {
 }
 /** Writes one notice, warning or error line of our own (message escaped, no runner command). */
 function say(level, message) {
-    process.stdout.write(`${(0,_report_annotations_js__WEBPACK_IMPORTED_MODULE_14__/* .formatCommand */ .fE)({ level, title: 'fitgate', message })}\n`);
+    process.stdout.write(`${(0,_report_annotations_js__WEBPACK_IMPORTED_MODULE_12__/* .formatCommand */ .fE)({ level, title: 'fitgate', message })}\n`);
 }
 /** Fails the step with a message whose runner commands are broken (the toolkit escapes the rest). */
 function fail(message) {
-    _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .setFailed */ .C1((0,_report_runner_commands_js__WEBPACK_IMPORTED_MODULE_15__/* .defuseLegacyCommands */ .u5)(message));
+    _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .setFailed */ .C1((0,_report_runner_commands_js__WEBPACK_IMPORTED_MODULE_13__/* .defuseLegacyCommands */ .u5)(message));
 }
 /**
  * Posts or updates the review suggestions (action/review-suggestions.ts); a fork's pull request
@@ -39754,7 +41656,7 @@ async function suggestOnDiff(result, inputs, pr) {
         return;
     }
     const api = (0,_action_review_suggestions_js__WEBPACK_IMPORTED_MODULE_4__/* .createReviewApi */ .nQ)(inputs.token, pr, (line) => say('warning', `GitHub API: ${line}`));
-    const repo = (0,_repo_fs_repository_js__WEBPACK_IMPORTED_MODULE_13__/* .createFsRepository */ .E)(inputs.settings.root);
+    const repo = (0,_repo_fs_repository_js__WEBPACK_IMPORTED_MODULE_11__/* .createFsRepository */ .E)(inputs.settings.root);
     const source = {
         prefix: await (0,_action_review_suggestions_js__WEBPACK_IMPORTED_MODULE_4__/* .repositoryPrefix */ .Vk)(inputs.settings.root, inputs.prefix),
         read: async (file) => new TextDecoder().decode(await repo.read(file)),
@@ -39771,7 +41673,7 @@ async function suggestOnDiff(result, inputs, pr) {
         if (created + updated + unchanged + deleted > 0)
             _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .info */ .pq(`review suggestions: ${created} posted, ${updated} updated, ${unchanged} unchanged, ${deleted} removed`);
         for (const line of outcome.skipped)
-            _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .info */ .pq((0,_report_runner_commands_js__WEBPACK_IMPORTED_MODULE_15__/* .neutraliseLogLine */ .h4)(line));
+            _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .info */ .pq((0,_report_runner_commands_js__WEBPACK_IMPORTED_MODULE_13__/* .neutraliseLogLine */ .h4)(line));
     }
 }
 async function run() {
@@ -39782,33 +41684,31 @@ async function run() {
         if (inputs.token !== '')
             _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .setSecret */ .Pq(inputs.token);
         prefix = inputs.prefix;
-        const pr = (0,_action_event_js__WEBPACK_IMPORTED_MODULE_18__/* .pullRequestOf */ ._)({
+        const pr = (0,_action_event_js__WEBPACK_IMPORTED_MODULE_16__/* .pullRequestOf */ ._)({
             eventName: _actions_github__WEBPACK_IMPORTED_MODULE_1__/* .context */ ._.eventName ?? '',
             payload: _actions_github__WEBPACK_IMPORTED_MODULE_1__/* .context */ ._.payload,
             repository: process.env.GITHUB_REPOSITORY,
         });
         // The base commit first, so that the head run can compare with it.
-        const baseOptions = pr?.baseSha ? await (0,_action_base_commit_js__WEBPACK_IMPORTED_MODULE_2__/* .evaluateBase */ .D0)(inputs.settings, pr.baseSha, { fetchHint: _action_base_commit_js__WEBPACK_IMPORTED_MODULE_2__/* .ACTION_FETCH_HINT */ .MZ }) : {};
-        const scale = { shard: inputs.shard, jobs: (0,_run_pool_js__WEBPACK_IMPORTED_MODULE_8__/* .defaultJobs */ .yV)(), root: inputs.settings.root };
-        const result = await (0,_run_pipeline_js__WEBPACK_IMPORTED_MODULE_11__/* .runPipeline */ .a)(inputs.settings, (0,_repo_fs_repository_js__WEBPACK_IMPORTED_MODULE_13__/* .createFsRepository */ .E)(inputs.settings.root), { ...baseOptions, ...scale });
+        const result = await (0,_entries_check_run_js__WEBPACK_IMPORTED_MODULE_2__/* .runCheck */ .k)(inputs.settings, { base: pr?.baseSha || null, entry: 'action', shard: inputs.shard, jobs: null });
         // Reporters: annotations and log, JSON report, file reports, job summary, comment. A file
         // that is refused (a link, a folder leading out of the workspace) fails the step as bad
         // input once every other reporter has run; a write that fails is a warning.
-        process.stdout.write((0,_report_annotations_js__WEBPACK_IMPORTED_MODULE_14__/* .formatAnnotations */ .MR)(result, { prefix }));
-        for (const line of (0,_report_text_js__WEBPACK_IMPORTED_MODULE_17__/* .formatText */ .v)(result).split('\n'))
-            _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .info */ .pq((0,_report_runner_commands_js__WEBPACK_IMPORTED_MODULE_15__/* .neutraliseLogLine */ .h4)(line));
+        process.stdout.write((0,_report_annotations_js__WEBPACK_IMPORTED_MODULE_12__/* .formatAnnotations */ .MR)(result, { prefix }));
+        for (const line of (0,_report_text_js__WEBPACK_IMPORTED_MODULE_15__/* .formatText */ .v)(result).split('\n'))
+            _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .info */ .pq((0,_report_runner_commands_js__WEBPACK_IMPORTED_MODULE_13__/* .neutraliseLogLine */ .h4)(line));
         const refused = [];
         let report = '';
         try {
             report = await (0,_action_outcome_js__WEBPACK_IMPORTED_MODULE_5__/* .writeReport */ .u5)(result, inputs.tempDir, process.env.GITHUB_ACTION);
         }
         catch (error) {
-            if (error instanceof _core_errors_js__WEBPACK_IMPORTED_MODULE_6__/* .InputError */ .dz && error.code === _entries_safe_write_js__WEBPACK_IMPORTED_MODULE_12__/* .OUTPUT_REFUSED */ .LC)
+            if (error instanceof _core_errors_js__WEBPACK_IMPORTED_MODULE_6__/* .InputError */ .dz && error.code === _entries_safe_write_js__WEBPACK_IMPORTED_MODULE_10__/* .OUTPUT_REFUSED */ .LC)
                 refused.push(error.describe());
             else
                 say('warning', `could not write the JSON report: ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_6__/* .errorMessage */ .gJ)(error)}`);
         }
-        const files = await (0,_entries_output_files_js__WEBPACK_IMPORTED_MODULE_10__/* .writeFileReports */ .n)(result, {
+        const files = await (0,_entries_output_files_js__WEBPACK_IMPORTED_MODULE_9__/* .writeFileReports */ .n)(result, {
             ...inputs.files,
             sarifPrefix: prefix,
             failOn: inputs.settings.failOn,
@@ -39824,7 +41724,7 @@ async function run() {
         for (const message of refused)
             say('error', `a report file was refused: ${message}`);
         try {
-            await _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .summary */ .z.addRaw((0,_report_summary_js__WEBPACK_IMPORTED_MODULE_16__/* .formatSummary */ .kq)(result)).write();
+            await _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .summary */ .z.addRaw((0,_report_summary_js__WEBPACK_IMPORTED_MODULE_14__/* .formatSummary */ .kq)(result)).write();
         }
         catch (error) {
             say('warning', `could not write the job summary: ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_6__/* .errorMessage */ .gJ)(error)}`);
@@ -39834,7 +41734,7 @@ async function run() {
                 say('notice', 'no github-token: the pull-request comment is skipped; the report is in the job summary.');
             else {
                 const api = (0,_action_comment_js__WEBPACK_IMPORTED_MODULE_3__/* .createCommentApi */ .sE)(inputs.token, pr, (line) => say('warning', `GitHub API: ${line}`));
-                const outcome = await (0,_action_comment_js__WEBPACK_IMPORTED_MODULE_3__/* .upsertComment */ .lB)(api, (0,_report_summary_js__WEBPACK_IMPORTED_MODULE_16__/* .formatComment */ .jw)(result));
+                const outcome = await (0,_action_comment_js__WEBPACK_IMPORTED_MODULE_3__/* .upsertComment */ .lB)(api, (0,_report_summary_js__WEBPACK_IMPORTED_MODULE_14__/* .formatComment */ .jw)(result));
                 if (outcome.kind === 'forbidden') {
                     say('notice', `the pull-request comment could not be written (HTTP ${outcome.status}): the token may not write to this pull request (pull requests from forks get a read-only token; the comment needs pull-requests: write). The result is unchanged and the report is in the job summary.`);
                 }
@@ -39873,18 +41773,18 @@ async function run() {
         }
         if (error instanceof _core_errors_js__WEBPACK_IMPORTED_MODULE_6__/* .InputError */ .dz) {
             if (error.location.file !== undefined)
-                process.stdout.write(`${(0,_report_annotations_js__WEBPACK_IMPORTED_MODULE_14__/* .formatCommand */ .fE)((0,_report_annotations_js__WEBPACK_IMPORTED_MODULE_14__/* .inputErrorAnnotation */ .cU)(error, prefix))}\n`);
+                process.stdout.write(`${(0,_report_annotations_js__WEBPACK_IMPORTED_MODULE_12__/* .formatCommand */ .fE)((0,_report_annotations_js__WEBPACK_IMPORTED_MODULE_12__/* .inputErrorAnnotation */ .cU)(error, prefix))}\n`);
             fail(`fitgate could not run: ${error.describe()}`);
         }
         else {
             if (error instanceof Error && error.stack)
-                _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .debug */ .Yz((0,_report_runner_commands_js__WEBPACK_IMPORTED_MODULE_15__/* .defuseLegacyCommands */ .u5)(error.stack));
+                _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .debug */ .Yz((0,_report_runner_commands_js__WEBPACK_IMPORTED_MODULE_13__/* .defuseLegacyCommands */ .u5)(error.stack));
             fail(`fitgate failed unexpectedly: ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_6__/* .errorMessage */ .gJ)(error)}`);
         }
     }
 }
 // In a model worker thread (the bundle is one file, so workers load it too) the worker loop runs instead.
-if (!(0,_run_worker_role_js__WEBPACK_IMPORTED_MODULE_9__/* .isFitgateWorker */ .$)())
+if (!(0,_run_worker_role_js__WEBPACK_IMPORTED_MODULE_8__/* .isFitgateWorker */ .$)())
     await run();
 
 __webpack_async_result__();
@@ -40984,6 +42884,7 @@ function joinRepoPath(fromFile, target, location) {
 /* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(6760);
 /* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_path__WEBPACK_IMPORTED_MODULE_0__);
 /* harmony import */ var _runner_commands_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(673);
+/* harmony import */ var _model_kind_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(698);
 /* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(4296);
 /**
  * Workflow-command annotations: one error per failing check or unchecked model, one warning per
@@ -40992,6 +42893,7 @@ function joinRepoPath(fromFile, target, location) {
  * here (and only here) so that they can be tested byte for byte; text from the repository is
  * escaped so that it can never start a workflow command of its own.
  */
+
 
 
 
@@ -41049,7 +42951,7 @@ function modelFindings(m, prefix) {
             level: c.status === 'fail' ? 'error' : 'warning',
             file: workspacePath(prefix, m.descriptor),
             line: c.line,
-            title: `fitgate ${c.id} (${m.name})`,
+            title: `fitgate ${c.id} (${m.name}${(0,_model_kind_js__WEBPACK_IMPORTED_MODULE_3__/* .kindMark */ .w6)(m)})`,
             message: c.advice ? `${c.message}. ${c.advice}` : c.message,
         });
     }
@@ -41245,6 +43147,77 @@ function escapeMermaid(text) {
 
 /***/ }),
 
+/***/ 698:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   J0: () => (/* binding */ kindLine),
+/* harmony export */   Or: () => (/* binding */ parametersText),
+/* harmony export */   w6: () => (/* binding */ kindMark)
+/* harmony export */ });
+/* unused harmony export isPredictionsModel */
+/** True for a model trained elsewhere, gated from its predictions. */
+function isPredictionsModel(m) {
+    return m.kind === 'predictions';
+}
+/** The short mark after a model's name in overview tables: ` (predictions)`, or '' for a model of terms. */
+function kindMark(m) {
+    return isPredictionsModel(m) ? ' (predictions)' : '';
+}
+/** The parameter count as reports show it: the number, or `not stated` for a model trained elsewhere without `parameters`. */
+function parametersText(m) {
+    return isPredictionsModel(m) && m.parameters === 0 ? 'not stated' : String(m.parameters);
+}
+/**
+ * One sentence stating the kind of a model trained elsewhere, e.g. `kind: trained elsewhere,
+ * gated from its predictions (48 stated parameters); checks that need a refit or coefficients
+ * are skipped`; null for a model of terms.
+ */
+function kindLine(m) {
+    if (!isPredictionsModel(m))
+        return null;
+    const count = m.parameters === 0 ? 'no parameter count stated' : `${m.parameters} stated parameters`;
+    return `kind: trained elsewhere, gated from its predictions (${count}); checks that need a refit or coefficients are skipped`;
+}
+
+
+/***/ }),
+
+/***/ 3524:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   C: () => (/* binding */ refitCompareLine)
+/* harmony export */ });
+/* harmony import */ var _core_format_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(6228);
+/* harmony import */ var _result_result_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(1628);
+/**
+ * "What a refit would give" (`fit.refit_compare: true` on a model scored as shipped) for the
+ * text, Markdown and HTML reports: one line of the refit's figures beside the shipped model's
+ * (format only; the figures are the metrics `refit_*`).
+ */
+
+
+function figure(m, key) {
+    const v = m.metrics?.[key];
+    return typeof v === 'number' || typeof v === 'string' ? (0,_core_format_js__WEBPACK_IMPORTED_MODULE_1__/* .formatNumber */ .Z)((0,_result_result_js__WEBPACK_IMPORTED_MODULE_0__/* .fromJsonNumber */ .M)(v)) : '–';
+}
+/**
+ * One line, e.g. `shipped: training RMSE 0.52, hold-out RMSE 0.61; a refit would give: training
+ * RMSE 0.48, hold-out RMSE 0.6, 5-fold CV RMSE 0.55`; null when the model has no refit figures.
+ */
+function refitCompareLine(m) {
+    if (m.metrics?.refit_holdout_rmse === undefined)
+        return null;
+    const folds = m.metrics.refit_cv_folds;
+    return (`shipped: training RMSE ${figure(m, 'train_rmse')}, hold-out RMSE ${figure(m, 'holdout_rmse')}; ` +
+        `a refit would give: training RMSE ${figure(m, 'refit_train_rmse')}, hold-out RMSE ${figure(m, 'refit_holdout_rmse')}, ` +
+        `${typeof folds === 'number' && folds > 0 ? `${folds}-fold ` : ''}CV RMSE ${figure(m, 'refit_cv_rmse')}`);
+}
+
+
+/***/ }),
+
 /***/ 673:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
@@ -41318,8 +43291,13 @@ function neutraliseLog(text) {
  * digit, never with `::`.
  */
 function neutraliseJson(json) {
+    // Most pieces (numbers, plain names) hold none of the characters either pattern needs: one scan.
+    if (!NEEDS_NEUTRALISING.test(json))
+        return json;
     return json.replace(LEGACY, '#$1#$2\\u005b').replace(/[\u0085\u2028\u2029]/g, codeEscape);
 }
+/** A character without which {@link neutraliseJson} changes nothing: `#` (of `##[`) or a raw line separator. */
+const NEEDS_NEUTRALISING = /[#\u0085\u2028\u2029]/;
 /**
  * Text an API server sent back (an error message, a library's warning about a response), made
  * fit to print: on one line, control and format characters shown as `\u001b` style escapes,
@@ -41354,6 +43332,10 @@ __nccwpck_require__.d(__webpack_exports__, {
 
 // EXTERNAL MODULE: ./src/report/classifier-figures.ts
 var classifier_figures = __nccwpck_require__(2953);
+// EXTERNAL MODULE: ./src/report/model-kind.ts
+var model_kind = __nccwpck_require__(698);
+// EXTERNAL MODULE: ./src/report/refit-compare.ts
+var refit_compare = __nccwpck_require__(3524);
 // EXTERNAL MODULE: ./src/core/format.ts
 var format = __nccwpck_require__(6228);
 // EXTERNAL MODULE: ./src/report/escape.ts
@@ -41477,6 +43459,8 @@ function mermaidChart(model, options = {}) {
 var result = __nccwpck_require__(1628);
 // EXTERNAL MODULE: ./src/report/wording.ts
 var wording = __nccwpck_require__(5594);
+// EXTERNAL MODULE: ./src/report/target-scale-text.ts
+var target_scale_text = __nccwpck_require__(764);
 ;// CONCATENATED MODULE: ./src/report/markdown.ts
 /**
  * The Markdown report: the job summary, the pull-request comment and `--format markdown`.
@@ -41485,6 +43469,9 @@ var wording = __nccwpck_require__(5594);
  * writes it. Text from the repository is escaped with {@link escapeMarkdown} and cut to a
  * readable length; the whole report stays under `maxBytes`.
  */
+
+
+
 
 
 
@@ -41529,12 +43516,15 @@ function baseCell(m) {
         return 'new';
     const from = b.status === 'renamed' && b.previous ? `renamed from ${markdown_text(b.previous.name)}: ` : '';
     const rmse = b.holdout_rmse_change === null ? null : (0,result/* fromJsonNumber */.M)(b.holdout_rmse_change);
+    const loss = b.holdout_log_loss_change === undefined || b.holdout_log_loss_change === null ? null : (0,result/* fromJsonNumber */.M)(b.holdout_log_loss_change);
     const gap = b.gap_ratio_change === null ? null : (0,result/* fromJsonNumber */.M)(b.gap_ratio_change);
-    if (rmse === null && gap === null)
+    if (rmse === null && loss === null && gap === null)
         return `${from}base not checked`;
     const parts = [];
     if (rmse !== null)
         parts.push(`RMSE ${Number.isFinite(rmse) ? signed(rmse * 100, '%') : signed(rmse)}`);
+    if (loss !== null)
+        parts.push(`log-loss ${Number.isFinite(loss) ? signed(loss * 100, '%') : signed(loss)}`);
     if (gap !== null)
         parts.push(`gap ${signed(gap)}`);
     return `${from}${parts.join(', ')}`;
@@ -41549,7 +43539,7 @@ function overviewHead(withBase) {
 /** One row of the model overview. */
 function overviewRow(m, withBase) {
     const x = m.metrics;
-    return `| ${MARK[m.verdict]} | ${markdown_text(m.name)} | ${cell(x?.holdout_rmse)} | ${cell(x?.gap_ratio)} | ${cell(x?.params_per_sample)} | ${cell(x?.max_std_coefficient)} |${withBase ? ` ${baseCell(m)} |` : ''}`;
+    return `| ${MARK[m.verdict]} | ${markdown_text(m.name + (0,model_kind/* kindMark */.w6)(m))} | ${cell(x?.holdout_rmse)} | ${cell(x?.gap_ratio)} | ${cell(x?.params_per_sample)} | ${cell(x?.max_std_coefficient)} |${withBase ? ` ${baseCell(m)} |` : ''}`;
 }
 /** The block of one model that did not pass. */
 function modelDetail(m) {
@@ -41560,8 +43550,21 @@ function modelDetail(m) {
         return lines;
     }
     const shown = m.checks.filter((c) => c.status === 'fail' || c.status === 'warn');
+    const kind = (0,model_kind/* kindLine */.J0)(m);
+    if (kind !== null)
+        lines.push(markdown_text(kind), '');
+    const refit = (0,refit_compare/* refitCompareLine */.C)(m);
+    if (refit !== null)
+        lines.push(markdown_text(refit), '');
     if ((0,classifier_figures/* isClassifier */.aA)(m))
         lines.push(markdown_text((0,classifier_figures/* classifierLine */.KT)(m)), '');
+    const scale = (0,target_scale_text/* targetScaleSentence */.tt)(m);
+    if (scale !== null) {
+        lines.push(`${scale}:`, '', `| ${target_scale_text/* TARGET_SCALE_HEADINGS */.x8.join(' | ')} |`, '| --- | ---: | ---: | ---: | ---: | ---: | ---: |');
+        for (const row of (0,target_scale_text/* targetScaleRows */.rY)(m))
+            lines.push(`| ${row.join(' | ')} |`);
+        lines.push('');
+    }
     lines.push('| Check | Status | Value | Limit | Line |', '| --- | --- | ---: | --- | ---: |');
     for (const c of shown)
         lines.push(`| ${c.id} | ${MARK[c.status]} | ${cell(c.value)} | ${(0,wording/* limitText */.PW)(c)} | ${c.line} |`);
@@ -41743,6 +43746,73 @@ function axisLabel(column) {
 
 /***/ }),
 
+/***/ 764:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   rY: () => (/* binding */ targetScaleRows),
+/* harmony export */   tt: () => (/* binding */ targetScaleSentence),
+/* harmony export */   x8: () => (/* binding */ TARGET_SCALE_HEADINGS)
+/* harmony export */ });
+/* harmony import */ var _core_format_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(6228);
+/* harmony import */ var _result_result_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(1628);
+/**
+ * How the reporters show a model fitted on a transformed target (`target_scale` of the Result):
+ * one table of its error figures on both scales, rows `original` and `transformed`, the scale the
+ * limits judged marked. Plain text only (the transform names are fixed words, numbers are
+ * formatted), so each reporter escapes nothing of the user's here.
+ */
+
+
+/** Column headings of the table, in order. */
+const TARGET_SCALE_HEADINGS = [
+    'Scale',
+    'Training RMSE',
+    'Hold-out RMSE',
+    'Hold-out MAE',
+    'Hold-out R^2',
+    'Gap ratio',
+    'CV RMSE',
+];
+function show(v) {
+    return v === null || v === undefined ? '–' : (0,_core_format_js__WEBPACK_IMPORTED_MODULE_1__/* .formatNumber */ .Z)((0,_result_result_js__WEBPACK_IMPORTED_MODULE_0__/* .fromJsonNumber */ .M)(v));
+}
+/** The function g of each transform, for captions. */
+const FORMULA = { log: 'log(y)', log1p: 'log(1 + y)', sqrt: 'sqrt(y)' };
+/**
+ * One sentence on the transform: what the model is fitted on, what the original-scale predictions
+ * are and which scale the limits judge; null for a model without a transform.
+ */
+function targetScaleSentence(m) {
+    const t = m.target_scale;
+    if (t === undefined)
+        return null;
+    const back = t.transform === 'log' ? 'exp' : t.transform === 'log1p' ? 'expm1' : 'square';
+    return `Fitted on ${FORMULA[t.transform]}; original-scale figures compare y with the back-transformed predictions (${back}, a median of y, not its mean); the limits judge the ${t.limits_scale} scale`;
+}
+/**
+ * The table's rows (cells as text, headings excluded): `original` then `transformed`, the judged
+ * scale marked `(limits)`; empty for a model without a transform.
+ */
+function targetScaleRows(m) {
+    const t = m.target_scale;
+    if (t === undefined)
+        return [];
+    const row = (name, f) => [
+        `${name}${t.limits_scale === name ? ' (limits)' : ''}`,
+        show(f.train_rmse),
+        show(f.holdout_rmse),
+        show(f.holdout_mae),
+        show(f.holdout_r2),
+        show(f.gap_ratio),
+        show(f.cv_rmse),
+    ];
+    return [row('original', t.original), row('transformed', t.transformed)];
+}
+
+
+/***/ }),
+
 /***/ 5655:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
@@ -41750,15 +43820,21 @@ function axisLabel(column) {
 /* harmony export */   v: () => (/* binding */ formatText)
 /* harmony export */ });
 /* harmony import */ var _classifier_figures_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(2953);
-/* harmony import */ var _result_result_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(1628);
-/* harmony import */ var _core_format_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(6228);
-/* harmony import */ var _core_extremes_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(398);
-/* harmony import */ var _escape_js__WEBPACK_IMPORTED_MODULE_5__ = __nccwpck_require__(6412);
-/* harmony import */ var _runner_commands_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(673);
+/* harmony import */ var _model_kind_js__WEBPACK_IMPORTED_MODULE_8__ = __nccwpck_require__(698);
+/* harmony import */ var _refit_compare_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(3524);
+/* harmony import */ var _result_result_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(1628);
+/* harmony import */ var _core_format_js__WEBPACK_IMPORTED_MODULE_6__ = __nccwpck_require__(6228);
+/* harmony import */ var _core_extremes_js__WEBPACK_IMPORTED_MODULE_5__ = __nccwpck_require__(398);
+/* harmony import */ var _escape_js__WEBPACK_IMPORTED_MODULE_7__ = __nccwpck_require__(6412);
+/* harmony import */ var _runner_commands_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(673);
+/* harmony import */ var _target_scale_text_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(764);
 /**
  * The terminal report: one aligned table of every model, then one block per model that did not
  * pass, with each check's figure against its limit and the descriptor line to change.
  */
+
+
+
 
 
 
@@ -41770,7 +43846,7 @@ function paint(text, status, color) {
     return color ? `\u001b[${COLOURS[status]}m${text}\u001b[0m` : text;
 }
 function table(rows, rightAligned) {
-    const widths = rows[0].map((_, j) => (0,_core_extremes_js__WEBPACK_IMPORTED_MODULE_3__/* .maxOf */ ._)(rows.map((r) => [...r[j]].length)));
+    const widths = rows[0].map((_, j) => (0,_core_extremes_js__WEBPACK_IMPORTED_MODULE_5__/* .maxOf */ ._)(rows.map((r) => [...r[j]].length)));
     return rows.map((r) => r
         .map((cell, j) => {
         const pad = ' '.repeat(widths[j] - [...cell].length);
@@ -41781,12 +43857,12 @@ function table(rows, rightAligned) {
 }
 function metric(m, key) {
     const v = m.metrics?.[key];
-    return typeof v === 'number' || typeof v === 'string' ? (0,_core_format_js__WEBPACK_IMPORTED_MODULE_4__/* .formatNumber */ .Z)((0,_result_result_js__WEBPACK_IMPORTED_MODULE_1__/* .fromJsonNumber */ .M)(v)) : '–';
+    return typeof v === 'number' || typeof v === 'string' ? (0,_core_format_js__WEBPACK_IMPORTED_MODULE_6__/* .formatNumber */ .Z)((0,_result_result_js__WEBPACK_IMPORTED_MODULE_2__/* .fromJsonNumber */ .M)(v)) : '–';
 }
 function checkLine(model, c, color) {
     const status = paint(c.status.toUpperCase().padEnd(c.status === 'skipped' ? 7 : 4), c.status, color);
-    const text = `  ${status} ${c.id} (${(0,_escape_js__WEBPACK_IMPORTED_MODULE_5__/* .escapeTerminal */ .en)(model.descriptor)}:${c.line}): ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_5__/* .escapeTerminal */ .en)(c.message)}`;
-    return c.advice ? `${text}\n       ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_5__/* .escapeTerminal */ .en)(c.advice)}` : text;
+    const text = `  ${status} ${c.id} (${(0,_escape_js__WEBPACK_IMPORTED_MODULE_7__/* .escapeTerminal */ .en)(model.descriptor)}:${c.line}): ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_7__/* .escapeTerminal */ .en)(c.message)}`;
+    return c.advice ? `${text}\n       ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_7__/* .escapeTerminal */ .en)(c.advice)}` : text;
 }
 /**
  * Where a model's error is, for the line under its header: `file:line:column: ` (the form
@@ -41803,20 +43879,22 @@ function errorWhere(m) {
  * by its path, which then stands once.
  */
 function modelHeader(m, color) {
-    const where = m.name === m.descriptor ? '' : ` (${(0,_escape_js__WEBPACK_IMPORTED_MODULE_5__/* .escapeTerminal */ .en)(m.descriptor)})`;
-    return `${paint(m.verdict.toUpperCase(), m.verdict, color)} ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_5__/* .escapeTerminal */ .en)(m.name)}${where}`;
+    const where = m.name === m.descriptor ? '' : ` (${(0,_escape_js__WEBPACK_IMPORTED_MODULE_7__/* .escapeTerminal */ .en)(m.descriptor)})`;
+    return `${paint(m.verdict.toUpperCase(), m.verdict, color)} ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_7__/* .escapeTerminal */ .en)(m.name)}${where}`;
 }
-/** The base column: hold-out RMSE change in per cent, `new` for a model absent on the base. */
+/** The base column: hold-out RMSE change (a classifier's hold-out log-loss change) in per cent, `new` for a model absent on the base. */
 function baseCell(m) {
     if (m.base === undefined)
         return '–';
     if (m.base.status === 'new')
         return 'new';
-    const change = m.base.holdout_rmse_change === null ? null : (0,_result_result_js__WEBPACK_IMPORTED_MODULE_1__/* .fromJsonNumber */ .M)(m.base.holdout_rmse_change);
+    // A classifier's change is that of its hold-out log-loss (its RMSE fields are null).
+    const figure = m.base.holdout_log_loss_change ?? m.base.holdout_rmse_change;
+    const change = figure === null ? null : (0,_result_result_js__WEBPACK_IMPORTED_MODULE_2__/* .fromJsonNumber */ .M)(figure);
     if (change === null || !Number.isFinite(change))
         return '–';
     const percent = change * 100;
-    return `${percent > 0 ? '+' : ''}${(0,_core_format_js__WEBPACK_IMPORTED_MODULE_4__/* .formatNumber */ .Z)(percent)}%`;
+    return `${percent > 0 ? '+' : ''}${(0,_core_format_js__WEBPACK_IMPORTED_MODULE_6__/* .formatNumber */ .Z)(percent)}%`;
 }
 /**
  * Formats the Result for a terminal: the table of models (a `vs base` column when the run was
@@ -41831,7 +43909,7 @@ function formatText(result, options = {}) {
     const header = ['status', 'model', 'hold-out RMSE', 'gap ratio', 'params/row', 'max std coef', ...(withBase ? ['vs base'] : [])];
     const rows = result.models.map((m) => [
         m.verdict,
-        (0,_escape_js__WEBPACK_IMPORTED_MODULE_5__/* .escapeTerminal */ .en)(m.name),
+        (0,_escape_js__WEBPACK_IMPORTED_MODULE_7__/* .escapeTerminal */ .en)(m.name) + (0,_model_kind_js__WEBPACK_IMPORTED_MODULE_8__/* .kindMark */ .w6)(m),
         metric(m, 'holdout_rmse'),
         metric(m, 'gap_ratio'),
         metric(m, 'params_per_sample'),
@@ -41856,11 +43934,23 @@ function formatText(result, options = {}) {
         out.push('');
         out.push(modelHeader(m, color));
         if (m.error) {
-            out.push(`  ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_5__/* .escapeTerminal */ .en)(errorWhere(m) + m.error.message)}`);
+            out.push(`  ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_7__/* .escapeTerminal */ .en)(errorWhere(m) + m.error.message)}`);
             continue;
         }
+        const kind = (0,_model_kind_js__WEBPACK_IMPORTED_MODULE_8__/* .kindLine */ .J0)(m);
+        if (kind !== null)
+            out.push(`  ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_7__/* .escapeTerminal */ .en)(kind)}`);
+        const refit = (0,_refit_compare_js__WEBPACK_IMPORTED_MODULE_1__/* .refitCompareLine */ .C)(m);
+        if (refit !== null)
+            out.push(`  ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_7__/* .escapeTerminal */ .en)(refit)}`);
         if ((0,_classifier_figures_js__WEBPACK_IMPORTED_MODULE_0__/* .isClassifier */ .aA)(m))
-            out.push(`  ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_5__/* .escapeTerminal */ .en)((0,_classifier_figures_js__WEBPACK_IMPORTED_MODULE_0__/* .classifierLine */ .KT)(m))}`);
+            out.push(`  ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_7__/* .escapeTerminal */ .en)((0,_classifier_figures_js__WEBPACK_IMPORTED_MODULE_0__/* .classifierLine */ .KT)(m))}`);
+        const scale = (0,_target_scale_text_js__WEBPACK_IMPORTED_MODULE_4__/* .targetScaleSentence */ .tt)(m);
+        if (scale !== null) {
+            out.push(`  ${scale}:`);
+            for (const line of table([[..._target_scale_text_js__WEBPACK_IMPORTED_MODULE_4__/* .TARGET_SCALE_HEADINGS */ .x8], ...(0,_target_scale_text_js__WEBPACK_IMPORTED_MODULE_4__/* .targetScaleRows */ .rY)(m)], [false, true, true, true, true, true, true]))
+                out.push(`    ${line}`);
+        }
         for (const c of m.checks)
             if (verbose || c.status === 'fail' || c.status === 'warn')
                 out.push(checkLine(m, c, color));
@@ -41868,15 +43958,15 @@ function formatText(result, options = {}) {
     for (const m of result.models) {
         const previous = m.base?.status === 'renamed' ? m.base.previous : undefined;
         if (previous)
-            out.push('', `note: ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_5__/* .escapeTerminal */ .en)(m.name)} is compared with ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_5__/* .escapeTerminal */ .en)(previous.name)} (${(0,_escape_js__WEBPACK_IMPORTED_MODULE_5__/* .escapeTerminal */ .en)(previous.descriptor)}) of the base commit, found by its ${previous.matched_by === 'data' ? 'data files' : 'descriptor path'}`);
+            out.push('', `note: ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_7__/* .escapeTerminal */ .en)(m.name)} is compared with ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_7__/* .escapeTerminal */ .en)(previous.name)} (${(0,_escape_js__WEBPACK_IMPORTED_MODULE_7__/* .escapeTerminal */ .en)(previous.descriptor)}) of the base commit, found by its ${previous.matched_by === 'data' ? 'data files' : 'descriptor path'}`);
     }
     for (const note of result.notes)
-        out.push('', `note: ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_5__/* .escapeTerminal */ .en)(note)}`);
+        out.push('', `note: ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_7__/* .escapeTerminal */ .en)(note)}`);
     const { counts } = result;
     out.push('');
     out.push(`${paint(result.verdict.toUpperCase(), result.verdict, color)}: ${counts.models} model${counts.models === 1 ? '' : 's'}, ${counts.pass} passed, ${counts.warn} warned, ${counts.fail} failed, ${counts.error} could not be checked`);
     // Read by a CI runner when the CLI runs in a CI step: no line may hold a runner command.
-    return `${(0,_runner_commands_js__WEBPACK_IMPORTED_MODULE_2__/* .neutraliseLog */ .Z$)(out.join('\n'))}\n`;
+    return `${(0,_runner_commands_js__WEBPACK_IMPORTED_MODULE_3__/* .neutraliseLog */ .Z$)(out.join('\n'))}\n`;
 }
 
 
@@ -41978,11 +44068,21 @@ function exitStatus(result, failOn = 'fail') {
 /* harmony export */   rq: () => (/* binding */ matchBase),
 /* harmony export */   te: () => (/* binding */ compareWithBase)
 /* harmony export */ });
-/* harmony import */ var _result_result_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(1628);
+/* harmony import */ var _config_data_paths_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(8761);
+/* harmony import */ var _result_result_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(1628);
 
-/** The data files and target of a descriptor, as one key (`train`, `holdout`, `target`). */
+
+/**
+ * The data files and target of a descriptor, as one key (`train`, `holdout`, `target`); a side
+ * read from parts is the list of all its parts (so that a model whose parts change is not matched
+ * by its first part alone).
+ */
 function dataKey(descriptor) {
-    return JSON.stringify([descriptor.data.train, descriptor.data.holdout, descriptor.data.target]);
+    const side = (which) => {
+        const files = (0,_config_data_paths_js__WEBPACK_IMPORTED_MODULE_0__/* .dataFiles */ .qy)(descriptor.data, which);
+        return (which === 'train' ? descriptor.data.trainParts : descriptor.data.holdoutParts) === undefined ? files[0] : files;
+    };
+    return JSON.stringify([side('train'), side('holdout'), descriptor.data.target]);
 }
 /**
  * Pairs head models with base models, in three rounds, each base model used at most once:
@@ -42051,17 +44151,26 @@ function relativeChange(head, base) {
  * that could not be read has its path for a name; matched by that path it is `compared`.
  */
 function compareWithBase(metrics, match, commit) {
+    const classifier = metrics.task === 'classification';
     if (match === null) {
-        return { status: 'new', commit, holdout_rmse: null, gap_ratio: null, holdout_rmse_change: null, gap_ratio_change: null };
+        return {
+            status: 'new',
+            commit,
+            holdout_rmse: null,
+            gap_ratio: null,
+            holdout_rmse_change: null,
+            gap_ratio_change: null,
+            ...(classifier ? { holdout_log_loss: null, holdout_log_loss_change: null } : {}),
+        };
     }
     const baseline = match.model;
     const unreadable = baseline.error !== null && baseline.name === baseline.descriptor;
     const renamed = match.by !== 'name' && !unreadable;
     const b = baseline.metrics;
-    const headRmse = (0,_result_result_js__WEBPACK_IMPORTED_MODULE_0__/* .fromJsonNumber */ .M)(metrics.holdout_rmse);
-    const headGap = (0,_result_result_js__WEBPACK_IMPORTED_MODULE_0__/* .fromJsonNumber */ .M)(metrics.gap_ratio);
-    const baseRmse = b ? (0,_result_result_js__WEBPACK_IMPORTED_MODULE_0__/* .fromJsonNumber */ .M)(b.holdout_rmse) : Number.NaN;
-    const baseGap = b ? (0,_result_result_js__WEBPACK_IMPORTED_MODULE_0__/* .fromJsonNumber */ .M)(b.gap_ratio) : Number.NaN;
+    const headRmse = (0,_result_result_js__WEBPACK_IMPORTED_MODULE_1__/* .fromJsonNumber */ .M)(metrics.holdout_rmse);
+    const headGap = (0,_result_result_js__WEBPACK_IMPORTED_MODULE_1__/* .fromJsonNumber */ .M)(metrics.gap_ratio);
+    const baseRmse = b ? (0,_result_result_js__WEBPACK_IMPORTED_MODULE_1__/* .fromJsonNumber */ .M)(b.holdout_rmse) : Number.NaN;
+    const baseGap = b ? (0,_result_result_js__WEBPACK_IMPORTED_MODULE_1__/* .fromJsonNumber */ .M)(b.gap_ratio) : Number.NaN;
     const rmseChange = relativeChange(headRmse, baseRmse);
     const gapChange = Number.isNaN(headGap) || Number.isNaN(baseGap) ? null : headGap - baseGap;
     return {
@@ -42072,15 +44181,34 @@ function compareWithBase(metrics, match, commit) {
             : {}),
         holdout_rmse: b ? b.holdout_rmse : null,
         gap_ratio: b ? b.gap_ratio : null,
-        holdout_rmse_change: rmseChange === null ? null : (0,_result_result_js__WEBPACK_IMPORTED_MODULE_0__/* .jsonNumber */ .qj)(rmseChange),
-        gap_ratio_change: gapChange === null ? null : (0,_result_result_js__WEBPACK_IMPORTED_MODULE_0__/* .jsonNumber */ .qj)(gapChange),
+        holdout_rmse_change: rmseChange === null ? null : (0,_result_result_js__WEBPACK_IMPORTED_MODULE_1__/* .jsonNumber */ .qj)(rmseChange),
+        gap_ratio_change: gapChange === null ? null : (0,_result_result_js__WEBPACK_IMPORTED_MODULE_1__/* .jsonNumber */ .qj)(gapChange),
+        ...(classifier ? logLossComparison(metrics, b) : {}),
+    };
+}
+/** A figure of a metrics record as a number: NaN when absent or not a number. */
+function figure(metrics, key) {
+    const v = metrics?.[key];
+    return typeof v === 'number' || v === 'Infinity' || v === '-Infinity' || v === 'NaN' ? (0,_result_result_js__WEBPACK_IMPORTED_MODULE_1__/* .fromJsonNumber */ .M)(v) : Number.NaN;
+}
+/**
+ * A classifier's hold-out log-loss on the base commit and its relative change (the figure of
+ * `base-change` for classifiers). A base model that was not a classifier (or not checked) has no
+ * log-loss: both null.
+ */
+function logLossComparison(metrics, base) {
+    const baseLoss = base?.task === 'classification' ? figure(base, 'holdout_log_loss') : Number.NaN;
+    const change = relativeChange(figure(metrics, 'holdout_log_loss'), baseLoss);
+    return {
+        holdout_log_loss: Number.isNaN(baseLoss) ? null : (0,_result_result_js__WEBPACK_IMPORTED_MODULE_1__/* .jsonNumber */ .qj)(baseLoss),
+        holdout_log_loss_change: change === null ? null : (0,_result_result_js__WEBPACK_IMPORTED_MODULE_1__/* .jsonNumber */ .qj)(change),
     };
 }
 
 
 /***/ }),
 
-/***/ 6418:
+/***/ 8171:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -42091,10 +44219,10 @@ __nccwpck_require__.d(__webpack_exports__, {
 
 // UNUSED EXPORTS: settingsNote
 
-// EXTERNAL MODULE: ./src/core/errors.ts
-var core_errors = __nccwpck_require__(4296);
 // EXTERNAL MODULE: ./src/repo/repo-path.ts
 var repo_path = __nccwpck_require__(3856);
+// EXTERNAL MODULE: ./src/config/data-paths.ts
+var data_paths = __nccwpck_require__(8761);
 // EXTERNAL MODULE: ./src/config/generated/limit-keys.ts
 var limit_keys = __nccwpck_require__(7672);
 ;// CONCATENATED MODULE: ./src/config/limits.ts
@@ -42210,6 +44338,22 @@ function assertThreshold(x) {
     if (typeof x !== 'number' || !Number.isFinite(x))
         throw new RangeError(`limit threshold must be a finite number, got ${String(x)}`);
 }
+/** The default < settings layers of each settings file, made once per run (every descriptor starts from them). */
+const RUN_LIMITS = new WeakMap();
+/** Built-in defaults < settings file, key by key; each Limit frozen, as every descriptor of the run shares it. */
+function runLimits(settings) {
+    let limits = RUN_LIMITS.get(settings);
+    if (limits === undefined) {
+        const merged = {};
+        for (const { key, defaultSpec, direction } of limit_keys/* LIMIT_KEYS */.n)
+            merged[key] = Object.freeze(toLimit(defaultSpec, direction, 'default', null));
+        for (const [key, { spec }] of Object.entries(settings.limits))
+            merged[key] = Object.freeze(toLimit(spec, limitDirection(key), 'settings', null));
+        limits = Object.freeze(merged);
+        RUN_LIMITS.set(settings, limits);
+    }
+    return limits;
+}
 /**
  * Merges limits key by key: built-in default < settings file < descriptor. A layer that
  * sets a key replaces the whole limit of the layer below (no mixing of `warn` from one
@@ -42220,376 +44364,14 @@ function assertThreshold(x) {
  * @returns one {@link Limit} per known key plus any further key a layer sets
  */
 function mergeLimits(settings, descriptorLimits) {
-    const merged = {};
-    for (const { key, defaultSpec, direction } of limit_keys/* LIMIT_KEYS */.n)
-        merged[key] = toLimit(defaultSpec, direction, 'default', null);
-    for (const [key, { spec }] of Object.entries(settings.limits))
-        merged[key] = toLimit(spec, limitDirection(key), 'settings', null);
+    const merged = { ...runLimits(settings) };
     for (const [key, { spec, line }] of Object.entries(descriptorLimits))
         merged[key] = toLimit(spec, limitDirection(key), 'descriptor', line);
     return merged;
 }
 
-;// CONCATENATED MODULE: ./src/core/nearest.ts
-/**
- * "Did you mean": the allowed word nearest to a mistyped one, by the optimal-string-alignment
- * distance (insertions, deletions, substitutions and swaps of two neighbours, each costing 1;
- * Damerau 1964, restricted form).
- */
-/** Words longer than this are not compared (the cost grows with the product of the lengths). */
-const MAX_LENGTH = 64;
-/**
- * Edit distance between `a` and `b` with adjacent swaps (optimal string alignment), or
- * `Infinity` when either is longer than 64 characters.
- */
-function editDistance(a, b) {
-    if (a.length > MAX_LENGTH || b.length > MAX_LENGTH)
-        return Number.POSITIVE_INFINITY;
-    const rows = a.length + 1;
-    const cols = b.length + 1;
-    const d = new Array(rows * cols).fill(0);
-    for (let i = 0; i < rows; i++)
-        d[i * cols] = i;
-    for (let j = 0; j < cols; j++)
-        d[j] = j;
-    for (let i = 1; i < rows; i++) {
-        for (let j = 1; j < cols; j++) {
-            const cost = a[i - 1] === b[j - 1] ? 0 : 1;
-            let best = Math.min(d[(i - 1) * cols + j] + 1, d[i * cols + j - 1] + 1, d[(i - 1) * cols + j - 1] + cost);
-            if (i > 1 && j > 1 && a[i - 1] === b[j - 2] && a[i - 2] === b[j - 1])
-                best = Math.min(best, d[(i - 2) * cols + j - 2] + 1);
-            d[i * cols + j] = best;
-        }
-    }
-    return d[rows * cols - 1];
-}
-/**
- * The candidate nearest to `word` (case ignored), when it is close enough to be a typo: at most
- * 1 edit for words of up to 4 characters, 2 up to 8, 3 beyond. Ties go to the earlier candidate.
- * Returns null when none is close enough or `word` is itself a candidate.
- */
-function nearestWord(word, candidates) {
-    const lower = word.toLowerCase();
-    const allowed = lower.length <= 4 ? 1 : lower.length <= 8 ? 2 : 3;
-    let best = null;
-    let bestDistance = allowed + 1;
-    for (const candidate of candidates) {
-        if (candidate === word)
-            return null;
-        const distance = editDistance(lower, candidate.toLowerCase());
-        if (distance < bestDistance) {
-            best = candidate;
-            bestDistance = distance;
-        }
-    }
-    return best;
-}
-
-// EXTERNAL MODULE: ./src/core/extremes.ts
-var extremes = __nccwpck_require__(398);
-;// CONCATENATED MODULE: ./src/config/schema-errors.ts
-/**
- * Turns ajv's validation errors into the one most useful {@link InputError}: the first problem
- * in document order (and within it the deepest), with the file, line, column, key path, the
- * bad value (quoted, cut) and what the schema expected.
- */
-
-
-
-/** Code of every schema violation. */
-const SCHEMA_ERROR_CODE = 'schema';
-/**
- * Formats a key path as written in messages: `terms[1].rbf.width`.
- *
- * @param path map keys and list indexes; the empty path gives the empty string
- */
-function formatKeyPath(path) {
-    let out = '';
-    for (const segment of path) {
-        if (typeof segment === 'number')
-            out += `[${segment}]`;
-        else
-            out += out === '' ? segment : `.${segment}`;
-    }
-    return out;
-}
-/**
- * An InputError at a key path of a parsed document.
- *
- * @param doc the parsed document (for positions)
- * @param file repository-relative path
- * @param code stable error code
- * @param path key path the problem is about
- * @param message what is wrong and what was expected
- * @param pointAt `value` (default) points at the value, `key` at the key, `parent` at the parent's key
- */
-function errorAt(doc, file, code, path, message, pointAt = 'value') {
-    const position = locate(doc, path, pointAt);
-    const key = formatKeyPath(path);
-    return new core_errors/* InputError */.dz(code, message, { file, ...(position ?? {}), ...(key !== '' ? { key } : {}) });
-}
-/** Quotes a user value for a message; non-finite numbers as YAML writes them. */
-function showValue(value) {
-    if (typeof value === 'number' && !Number.isFinite(value))
-        return Number.isNaN(value) ? '.nan' : value > 0 ? '.inf' : '-.inf';
-    if (value instanceof Uint8Array)
-        return 'binary data';
-    if (value === null)
-        return 'nothing (null)';
-    return (0,core_errors/* quoteValue */.cl)(value);
-}
-/**
- * The single most specific InputError for a failed validation.
- *
- * @param errors ajv errors (compiled with `allErrors` and `verbose`)
- * @param doc the parsed document the errors are about
- * @param file repository-relative path
- */
-function schemaError(errors, doc, file) {
-    const issues = resolveAlternatives(errors).flatMap((e) => toIssue(e, doc.value));
-    if (issues.length === 0)
-        return new core_errors/* InputError */.dz(SCHEMA_ERROR_CODE, 'does not match its schema', { file });
-    // First in document order; within its subtree, the deepest.
-    const placed = issues.map((issue, index) => ({ issue, index, at: locate(doc, issue.path, issue.pointAt) ?? { line: 0, column: 0 } }));
-    placed.sort((a, b) => a.at.line - b.at.line || a.at.column - b.at.column || a.index - b.index);
-    const first = placed[0];
-    let chosen = first;
-    for (const candidate of placed) {
-        if (isPrefix(first.issue.path, candidate.issue.path) && candidate.issue.path.length > chosen.issue.path.length)
-            chosen = candidate;
-    }
-    const { issue } = chosen;
-    return errorAt(doc, file, SCHEMA_ERROR_CODE, issue.path, issue.message, issue.pointAt);
-}
-function isPrefix(prefix, path) {
-    return prefix.length <= path.length && prefix.every((s, i) => s === path[i]);
-}
-function locate(doc, path, pointAt) {
-    let target = pointAt === 'parent' ? path.slice(0, -1) : path;
-    let position = pointAt === 'value' ? doc.valuePositionOf(target) : doc.positionOf(target);
-    while (position === null && target.length > 0) {
-        target = target.slice(0, -1);
-        position = doc.positionOf(target);
-    }
-    return position;
-}
-/** Replaces each failed oneOf/anyOf and its branch errors by the errors of the branch the user meant, or one "expected one of" error. */
-function resolveAlternatives(errors) {
-    const alternatives = errors
-        .filter((e) => e.keyword === 'oneOf' || e.keyword === 'anyOf')
-        .sort((a, b) => a.schemaPath.length - b.schemaPath.length);
-    if (alternatives.length === 0)
-        return errors;
-    const outer = alternatives[0];
-    const prefix = `${outer.schemaPath}/`;
-    const inside = errors.filter((e) => e.schemaPath.startsWith(prefix));
-    const rest = errors.filter((e) => e !== outer && !e.schemaPath.startsWith(prefix));
-    const branches = new Map();
-    for (const e of inside) {
-        const index = Number.parseInt(e.schemaPath.slice(prefix.length), 10);
-        branches.set(index, [...(branches.get(index) ?? []), e]);
-    }
-    const matchingType = [...branches.entries()].filter(([, list]) => !list.some((e) => e.instancePath === outer.instancePath && (e.keyword === 'type' || e.keyword === 'const' || e.keyword === 'enum')));
-    const score = (list) => [(0,extremes/* maxOf */._)(list.map((e) => effectiveDepth(e))), -list.length];
-    let best = null;
-    let tie = false;
-    for (const [, list] of matchingType) {
-        if (best === null) {
-            best = list;
-            continue;
-        }
-        const [d1, n1] = score(list);
-        const [d0, n0] = score(best);
-        if (d1 > d0 || (d1 === d0 && n1 > n0)) {
-            best = list;
-            tie = false;
-        }
-        else if (d1 === d0 && n1 === n0) {
-            tie = true;
-        }
-    }
-    const chosen = best !== null && !tie ? best : [alternativesError(outer)];
-    return resolveAlternatives([...rest, ...chosen]);
-}
-/** A stand-in error listing the forms of a failed oneOf/anyOf. */
-function alternativesError(outer) {
-    const forms = Array.isArray(outer.schema) ? outer.schema.map((s) => s.title ?? 'another form') : [];
-    return { ...outer, keyword: 'x-alternatives', params: { forms } };
-}
-function effectiveDepth(e) {
-    const depth = e.instancePath === '' ? 0 : e.instancePath.split('/').length - 1;
-    return e.keyword === 'required' || e.keyword === 'additionalProperties' || e.keyword === 'propertyNames' ? depth + 1 : depth;
-}
-/** JSON pointer to a key path; numbers where the data there is a list. */
-function pointerToPath(pointer, root) {
-    if (pointer === '')
-        return [];
-    const path = [];
-    let node = root;
-    for (const raw of pointer.slice(1).split('/')) {
-        const segment = raw.replace(/~1/g, '/').replace(/~0/g, '~');
-        if (Array.isArray(node)) {
-            const index = Number(segment);
-            path.push(index);
-            node = node[index];
-        }
-        else {
-            path.push(segment);
-            node = node !== null && typeof node === 'object' ? node[segment] : undefined;
-        }
-    }
-    return path;
-}
-const TYPE_WORDS = {
-    number: 'a number',
-    integer: 'an integer',
-    string: 'text',
-    object: 'a mapping (key: value)',
-    array: 'a list',
-    boolean: 'true or false',
-    null: 'nothing',
-};
-const PATTERN_WORDS = {
-    '^[A-Za-z0-9._-]+$': 'only letters, digits, `-`, `_` or `.`',
-};
-function orList(items) {
-    if (items.length <= 1)
-        return items.join('');
-    return `${items.slice(0, -1).join(', ')} or ${items[items.length - 1]}`;
-}
-function toIssue(e, root) {
-    const path = pointerToPath(e.instancePath, root);
-    const parent = (e.parentSchema ?? {});
-    const got = `got ${showValue(e.data)}`;
-    const params = e.params;
-    const keys = Object.keys(parent.properties ?? {});
-    const isTerm = Array.isArray(parent.propertyNames?.enum) && parent.maxProperties === 1;
-    const kinds = (parent.propertyNames?.enum ?? []).map(String);
-    switch (e.keyword) {
-        case 'type': {
-            const types = (Array.isArray(params.type) ? params.type : String(params.type).split(','));
-            let expected = orList(types.map((t) => TYPE_WORDS[t] ?? t));
-            if (typeof e.data === 'number' && !Number.isFinite(e.data))
-                expected = `a finite ${types.includes('integer') ? 'integer' : 'number'}`;
-            if (types.includes('object') && isTerm)
-                expected = `a mapping with one key, the term kind (${orList(kinds)})`;
-            else if (types.includes('object') && keys.length > 0)
-                expected += ` with keys among: ${keys.join(', ')}`;
-            return [{ path, pointAt: 'value', message: `expected ${expected}, ${got}` }];
-        }
-        case 'enum':
-            if (e.propertyName !== undefined)
-                return []; // reported by propertyNames
-            return [
-                { path, pointAt: 'value', message: `expected one of: ${params.allowedValues.map(String).join(', ')}, ${got}` },
-            ];
-        case 'const':
-            return [{ path, pointAt: 'value', message: `expected \`${(0,core_errors/* clip */.$Q)(String(params.allowedValue))}\`, ${got}` }];
-        case 'minimum':
-        case 'maximum':
-        case 'exclusiveMinimum':
-        case 'exclusiveMaximum':
-            return [{ path, pointAt: 'value', message: `expected ${boundsText(parent)}, ${got}` }];
-        case 'multipleOf':
-            return [{ path, pointAt: 'value', message: `expected a multiple of ${String(params.multipleOf)}, ${got}` }];
-        case 'minLength':
-            return [
-                {
-                    path,
-                    pointAt: 'value',
-                    message: `expected ${params.limit === 1 ? 'non-empty text' : `text of at least ${String(params.limit)} characters`}, ${got}`,
-                },
-            ];
-        case 'maxLength':
-            return [
-                {
-                    path,
-                    pointAt: 'value',
-                    message: `expected text of at most ${String(params.limit)} characters, got ${String(e.data).length} characters`,
-                },
-            ];
-        case 'pattern': {
-            const pattern = String(params.pattern);
-            return [{ path, pointAt: 'value', message: `expected ${PATTERN_WORDS[pattern] ?? `text matching ${pattern}`}, ${got}` }];
-        }
-        case 'minItems':
-            return [
-                {
-                    path,
-                    pointAt: 'value',
-                    message: `expected ${params.limit === 1 ? 'a non-empty list' : `a list of at least ${String(params.limit)} items`}, ${got}`,
-                },
-            ];
-        case 'maxItems':
-            return [
-                {
-                    path,
-                    pointAt: 'value',
-                    message: `expected a list of at most ${String(params.limit)} items, got ${Array.isArray(e.data) ? e.data.length : '?'} items`,
-                },
-            ];
-        case 'required': {
-            const missing = String(params.missingProperty);
-            // A key present but not allowed that is a near miss of the missing one is the likely typo.
-            const present = e.data !== null && typeof e.data === 'object' && !Array.isArray(e.data) ? Object.keys(e.data).filter((k) => !keys.includes(k)) : [];
-            const typo = present.find((k) => nearestWord(k, [missing]) === missing);
-            const hint = typo !== undefined ? ` (did you mean \`${missing}\` instead of ${(0,core_errors/* quoteValue */.cl)(typo, 40)}?)` : '';
-            return [
-                {
-                    path: [...path, missing],
-                    pointAt: 'parent',
-                    message: `missing key \`${(0,core_errors/* clip */.$Q)(missing)}\`${hint}; required keys: ${(parent.required ?? [missing]).join(', ')}`,
-                },
-            ];
-        }
-        case 'additionalProperties': {
-            const extra = String(params.additionalProperty);
-            const near = nearestWord(extra, keys);
-            const hint = near !== null ? ` (did you mean \`${near}\`?)` : '';
-            return [
-                { path: [...path, extra], pointAt: 'key', message: `unknown key \`${(0,core_errors/* clip */.$Q)(extra)}\`${hint}; expected one of: ${keys.join(', ')}` },
-            ];
-        }
-        case 'propertyNames': {
-            const name = String(params.propertyName);
-            const what = isTerm ? 'term kind' : 'key';
-            return [
-                { path: [...path, name], pointAt: 'key', message: `unknown ${what} \`${(0,core_errors/* clip */.$Q)(name)}\`; expected one of: ${kinds.join(', ')}` },
-            ];
-        }
-        case 'minProperties':
-        case 'maxProperties': {
-            const present = e.data !== null && typeof e.data === 'object' ? Object.keys(e.data) : [];
-            if (isTerm) {
-                const has = present.length === 0 ? 'no key' : `${present.length} keys (${present.join(', ')})`;
-                return [{ path, pointAt: 'value', message: `a term has exactly one key, the term kind (${orList(kinds)}); got ${has}` }];
-            }
-            return [{ path, pointAt: 'value', message: `expected at least one of: ${keys.join(', ')}, ${got}` }];
-        }
-        case 'x-alternatives':
-            return [{ path, pointAt: 'value', message: `expected one of: ${orList(params.forms)}, ${got}` }];
-        case 'oneOf':
-            return [{ path, pointAt: 'value', message: `matches more than one form; ${got}` }];
-        default:
-            return [{ path, pointAt: 'value', message: `${e.message ?? 'is not valid'}, ${got}` }];
-    }
-}
-function boundsText(schema) {
-    const what = schema.type === 'integer' ? 'an integer' : 'a number';
-    const parts = [];
-    if (schema.minimum !== undefined && schema.maximum !== undefined)
-        return `${what} from ${schema.minimum} to ${schema.maximum}`;
-    if (schema.minimum !== undefined)
-        parts.push(`>= ${schema.minimum}`);
-    if (schema.exclusiveMinimum !== undefined)
-        parts.push(`> ${schema.exclusiveMinimum}`);
-    if (schema.maximum !== undefined)
-        parts.push(`<= ${schema.maximum}`);
-    if (schema.exclusiveMaximum !== undefined)
-        parts.push(`< ${schema.exclusiveMaximum}`);
-    return `${what} ${parts.join(' and ')}`;
-}
-
+// EXTERNAL MODULE: ./src/config/schema-errors.ts + 1 modules
+var schema_errors = __nccwpck_require__(1288);
 ;// CONCATENATED MODULE: ./src/config/schema/descriptor.schema.json
 const descriptor_schema_namespaceObject = {};
 ;// CONCATENATED MODULE: ./src/config/schema/settings.schema.json
@@ -43426,7 +45208,7 @@ function validate52(data, { instancePath = "", parentData, parentDataProperty, r
 }
 validate52.evaluated = { "props": true, "dynamicProps": false, "dynamicItems": false };
 const validateDescriptor = validate75;
-const schema22 = { "$schema": "https://json-schema.org/draft/2020-12/schema", "$id": "urn:fitgate:schema:descriptor:1", "title": "fitgate model descriptor (*.model.yml)", "description": "One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.", "type": "object", "required": ["version", "name", "data", "terms"], "additionalProperties": false, "properties": { "version": { "description": "Version of this file format. Always 1.", "const": 1 }, "name": { "description": "Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.", "type": "string", "minLength": 1, "maxLength": 100, "pattern": "^[A-Za-z0-9._-]+$" }, "task": { "description": "Kind of model: `regression` (a number) or `classification` (binary: the target holds two classes, 0/1, true/false or two text labels with `data.positive`).", "enum": ["regression", "classification"], "default": "regression" }, "data": { "description": "The committed data: CSV paths relative to this file (never outside the repository) and the target column.", "type": "object", "required": ["train", "target"], "additionalProperties": false, "properties": { "train": { "description": "Training CSV, relative to this descriptor's folder (with `split`: the one file holding both training and hold-out rows).", "type": "string", "minLength": 1 }, "holdout": { "description": "Hold-out CSV, relative to this descriptor's folder. Required unless `split` is given (then not allowed).", "type": "string", "minLength": 1 }, "separator": { "description": "Field separator: `auto` (default: detected from the header line among comma, semicolon and tab), or one of `,`, `;`, a tab.", "enum": ["auto", ",", ";", "\t"], "default": "auto" }, "decimal": { "description": "Decimal mark of number cells: `.` (default) or `,` (then the separator must be a semicolon or a tab).", "enum": [".", ","], "default": "." }, "missing": { "description": "What an empty or NA-like cell in a used column does: `error` (default) stops the run; `drop` drops the row and counts it in the report.", "enum": ["error", "drop"], "default": "error" }, "split": { "description": "One file with a split column instead of two files: rows whose `column` cell is `train` are training rows, rows with `holdout` are hold-out rows; any other label is an error.", "type": "object", "required": ["column", "train", "holdout"], "additionalProperties": false, "properties": { "column": { "description": "Header name of the split column.", "type": "string", "minLength": 1 }, "train": { "description": "Label of the training rows.", "type": "string", "minLength": 1 }, "holdout": { "description": "Label of the hold-out rows (different from `train`).", "type": "string", "minLength": 1 } } }, "target": { "description": "Name of the column to predict.", "type": "string", "minLength": 1 }, "positive": { "description": "Classification: the label of the positive class when the target holds two text labels (required then).", "type": "string", "minLength": 1 }, "weight": { "description": "Column of non-negative row weights w: weighted least squares, minimising sum w (y - f)^2. Not together with `sigma`.", "type": "string", "minLength": 1 }, "sigma": { "description": "Column of standard uncertainties sigma > 0 of the target: weighted least squares with w = 1 / sigma^2, and the `chi-square` check. Not together with `weight`.", "type": "string", "minLength": 1 } } }, "terms": { "description": "The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.", "type": "array", "minItems": 1, "items": { "$ref": "#/$defs/term", "description": "One term: `linear`, `polynomial`, `rbf`, `fourier`, `spline` or `category`." } }, "fit": { "description": "How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.", "type": "object", "additionalProperties": false, "properties": { "intercept": { "description": "Add a column of ones first (not penalised by `ridge`).", "type": "boolean", "default": true }, "refit": { "description": "Refit the model from its training rows (true) or score the shipped `coefficients` only (false: the checks judge the shipped model; cross-validation, complexity and reproducibility, which need a refit, are skipped).", "type": "boolean", "default": true }, "ridge": { "description": "L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.", "type": "number", "minimum": 0, "default": 0 }, "folds": { "description": "k of k-fold cross-validation: the training rows are split into this many folds (2 to 50). At most 50: every fold keeps two p x p factors and needs its own solve, so memory and time grow with k, while the estimate changes little beyond 10 to 20 folds (common practice: 5 or 10); leave-one-out, the limit of many folds, is computed exactly from the leverages of the fit whatever k is.", "type": "integer", "minimum": 2, "maximum": 50, "default": 5 }, "fold_order": { "description": "How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).", "enum": ["shuffled", "blocks"], "default": "shuffled" }, "seed": { "description": "Seed of the fold shuffle and of any other random step, so runs repeat exactly.", "type": "integer", "minimum": 0, "maximum": 4294967295, "default": 1 }, "parameter_count": { "description": "What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).", "enum": ["columns", "effective"], "default": "columns" }, "threshold": { "description": "Classification: a row is predicted positive when its probability is at least this (for accuracy).", "type": "number", "exclusiveMinimum": 0, "exclusiveMaximum": 1, "default": 0.5 } } }, "coefficients": { "description": "The shipped coefficients: intercept first (when there is one), then each term's columns in order.", "type": "array", "minItems": 1, "items": { "description": "One coefficient (a finite number).", "type": "number" } }, "limits": { "$ref": "#/$defs/limits", "description": "This model's own limits; they win over the settings file key by key." } }, "$defs": { "term": { "title": "term", "description": "One term of the design: a mapping with exactly one key, the term kind.", "type": "object", "minProperties": 1, "maxProperties": 1, "propertyNames": { "enum": ["linear", "polynomial", "rbf", "fourier", "spline", "category"] }, "properties": { "linear": { "description": "The columns as they are: one design column per listed data column.", "type": "array", "minItems": 1, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }, "polynomial": { "description": "Powers z^1 .. z^degree of z = (x - shift) / scale; with several inputs (`of: [a, b]`) every monomial of total degree 1 .. degree in their z.", "type": "object", "required": ["of", "degree"], "additionalProperties": false, "properties": { "of": { "description": "The data column x, or a list of 2 to 10 distinct columns for every monomial over them.", "oneOf": [{ "type": "string", "minLength": 1 }, { "type": "array", "minItems": 2, "maxItems": 10, "uniqueItems": true, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }] }, "degree": { "description": "Highest power, 1 to 30.", "type": "integer", "minimum": 1, "maximum": 30 }, "shift": { "description": "Subtracted from x before scaling (a list: one per input). Default: the training mean of x; 0 with scale 1 gives raw powers.", "oneOf": [{ "type": "number" }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The shift of one input.", "type": "number" } }] }, "scale": { "description": "Divides x - shift (a list: one per input). Default: the training population standard deviation of x. Must be > 0.", "oneOf": [{ "type": "number", "exclusiveMinimum": 0 }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The scale of one input, > 0.", "type": "number", "exclusiveMinimum": 0 } }] }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "rbf": { "description": "Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c; with several inputs (`of: [a, b]`) isotropic Gaussians on the standardised inputs.", "type": "object", "required": ["of", "centers", "width"], "additionalProperties": false, "properties": { "of": { "description": "The data column x, or a list of 2 to 10 distinct columns.", "oneOf": [{ "type": "string", "minLength": 1 }, { "type": "array", "minItems": 2, "maxItems": 10, "uniqueItems": true, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }] }, "centers": { "description": "The centres: for one input a list, { from, to, count }, { from, to, step } or `at-samples`; for several inputs a list of rows (one value per input), a grid (one { from, to, count } per input) or `at-samples`.", "oneOf": [{ "$ref": "#/$defs/centers" }, { "type": "array", "minItems": 1, "maxItems": 10000, "items": { "description": "One centre: a value per input, in the order of `of`.", "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The centre's value of one input.", "type": "number" } } }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The grid along one input: count evenly spaced values from `from` to `to`.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First value.", "type": "number" }, "to": { "description": "Last value.", "type": "number" }, "count": { "description": "Values along this input, 1 to 100.", "type": "integer", "minimum": 1, "maximum": 100 } } } }] }, "width": { "description": "Width (standard deviation) of each Gaussian, > 0.", "type": "number", "exclusiveMinimum": 0 }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "fourier": { "description": "Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.", "type": "object", "required": ["of", "period", "harmonics"], "additionalProperties": false, "properties": { "of": { "description": "The data column x (e.g. a day number).", "type": "string", "minLength": 1 }, "period": { "description": "Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).", "type": "number", "exclusiveMinimum": 0 }, "harmonics": { "description": "Number of sin/cos pairs, 1 to 50.", "type": "integer", "minimum": 1, "maximum": 50 }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "spline": { "description": "A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).", "type": "object", "required": ["of", "knots"], "additionalProperties": false, "properties": { "of": { "description": "The data column x.", "type": "string", "minLength": 1 }, "knots": { "description": "Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).", "oneOf": [{ "type": "array", "minItems": 1, "maxItems": 100, "items": { "type": "number", "description": "An interior knot, in the units of x." } }, { "type": "object", "required": ["count"], "additionalProperties": false, "properties": { "count": { "description": "Number of interior knots, 1 to 100.", "type": "integer", "minimum": 1, "maximum": 100 } } }] }, "degree": { "description": "Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).", "type": "integer", "minimum": 1, "maximum": 5, "default": 3 }, "natural": { "description": "Natural cubic splines: linear beyond the boundary knots. Default false.", "type": "boolean", "default": false }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "category": { "description": "Indicator columns of a text column's levels: one per level seen in the training rows but the reference level.", "type": "object", "required": ["of"], "additionalProperties": false, "properties": { "of": { "description": "The data column; its cells are read as text (levels), even when they look like numbers.", "type": "string", "minLength": 1 }, "reference": { "description": "The reference level (no column; the intercept carries it). Default: the most frequent training level, ties by text order. A number is read as its text (`reference: 7` is the level `7`; write `\"07\"` for `07`).", "oneOf": [{ "type": "string" }, { "type": "number" }] }, "unseen": { "description": "A hold-out level no training row has: `error` (default: the model's error names level, file and line) or `zero` (every indicator 0: predicted as the reference level).", "enum": ["error", "zero"], "default": "error" } } } } }, "centers": { "title": "centers", "description": "Centres of Gaussian radial basis columns.", "oneOf": [{ "title": "a list of numbers", "description": "The centres as listed.", "type": "array", "minItems": 1, "items": { "description": "One centre.", "type": "number" } }, { "title": "{ from, to, count }", "description": "`count` evenly spaced centres from `from` to `to`, both included.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Last centre (>= from).", "type": "number" }, "count": { "description": "Number of centres, 1 to 10000.", "type": "integer", "minimum": 1, "maximum": 10000 } } }, { "title": "{ from, to, step }", "description": "Centres from `from` every `step` up to `to` (included when it falls on a step).", "type": "object", "required": ["from", "to", "step"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Upper end (>= from).", "type": "number" }, "step": { "description": "Distance between centres, > 0 (at most 10000 centres).", "type": "number", "exclusiveMinimum": 0 } } }, { "title": "`at-samples`", "description": "One centre at each training row's value of x.", "const": "at-samples" }] }, "limits": { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "swing_spikes": { "$ref": "#/$defs/limit", "description": "Total variation of the predictions between the training samples divided by the training targets' own total variation.", "default": { "warn": 1.5, "fail": 2 } }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } }, "holdout_r2": { "$ref": "#/$defs/limit", "description": "Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.", "default": "off" }, "holdout_rmse": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE in the target's units.", "default": "off" }, "holdout_mae": { "$ref": "#/$defs/limit", "description": "Hold-out mean absolute error in the target's units.", "default": "off" }, "chi_square": { "$ref": "#/$defs/limit", "description": "Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).", "default": { "warn_below": 0.5, "warn_above": 2 } }, "separation": { "$ref": "#/$defs/limit", "description": "Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.", "default": { "warn": 0, "fail": 1 } }, "events_per_parameter": { "$ref": "#/$defs/limit", "description": "Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.", "default": 10 }, "calibration_slope": { "$ref": "#/$defs/limit", "description": "Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.", "default": { "warn": 0.8, "fail": 0.6 } } } }, "limit": { "title": "limit", "description": "A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail beyond it)", "description": "Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 } } }, { "title": "{ warn_below, fail_below, warn_above, fail_above }", "description": "Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn_below": { "description": "Warn when the figure is below this number.", "type": "number" }, "fail_below": { "description": "Fail when the figure is below this number.", "type": "number" }, "warn_above": { "description": "Warn when the figure is above this number.", "type": "number" }, "fail_above": { "description": "Fail when the figure is above this number.", "type": "number" } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] } } };
+const schema22 = { "$schema": "https://json-schema.org/draft/2020-12/schema", "$id": "urn:fitgate:schema:descriptor:1", "title": "fitgate model descriptor (*.model.yml)", "description": "One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.", "type": "object", "required": ["version", "name", "data"], "additionalProperties": false, "properties": { "version": { "description": "Version of this file format. Always 1.", "const": 1 }, "name": { "description": "Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.", "type": "string", "minLength": 1, "maxLength": 100, "pattern": "^[A-Za-z0-9._-]+$" }, "task": { "description": "Kind of model: `regression` (a number) or `classification` (binary: the target holds two classes, 0/1, true/false or two text labels with `data.positive`).", "enum": ["regression", "classification"], "default": "regression" }, "data": { "description": "The committed data: CSV paths relative to this file (never outside the repository) and the target column.", "type": "object", "required": ["train", "target"], "additionalProperties": false, "properties": { "train": { "description": "Training CSV, relative to this descriptor's folder (with `split`: the one file holding both training and hold-out rows); or its parts: a list of paths, or a glob (`train/part-*.csv.gz`), read in code-point order of their paths as one table.", "anyOf": [{ "type": "string", "minLength": 1 }, { "type": "array", "minItems": 1, "maxItems": 1000, "items": { "type": "string", "minLength": 1 } }] }, "holdout": { "description": "Hold-out CSV, relative to this descriptor's folder, or its parts (as for `train`). Required unless `split` is given (then not allowed).", "anyOf": [{ "type": "string", "minLength": 1 }, { "type": "array", "minItems": 1, "maxItems": 1000, "items": { "type": "string", "minLength": 1 } }] }, "separator": { "description": "Field separator: `auto` (default: detected from the header line among comma, semicolon and tab), or one of `,`, `;`, a tab.", "enum": ["auto", ",", ";", "\t"], "default": "auto" }, "decimal": { "description": "Decimal mark of number cells: `.` (default) or `,` (then the separator must be a semicolon or a tab).", "enum": [".", ","], "default": "." }, "missing": { "description": "What an empty or NA-like cell in a used column does: `error` (default) stops the run; `drop` drops the row and counts it in the report.", "enum": ["error", "drop"], "default": "error" }, "split": { "description": "One file with a split column instead of two files: rows whose `column` cell is `train` are training rows, rows with `holdout` are hold-out rows; any other label is an error.", "type": "object", "required": ["column", "train", "holdout"], "additionalProperties": false, "properties": { "column": { "description": "Header name of the split column.", "type": "string", "minLength": 1 }, "train": { "description": "Label of the training rows.", "type": "string", "minLength": 1 }, "holdout": { "description": "Label of the hold-out rows (different from `train`).", "type": "string", "minLength": 1 } } }, "target": { "description": "Name of the column to predict.", "type": "string", "minLength": 1 }, "positive": { "description": "Classification: the label of the positive class when the target holds two text labels (required then).", "type": "string", "minLength": 1 }, "weight": { "description": "Column of non-negative row weights w: weighted least squares, minimising sum w (y - f)^2. Not together with `sigma`.", "type": "string", "minLength": 1 }, "sigma": { "description": "Column of standard uncertainties sigma > 0 of the target: weighted least squares with w = 1 / sigma^2, and the `chi-square` check. Not together with `weight`.", "type": "string", "minLength": 1 }, "target_transform": { "description": "Transform of the target before the fit: `log` (y > 0), `log1p` (y > -1) or `sqrt` (y >= 0). The model is fitted on the transformed target; figures are reported on both scales (the original one by back-transforming predictions). Regression only.", "enum": ["log", "log1p", "sqrt"] }, "limits_scale": { "description": "With `target_transform`: the scale the error limits apply to, `original` (default: back-transformed predictions against the target as written) or `transformed` (the scale of the fit).", "enum": ["original", "transformed"], "default": "original" } } }, "terms": { "description": "The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.", "type": "array", "minItems": 1, "items": { "$ref": "#/$defs/term", "description": "One term: `linear`, `polynomial`, `rbf`, `fourier`, `spline` or `category`." } }, "fit": { "description": "How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.", "type": "object", "additionalProperties": false, "properties": { "intercept": { "description": "Add a column of ones first (not penalised by `ridge`).", "type": "boolean", "default": true }, "refit": { "description": "Refit the model from its training rows (true) or score the shipped `coefficients` only (false: the checks judge the shipped model; cross-validation, complexity and reproducibility, which need a refit, are skipped).", "type": "boolean", "default": true }, "ridge": { "description": "L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.", "type": "number", "minimum": 0, "default": 0 }, "folds": { "description": "k of k-fold cross-validation: the training rows are split into this many folds (2 to 50). At most 50: every fold keeps two p x p factors and needs its own solve, so memory and time grow with k, while the estimate changes little beyond 10 to 20 folds (common practice: 5 or 10); leave-one-out, the limit of many folds, is computed exactly from the leverages of the fit whatever k is.", "type": "integer", "minimum": 2, "maximum": 50, "default": 5 }, "fold_order": { "description": "How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).", "enum": ["shuffled", "blocks"], "default": "shuffled" }, "seed": { "description": "Seed of the fold shuffle and of any other random step, so runs repeat exactly.", "type": "integer", "minimum": 0, "maximum": 4294967295, "default": 1 }, "parameter_count": { "description": "What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).", "enum": ["columns", "effective"], "default": "columns" }, "threshold": { "description": "Classification: a row is predicted positive when its probability is at least this (for accuracy).", "type": "number", "exclusiveMinimum": 0, "exclusiveMaximum": 1, "default": 0.5 }, "refit_compare": { "description": "With `refit: false`: also refit the model from its training rows and report the refit's figures (training and hold-out RMSE, k-fold CV RMSE) beside the shipped model's, as information (metrics `refit_*`); no check judges them.", "type": "boolean", "default": false } } }, "coefficients": { "description": "The shipped coefficients: intercept first (when there is one), then each term's columns in order.", "type": "array", "minItems": 1, "items": { "description": "One coefficient (a finite number).", "type": "number" } }, "limits": { "$ref": "#/$defs/limits", "description": "This model's own limits; they win over the settings file key by key." }, "predictions": { "description": "A model trained elsewhere (fitgate cannot refit it): where its predictions of the training and hold-out rows are. Instead of `terms` (not together with `terms`, `coefficients` or `data.weight`/`data.sigma`). Checks that need only predictions run; those that need a refit or coefficients are skipped with a reason.", "type": "object", "required": ["train", "holdout"], "additionalProperties": false, "properties": { "train": { "$ref": "#/$defs/predictionSource", "description": "Predictions of the training rows." }, "holdout": { "$ref": "#/$defs/predictionSource", "description": "Predictions of the hold-out rows." }, "inputs": { "description": "The model's input columns (in the data files), for the `leakage` check; without them `leakage` is skipped.", "type": "array", "minItems": 1, "maxItems": 1000, "items": { "description": "A column name of the data files.", "type": "string", "minLength": 1 } } } }, "parameters": { "description": "The number of parameters of a model trained elsewhere (`predictions`), when it can be stated; enables `parameter-ratio` (and `events-per-parameter` for classifiers).", "type": "integer", "minimum": 1, "maximum": 1000000000000 } }, "$defs": { "predictionSource": { "title": "predictions source", "description": "`{ column }`: a column of the data file itself; `{ file, column }`: a column of a side CSV (relative to this descriptor's folder) whose rows go with the data file's rows in order; `{ file, key, column }`: the same, rows matched by a key column that both files hold. Regression: predicted values; classification: probabilities of the positive class in [0, 1].", "type": "object", "required": ["column"], "additionalProperties": false, "properties": { "column": { "description": "Column holding the predictions.", "type": "string", "minLength": 1 }, "file": { "description": "Side CSV holding the predictions, relative to this descriptor's folder (never outside the repository).", "type": "string", "minLength": 1 }, "key": { "description": "Row key column held by both the data file and the side file (unique in each); only with `file`.", "type": "string", "minLength": 1 } } }, "term": { "title": "term", "description": "One term of the design: a mapping with exactly one key, the term kind.", "type": "object", "minProperties": 1, "maxProperties": 1, "propertyNames": { "enum": ["linear", "polynomial", "rbf", "fourier", "spline", "category"] }, "properties": { "linear": { "description": "The columns as they are: one design column per listed data column.", "type": "array", "minItems": 1, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }, "polynomial": { "description": "Powers z^1 .. z^degree of z = (x - shift) / scale; with several inputs (`of: [a, b]`) every monomial of total degree 1 .. degree in their z.", "type": "object", "required": ["of", "degree"], "additionalProperties": false, "properties": { "of": { "description": "The data column x, or a list of 2 to 10 distinct columns for every monomial over them.", "oneOf": [{ "type": "string", "minLength": 1 }, { "type": "array", "minItems": 2, "maxItems": 10, "uniqueItems": true, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }] }, "degree": { "description": "Highest power, 1 to 30.", "type": "integer", "minimum": 1, "maximum": 30 }, "shift": { "description": "Subtracted from x before scaling (a list: one per input). Default: the training mean of x; 0 with scale 1 gives raw powers.", "oneOf": [{ "type": "number" }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The shift of one input.", "type": "number" } }] }, "scale": { "description": "Divides x - shift (a list: one per input). Default: the training population standard deviation of x. Must be > 0.", "oneOf": [{ "type": "number", "exclusiveMinimum": 0 }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The scale of one input, > 0.", "type": "number", "exclusiveMinimum": 0 } }] }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "rbf": { "description": "Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c; with several inputs (`of: [a, b]`) isotropic Gaussians on the standardised inputs.", "type": "object", "required": ["of", "centers", "width"], "additionalProperties": false, "properties": { "of": { "description": "The data column x, or a list of 2 to 10 distinct columns.", "oneOf": [{ "type": "string", "minLength": 1 }, { "type": "array", "minItems": 2, "maxItems": 10, "uniqueItems": true, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }] }, "centers": { "description": "The centres: for one input a list, { from, to, count }, { from, to, step } or `at-samples`; for several inputs a list of rows (one value per input), a grid (one { from, to, count } per input) or `at-samples`.", "oneOf": [{ "$ref": "#/$defs/centers" }, { "type": "array", "minItems": 1, "maxItems": 10000, "items": { "description": "One centre: a value per input, in the order of `of`.", "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The centre's value of one input.", "type": "number" } } }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The grid along one input: count evenly spaced values from `from` to `to`.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First value.", "type": "number" }, "to": { "description": "Last value.", "type": "number" }, "count": { "description": "Values along this input, 1 to 100.", "type": "integer", "minimum": 1, "maximum": 100 } } } }] }, "width": { "description": "Width (standard deviation) of each Gaussian, > 0.", "type": "number", "exclusiveMinimum": 0 }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "fourier": { "description": "Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.", "type": "object", "required": ["of", "period", "harmonics"], "additionalProperties": false, "properties": { "of": { "description": "The data column x (e.g. a day number).", "type": "string", "minLength": 1 }, "period": { "description": "Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).", "type": "number", "exclusiveMinimum": 0 }, "harmonics": { "description": "Number of sin/cos pairs, 1 to 50.", "type": "integer", "minimum": 1, "maximum": 50 }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "spline": { "description": "A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).", "type": "object", "required": ["of", "knots"], "additionalProperties": false, "properties": { "of": { "description": "The data column x.", "type": "string", "minLength": 1 }, "knots": { "description": "Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).", "oneOf": [{ "type": "array", "minItems": 1, "maxItems": 100, "items": { "type": "number", "description": "An interior knot, in the units of x." } }, { "type": "object", "required": ["count"], "additionalProperties": false, "properties": { "count": { "description": "Number of interior knots, 1 to 100.", "type": "integer", "minimum": 1, "maximum": 100 } } }] }, "degree": { "description": "Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).", "type": "integer", "minimum": 1, "maximum": 5, "default": 3 }, "natural": { "description": "Natural cubic splines: linear beyond the boundary knots. Default false.", "type": "boolean", "default": false }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "category": { "description": "Indicator columns of a text column's levels: one per level seen in the training rows but the reference level.", "type": "object", "required": ["of"], "additionalProperties": false, "properties": { "of": { "description": "The data column; its cells are read as text (levels), even when they look like numbers.", "type": "string", "minLength": 1 }, "reference": { "description": "The reference level (no column; the intercept carries it). Default: the most frequent training level, ties by text order. A number is read as its text (`reference: 7` is the level `7`; write `\"07\"` for `07`).", "oneOf": [{ "type": "string" }, { "type": "number" }] }, "unseen": { "description": "A hold-out level no training row has: `error` (default: the model's error names level, file and line) or `zero` (every indicator 0: predicted as the reference level).", "enum": ["error", "zero"], "default": "error" } } } } }, "centers": { "title": "centers", "description": "Centres of Gaussian radial basis columns.", "oneOf": [{ "title": "a list of numbers", "description": "The centres as listed.", "type": "array", "minItems": 1, "items": { "description": "One centre.", "type": "number" } }, { "title": "{ from, to, count }", "description": "`count` evenly spaced centres from `from` to `to`, both included.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Last centre (>= from).", "type": "number" }, "count": { "description": "Number of centres, 1 to 10000.", "type": "integer", "minimum": 1, "maximum": 10000 } } }, { "title": "{ from, to, step }", "description": "Centres from `from` every `step` up to `to` (included when it falls on a step).", "type": "object", "required": ["from", "to", "step"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Upper end (>= from).", "type": "number" }, "step": { "description": "Distance between centres, > 0 (at most 10000 centres).", "type": "number", "exclusiveMinimum": 0 } } }, { "title": "`at-samples`", "description": "One centre at each training row's value of x.", "const": "at-samples" }] }, "limits": { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "swing_spikes": { "$ref": "#/$defs/limit", "description": "Total variation of the predictions between the training samples divided by the training targets' own total variation.", "default": { "warn": 1.5, "fail": 2 } }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } }, "holdout_r2": { "$ref": "#/$defs/limit", "description": "Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.", "default": "off" }, "holdout_rmse": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE in the target's units.", "default": "off" }, "holdout_mae": { "$ref": "#/$defs/limit", "description": "Hold-out mean absolute error in the target's units.", "default": "off" }, "chi_square": { "$ref": "#/$defs/limit", "description": "Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).", "default": { "warn_below": 0.5, "warn_above": 2 } }, "separation": { "$ref": "#/$defs/limit", "description": "Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.", "default": { "warn": 0, "fail": 1 } }, "events_per_parameter": { "$ref": "#/$defs/limit", "description": "Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.", "default": 10 }, "calibration_slope": { "$ref": "#/$defs/limit", "description": "Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.", "default": { "warn": 0.8, "fail": 0.6 } } } }, "limit": { "title": "limit", "description": "A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail beyond it)", "description": "Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 } } }, { "title": "{ warn_below, fail_below, warn_above, fail_above }", "description": "Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn_below": { "description": "Warn when the figure is below this number.", "type": "number" }, "fail_below": { "description": "Fail when the figure is below this number.", "type": "number" }, "warn_above": { "description": "Warn when the figure is above this number.", "type": "number" }, "fail_above": { "description": "Fail when the figure is above this number.", "type": "number" } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] } } };
 const pattern3 = new RegExp("^[A-Za-z0-9._-]+$", "u");
 const schema23 = { "title": "term", "description": "One term of the design: a mapping with exactly one key, the term kind.", "type": "object", "minProperties": 1, "maxProperties": 1, "propertyNames": { "enum": ["linear", "polynomial", "rbf", "fourier", "spline", "category"] }, "properties": { "linear": { "description": "The columns as they are: one design column per listed data column.", "type": "array", "minItems": 1, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }, "polynomial": { "description": "Powers z^1 .. z^degree of z = (x - shift) / scale; with several inputs (`of: [a, b]`) every monomial of total degree 1 .. degree in their z.", "type": "object", "required": ["of", "degree"], "additionalProperties": false, "properties": { "of": { "description": "The data column x, or a list of 2 to 10 distinct columns for every monomial over them.", "oneOf": [{ "type": "string", "minLength": 1 }, { "type": "array", "minItems": 2, "maxItems": 10, "uniqueItems": true, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }] }, "degree": { "description": "Highest power, 1 to 30.", "type": "integer", "minimum": 1, "maximum": 30 }, "shift": { "description": "Subtracted from x before scaling (a list: one per input). Default: the training mean of x; 0 with scale 1 gives raw powers.", "oneOf": [{ "type": "number" }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The shift of one input.", "type": "number" } }] }, "scale": { "description": "Divides x - shift (a list: one per input). Default: the training population standard deviation of x. Must be > 0.", "oneOf": [{ "type": "number", "exclusiveMinimum": 0 }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The scale of one input, > 0.", "type": "number", "exclusiveMinimum": 0 } }] }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "rbf": { "description": "Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c; with several inputs (`of: [a, b]`) isotropic Gaussians on the standardised inputs.", "type": "object", "required": ["of", "centers", "width"], "additionalProperties": false, "properties": { "of": { "description": "The data column x, or a list of 2 to 10 distinct columns.", "oneOf": [{ "type": "string", "minLength": 1 }, { "type": "array", "minItems": 2, "maxItems": 10, "uniqueItems": true, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }] }, "centers": { "description": "The centres: for one input a list, { from, to, count }, { from, to, step } or `at-samples`; for several inputs a list of rows (one value per input), a grid (one { from, to, count } per input) or `at-samples`.", "oneOf": [{ "$ref": "#/$defs/centers" }, { "type": "array", "minItems": 1, "maxItems": 10000, "items": { "description": "One centre: a value per input, in the order of `of`.", "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The centre's value of one input.", "type": "number" } } }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The grid along one input: count evenly spaced values from `from` to `to`.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First value.", "type": "number" }, "to": { "description": "Last value.", "type": "number" }, "count": { "description": "Values along this input, 1 to 100.", "type": "integer", "minimum": 1, "maximum": 100 } } } }] }, "width": { "description": "Width (standard deviation) of each Gaussian, > 0.", "type": "number", "exclusiveMinimum": 0 }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "fourier": { "description": "Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.", "type": "object", "required": ["of", "period", "harmonics"], "additionalProperties": false, "properties": { "of": { "description": "The data column x (e.g. a day number).", "type": "string", "minLength": 1 }, "period": { "description": "Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).", "type": "number", "exclusiveMinimum": 0 }, "harmonics": { "description": "Number of sin/cos pairs, 1 to 50.", "type": "integer", "minimum": 1, "maximum": 50 }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "spline": { "description": "A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).", "type": "object", "required": ["of", "knots"], "additionalProperties": false, "properties": { "of": { "description": "The data column x.", "type": "string", "minLength": 1 }, "knots": { "description": "Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).", "oneOf": [{ "type": "array", "minItems": 1, "maxItems": 100, "items": { "type": "number", "description": "An interior knot, in the units of x." } }, { "type": "object", "required": ["count"], "additionalProperties": false, "properties": { "count": { "description": "Number of interior knots, 1 to 100.", "type": "integer", "minimum": 1, "maximum": 100 } } }] }, "degree": { "description": "Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).", "type": "integer", "minimum": 1, "maximum": 5, "default": 3 }, "natural": { "description": "Natural cubic splines: linear beyond the boundary knots. Default false.", "type": "boolean", "default": false }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "category": { "description": "Indicator columns of a text column's levels: one per level seen in the training rows but the reference level.", "type": "object", "required": ["of"], "additionalProperties": false, "properties": { "of": { "description": "The data column; its cells are read as text (levels), even when they look like numbers.", "type": "string", "minLength": 1 }, "reference": { "description": "The reference level (no column; the intercept carries it). Default: the most frequent training level, ties by text order. A number is read as its text (`reference: 7` is the level `7`; write `\"07\"` for `07`).", "oneOf": [{ "type": "string" }, { "type": "number" }] }, "unseen": { "description": "A hold-out level no training row has: `error` (default: the model's error names level, file and line) or `zero` (every indicator 0: predicted as the reference level).", "enum": ["error", "zero"], "default": "error" } } } } };
 const schema24 = { "title": "centers", "description": "Centres of Gaussian radial basis columns.", "oneOf": [{ "title": "a list of numbers", "description": "The centres as listed.", "type": "array", "minItems": 1, "items": { "description": "One centre.", "type": "number" } }, { "title": "{ from, to, count }", "description": "`count` evenly spaced centres from `from` to `to`, both included.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Last centre (>= from).", "type": "number" }, "count": { "description": "Number of centres, 1 to 10000.", "type": "integer", "minimum": 1, "maximum": 10000 } } }, { "title": "{ from, to, step }", "description": "Centres from `from` every `step` up to `to` (included when it falls on a step).", "type": "object", "required": ["from", "to", "step"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Upper end (>= from).", "type": "number" }, "step": { "description": "Distance between centres, > 0 (at most 10000 centres).", "type": "number", "exclusiveMinimum": 0 } } }, { "title": "`at-samples`", "description": "One centre at each training row's value of x.", "const": "at-samples" }] };
@@ -45950,6 +47732,130 @@ function validate80(data, { instancePath = "", parentData, parentDataProperty, r
     return errors === 0;
 }
 validate80.evaluated = { "props": true, "dynamicProps": false, "dynamicItems": false };
+const schema27 = { "title": "predictions source", "description": "`{ column }`: a column of the data file itself; `{ file, column }`: a column of a side CSV (relative to this descriptor's folder) whose rows go with the data file's rows in order; `{ file, key, column }`: the same, rows matched by a key column that both files hold. Regression: predicted values; classification: probabilities of the positive class in [0, 1].", "type": "object", "required": ["column"], "additionalProperties": false, "properties": { "column": { "description": "Column holding the predictions.", "type": "string", "minLength": 1 }, "file": { "description": "Side CSV holding the predictions, relative to this descriptor's folder (never outside the repository).", "type": "string", "minLength": 1 }, "key": { "description": "Row key column held by both the data file and the side file (unique in each); only with `file`.", "type": "string", "minLength": 1 } } };
+function validate102(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
+    let vErrors = null;
+    let errors = 0;
+    const evaluated0 = validate102.evaluated;
+    if (evaluated0.dynamicProps) {
+        evaluated0.props = undefined;
+    }
+    if (evaluated0.dynamicItems) {
+        evaluated0.items = undefined;
+    }
+    if (data && typeof data == "object" && !Array.isArray(data)) {
+        if (data.column === undefined) {
+            const err0 = { instancePath, schemaPath: "#/required", keyword: "required", params: { missingProperty: "column" }, message: "must have required property '" + "column" + "'", schema: schema27.required, parentSchema: schema27, data };
+            if (vErrors === null) {
+                vErrors = [err0];
+            }
+            else {
+                vErrors.push(err0);
+            }
+            errors++;
+        }
+        for (const key0 in data) {
+            if (!(((key0 === "column") || (key0 === "file")) || (key0 === "key"))) {
+                const err1 = { instancePath, schemaPath: "#/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key0 }, message: "must NOT have additional properties", schema: false, parentSchema: schema27, data };
+                if (vErrors === null) {
+                    vErrors = [err1];
+                }
+                else {
+                    vErrors.push(err1);
+                }
+                errors++;
+            }
+        }
+        if (data.column !== undefined) {
+            let data0 = data.column;
+            if (typeof data0 === "string") {
+                if (func1(data0) < 1) {
+                    const err2 = { instancePath: instancePath + "/column", schemaPath: "#/properties/column/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema27.properties.column, data: data0 };
+                    if (vErrors === null) {
+                        vErrors = [err2];
+                    }
+                    else {
+                        vErrors.push(err2);
+                    }
+                    errors++;
+                }
+            }
+            else {
+                const err3 = { instancePath: instancePath + "/column", schemaPath: "#/properties/column/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema27.properties.column.type, parentSchema: schema27.properties.column, data: data0 };
+                if (vErrors === null) {
+                    vErrors = [err3];
+                }
+                else {
+                    vErrors.push(err3);
+                }
+                errors++;
+            }
+        }
+        if (data.file !== undefined) {
+            let data1 = data.file;
+            if (typeof data1 === "string") {
+                if (func1(data1) < 1) {
+                    const err4 = { instancePath: instancePath + "/file", schemaPath: "#/properties/file/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema27.properties.file, data: data1 };
+                    if (vErrors === null) {
+                        vErrors = [err4];
+                    }
+                    else {
+                        vErrors.push(err4);
+                    }
+                    errors++;
+                }
+            }
+            else {
+                const err5 = { instancePath: instancePath + "/file", schemaPath: "#/properties/file/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema27.properties.file.type, parentSchema: schema27.properties.file, data: data1 };
+                if (vErrors === null) {
+                    vErrors = [err5];
+                }
+                else {
+                    vErrors.push(err5);
+                }
+                errors++;
+            }
+        }
+        if (data.key !== undefined) {
+            let data2 = data.key;
+            if (typeof data2 === "string") {
+                if (func1(data2) < 1) {
+                    const err6 = { instancePath: instancePath + "/key", schemaPath: "#/properties/key/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema27.properties.key, data: data2 };
+                    if (vErrors === null) {
+                        vErrors = [err6];
+                    }
+                    else {
+                        vErrors.push(err6);
+                    }
+                    errors++;
+                }
+            }
+            else {
+                const err7 = { instancePath: instancePath + "/key", schemaPath: "#/properties/key/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema27.properties.key.type, parentSchema: schema27.properties.key, data: data2 };
+                if (vErrors === null) {
+                    vErrors = [err7];
+                }
+                else {
+                    vErrors.push(err7);
+                }
+                errors++;
+            }
+        }
+    }
+    else {
+        const err8 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema27.type, parentSchema: schema27, data };
+        if (vErrors === null) {
+            vErrors = [err8];
+        }
+        else {
+            vErrors.push(err8);
+        }
+        errors++;
+    }
+    validate102.errors = vErrors;
+    return errors === 0;
+}
+validate102.evaluated = { "props": true, "dynamicProps": false, "dynamicItems": false };
 function validate75(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
     /*# sourceURL="urn:fitgate:schema:descriptor:1" */ ;
     let vErrors = null;
@@ -45992,19 +47898,22 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
             }
             errors++;
         }
-        if (data.terms === undefined) {
-            const err3 = { instancePath, schemaPath: "#/required", keyword: "required", params: { missingProperty: "terms" }, message: "must have required property '" + "terms" + "'", schema: schema22.required, parentSchema: schema22, data };
-            if (vErrors === null) {
-                vErrors = [err3];
-            }
-            else {
-                vErrors.push(err3);
-            }
-            errors++;
-        }
         for (const key0 in data) {
-            if (!((((((((key0 === "version") || (key0 === "name")) || (key0 === "task")) || (key0 === "data")) || (key0 === "terms")) || (key0 === "fit")) || (key0 === "coefficients")) || (key0 === "limits"))) {
-                const err4 = { instancePath, schemaPath: "#/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key0 }, message: "must NOT have additional properties", schema: false, parentSchema: schema22, data };
+            if (!(func2.call(schema22.properties, key0))) {
+                const err3 = { instancePath, schemaPath: "#/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key0 }, message: "must NOT have additional properties", schema: false, parentSchema: schema22, data };
+                if (vErrors === null) {
+                    vErrors = [err3];
+                }
+                else {
+                    vErrors.push(err3);
+                }
+                errors++;
+            }
+        }
+        if (data.version !== undefined) {
+            let data0 = data.version;
+            if (1 !== data0) {
+                const err4 = { instancePath: instancePath + "/version", schemaPath: "#/properties/version/const", keyword: "const", params: { allowedValue: 1 }, message: "must be equal to constant", schema: 1, parentSchema: schema22.properties.version, data: data0 };
                 if (vErrors === null) {
                     vErrors = [err4];
                 }
@@ -46014,24 +47923,21 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                 errors++;
             }
         }
-        if (data.version !== undefined) {
-            let data0 = data.version;
-            if (1 !== data0) {
-                const err5 = { instancePath: instancePath + "/version", schemaPath: "#/properties/version/const", keyword: "const", params: { allowedValue: 1 }, message: "must be equal to constant", schema: 1, parentSchema: schema22.properties.version, data: data0 };
-                if (vErrors === null) {
-                    vErrors = [err5];
-                }
-                else {
-                    vErrors.push(err5);
-                }
-                errors++;
-            }
-        }
         if (data.name !== undefined) {
             let data1 = data.name;
             if (typeof data1 === "string") {
                 if (func1(data1) > 100) {
-                    const err6 = { instancePath: instancePath + "/name", schemaPath: "#/properties/name/maxLength", keyword: "maxLength", params: { limit: 100 }, message: "must NOT have more than 100 characters", schema: 100, parentSchema: schema22.properties.name, data: data1 };
+                    const err5 = { instancePath: instancePath + "/name", schemaPath: "#/properties/name/maxLength", keyword: "maxLength", params: { limit: 100 }, message: "must NOT have more than 100 characters", schema: 100, parentSchema: schema22.properties.name, data: data1 };
+                    if (vErrors === null) {
+                        vErrors = [err5];
+                    }
+                    else {
+                        vErrors.push(err5);
+                    }
+                    errors++;
+                }
+                if (func1(data1) < 1) {
+                    const err6 = { instancePath: instancePath + "/name", schemaPath: "#/properties/name/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.name, data: data1 };
                     if (vErrors === null) {
                         vErrors = [err6];
                     }
@@ -46040,8 +47946,8 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                     }
                     errors++;
                 }
-                if (func1(data1) < 1) {
-                    const err7 = { instancePath: instancePath + "/name", schemaPath: "#/properties/name/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.name, data: data1 };
+                if (!pattern3.test(data1)) {
+                    const err7 = { instancePath: instancePath + "/name", schemaPath: "#/properties/name/pattern", keyword: "pattern", params: { pattern: "^[A-Za-z0-9._-]+$" }, message: "must match pattern \"" + "^[A-Za-z0-9._-]+$" + "\"", schema: "^[A-Za-z0-9._-]+$", parentSchema: schema22.properties.name, data: data1 };
                     if (vErrors === null) {
                         vErrors = [err7];
                     }
@@ -46050,19 +47956,22 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                     }
                     errors++;
                 }
-                if (!pattern3.test(data1)) {
-                    const err8 = { instancePath: instancePath + "/name", schemaPath: "#/properties/name/pattern", keyword: "pattern", params: { pattern: "^[A-Za-z0-9._-]+$" }, message: "must match pattern \"" + "^[A-Za-z0-9._-]+$" + "\"", schema: "^[A-Za-z0-9._-]+$", parentSchema: schema22.properties.name, data: data1 };
-                    if (vErrors === null) {
-                        vErrors = [err8];
-                    }
-                    else {
-                        vErrors.push(err8);
-                    }
-                    errors++;
-                }
             }
             else {
-                const err9 = { instancePath: instancePath + "/name", schemaPath: "#/properties/name/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.name.type, parentSchema: schema22.properties.name, data: data1 };
+                const err8 = { instancePath: instancePath + "/name", schemaPath: "#/properties/name/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.name.type, parentSchema: schema22.properties.name, data: data1 };
+                if (vErrors === null) {
+                    vErrors = [err8];
+                }
+                else {
+                    vErrors.push(err8);
+                }
+                errors++;
+            }
+        }
+        if (data.task !== undefined) {
+            let data2 = data.task;
+            if (!((data2 === "regression") || (data2 === "classification"))) {
+                const err9 = { instancePath: instancePath + "/task", schemaPath: "#/properties/task/enum", keyword: "enum", params: { allowedValues: schema22.properties.task.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.task.enum, parentSchema: schema22.properties.task, data: data2 };
                 if (vErrors === null) {
                     vErrors = [err9];
                 }
@@ -46072,24 +47981,21 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                 errors++;
             }
         }
-        if (data.task !== undefined) {
-            let data2 = data.task;
-            if (!((data2 === "regression") || (data2 === "classification"))) {
-                const err10 = { instancePath: instancePath + "/task", schemaPath: "#/properties/task/enum", keyword: "enum", params: { allowedValues: schema22.properties.task.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.task.enum, parentSchema: schema22.properties.task, data: data2 };
-                if (vErrors === null) {
-                    vErrors = [err10];
-                }
-                else {
-                    vErrors.push(err10);
-                }
-                errors++;
-            }
-        }
         if (data.data !== undefined) {
             let data3 = data.data;
             if (data3 && typeof data3 == "object" && !Array.isArray(data3)) {
                 if (data3.train === undefined) {
-                    const err11 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/required", keyword: "required", params: { missingProperty: "train" }, message: "must have required property '" + "train" + "'", schema: schema22.properties.data.required, parentSchema: schema22.properties.data, data: data3 };
+                    const err10 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/required", keyword: "required", params: { missingProperty: "train" }, message: "must have required property '" + "train" + "'", schema: schema22.properties.data.required, parentSchema: schema22.properties.data, data: data3 };
+                    if (vErrors === null) {
+                        vErrors = [err10];
+                    }
+                    else {
+                        vErrors.push(err10);
+                    }
+                    errors++;
+                }
+                if (data3.target === undefined) {
+                    const err11 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/required", keyword: "required", params: { missingProperty: "target" }, message: "must have required property '" + "target" + "'", schema: schema22.properties.data.required, parentSchema: schema22.properties.data, data: data3 };
                     if (vErrors === null) {
                         vErrors = [err11];
                     }
@@ -46098,58 +48004,61 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                     }
                     errors++;
                 }
-                if (data3.target === undefined) {
-                    const err12 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/required", keyword: "required", params: { missingProperty: "target" }, message: "must have required property '" + "target" + "'", schema: schema22.properties.data.required, parentSchema: schema22.properties.data, data: data3 };
-                    if (vErrors === null) {
-                        vErrors = [err12];
-                    }
-                    else {
-                        vErrors.push(err12);
-                    }
-                    errors++;
-                }
                 for (const key1 in data3) {
                     if (!(func2.call(schema22.properties.data.properties, key1))) {
-                        const err13 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key1 }, message: "must NOT have additional properties", schema: false, parentSchema: schema22.properties.data, data: data3 };
+                        const err12 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key1 }, message: "must NOT have additional properties", schema: false, parentSchema: schema22.properties.data, data: data3 };
                         if (vErrors === null) {
-                            vErrors = [err13];
+                            vErrors = [err12];
                         }
                         else {
-                            vErrors.push(err13);
+                            vErrors.push(err12);
                         }
                         errors++;
                     }
                 }
                 if (data3.train !== undefined) {
                     let data4 = data3.train;
+                    const _errs10 = errors;
+                    let valid2 = false;
+                    const _errs11 = errors;
                     if (typeof data4 === "string") {
                         if (func1(data4) < 1) {
-                            const err14 = { instancePath: instancePath + "/data/train", schemaPath: "#/properties/data/properties/train/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.train, data: data4 };
+                            const err13 = { instancePath: instancePath + "/data/train", schemaPath: "#/properties/data/properties/train/anyOf/0/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.train.anyOf[0], data: data4 };
                             if (vErrors === null) {
-                                vErrors = [err14];
+                                vErrors = [err13];
                             }
                             else {
-                                vErrors.push(err14);
+                                vErrors.push(err13);
                             }
                             errors++;
                         }
                     }
                     else {
-                        const err15 = { instancePath: instancePath + "/data/train", schemaPath: "#/properties/data/properties/train/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.train.type, parentSchema: schema22.properties.data.properties.train, data: data4 };
+                        const err14 = { instancePath: instancePath + "/data/train", schemaPath: "#/properties/data/properties/train/anyOf/0/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.train.anyOf[0].type, parentSchema: schema22.properties.data.properties.train.anyOf[0], data: data4 };
                         if (vErrors === null) {
-                            vErrors = [err15];
+                            vErrors = [err14];
                         }
                         else {
-                            vErrors.push(err15);
+                            vErrors.push(err14);
                         }
                         errors++;
                     }
-                }
-                if (data3.holdout !== undefined) {
-                    let data5 = data3.holdout;
-                    if (typeof data5 === "string") {
-                        if (func1(data5) < 1) {
-                            const err16 = { instancePath: instancePath + "/data/holdout", schemaPath: "#/properties/data/properties/holdout/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.holdout, data: data5 };
+                    var _valid0 = _errs11 === errors;
+                    valid2 = valid2 || _valid0;
+                    const _errs13 = errors;
+                    if (Array.isArray(data4)) {
+                        if (data4.length > 1000) {
+                            const err15 = { instancePath: instancePath + "/data/train", schemaPath: "#/properties/data/properties/train/anyOf/1/maxItems", keyword: "maxItems", params: { limit: 1000 }, message: "must NOT have more than 1000 items", schema: 1000, parentSchema: schema22.properties.data.properties.train.anyOf[1], data: data4 };
+                            if (vErrors === null) {
+                                vErrors = [err15];
+                            }
+                            else {
+                                vErrors.push(err15);
+                            }
+                            errors++;
+                        }
+                        if (data4.length < 1) {
+                            const err16 = { instancePath: instancePath + "/data/train", schemaPath: "#/properties/data/properties/train/anyOf/1/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema22.properties.data.properties.train.anyOf[1], data: data4 };
                             if (vErrors === null) {
                                 vErrors = [err16];
                             }
@@ -46158,35 +48067,35 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                             }
                             errors++;
                         }
+                        const len0 = data4.length;
+                        for (let i0 = 0; i0 < len0; i0++) {
+                            let data5 = data4[i0];
+                            if (typeof data5 === "string") {
+                                if (func1(data5) < 1) {
+                                    const err17 = { instancePath: instancePath + "/data/train/" + i0, schemaPath: "#/properties/data/properties/train/anyOf/1/items/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.train.anyOf[1].items, data: data5 };
+                                    if (vErrors === null) {
+                                        vErrors = [err17];
+                                    }
+                                    else {
+                                        vErrors.push(err17);
+                                    }
+                                    errors++;
+                                }
+                            }
+                            else {
+                                const err18 = { instancePath: instancePath + "/data/train/" + i0, schemaPath: "#/properties/data/properties/train/anyOf/1/items/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.train.anyOf[1].items.type, parentSchema: schema22.properties.data.properties.train.anyOf[1].items, data: data5 };
+                                if (vErrors === null) {
+                                    vErrors = [err18];
+                                }
+                                else {
+                                    vErrors.push(err18);
+                                }
+                                errors++;
+                            }
+                        }
                     }
                     else {
-                        const err17 = { instancePath: instancePath + "/data/holdout", schemaPath: "#/properties/data/properties/holdout/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.holdout.type, parentSchema: schema22.properties.data.properties.holdout, data: data5 };
-                        if (vErrors === null) {
-                            vErrors = [err17];
-                        }
-                        else {
-                            vErrors.push(err17);
-                        }
-                        errors++;
-                    }
-                }
-                if (data3.separator !== undefined) {
-                    let data6 = data3.separator;
-                    if (!((((data6 === "auto") || (data6 === ",")) || (data6 === ";")) || (data6 === "\t"))) {
-                        const err18 = { instancePath: instancePath + "/data/separator", schemaPath: "#/properties/data/properties/separator/enum", keyword: "enum", params: { allowedValues: schema22.properties.data.properties.separator.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.data.properties.separator.enum, parentSchema: schema22.properties.data.properties.separator, data: data6 };
-                        if (vErrors === null) {
-                            vErrors = [err18];
-                        }
-                        else {
-                            vErrors.push(err18);
-                        }
-                        errors++;
-                    }
-                }
-                if (data3.decimal !== undefined) {
-                    let data7 = data3.decimal;
-                    if (!((data7 === ".") || (data7 === ","))) {
-                        const err19 = { instancePath: instancePath + "/data/decimal", schemaPath: "#/properties/data/properties/decimal/enum", keyword: "enum", params: { allowedValues: schema22.properties.data.properties.decimal.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.data.properties.decimal.enum, parentSchema: schema22.properties.data.properties.decimal, data: data7 };
+                        const err19 = { instancePath: instancePath + "/data/train", schemaPath: "#/properties/data/properties/train/anyOf/1/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema22.properties.data.properties.train.anyOf[1].type, parentSchema: schema22.properties.data.properties.train.anyOf[1], data: data4 };
                         if (vErrors === null) {
                             vErrors = [err19];
                         }
@@ -46195,11 +48104,10 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                         }
                         errors++;
                     }
-                }
-                if (data3.missing !== undefined) {
-                    let data8 = data3.missing;
-                    if (!((data8 === "error") || (data8 === "drop"))) {
-                        const err20 = { instancePath: instancePath + "/data/missing", schemaPath: "#/properties/data/properties/missing/enum", keyword: "enum", params: { allowedValues: schema22.properties.data.properties.missing.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.data.properties.missing.enum, parentSchema: schema22.properties.data.properties.missing, data: data8 };
+                    var _valid0 = _errs13 === errors;
+                    valid2 = valid2 || _valid0;
+                    if (!valid2) {
+                        const err20 = { instancePath: instancePath + "/data/train", schemaPath: "#/properties/data/properties/train/anyOf", keyword: "anyOf", params: {}, message: "must match a schema in anyOf", schema: schema22.properties.data.properties.train.anyOf, parentSchema: schema22.properties.data.properties.train, data: data4 };
                         if (vErrors === null) {
                             vErrors = [err20];
                         }
@@ -46208,12 +48116,26 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                         }
                         errors++;
                     }
+                    else {
+                        errors = _errs10;
+                        if (vErrors !== null) {
+                            if (_errs10) {
+                                vErrors.length = _errs10;
+                            }
+                            else {
+                                vErrors = null;
+                            }
+                        }
+                    }
                 }
-                if (data3.split !== undefined) {
-                    let data9 = data3.split;
-                    if (data9 && typeof data9 == "object" && !Array.isArray(data9)) {
-                        if (data9.column === undefined) {
-                            const err21 = { instancePath: instancePath + "/data/split", schemaPath: "#/properties/data/properties/split/required", keyword: "required", params: { missingProperty: "column" }, message: "must have required property '" + "column" + "'", schema: schema22.properties.data.properties.split.required, parentSchema: schema22.properties.data.properties.split, data: data9 };
+                if (data3.holdout !== undefined) {
+                    let data6 = data3.holdout;
+                    const _errs18 = errors;
+                    let valid5 = false;
+                    const _errs19 = errors;
+                    if (typeof data6 === "string") {
+                        if (func1(data6) < 1) {
+                            const err21 = { instancePath: instancePath + "/data/holdout", schemaPath: "#/properties/data/properties/holdout/anyOf/0/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.holdout.anyOf[0], data: data6 };
                             if (vErrors === null) {
                                 vErrors = [err21];
                             }
@@ -46222,18 +48144,23 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                             }
                             errors++;
                         }
-                        if (data9.train === undefined) {
-                            const err22 = { instancePath: instancePath + "/data/split", schemaPath: "#/properties/data/properties/split/required", keyword: "required", params: { missingProperty: "train" }, message: "must have required property '" + "train" + "'", schema: schema22.properties.data.properties.split.required, parentSchema: schema22.properties.data.properties.split, data: data9 };
-                            if (vErrors === null) {
-                                vErrors = [err22];
-                            }
-                            else {
-                                vErrors.push(err22);
-                            }
-                            errors++;
+                    }
+                    else {
+                        const err22 = { instancePath: instancePath + "/data/holdout", schemaPath: "#/properties/data/properties/holdout/anyOf/0/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.holdout.anyOf[0].type, parentSchema: schema22.properties.data.properties.holdout.anyOf[0], data: data6 };
+                        if (vErrors === null) {
+                            vErrors = [err22];
                         }
-                        if (data9.holdout === undefined) {
-                            const err23 = { instancePath: instancePath + "/data/split", schemaPath: "#/properties/data/properties/split/required", keyword: "required", params: { missingProperty: "holdout" }, message: "must have required property '" + "holdout" + "'", schema: schema22.properties.data.properties.split.required, parentSchema: schema22.properties.data.properties.split, data: data9 };
+                        else {
+                            vErrors.push(err22);
+                        }
+                        errors++;
+                    }
+                    var _valid1 = _errs19 === errors;
+                    valid5 = valid5 || _valid1;
+                    const _errs21 = errors;
+                    if (Array.isArray(data6)) {
+                        if (data6.length > 1000) {
+                            const err23 = { instancePath: instancePath + "/data/holdout", schemaPath: "#/properties/data/properties/holdout/anyOf/1/maxItems", keyword: "maxItems", params: { limit: 1000 }, message: "must NOT have more than 1000 items", schema: 1000, parentSchema: schema22.properties.data.properties.holdout.anyOf[1], data: data6 };
                             if (vErrors === null) {
                                 vErrors = [err23];
                             }
@@ -46242,23 +48169,22 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                             }
                             errors++;
                         }
-                        for (const key2 in data9) {
-                            if (!(((key2 === "column") || (key2 === "train")) || (key2 === "holdout"))) {
-                                const err24 = { instancePath: instancePath + "/data/split", schemaPath: "#/properties/data/properties/split/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key2 }, message: "must NOT have additional properties", schema: false, parentSchema: schema22.properties.data.properties.split, data: data9 };
-                                if (vErrors === null) {
-                                    vErrors = [err24];
-                                }
-                                else {
-                                    vErrors.push(err24);
-                                }
-                                errors++;
+                        if (data6.length < 1) {
+                            const err24 = { instancePath: instancePath + "/data/holdout", schemaPath: "#/properties/data/properties/holdout/anyOf/1/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema22.properties.data.properties.holdout.anyOf[1], data: data6 };
+                            if (vErrors === null) {
+                                vErrors = [err24];
                             }
+                            else {
+                                vErrors.push(err24);
+                            }
+                            errors++;
                         }
-                        if (data9.column !== undefined) {
-                            let data10 = data9.column;
-                            if (typeof data10 === "string") {
-                                if (func1(data10) < 1) {
-                                    const err25 = { instancePath: instancePath + "/data/split/column", schemaPath: "#/properties/data/properties/split/properties/column/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.split.properties.column, data: data10 };
+                        const len1 = data6.length;
+                        for (let i1 = 0; i1 < len1; i1++) {
+                            let data7 = data6[i1];
+                            if (typeof data7 === "string") {
+                                if (func1(data7) < 1) {
+                                    const err25 = { instancePath: instancePath + "/data/holdout/" + i1, schemaPath: "#/properties/data/properties/holdout/anyOf/1/items/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.holdout.anyOf[1].items, data: data7 };
                                     if (vErrors === null) {
                                         vErrors = [err25];
                                     }
@@ -46269,7 +48195,7 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                                 }
                             }
                             else {
-                                const err26 = { instancePath: instancePath + "/data/split/column", schemaPath: "#/properties/data/properties/split/properties/column/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.split.properties.column.type, parentSchema: schema22.properties.data.properties.split.properties.column, data: data10 };
+                                const err26 = { instancePath: instancePath + "/data/holdout/" + i1, schemaPath: "#/properties/data/properties/holdout/anyOf/1/items/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.holdout.anyOf[1].items.type, parentSchema: schema22.properties.data.properties.holdout.anyOf[1].items, data: data7 };
                                 if (vErrors === null) {
                                     vErrors = [err26];
                                 }
@@ -46279,59 +48205,71 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                                 errors++;
                             }
                         }
-                        if (data9.train !== undefined) {
-                            let data11 = data9.train;
-                            if (typeof data11 === "string") {
-                                if (func1(data11) < 1) {
-                                    const err27 = { instancePath: instancePath + "/data/split/train", schemaPath: "#/properties/data/properties/split/properties/train/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.split.properties.train, data: data11 };
-                                    if (vErrors === null) {
-                                        vErrors = [err27];
-                                    }
-                                    else {
-                                        vErrors.push(err27);
-                                    }
-                                    errors++;
-                                }
-                            }
-                            else {
-                                const err28 = { instancePath: instancePath + "/data/split/train", schemaPath: "#/properties/data/properties/split/properties/train/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.split.properties.train.type, parentSchema: schema22.properties.data.properties.split.properties.train, data: data11 };
-                                if (vErrors === null) {
-                                    vErrors = [err28];
-                                }
-                                else {
-                                    vErrors.push(err28);
-                                }
-                                errors++;
-                            }
+                    }
+                    else {
+                        const err27 = { instancePath: instancePath + "/data/holdout", schemaPath: "#/properties/data/properties/holdout/anyOf/1/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema22.properties.data.properties.holdout.anyOf[1].type, parentSchema: schema22.properties.data.properties.holdout.anyOf[1], data: data6 };
+                        if (vErrors === null) {
+                            vErrors = [err27];
                         }
-                        if (data9.holdout !== undefined) {
-                            let data12 = data9.holdout;
-                            if (typeof data12 === "string") {
-                                if (func1(data12) < 1) {
-                                    const err29 = { instancePath: instancePath + "/data/split/holdout", schemaPath: "#/properties/data/properties/split/properties/holdout/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.split.properties.holdout, data: data12 };
-                                    if (vErrors === null) {
-                                        vErrors = [err29];
-                                    }
-                                    else {
-                                        vErrors.push(err29);
-                                    }
-                                    errors++;
-                                }
+                        else {
+                            vErrors.push(err27);
+                        }
+                        errors++;
+                    }
+                    var _valid1 = _errs21 === errors;
+                    valid5 = valid5 || _valid1;
+                    if (!valid5) {
+                        const err28 = { instancePath: instancePath + "/data/holdout", schemaPath: "#/properties/data/properties/holdout/anyOf", keyword: "anyOf", params: {}, message: "must match a schema in anyOf", schema: schema22.properties.data.properties.holdout.anyOf, parentSchema: schema22.properties.data.properties.holdout, data: data6 };
+                        if (vErrors === null) {
+                            vErrors = [err28];
+                        }
+                        else {
+                            vErrors.push(err28);
+                        }
+                        errors++;
+                    }
+                    else {
+                        errors = _errs18;
+                        if (vErrors !== null) {
+                            if (_errs18) {
+                                vErrors.length = _errs18;
                             }
                             else {
-                                const err30 = { instancePath: instancePath + "/data/split/holdout", schemaPath: "#/properties/data/properties/split/properties/holdout/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.split.properties.holdout.type, parentSchema: schema22.properties.data.properties.split.properties.holdout, data: data12 };
-                                if (vErrors === null) {
-                                    vErrors = [err30];
-                                }
-                                else {
-                                    vErrors.push(err30);
-                                }
-                                errors++;
+                                vErrors = null;
                             }
                         }
                     }
-                    else {
-                        const err31 = { instancePath: instancePath + "/data/split", schemaPath: "#/properties/data/properties/split/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema22.properties.data.properties.split.type, parentSchema: schema22.properties.data.properties.split, data: data9 };
+                }
+                if (data3.separator !== undefined) {
+                    let data8 = data3.separator;
+                    if (!((((data8 === "auto") || (data8 === ",")) || (data8 === ";")) || (data8 === "\t"))) {
+                        const err29 = { instancePath: instancePath + "/data/separator", schemaPath: "#/properties/data/properties/separator/enum", keyword: "enum", params: { allowedValues: schema22.properties.data.properties.separator.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.data.properties.separator.enum, parentSchema: schema22.properties.data.properties.separator, data: data8 };
+                        if (vErrors === null) {
+                            vErrors = [err29];
+                        }
+                        else {
+                            vErrors.push(err29);
+                        }
+                        errors++;
+                    }
+                }
+                if (data3.decimal !== undefined) {
+                    let data9 = data3.decimal;
+                    if (!((data9 === ".") || (data9 === ","))) {
+                        const err30 = { instancePath: instancePath + "/data/decimal", schemaPath: "#/properties/data/properties/decimal/enum", keyword: "enum", params: { allowedValues: schema22.properties.data.properties.decimal.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.data.properties.decimal.enum, parentSchema: schema22.properties.data.properties.decimal, data: data9 };
+                        if (vErrors === null) {
+                            vErrors = [err30];
+                        }
+                        else {
+                            vErrors.push(err30);
+                        }
+                        errors++;
+                    }
+                }
+                if (data3.missing !== undefined) {
+                    let data10 = data3.missing;
+                    if (!((data10 === "error") || (data10 === "drop"))) {
+                        const err31 = { instancePath: instancePath + "/data/missing", schemaPath: "#/properties/data/properties/missing/enum", keyword: "enum", params: { allowedValues: schema22.properties.data.properties.missing.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.data.properties.missing.enum, parentSchema: schema22.properties.data.properties.missing, data: data10 };
                         if (vErrors === null) {
                             vErrors = [err31];
                         }
@@ -46341,11 +48279,11 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                         errors++;
                     }
                 }
-                if (data3.target !== undefined) {
-                    let data13 = data3.target;
-                    if (typeof data13 === "string") {
-                        if (func1(data13) < 1) {
-                            const err32 = { instancePath: instancePath + "/data/target", schemaPath: "#/properties/data/properties/target/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.target, data: data13 };
+                if (data3.split !== undefined) {
+                    let data11 = data3.split;
+                    if (data11 && typeof data11 == "object" && !Array.isArray(data11)) {
+                        if (data11.column === undefined) {
+                            const err32 = { instancePath: instancePath + "/data/split", schemaPath: "#/properties/data/properties/split/required", keyword: "required", params: { missingProperty: "column" }, message: "must have required property '" + "column" + "'", schema: schema22.properties.data.properties.split.required, parentSchema: schema22.properties.data.properties.split, data: data11 };
                             if (vErrors === null) {
                                 vErrors = [err32];
                             }
@@ -46354,23 +48292,18 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                             }
                             errors++;
                         }
-                    }
-                    else {
-                        const err33 = { instancePath: instancePath + "/data/target", schemaPath: "#/properties/data/properties/target/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.target.type, parentSchema: schema22.properties.data.properties.target, data: data13 };
-                        if (vErrors === null) {
-                            vErrors = [err33];
+                        if (data11.train === undefined) {
+                            const err33 = { instancePath: instancePath + "/data/split", schemaPath: "#/properties/data/properties/split/required", keyword: "required", params: { missingProperty: "train" }, message: "must have required property '" + "train" + "'", schema: schema22.properties.data.properties.split.required, parentSchema: schema22.properties.data.properties.split, data: data11 };
+                            if (vErrors === null) {
+                                vErrors = [err33];
+                            }
+                            else {
+                                vErrors.push(err33);
+                            }
+                            errors++;
                         }
-                        else {
-                            vErrors.push(err33);
-                        }
-                        errors++;
-                    }
-                }
-                if (data3.positive !== undefined) {
-                    let data14 = data3.positive;
-                    if (typeof data14 === "string") {
-                        if (func1(data14) < 1) {
-                            const err34 = { instancePath: instancePath + "/data/positive", schemaPath: "#/properties/data/properties/positive/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.positive, data: data14 };
+                        if (data11.holdout === undefined) {
+                            const err34 = { instancePath: instancePath + "/data/split", schemaPath: "#/properties/data/properties/split/required", keyword: "required", params: { missingProperty: "holdout" }, message: "must have required property '" + "holdout" + "'", schema: schema22.properties.data.properties.split.required, parentSchema: schema22.properties.data.properties.split, data: data11 };
                             if (vErrors === null) {
                                 vErrors = [err34];
                             }
@@ -46379,131 +48312,121 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                             }
                             errors++;
                         }
+                        for (const key2 in data11) {
+                            if (!(((key2 === "column") || (key2 === "train")) || (key2 === "holdout"))) {
+                                const err35 = { instancePath: instancePath + "/data/split", schemaPath: "#/properties/data/properties/split/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key2 }, message: "must NOT have additional properties", schema: false, parentSchema: schema22.properties.data.properties.split, data: data11 };
+                                if (vErrors === null) {
+                                    vErrors = [err35];
+                                }
+                                else {
+                                    vErrors.push(err35);
+                                }
+                                errors++;
+                            }
+                        }
+                        if (data11.column !== undefined) {
+                            let data12 = data11.column;
+                            if (typeof data12 === "string") {
+                                if (func1(data12) < 1) {
+                                    const err36 = { instancePath: instancePath + "/data/split/column", schemaPath: "#/properties/data/properties/split/properties/column/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.split.properties.column, data: data12 };
+                                    if (vErrors === null) {
+                                        vErrors = [err36];
+                                    }
+                                    else {
+                                        vErrors.push(err36);
+                                    }
+                                    errors++;
+                                }
+                            }
+                            else {
+                                const err37 = { instancePath: instancePath + "/data/split/column", schemaPath: "#/properties/data/properties/split/properties/column/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.split.properties.column.type, parentSchema: schema22.properties.data.properties.split.properties.column, data: data12 };
+                                if (vErrors === null) {
+                                    vErrors = [err37];
+                                }
+                                else {
+                                    vErrors.push(err37);
+                                }
+                                errors++;
+                            }
+                        }
+                        if (data11.train !== undefined) {
+                            let data13 = data11.train;
+                            if (typeof data13 === "string") {
+                                if (func1(data13) < 1) {
+                                    const err38 = { instancePath: instancePath + "/data/split/train", schemaPath: "#/properties/data/properties/split/properties/train/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.split.properties.train, data: data13 };
+                                    if (vErrors === null) {
+                                        vErrors = [err38];
+                                    }
+                                    else {
+                                        vErrors.push(err38);
+                                    }
+                                    errors++;
+                                }
+                            }
+                            else {
+                                const err39 = { instancePath: instancePath + "/data/split/train", schemaPath: "#/properties/data/properties/split/properties/train/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.split.properties.train.type, parentSchema: schema22.properties.data.properties.split.properties.train, data: data13 };
+                                if (vErrors === null) {
+                                    vErrors = [err39];
+                                }
+                                else {
+                                    vErrors.push(err39);
+                                }
+                                errors++;
+                            }
+                        }
+                        if (data11.holdout !== undefined) {
+                            let data14 = data11.holdout;
+                            if (typeof data14 === "string") {
+                                if (func1(data14) < 1) {
+                                    const err40 = { instancePath: instancePath + "/data/split/holdout", schemaPath: "#/properties/data/properties/split/properties/holdout/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.split.properties.holdout, data: data14 };
+                                    if (vErrors === null) {
+                                        vErrors = [err40];
+                                    }
+                                    else {
+                                        vErrors.push(err40);
+                                    }
+                                    errors++;
+                                }
+                            }
+                            else {
+                                const err41 = { instancePath: instancePath + "/data/split/holdout", schemaPath: "#/properties/data/properties/split/properties/holdout/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.split.properties.holdout.type, parentSchema: schema22.properties.data.properties.split.properties.holdout, data: data14 };
+                                if (vErrors === null) {
+                                    vErrors = [err41];
+                                }
+                                else {
+                                    vErrors.push(err41);
+                                }
+                                errors++;
+                            }
+                        }
                     }
                     else {
-                        const err35 = { instancePath: instancePath + "/data/positive", schemaPath: "#/properties/data/properties/positive/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.positive.type, parentSchema: schema22.properties.data.properties.positive, data: data14 };
+                        const err42 = { instancePath: instancePath + "/data/split", schemaPath: "#/properties/data/properties/split/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema22.properties.data.properties.split.type, parentSchema: schema22.properties.data.properties.split, data: data11 };
                         if (vErrors === null) {
-                            vErrors = [err35];
+                            vErrors = [err42];
                         }
                         else {
-                            vErrors.push(err35);
+                            vErrors.push(err42);
                         }
                         errors++;
                     }
                 }
-                if (data3.weight !== undefined) {
-                    let data15 = data3.weight;
+                if (data3.target !== undefined) {
+                    let data15 = data3.target;
                     if (typeof data15 === "string") {
                         if (func1(data15) < 1) {
-                            const err36 = { instancePath: instancePath + "/data/weight", schemaPath: "#/properties/data/properties/weight/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.weight, data: data15 };
+                            const err43 = { instancePath: instancePath + "/data/target", schemaPath: "#/properties/data/properties/target/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.target, data: data15 };
                             if (vErrors === null) {
-                                vErrors = [err36];
+                                vErrors = [err43];
                             }
                             else {
-                                vErrors.push(err36);
+                                vErrors.push(err43);
                             }
                             errors++;
                         }
                     }
                     else {
-                        const err37 = { instancePath: instancePath + "/data/weight", schemaPath: "#/properties/data/properties/weight/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.weight.type, parentSchema: schema22.properties.data.properties.weight, data: data15 };
-                        if (vErrors === null) {
-                            vErrors = [err37];
-                        }
-                        else {
-                            vErrors.push(err37);
-                        }
-                        errors++;
-                    }
-                }
-                if (data3.sigma !== undefined) {
-                    let data16 = data3.sigma;
-                    if (typeof data16 === "string") {
-                        if (func1(data16) < 1) {
-                            const err38 = { instancePath: instancePath + "/data/sigma", schemaPath: "#/properties/data/properties/sigma/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.sigma, data: data16 };
-                            if (vErrors === null) {
-                                vErrors = [err38];
-                            }
-                            else {
-                                vErrors.push(err38);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err39 = { instancePath: instancePath + "/data/sigma", schemaPath: "#/properties/data/properties/sigma/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.sigma.type, parentSchema: schema22.properties.data.properties.sigma, data: data16 };
-                        if (vErrors === null) {
-                            vErrors = [err39];
-                        }
-                        else {
-                            vErrors.push(err39);
-                        }
-                        errors++;
-                    }
-                }
-            }
-            else {
-                const err40 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema22.properties.data.type, parentSchema: schema22.properties.data, data: data3 };
-                if (vErrors === null) {
-                    vErrors = [err40];
-                }
-                else {
-                    vErrors.push(err40);
-                }
-                errors++;
-            }
-        }
-        if (data.terms !== undefined) {
-            let data17 = data.terms;
-            if (Array.isArray(data17)) {
-                if (data17.length < 1) {
-                    const err41 = { instancePath: instancePath + "/terms", schemaPath: "#/properties/terms/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema22.properties.terms, data: data17 };
-                    if (vErrors === null) {
-                        vErrors = [err41];
-                    }
-                    else {
-                        vErrors.push(err41);
-                    }
-                    errors++;
-                }
-                const len0 = data17.length;
-                for (let i0 = 0; i0 < len0; i0++) {
-                    if (!(validate76(data17[i0], { instancePath: instancePath + "/terms/" + i0, parentData: data17, parentDataProperty: i0, rootData, dynamicAnchors }))) {
-                        vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
-                        errors = vErrors.length;
-                    }
-                }
-            }
-            else {
-                const err42 = { instancePath: instancePath + "/terms", schemaPath: "#/properties/terms/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema22.properties.terms.type, parentSchema: schema22.properties.terms, data: data17 };
-                if (vErrors === null) {
-                    vErrors = [err42];
-                }
-                else {
-                    vErrors.push(err42);
-                }
-                errors++;
-            }
-        }
-        if (data.fit !== undefined) {
-            let data19 = data.fit;
-            if (data19 && typeof data19 == "object" && !Array.isArray(data19)) {
-                for (const key3 in data19) {
-                    if (!((((((((key3 === "intercept") || (key3 === "refit")) || (key3 === "ridge")) || (key3 === "folds")) || (key3 === "fold_order")) || (key3 === "seed")) || (key3 === "parameter_count")) || (key3 === "threshold"))) {
-                        const err43 = { instancePath: instancePath + "/fit", schemaPath: "#/properties/fit/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key3 }, message: "must NOT have additional properties", schema: false, parentSchema: schema22.properties.fit, data: data19 };
-                        if (vErrors === null) {
-                            vErrors = [err43];
-                        }
-                        else {
-                            vErrors.push(err43);
-                        }
-                        errors++;
-                    }
-                }
-                if (data19.intercept !== undefined) {
-                    let data20 = data19.intercept;
-                    if (typeof data20 !== "boolean") {
-                        const err44 = { instancePath: instancePath + "/fit/intercept", schemaPath: "#/properties/fit/properties/intercept/type", keyword: "type", params: { type: "boolean" }, message: "must be boolean", schema: schema22.properties.fit.properties.intercept.type, parentSchema: schema22.properties.fit.properties.intercept, data: data20 };
+                        const err44 = { instancePath: instancePath + "/data/target", schemaPath: "#/properties/data/properties/target/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.target.type, parentSchema: schema22.properties.data.properties.target, data: data15 };
                         if (vErrors === null) {
                             vErrors = [err44];
                         }
@@ -46513,48 +48436,47 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                         errors++;
                     }
                 }
-                if (data19.refit !== undefined) {
-                    let data21 = data19.refit;
-                    if (typeof data21 !== "boolean") {
-                        const err45 = { instancePath: instancePath + "/fit/refit", schemaPath: "#/properties/fit/properties/refit/type", keyword: "type", params: { type: "boolean" }, message: "must be boolean", schema: schema22.properties.fit.properties.refit.type, parentSchema: schema22.properties.fit.properties.refit, data: data21 };
-                        if (vErrors === null) {
-                            vErrors = [err45];
-                        }
-                        else {
-                            vErrors.push(err45);
-                        }
-                        errors++;
-                    }
-                }
-                if (data19.ridge !== undefined) {
-                    let data22 = data19.ridge;
-                    if ((typeof data22 == "number") && (isFinite(data22))) {
-                        if (data22 < 0 || isNaN(data22)) {
-                            const err46 = { instancePath: instancePath + "/fit/ridge", schemaPath: "#/properties/fit/properties/ridge/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema22.properties.fit.properties.ridge, data: data22 };
+                if (data3.positive !== undefined) {
+                    let data16 = data3.positive;
+                    if (typeof data16 === "string") {
+                        if (func1(data16) < 1) {
+                            const err45 = { instancePath: instancePath + "/data/positive", schemaPath: "#/properties/data/properties/positive/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.positive, data: data16 };
                             if (vErrors === null) {
-                                vErrors = [err46];
+                                vErrors = [err45];
                             }
                             else {
-                                vErrors.push(err46);
+                                vErrors.push(err45);
                             }
                             errors++;
                         }
                     }
                     else {
-                        const err47 = { instancePath: instancePath + "/fit/ridge", schemaPath: "#/properties/fit/properties/ridge/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema22.properties.fit.properties.ridge.type, parentSchema: schema22.properties.fit.properties.ridge, data: data22 };
+                        const err46 = { instancePath: instancePath + "/data/positive", schemaPath: "#/properties/data/properties/positive/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.positive.type, parentSchema: schema22.properties.data.properties.positive, data: data16 };
                         if (vErrors === null) {
-                            vErrors = [err47];
+                            vErrors = [err46];
                         }
                         else {
-                            vErrors.push(err47);
+                            vErrors.push(err46);
                         }
                         errors++;
                     }
                 }
-                if (data19.folds !== undefined) {
-                    let data23 = data19.folds;
-                    if (!(((typeof data23 == "number") && (!(data23 % 1) && !isNaN(data23))) && (isFinite(data23)))) {
-                        const err48 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema22.properties.fit.properties.folds.type, parentSchema: schema22.properties.fit.properties.folds, data: data23 };
+                if (data3.weight !== undefined) {
+                    let data17 = data3.weight;
+                    if (typeof data17 === "string") {
+                        if (func1(data17) < 1) {
+                            const err47 = { instancePath: instancePath + "/data/weight", schemaPath: "#/properties/data/properties/weight/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.weight, data: data17 };
+                            if (vErrors === null) {
+                                vErrors = [err47];
+                            }
+                            else {
+                                vErrors.push(err47);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err48 = { instancePath: instancePath + "/data/weight", schemaPath: "#/properties/data/properties/weight/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.weight.type, parentSchema: schema22.properties.data.properties.weight, data: data17 };
                         if (vErrors === null) {
                             vErrors = [err48];
                         }
@@ -46563,9 +48485,12 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                         }
                         errors++;
                     }
-                    if ((typeof data23 == "number") && (isFinite(data23))) {
-                        if (data23 > 50 || isNaN(data23)) {
-                            const err49 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/maximum", keyword: "maximum", params: { comparison: "<=", limit: 50 }, message: "must be <= 50", schema: 50, parentSchema: schema22.properties.fit.properties.folds, data: data23 };
+                }
+                if (data3.sigma !== undefined) {
+                    let data18 = data3.sigma;
+                    if (typeof data18 === "string") {
+                        if (func1(data18) < 1) {
+                            const err49 = { instancePath: instancePath + "/data/sigma", schemaPath: "#/properties/data/properties/sigma/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.sigma, data: data18 };
                             if (vErrors === null) {
                                 vErrors = [err49];
                             }
@@ -46574,22 +48499,22 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                             }
                             errors++;
                         }
-                        if (data23 < 2 || isNaN(data23)) {
-                            const err50 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/minimum", keyword: "minimum", params: { comparison: ">=", limit: 2 }, message: "must be >= 2", schema: 2, parentSchema: schema22.properties.fit.properties.folds, data: data23 };
-                            if (vErrors === null) {
-                                vErrors = [err50];
-                            }
-                            else {
-                                vErrors.push(err50);
-                            }
-                            errors++;
+                    }
+                    else {
+                        const err50 = { instancePath: instancePath + "/data/sigma", schemaPath: "#/properties/data/properties/sigma/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.sigma.type, parentSchema: schema22.properties.data.properties.sigma, data: data18 };
+                        if (vErrors === null) {
+                            vErrors = [err50];
                         }
+                        else {
+                            vErrors.push(err50);
+                        }
+                        errors++;
                     }
                 }
-                if (data19.fold_order !== undefined) {
-                    let data24 = data19.fold_order;
-                    if (!((data24 === "shuffled") || (data24 === "blocks"))) {
-                        const err51 = { instancePath: instancePath + "/fit/fold_order", schemaPath: "#/properties/fit/properties/fold_order/enum", keyword: "enum", params: { allowedValues: schema22.properties.fit.properties.fold_order.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.fit.properties.fold_order.enum, parentSchema: schema22.properties.fit.properties.fold_order, data: data24 };
+                if (data3.target_transform !== undefined) {
+                    let data19 = data3.target_transform;
+                    if (!(((data19 === "log") || (data19 === "log1p")) || (data19 === "sqrt"))) {
+                        const err51 = { instancePath: instancePath + "/data/target_transform", schemaPath: "#/properties/data/properties/target_transform/enum", keyword: "enum", params: { allowedValues: schema22.properties.data.properties.target_transform.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.data.properties.target_transform.enum, parentSchema: schema22.properties.data.properties.target_transform, data: data19 };
                         if (vErrors === null) {
                             vErrors = [err51];
                         }
@@ -46599,10 +48524,10 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                         errors++;
                     }
                 }
-                if (data19.seed !== undefined) {
-                    let data25 = data19.seed;
-                    if (!(((typeof data25 == "number") && (!(data25 % 1) && !isNaN(data25))) && (isFinite(data25)))) {
-                        const err52 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema22.properties.fit.properties.seed.type, parentSchema: schema22.properties.fit.properties.seed, data: data25 };
+                if (data3.limits_scale !== undefined) {
+                    let data20 = data3.limits_scale;
+                    if (!((data20 === "original") || (data20 === "transformed"))) {
+                        const err52 = { instancePath: instancePath + "/data/limits_scale", schemaPath: "#/properties/data/properties/limits_scale/enum", keyword: "enum", params: { allowedValues: schema22.properties.data.properties.limits_scale.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.data.properties.limits_scale.enum, parentSchema: schema22.properties.data.properties.limits_scale, data: data20 };
                         if (vErrors === null) {
                             vErrors = [err52];
                         }
@@ -46611,68 +48536,83 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                         }
                         errors++;
                     }
-                    if ((typeof data25 == "number") && (isFinite(data25))) {
-                        if (data25 > 4294967295 || isNaN(data25)) {
-                            const err53 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/maximum", keyword: "maximum", params: { comparison: "<=", limit: 4294967295 }, message: "must be <= 4294967295", schema: 4294967295, parentSchema: schema22.properties.fit.properties.seed, data: data25 };
-                            if (vErrors === null) {
-                                vErrors = [err53];
-                            }
-                            else {
-                                vErrors.push(err53);
-                            }
-                            errors++;
-                        }
-                        if (data25 < 0 || isNaN(data25)) {
-                            const err54 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema22.properties.fit.properties.seed, data: data25 };
-                            if (vErrors === null) {
-                                vErrors = [err54];
-                            }
-                            else {
-                                vErrors.push(err54);
-                            }
-                            errors++;
-                        }
+                }
+            }
+            else {
+                const err53 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema22.properties.data.type, parentSchema: schema22.properties.data, data: data3 };
+                if (vErrors === null) {
+                    vErrors = [err53];
+                }
+                else {
+                    vErrors.push(err53);
+                }
+                errors++;
+            }
+        }
+        if (data.terms !== undefined) {
+            let data21 = data.terms;
+            if (Array.isArray(data21)) {
+                if (data21.length < 1) {
+                    const err54 = { instancePath: instancePath + "/terms", schemaPath: "#/properties/terms/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema22.properties.terms, data: data21 };
+                    if (vErrors === null) {
+                        vErrors = [err54];
+                    }
+                    else {
+                        vErrors.push(err54);
+                    }
+                    errors++;
+                }
+                const len2 = data21.length;
+                for (let i2 = 0; i2 < len2; i2++) {
+                    if (!(validate76(data21[i2], { instancePath: instancePath + "/terms/" + i2, parentData: data21, parentDataProperty: i2, rootData, dynamicAnchors }))) {
+                        vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
+                        errors = vErrors.length;
                     }
                 }
-                if (data19.parameter_count !== undefined) {
-                    let data26 = data19.parameter_count;
-                    if (!((data26 === "columns") || (data26 === "effective"))) {
-                        const err55 = { instancePath: instancePath + "/fit/parameter_count", schemaPath: "#/properties/fit/properties/parameter_count/enum", keyword: "enum", params: { allowedValues: schema22.properties.fit.properties.parameter_count.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.fit.properties.parameter_count.enum, parentSchema: schema22.properties.fit.properties.parameter_count, data: data26 };
+            }
+            else {
+                const err55 = { instancePath: instancePath + "/terms", schemaPath: "#/properties/terms/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema22.properties.terms.type, parentSchema: schema22.properties.terms, data: data21 };
+                if (vErrors === null) {
+                    vErrors = [err55];
+                }
+                else {
+                    vErrors.push(err55);
+                }
+                errors++;
+            }
+        }
+        if (data.fit !== undefined) {
+            let data23 = data.fit;
+            if (data23 && typeof data23 == "object" && !Array.isArray(data23)) {
+                for (const key3 in data23) {
+                    if (!(func2.call(schema22.properties.fit.properties, key3))) {
+                        const err56 = { instancePath: instancePath + "/fit", schemaPath: "#/properties/fit/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key3 }, message: "must NOT have additional properties", schema: false, parentSchema: schema22.properties.fit, data: data23 };
                         if (vErrors === null) {
-                            vErrors = [err55];
+                            vErrors = [err56];
                         }
                         else {
-                            vErrors.push(err55);
+                            vErrors.push(err56);
                         }
                         errors++;
                     }
                 }
-                if (data19.threshold !== undefined) {
-                    let data27 = data19.threshold;
-                    if ((typeof data27 == "number") && (isFinite(data27))) {
-                        if (data27 >= 1 || isNaN(data27)) {
-                            const err56 = { instancePath: instancePath + "/fit/threshold", schemaPath: "#/properties/fit/properties/threshold/exclusiveMaximum", keyword: "exclusiveMaximum", params: { comparison: "<", limit: 1 }, message: "must be < 1", schema: 1, parentSchema: schema22.properties.fit.properties.threshold, data: data27 };
-                            if (vErrors === null) {
-                                vErrors = [err56];
-                            }
-                            else {
-                                vErrors.push(err56);
-                            }
-                            errors++;
+                if (data23.intercept !== undefined) {
+                    let data24 = data23.intercept;
+                    if (typeof data24 !== "boolean") {
+                        const err57 = { instancePath: instancePath + "/fit/intercept", schemaPath: "#/properties/fit/properties/intercept/type", keyword: "type", params: { type: "boolean" }, message: "must be boolean", schema: schema22.properties.fit.properties.intercept.type, parentSchema: schema22.properties.fit.properties.intercept, data: data24 };
+                        if (vErrors === null) {
+                            vErrors = [err57];
                         }
-                        if (data27 <= 0 || isNaN(data27)) {
-                            const err57 = { instancePath: instancePath + "/fit/threshold", schemaPath: "#/properties/fit/properties/threshold/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema22.properties.fit.properties.threshold, data: data27 };
-                            if (vErrors === null) {
-                                vErrors = [err57];
-                            }
-                            else {
-                                vErrors.push(err57);
-                            }
-                            errors++;
+                        else {
+                            vErrors.push(err57);
                         }
+                        errors++;
                     }
-                    else {
-                        const err58 = { instancePath: instancePath + "/fit/threshold", schemaPath: "#/properties/fit/properties/threshold/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema22.properties.fit.properties.threshold.type, parentSchema: schema22.properties.fit.properties.threshold, data: data27 };
+                }
+                if (data23.refit !== undefined) {
+                    let data25 = data23.refit;
+                    if (typeof data25 !== "boolean") {
+                        const err58 = { instancePath: instancePath + "/fit/refit", schemaPath: "#/properties/fit/properties/refit/type", keyword: "type", params: { type: "boolean" }, message: "must be boolean", schema: schema22.properties.fit.properties.refit.type, parentSchema: schema22.properties.fit.properties.refit, data: data25 };
                         if (vErrors === null) {
                             vErrors = [err58];
                         }
@@ -46682,36 +48622,35 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                         errors++;
                     }
                 }
-            }
-            else {
-                const err59 = { instancePath: instancePath + "/fit", schemaPath: "#/properties/fit/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema22.properties.fit.type, parentSchema: schema22.properties.fit, data: data19 };
-                if (vErrors === null) {
-                    vErrors = [err59];
-                }
-                else {
-                    vErrors.push(err59);
-                }
-                errors++;
-            }
-        }
-        if (data.coefficients !== undefined) {
-            let data28 = data.coefficients;
-            if (Array.isArray(data28)) {
-                if (data28.length < 1) {
-                    const err60 = { instancePath: instancePath + "/coefficients", schemaPath: "#/properties/coefficients/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema22.properties.coefficients, data: data28 };
-                    if (vErrors === null) {
-                        vErrors = [err60];
+                if (data23.ridge !== undefined) {
+                    let data26 = data23.ridge;
+                    if ((typeof data26 == "number") && (isFinite(data26))) {
+                        if (data26 < 0 || isNaN(data26)) {
+                            const err59 = { instancePath: instancePath + "/fit/ridge", schemaPath: "#/properties/fit/properties/ridge/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema22.properties.fit.properties.ridge, data: data26 };
+                            if (vErrors === null) {
+                                vErrors = [err59];
+                            }
+                            else {
+                                vErrors.push(err59);
+                            }
+                            errors++;
+                        }
                     }
                     else {
-                        vErrors.push(err60);
+                        const err60 = { instancePath: instancePath + "/fit/ridge", schemaPath: "#/properties/fit/properties/ridge/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema22.properties.fit.properties.ridge.type, parentSchema: schema22.properties.fit.properties.ridge, data: data26 };
+                        if (vErrors === null) {
+                            vErrors = [err60];
+                        }
+                        else {
+                            vErrors.push(err60);
+                        }
+                        errors++;
                     }
-                    errors++;
                 }
-                const len1 = data28.length;
-                for (let i1 = 0; i1 < len1; i1++) {
-                    let data29 = data28[i1];
-                    if (!((typeof data29 == "number") && (isFinite(data29)))) {
-                        const err61 = { instancePath: instancePath + "/coefficients/" + i1, schemaPath: "#/properties/coefficients/items/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema22.properties.coefficients.items.type, parentSchema: schema22.properties.coefficients.items, data: data29 };
+                if (data23.folds !== undefined) {
+                    let data27 = data23.folds;
+                    if (!(((typeof data27 == "number") && (!(data27 % 1) && !isNaN(data27))) && (isFinite(data27)))) {
+                        const err61 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema22.properties.fit.properties.folds.type, parentSchema: schema22.properties.fit.properties.folds, data: data27 };
                         if (vErrors === null) {
                             vErrors = [err61];
                         }
@@ -46720,15 +48659,185 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                         }
                         errors++;
                     }
+                    if ((typeof data27 == "number") && (isFinite(data27))) {
+                        if (data27 > 50 || isNaN(data27)) {
+                            const err62 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/maximum", keyword: "maximum", params: { comparison: "<=", limit: 50 }, message: "must be <= 50", schema: 50, parentSchema: schema22.properties.fit.properties.folds, data: data27 };
+                            if (vErrors === null) {
+                                vErrors = [err62];
+                            }
+                            else {
+                                vErrors.push(err62);
+                            }
+                            errors++;
+                        }
+                        if (data27 < 2 || isNaN(data27)) {
+                            const err63 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/minimum", keyword: "minimum", params: { comparison: ">=", limit: 2 }, message: "must be >= 2", schema: 2, parentSchema: schema22.properties.fit.properties.folds, data: data27 };
+                            if (vErrors === null) {
+                                vErrors = [err63];
+                            }
+                            else {
+                                vErrors.push(err63);
+                            }
+                            errors++;
+                        }
+                    }
+                }
+                if (data23.fold_order !== undefined) {
+                    let data28 = data23.fold_order;
+                    if (!((data28 === "shuffled") || (data28 === "blocks"))) {
+                        const err64 = { instancePath: instancePath + "/fit/fold_order", schemaPath: "#/properties/fit/properties/fold_order/enum", keyword: "enum", params: { allowedValues: schema22.properties.fit.properties.fold_order.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.fit.properties.fold_order.enum, parentSchema: schema22.properties.fit.properties.fold_order, data: data28 };
+                        if (vErrors === null) {
+                            vErrors = [err64];
+                        }
+                        else {
+                            vErrors.push(err64);
+                        }
+                        errors++;
+                    }
+                }
+                if (data23.seed !== undefined) {
+                    let data29 = data23.seed;
+                    if (!(((typeof data29 == "number") && (!(data29 % 1) && !isNaN(data29))) && (isFinite(data29)))) {
+                        const err65 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema22.properties.fit.properties.seed.type, parentSchema: schema22.properties.fit.properties.seed, data: data29 };
+                        if (vErrors === null) {
+                            vErrors = [err65];
+                        }
+                        else {
+                            vErrors.push(err65);
+                        }
+                        errors++;
+                    }
+                    if ((typeof data29 == "number") && (isFinite(data29))) {
+                        if (data29 > 4294967295 || isNaN(data29)) {
+                            const err66 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/maximum", keyword: "maximum", params: { comparison: "<=", limit: 4294967295 }, message: "must be <= 4294967295", schema: 4294967295, parentSchema: schema22.properties.fit.properties.seed, data: data29 };
+                            if (vErrors === null) {
+                                vErrors = [err66];
+                            }
+                            else {
+                                vErrors.push(err66);
+                            }
+                            errors++;
+                        }
+                        if (data29 < 0 || isNaN(data29)) {
+                            const err67 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema22.properties.fit.properties.seed, data: data29 };
+                            if (vErrors === null) {
+                                vErrors = [err67];
+                            }
+                            else {
+                                vErrors.push(err67);
+                            }
+                            errors++;
+                        }
+                    }
+                }
+                if (data23.parameter_count !== undefined) {
+                    let data30 = data23.parameter_count;
+                    if (!((data30 === "columns") || (data30 === "effective"))) {
+                        const err68 = { instancePath: instancePath + "/fit/parameter_count", schemaPath: "#/properties/fit/properties/parameter_count/enum", keyword: "enum", params: { allowedValues: schema22.properties.fit.properties.parameter_count.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.fit.properties.parameter_count.enum, parentSchema: schema22.properties.fit.properties.parameter_count, data: data30 };
+                        if (vErrors === null) {
+                            vErrors = [err68];
+                        }
+                        else {
+                            vErrors.push(err68);
+                        }
+                        errors++;
+                    }
+                }
+                if (data23.threshold !== undefined) {
+                    let data31 = data23.threshold;
+                    if ((typeof data31 == "number") && (isFinite(data31))) {
+                        if (data31 >= 1 || isNaN(data31)) {
+                            const err69 = { instancePath: instancePath + "/fit/threshold", schemaPath: "#/properties/fit/properties/threshold/exclusiveMaximum", keyword: "exclusiveMaximum", params: { comparison: "<", limit: 1 }, message: "must be < 1", schema: 1, parentSchema: schema22.properties.fit.properties.threshold, data: data31 };
+                            if (vErrors === null) {
+                                vErrors = [err69];
+                            }
+                            else {
+                                vErrors.push(err69);
+                            }
+                            errors++;
+                        }
+                        if (data31 <= 0 || isNaN(data31)) {
+                            const err70 = { instancePath: instancePath + "/fit/threshold", schemaPath: "#/properties/fit/properties/threshold/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema22.properties.fit.properties.threshold, data: data31 };
+                            if (vErrors === null) {
+                                vErrors = [err70];
+                            }
+                            else {
+                                vErrors.push(err70);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err71 = { instancePath: instancePath + "/fit/threshold", schemaPath: "#/properties/fit/properties/threshold/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema22.properties.fit.properties.threshold.type, parentSchema: schema22.properties.fit.properties.threshold, data: data31 };
+                        if (vErrors === null) {
+                            vErrors = [err71];
+                        }
+                        else {
+                            vErrors.push(err71);
+                        }
+                        errors++;
+                    }
+                }
+                if (data23.refit_compare !== undefined) {
+                    let data32 = data23.refit_compare;
+                    if (typeof data32 !== "boolean") {
+                        const err72 = { instancePath: instancePath + "/fit/refit_compare", schemaPath: "#/properties/fit/properties/refit_compare/type", keyword: "type", params: { type: "boolean" }, message: "must be boolean", schema: schema22.properties.fit.properties.refit_compare.type, parentSchema: schema22.properties.fit.properties.refit_compare, data: data32 };
+                        if (vErrors === null) {
+                            vErrors = [err72];
+                        }
+                        else {
+                            vErrors.push(err72);
+                        }
+                        errors++;
+                    }
                 }
             }
             else {
-                const err62 = { instancePath: instancePath + "/coefficients", schemaPath: "#/properties/coefficients/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema22.properties.coefficients.type, parentSchema: schema22.properties.coefficients, data: data28 };
+                const err73 = { instancePath: instancePath + "/fit", schemaPath: "#/properties/fit/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema22.properties.fit.type, parentSchema: schema22.properties.fit, data: data23 };
                 if (vErrors === null) {
-                    vErrors = [err62];
+                    vErrors = [err73];
                 }
                 else {
-                    vErrors.push(err62);
+                    vErrors.push(err73);
+                }
+                errors++;
+            }
+        }
+        if (data.coefficients !== undefined) {
+            let data33 = data.coefficients;
+            if (Array.isArray(data33)) {
+                if (data33.length < 1) {
+                    const err74 = { instancePath: instancePath + "/coefficients", schemaPath: "#/properties/coefficients/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema22.properties.coefficients, data: data33 };
+                    if (vErrors === null) {
+                        vErrors = [err74];
+                    }
+                    else {
+                        vErrors.push(err74);
+                    }
+                    errors++;
+                }
+                const len3 = data33.length;
+                for (let i3 = 0; i3 < len3; i3++) {
+                    let data34 = data33[i3];
+                    if (!((typeof data34 == "number") && (isFinite(data34)))) {
+                        const err75 = { instancePath: instancePath + "/coefficients/" + i3, schemaPath: "#/properties/coefficients/items/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema22.properties.coefficients.items.type, parentSchema: schema22.properties.coefficients.items, data: data34 };
+                        if (vErrors === null) {
+                            vErrors = [err75];
+                        }
+                        else {
+                            vErrors.push(err75);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err76 = { instancePath: instancePath + "/coefficients", schemaPath: "#/properties/coefficients/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema22.properties.coefficients.type, parentSchema: schema22.properties.coefficients, data: data33 };
+                if (vErrors === null) {
+                    vErrors = [err76];
+                }
+                else {
+                    vErrors.push(err76);
                 }
                 errors++;
             }
@@ -46739,14 +48848,169 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                 errors = vErrors.length;
             }
         }
+        if (data.predictions !== undefined) {
+            let data36 = data.predictions;
+            if (data36 && typeof data36 == "object" && !Array.isArray(data36)) {
+                if (data36.train === undefined) {
+                    const err77 = { instancePath: instancePath + "/predictions", schemaPath: "#/properties/predictions/required", keyword: "required", params: { missingProperty: "train" }, message: "must have required property '" + "train" + "'", schema: schema22.properties.predictions.required, parentSchema: schema22.properties.predictions, data: data36 };
+                    if (vErrors === null) {
+                        vErrors = [err77];
+                    }
+                    else {
+                        vErrors.push(err77);
+                    }
+                    errors++;
+                }
+                if (data36.holdout === undefined) {
+                    const err78 = { instancePath: instancePath + "/predictions", schemaPath: "#/properties/predictions/required", keyword: "required", params: { missingProperty: "holdout" }, message: "must have required property '" + "holdout" + "'", schema: schema22.properties.predictions.required, parentSchema: schema22.properties.predictions, data: data36 };
+                    if (vErrors === null) {
+                        vErrors = [err78];
+                    }
+                    else {
+                        vErrors.push(err78);
+                    }
+                    errors++;
+                }
+                for (const key4 in data36) {
+                    if (!(((key4 === "train") || (key4 === "holdout")) || (key4 === "inputs"))) {
+                        const err79 = { instancePath: instancePath + "/predictions", schemaPath: "#/properties/predictions/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key4 }, message: "must NOT have additional properties", schema: false, parentSchema: schema22.properties.predictions, data: data36 };
+                        if (vErrors === null) {
+                            vErrors = [err79];
+                        }
+                        else {
+                            vErrors.push(err79);
+                        }
+                        errors++;
+                    }
+                }
+                if (data36.train !== undefined) {
+                    if (!(validate102(data36.train, { instancePath: instancePath + "/predictions/train", parentData: data36, parentDataProperty: "train", rootData, dynamicAnchors }))) {
+                        vErrors = vErrors === null ? validate102.errors : vErrors.concat(validate102.errors);
+                        errors = vErrors.length;
+                    }
+                }
+                if (data36.holdout !== undefined) {
+                    if (!(validate102(data36.holdout, { instancePath: instancePath + "/predictions/holdout", parentData: data36, parentDataProperty: "holdout", rootData, dynamicAnchors }))) {
+                        vErrors = vErrors === null ? validate102.errors : vErrors.concat(validate102.errors);
+                        errors = vErrors.length;
+                    }
+                }
+                if (data36.inputs !== undefined) {
+                    let data39 = data36.inputs;
+                    if (Array.isArray(data39)) {
+                        if (data39.length > 1000) {
+                            const err80 = { instancePath: instancePath + "/predictions/inputs", schemaPath: "#/properties/predictions/properties/inputs/maxItems", keyword: "maxItems", params: { limit: 1000 }, message: "must NOT have more than 1000 items", schema: 1000, parentSchema: schema22.properties.predictions.properties.inputs, data: data39 };
+                            if (vErrors === null) {
+                                vErrors = [err80];
+                            }
+                            else {
+                                vErrors.push(err80);
+                            }
+                            errors++;
+                        }
+                        if (data39.length < 1) {
+                            const err81 = { instancePath: instancePath + "/predictions/inputs", schemaPath: "#/properties/predictions/properties/inputs/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema22.properties.predictions.properties.inputs, data: data39 };
+                            if (vErrors === null) {
+                                vErrors = [err81];
+                            }
+                            else {
+                                vErrors.push(err81);
+                            }
+                            errors++;
+                        }
+                        const len4 = data39.length;
+                        for (let i4 = 0; i4 < len4; i4++) {
+                            let data40 = data39[i4];
+                            if (typeof data40 === "string") {
+                                if (func1(data40) < 1) {
+                                    const err82 = { instancePath: instancePath + "/predictions/inputs/" + i4, schemaPath: "#/properties/predictions/properties/inputs/items/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.predictions.properties.inputs.items, data: data40 };
+                                    if (vErrors === null) {
+                                        vErrors = [err82];
+                                    }
+                                    else {
+                                        vErrors.push(err82);
+                                    }
+                                    errors++;
+                                }
+                            }
+                            else {
+                                const err83 = { instancePath: instancePath + "/predictions/inputs/" + i4, schemaPath: "#/properties/predictions/properties/inputs/items/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.predictions.properties.inputs.items.type, parentSchema: schema22.properties.predictions.properties.inputs.items, data: data40 };
+                                if (vErrors === null) {
+                                    vErrors = [err83];
+                                }
+                                else {
+                                    vErrors.push(err83);
+                                }
+                                errors++;
+                            }
+                        }
+                    }
+                    else {
+                        const err84 = { instancePath: instancePath + "/predictions/inputs", schemaPath: "#/properties/predictions/properties/inputs/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema22.properties.predictions.properties.inputs.type, parentSchema: schema22.properties.predictions.properties.inputs, data: data39 };
+                        if (vErrors === null) {
+                            vErrors = [err84];
+                        }
+                        else {
+                            vErrors.push(err84);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err85 = { instancePath: instancePath + "/predictions", schemaPath: "#/properties/predictions/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema22.properties.predictions.type, parentSchema: schema22.properties.predictions, data: data36 };
+                if (vErrors === null) {
+                    vErrors = [err85];
+                }
+                else {
+                    vErrors.push(err85);
+                }
+                errors++;
+            }
+        }
+        if (data.parameters !== undefined) {
+            let data41 = data.parameters;
+            if (!(((typeof data41 == "number") && (!(data41 % 1) && !isNaN(data41))) && (isFinite(data41)))) {
+                const err86 = { instancePath: instancePath + "/parameters", schemaPath: "#/properties/parameters/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema22.properties.parameters.type, parentSchema: schema22.properties.parameters, data: data41 };
+                if (vErrors === null) {
+                    vErrors = [err86];
+                }
+                else {
+                    vErrors.push(err86);
+                }
+                errors++;
+            }
+            if ((typeof data41 == "number") && (isFinite(data41))) {
+                if (data41 > 1000000000000 || isNaN(data41)) {
+                    const err87 = { instancePath: instancePath + "/parameters", schemaPath: "#/properties/parameters/maximum", keyword: "maximum", params: { comparison: "<=", limit: 1000000000000 }, message: "must be <= 1000000000000", schema: 1000000000000, parentSchema: schema22.properties.parameters, data: data41 };
+                    if (vErrors === null) {
+                        vErrors = [err87];
+                    }
+                    else {
+                        vErrors.push(err87);
+                    }
+                    errors++;
+                }
+                if (data41 < 1 || isNaN(data41)) {
+                    const err88 = { instancePath: instancePath + "/parameters", schemaPath: "#/properties/parameters/minimum", keyword: "minimum", params: { comparison: ">=", limit: 1 }, message: "must be >= 1", schema: 1, parentSchema: schema22.properties.parameters, data: data41 };
+                    if (vErrors === null) {
+                        vErrors = [err88];
+                    }
+                    else {
+                        vErrors.push(err88);
+                    }
+                    errors++;
+                }
+            }
+        }
     }
     else {
-        const err63 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema22.type, parentSchema: schema22, data };
+        const err89 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema22.type, parentSchema: schema22, data };
         if (vErrors === null) {
-            vErrors = [err63];
+            vErrors = [err89];
         }
         else {
-            vErrors.push(err63);
+            vErrors.push(err89);
         }
         errors++;
     }
@@ -46779,6 +49043,8 @@ function run(validate, value) {
     return validate(value) ? null : [...(validate.errors ?? [])];
 }
 
+// EXTERNAL MODULE: ./src/core/errors.ts
+var errors = __nccwpck_require__(4296);
 // EXTERNAL MODULE: ./node_modules/yaml/dist/index.js
 var dist = __nccwpck_require__(8815);
 ;// CONCATENATED MODULE: ./src/config/yaml-source.ts
@@ -46825,11 +49091,11 @@ function decodeYamlBytes(bytes, file) {
     }
     catch {
         const at = firstInvalidUtf8(bytes);
-        throw new core_errors/* InputError */.dz(YAML_ERROR.encoding, `is not UTF-8 text (invalid byte 0x${bytes[at].toString(16).padStart(2, '0')} at offset ${at}); expected a UTF-8 YAML file`, { file, ...positionInBytes(bytes, at) });
+        throw new errors/* InputError */.dz(YAML_ERROR.encoding, `is not UTF-8 text (invalid byte 0x${bytes[at].toString(16).padStart(2, '0')} at offset ${at}); expected a UTF-8 YAML file`, { file, ...positionInBytes(bytes, at) });
     }
     const nul = text.indexOf('\u0000');
     if (nul >= 0) {
-        throw new core_errors/* InputError */.dz(YAML_ERROR.encoding, 'contains a NUL character, so it looks binary; expected a UTF-8 YAML file', {
+        throw new errors/* InputError */.dz(YAML_ERROR.encoding, 'contains a NUL character, so it looks binary; expected a UTF-8 YAML file', {
             file,
             ...positionInText(text, nul),
         });
@@ -46863,7 +49129,7 @@ function parseYaml(text, file) {
     // stack) on documents nested thousands deep, so refuse those before parsing.
     const rough = roughNesting(text);
     if (rough.depth > ROUGH_DEPTH_CAP) {
-        throw new core_errors/* InputError */.dz(YAML_ERROR.tooDeep, `is nested more than ${YAML_GUARDS.maxDepth} levels deep; expected a shallow settings or descriptor file`, { file, ...positionInText(text, rough.offset) });
+        throw new errors/* InputError */.dz(YAML_ERROR.tooDeep, `is nested more than ${YAML_GUARDS.maxDepth} levels deep; expected a shallow settings or descriptor file`, { file, ...positionInText(text, rough.offset) });
     }
     const lineCounter = new dist/* LineCounter */.HN();
     const doc = (0,dist/* parseDocument */.Tp)(text, { lineCounter, prettyErrors: false, uniqueKeys: false, version: '1.2', schema: 'core' });
@@ -46875,7 +49141,7 @@ function parseYaml(text, file) {
         const error = doc.errors[0];
         const stackOverflow = /call stack/i.test(error.message);
         const message = error.message.replace(/ at line \d+, column \d+:?[\s\S]*$/, '');
-        throw new core_errors/* InputError */.dz(stackOverflow ? YAML_ERROR.tooDeep : YAML_ERROR.syntax, stackOverflow ? `is nested too deeply; expected at most ${YAML_GUARDS.maxDepth} levels` : `is not valid YAML: ${(0,core_errors/* clip */.$Q)(message, 120)}`, { file, ...at(error.pos[0]) });
+        throw new errors/* InputError */.dz(stackOverflow ? YAML_ERROR.tooDeep : YAML_ERROR.syntax, stackOverflow ? `is nested too deeply; expected at most ${YAML_GUARDS.maxDepth} levels` : `is not valid YAML: ${(0,errors/* clip */.$Q)(message, 120)}`, { file, ...at(error.pos[0]) });
     }
     checkStructure(doc, text, file, at);
     let value;
@@ -46884,7 +49150,7 @@ function parseYaml(text, file) {
     }
     catch (error) {
         const first = firstAlias(doc.contents);
-        throw new core_errors/* InputError */.dz(YAML_ERROR.aliases, `expands aliases (*name) more than ${YAML_GUARDS.maxAliasCount} times (${error instanceof Error ? error.message : String(error)}); expected few aliases`, { file, ...(first ? at(first) : {}) });
+        throw new errors/* InputError */.dz(YAML_ERROR.aliases, `expands aliases (*name) more than ${YAML_GUARDS.maxAliasCount} times (${error instanceof Error ? error.message : String(error)}); expected few aliases`, { file, ...(first ? at(first) : {}) });
     }
     const locate = (path, wantValue) => {
         let node = doc.contents;
@@ -46981,7 +49247,7 @@ function checkStructure(doc, text, file, at) {
     const visit = (node, depth) => {
         if ((0,dist/* isMap */.jh)(node) || (0,dist/* isSeq */.oP)(node)) {
             if (depth > YAML_GUARDS.maxDepth) {
-                throw new core_errors/* InputError */.dz(YAML_ERROR.tooDeep, `is nested more than ${YAML_GUARDS.maxDepth} levels deep; expected a shallow settings or descriptor file`, {
+                throw new errors/* InputError */.dz(YAML_ERROR.tooDeep, `is nested more than ${YAML_GUARDS.maxDepth} levels deep; expected a shallow settings or descriptor file`, {
                     file,
                     ...(node.range ? at(node.range[0]) : {}),
                 });
@@ -46997,7 +49263,7 @@ function checkStructure(doc, text, file, at) {
                 if ((0,dist/* isMap */.jh)(keyNode) || (0,dist/* isSeq */.oP)(keyNode)) {
                     const range = pair.key?.range;
                     const written = range ? text.slice(range[0], range[1]).replace(/\s+/g, ' ').trim() : '';
-                    throw new core_errors/* InputError */.dz(YAML_ERROR.collectionKey, `a ${(0,dist/* isMap */.jh)(keyNode) ? 'mapping' : 'list'} used as a key (\`${(0,core_errors/* clip */.$Q)(written, 40)}\`); expected a plain name before the colon`, {
+                    throw new errors/* InputError */.dz(YAML_ERROR.collectionKey, `a ${(0,dist/* isMap */.jh)(keyNode) ? 'mapping' : 'list'} used as a key (\`${(0,errors/* clip */.$Q)(written, 40)}\`); expected a plain name before the colon`, {
                         file,
                         ...at(keyOffset),
                     });
@@ -47006,7 +49272,7 @@ function checkStructure(doc, text, file, at) {
                 const before = seen.get(key);
                 if (before !== undefined) {
                     const first = at(before);
-                    throw new core_errors/* InputError */.dz(YAML_ERROR.duplicateKey, `key \`${(0,core_errors/* clip */.$Q)(key)}\` appears twice in the same mapping (first at line ${first.line}); expected each key once`, {
+                    throw new errors/* InputError */.dz(YAML_ERROR.duplicateKey, `key \`${(0,errors/* clip */.$Q)(key)}\` appears twice in the same mapping (first at line ${first.line}); expected each key once`, {
                         file,
                         key,
                         ...at(keyOffset),
@@ -47068,7 +49334,7 @@ function firstAlias(root) {
 }
 function checkSize(bytes, file) {
     if (bytes > YAML_GUARDS.maxBytes) {
-        throw new core_errors/* InputError */.dz(YAML_ERROR.tooLarge, `is ${bytes} bytes; expected a YAML file of at most ${YAML_GUARDS.maxBytes} bytes (1 MiB)`, {
+        throw new errors/* InputError */.dz(YAML_ERROR.tooLarge, `is ${bytes} bytes; expected a YAML file of at most ${YAML_GUARDS.maxBytes} bytes (1 MiB)`, {
             file,
         });
     }
@@ -47190,13 +49456,13 @@ async function loadSettings(repo, path, options = {}) {
     const notes = await yamlTwinNotes(repo, path);
     if (kind === 'missing') {
         if (options.explicit) {
-            throw new core_errors/* InputError */.dz(SETTINGS_ERROR.missing, `settings file not found in ${repo.label}; expected a YAML file such as ${DEFAULT_SETTINGS_PATH}`, { file: path });
+            throw new errors/* InputError */.dz(SETTINGS_ERROR.missing, `settings file not found in ${repo.label}; expected a YAML file such as ${DEFAULT_SETTINGS_PATH}`, { file: path });
         }
         return { ...defaultSettings(), notes };
     }
     if (kind !== 'file') {
         // A folder, a link to nothing or a FIFO where the settings belong is never taken for "no settings".
-        throw new core_errors/* InputError */.dz(repo_path/* NOT_A_FILE */.bd, `the settings file ${(0,repo_path/* kindWords */.Gk)(kind)}; expected a regular YAML file there, or nothing at all (for the defaults)`, { file: path });
+        throw new errors/* InputError */.dz(repo_path/* NOT_A_FILE */.bd, `the settings file ${(0,repo_path/* kindWords */.Gk)(kind)}; expected a regular YAML file there, or nothing at all (for the defaults)`, { file: path });
     }
     const doc = await readYamlFile(repo, path);
     // The same object (the pattern lines are kept beside it).
@@ -47222,7 +49488,7 @@ async function yamlTwinNotes(repo, path) {
     if (kind === 'missing')
         return [];
     return [
-        `${(0,core_errors/* clip */.$Q)(twin)} is not read: fitgate reads its settings from ${(0,core_errors/* clip */.$Q)(path)} (rename the file, or name it with --config / the \`config\` input)`,
+        `${(0,errors/* clip */.$Q)(twin)} is not read: fitgate reads its settings from ${(0,errors/* clip */.$Q)(path)} (rename the file, or name it with --config / the \`config\` input)`,
     ];
 }
 /**
@@ -47234,7 +49500,7 @@ async function yamlTwinNotes(repo, path) {
 function settingsFromDocument(doc, file) {
     const errors = validateSettingsValue(doc.value);
     if (errors)
-        throw schemaError(errors, doc, file);
+        throw (0,schema_errors/* schemaError */.g$)(errors, doc, file);
     const raw = doc.value;
     const defaults = defaultSettings();
     const settings = {
@@ -47272,7 +49538,7 @@ function readLimits(doc, file, limits, at) {
     for (const [key, spec] of Object.entries(limits ?? {})) {
         const problem = limitOrderProblem(spec, limitDirection(key));
         if (problem !== null)
-            throw errorAt(doc, file, SETTINGS_ERROR.limitOrder, [...at, key, problem[0]], problem[1]);
+            throw (0,schema_errors/* errorAt */.Os)(doc, file, SETTINGS_ERROR.limitOrder, [...at, key, problem[0]], problem[1]);
         out[key] = { spec: typeof spec === 'object' ? { ...spec } : spec, line: doc.positionOf([...at, key])?.line ?? 1 };
     }
     return out;
@@ -47321,10 +49587,10 @@ async function discoverDescriptors(repo, settings, explicit) {
             const path = normaliseGiven(given);
             const kind = await repo.entryKind(path);
             if (kind === 'missing') {
-                throw new core_errors/* InputError */.dz(DISCOVER_ERROR.missing, `descriptor not found in ${repo.label}; expected a repository-relative path to a *.model.yml file`, { file: given });
+                throw new errors/* InputError */.dz(DISCOVER_ERROR.missing, `descriptor not found in ${repo.label}; expected a repository-relative path to a *.model.yml file`, { file: given });
             }
             if (kind !== 'file')
-                throw new core_errors/* InputError */.dz(DISCOVER_ERROR.notAFile, `the descriptor ${(0,repo_path/* kindWords */.Gk)(kind)}; expected a regular *.model.yml file`, {
+                throw new errors/* InputError */.dz(DISCOVER_ERROR.notAFile, `the descriptor ${(0,repo_path/* kindWords */.Gk)(kind)}; expected a regular *.model.yml file`, {
                     file: given,
                 });
             found.add(path);
@@ -47333,7 +49599,7 @@ async function discoverDescriptors(repo, settings, explicit) {
     }
     for (const [index, pattern] of settings.models.entries()) {
         const where = { file: settings.file ?? undefined, line: modelPatternLine(settings, index) ?? undefined, key: `models[${index}]` };
-        const shown = (0,core_errors/* quoteValue */.cl)(pattern);
+        const shown = (0,errors/* quoteValue */.cl)(pattern);
         const { matches, twins, links } = await globWithTwin(repo, pattern, where);
         const unread = twins.length > 0
             ? `${listNames(twins)} ${twins.length === 1 ? 'is' : 'are'} not read: the pattern asks for .yml, and fitgate reads only the names a pattern matches (rename ${twins.length === 1 ? 'it' : 'them'} to .yml, or change the pattern)`
@@ -47347,7 +49613,7 @@ async function discoverDescriptors(repo, settings, explicit) {
                 .filter((t) => t !== '')
                 .map((t) => `; ${t}`)
                 .join('');
-            throw new core_errors/* InputError */.dz(DISCOVER_ERROR.globEmpty, `pattern ${shown}${source} matches no file in ${repo.label}; expected at least one model descriptor${why}`, where);
+            throw new errors/* InputError */.dz(DISCOVER_ERROR.globEmpty, `pattern ${shown}${source} matches no file in ${repo.label}; expected at least one model descriptor${why}`, where);
         }
         if (unread !== '')
             notes.push(`pattern ${shown}: ${unread}.`);
@@ -47377,7 +49643,7 @@ async function globWithTwin(repo, pattern, where) {
                 };
             }
             catch (error) {
-                if (!(error instanceof core_errors/* InputError */.dz))
+                if (!(error instanceof errors/* InputError */.dz))
                     throw error;
                 // The twin alone is over a cap: fall through to the pattern alone, whose error (if any) is the one to show.
             }
@@ -47386,14 +49652,14 @@ async function globWithTwin(repo, pattern, where) {
         return { matches: alone.paths, twins: [], links: alone.notEntered };
     }
     catch (error) {
-        if (!(error instanceof core_errors/* InputError */.dz) || error.location.file !== undefined)
+        if (!(error instanceof errors/* InputError */.dz) || error.location.file !== undefined)
             throw error;
-        throw new core_errors/* InputError */.dz(error.code === DISCOVER_ERROR.outside ? DISCOVER_ERROR.globOutside : error.code, error.message, where);
+        throw new errors/* InputError */.dz(error.code === DISCOVER_ERROR.outside ? DISCOVER_ERROR.globOutside : error.code, error.message, where);
     }
 }
 /** Up to {@link NAMES_LISTED} names, each cut to 80 characters, then how many more. */
 function listNames(names) {
-    const shown = names.slice(0, NAMES_LISTED).map((n) => (0,core_errors/* clip */.$Q)(n));
+    const shown = names.slice(0, NAMES_LISTED).map((n) => (0,errors/* clip */.$Q)(n));
     return names.length > NAMES_LISTED ? `${shown.join(', ')} and ${names.length - NAMES_LISTED} more` : shown.join(', ');
 }
 /**
@@ -47407,7 +49673,7 @@ function checkUniqueNames(descriptors) {
     for (const d of descriptors) {
         const first = seen.get(d.name);
         if (first) {
-            throw new core_errors/* InputError */.dz(DISCOVER_ERROR.duplicateName, `model name ${(0,core_errors/* quoteValue */.cl)(d.name)} is also used by ${(0,core_errors/* clip */.$Q)(first.file)}:${first.nameLine}; expected a name unique in the repository`, { file: d.file, line: d.nameLine, key: 'name' });
+            throw new errors/* InputError */.dz(DISCOVER_ERROR.duplicateName, `model name ${(0,errors/* quoteValue */.cl)(d.name)} is also used by ${(0,errors/* clip */.$Q)(first.file)}:${first.nameLine}; expected a name unique in the repository`, { file: d.file, line: d.nameLine, key: 'name' });
         }
         seen.set(d.name, d);
     }
@@ -47416,7 +49682,7 @@ function normaliseGiven(given) {
     const p = given.replace(/\\/g, '/');
     const normal = external_node_path_.posix.normalize(p).replace(/^(\.\/)+/, '');
     if (p.startsWith('/') || /^[A-Za-z]:/.test(p) || normal === '..' || normal.startsWith('../')) {
-        throw new core_errors/* InputError */.dz(DISCOVER_ERROR.outside, 'is outside the repository; expected a path relative to the repository root', {
+        throw new errors/* InputError */.dz(DISCOVER_ERROR.outside, 'is outside the repository; expected a path relative to the repository root', {
             file: given,
         });
     }
@@ -47447,6 +49713,8 @@ const DESCRIPTOR_ERROR = Object.freeze({
     weighting: 'weight-and-sigma',
     spline: 'spline-settings',
     polynomial: 'polynomial-inputs',
+    predictions: 'predictions-form',
+    targetTransform: 'target-transform',
 });
 /**
  * Loads one descriptor, validates it, resolves data paths (relative to the descriptor's
@@ -47456,24 +49724,32 @@ const DESCRIPTOR_ERROR = Object.freeze({
  * @param repo the repository
  * @param path repository-relative descriptor path
  * @param settings the loaded settings file (fit defaults and limits)
- * @throws InputError YAML errors, `schema`, `limit-order`, `rbf-centers`, `path-outside`, `file-missing`
+ * @throws InputError YAML errors, `schema`, `limit-order`, `rbf-centers`, `path-outside`, `file-missing`, and
+ *   the errors of data parts (config/data-paths.ts: `data-glob-empty`, `data-glob`, `data-parts`)
  */
 async function loadDescriptor(repo, path, settings) {
     const doc = await readYamlFile(repo, path);
     const descriptor = descriptorFromDocument(doc, path, settings);
+    const written = doc.value.data;
+    const train = await (0,data_paths/* resolveDataPaths */.t2)(repo, doc, path, 'train', written.train);
+    // With a split column the hold-out rows come from the training file(s).
+    const holdout = written.holdout === undefined ? train : await (0,data_paths/* resolveDataPaths */.t2)(repo, doc, path, 'holdout', written.holdout);
+    for (const [which, found] of [
+        ['train', train],
+        ['holdout', holdout],
+    ]) {
+        if ('single' in found)
+            descriptor.data[which] = found.single;
+        else {
+            descriptor.data[which] = found.parts[0];
+            descriptor.data[which === 'train' ? 'trainParts' : 'holdoutParts'] = found.parts;
+        }
+    }
+    // Side files of a model trained elsewhere: the same rules as data files.
     for (const which of ['train', 'holdout']) {
-        const key = ['data', which];
-        const at = doc.valuePositionOf(key);
-        const where = { line: at?.line ?? descriptor.data.lines[which], column: at?.column ?? 1, key: `data.${which}` };
-        const resolved = await repo.resolve(path, descriptor.data[which], where);
-        const kind = await repo.entryKind(resolved);
-        if (kind === 'missing') {
-            throw errorAt(doc, path, DESCRIPTOR_ERROR.dataMissing, key, `${showValue(descriptor.data[which])} (${(0,core_errors/* clip */.$Q)(resolved)}) is not a file in ${repo.label}; expected a CSV path relative to this descriptor's folder`);
-        }
-        if (kind !== 'file') {
-            throw errorAt(doc, path, DESCRIPTOR_ERROR.notAFile, key, `${showValue(descriptor.data[which])} (${(0,core_errors/* clip */.$Q)(resolved)}) ${(0,repo_path/* kindWords */.Gk)(kind)}; expected a CSV file relative to this descriptor's folder`);
-        }
-        descriptor.data[which] = resolved;
+        const source = descriptor.predictions?.[which];
+        if (source?.file)
+            source.file = await (0,data_paths/* resolveDataFile */.DB)(repo, doc, path, ['predictions', which, 'file'], source.file);
     }
     return descriptor;
 }
@@ -47488,24 +49764,26 @@ async function loadDescriptor(repo, path, settings) {
 function descriptorFromDocument(doc, file, settings) {
     const errors = validateDescriptorValue(doc.value);
     if (errors)
-        throw schemaError(errors, doc, file);
+        throw (0,schema_errors/* schemaError */.g$)(errors, doc, file);
     const raw = doc.value;
     const line = (path) => doc.positionOf(path)?.line ?? 1;
     checkDataForm(doc, file, raw.data);
-    const terms = raw.terms.map((term, index) => readTerm(doc, file, term, index, line(['terms', index])));
-    const termsLine = line(['terms']);
+    const predictions = readPredictions(doc, file, raw, line);
+    const terms = (raw.terms ?? []).map((term, index) => readTerm(doc, file, term, index, line(['terms', index])));
+    const termsLine = predictions !== null ? predictions.line : line(['terms']);
     const fitLine = raw.fit ? line(['fit']) : termsLine;
     const limits = readLimits(doc, file, raw.limits, ['limits']);
     if (raw.fit?.refit === false && !raw.coefficients) {
-        throw errorAt(doc, file, 'score-only-coefficients', ['fit', 'refit'], '`refit: false` scores the shipped coefficients, and the descriptor ships none; expected `coefficients` (one per column, intercept first) or `refit: true`');
+        throw (0,schema_errors/* errorAt */.Os)(doc, file, 'score-only-coefficients', ['fit', 'refit'], '`refit: false` scores the shipped coefficients, and the descriptor ships none; expected `coefficients` (one per column, intercept first) or `refit: true`');
     }
     return {
         file,
         name: raw.name,
         task: raw.task ?? 'regression',
         data: {
-            train: raw.data.train,
-            holdout: raw.data.holdout ?? raw.data.train,
+            // As written until loadDescriptor resolves them (a list's first item here).
+            train: firstWritten(raw.data.train),
+            holdout: firstWritten(raw.data.holdout ?? raw.data.train),
             target: raw.data.target,
             lines: {
                 train: line(['data', 'train']),
@@ -47519,6 +49797,7 @@ function descriptorFromDocument(doc, file, settings) {
             ...(raw.data.split ? { split: { ...raw.data.split, line: line(['data', 'split']) } } : {}),
             positive: raw.data.positive ?? null,
             ...weightingOf(readWeighting(doc, file, raw.data, line)),
+            ...readTargetTransform(doc, file, raw, line),
         },
         terms,
         fit: {
@@ -47532,24 +49811,97 @@ function descriptorFromDocument(doc, file, settings) {
             line: fitLine,
             ridgeLine: raw.fit?.ridge !== undefined ? line(['fit', 'ridge']) : fitLine,
             threshold: raw.fit?.threshold ?? 0.5,
+            ...(raw.fit?.refit_compare !== undefined ? { refitCompare: raw.fit.refit_compare } : {}),
         },
         coefficients: raw.coefficients ? [...raw.coefficients] : null,
         coefficientsLine: raw.coefficients ? line(['coefficients']) : null,
         limits: mergeLimits(settings, limits),
         nameLine: line(['name']),
         termsLine,
+        // Present only for models trained elsewhere, so descriptors of terms keep their shape.
+        ...(predictions !== null
+            ? { predictions, parameters: raw.parameters ?? null, parametersLine: raw.parameters !== undefined ? line(['parameters']) : null }
+            : {}),
     };
+}
+/** A data path as written, or the first of a list. */
+function firstWritten(written) {
+    return typeof written === 'string' ? written : written[0];
+}
+/**
+ * `predictions` (a model trained elsewhere) with the rules the schema cannot say: exactly one of
+ * `terms` and `predictions`; no `coefficients`, `data.weight`/`data.sigma` or `fit.refit` beside
+ * `predictions`; `key` only with `file`; `parameters` only with `predictions`; `fit.refit_compare`
+ * only with `fit.refit: false`.
+ * @returns the spec, or null for a model of terms
+ * @throws InputError `schema` (neither `terms` nor `predictions`), `predictions-form`
+ */
+function readPredictions(doc, file, raw, line) {
+    if (raw.fit?.refit_compare === true && raw.fit.refit !== false) {
+        throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.predictions, ['fit', 'refit_compare'], '`refit_compare` reports a refit beside the shipped coefficients scored as shipped; expected `refit: false` with it (a model that is refitted already reports its shipped coefficients under `shipped`)');
+    }
+    if (raw.fit?.refit_compare === true && raw.data.target_transform !== undefined) {
+        throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.predictions, ['fit', 'refit_compare'], '`refit_compare` reports the refit on the target as written; expected no `refit_compare` beside `data.target_transform`');
+    }
+    if (raw.fit?.refit_compare === true && raw.task === 'classification') {
+        throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.predictions, ['fit', 'refit_compare'], '`refit_compare` reports the refit of a regression model scored as shipped; expected no `refit_compare` on a classifier');
+    }
+    const p = raw.predictions;
+    if (p === undefined) {
+        if (raw.terms === undefined) {
+            throw (0,schema_errors/* errorAt */.Os)(doc, file, schema_errors/* SCHEMA_ERROR_CODE */.$n, ['terms'], 'missing key `terms`; required keys: version, name, data, terms (or `predictions` instead of `terms` for a model trained elsewhere)', 'parent');
+        }
+        if (raw.parameters !== undefined) {
+            throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.predictions, ['parameters'], '`parameters` states the parameter count of a model trained elsewhere (`predictions`); a model of terms counts its design columns, so expected no `parameters` here', 'key');
+        }
+        return null;
+    }
+    const clash = [
+        [raw.terms !== undefined, ['terms'], '`terms`'],
+        [raw.coefficients !== undefined, ['coefficients'], '`coefficients`'],
+        [raw.fit?.refit !== undefined, ['fit', 'refit'], '`fit.refit`'],
+        [raw.data.weight !== undefined, ['data', 'weight'], '`data.weight`'],
+        [raw.data.sigma !== undefined, ['data', 'sigma'], '`data.sigma`'],
+    ].find(([present]) => present);
+    if (clash) {
+        throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.predictions, [...clash[1]], `${clash[2]} does not go with \`predictions\` (a model trained elsewhere: fitgate scores its predictions and fits nothing); expected one of the two`, 'key');
+    }
+    const source = (which) => {
+        const s = p[which];
+        if (s.key !== undefined && s.file === undefined) {
+            throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.predictions, ['predictions', which, 'key'], '`key` matches the rows of a side file with the data rows; expected `file` beside it (or no `key` for a column of the data file)', 'key');
+        }
+        return { column: s.column, file: s.file ?? null, key: s.key ?? null, line: line(['predictions', which]) };
+    };
+    return { train: source('train'), holdout: source('holdout'), inputs: [...(p.inputs ?? [])], line: line(['predictions']) };
 }
 /** `data.weight` or `data.sigma` (the schema lets at most one through), or null. */
 function readWeighting(doc, file, data, line) {
     if (data.weight !== undefined && data.sigma !== undefined) {
-        throw errorAt(doc, file, DESCRIPTOR_ERROR.weighting, ['data', 'sigma'], 'both `weight` and `sigma` are given; expected one of them (sigma means weight 1 / sigma^2)');
+        throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.weighting, ['data', 'sigma'], 'both `weight` and `sigma` are given; expected one of them (sigma means weight 1 / sigma^2)');
     }
     if (data.weight !== undefined)
         return { kind: 'weight', column: data.weight, line: line(['data', 'weight']) };
     if (data.sigma !== undefined)
         return { kind: 'sigma', column: data.sigma, line: line(['data', 'sigma']) };
     return null;
+}
+/**
+ * `data.target_transform` with `data.limits_scale` as `{ targetTransform }`, or nothing (so
+ * descriptors without one keep their shape).
+ * @throws InputError `target-transform` for `limits_scale` without a transform, or a transform on a classifier
+ */
+function readTargetTransform(doc, file, raw, line) {
+    const { target_transform: kind, limits_scale: scale } = raw.data;
+    if (kind === undefined) {
+        if (scale === undefined)
+            return {};
+        throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.targetTransform, ['data', 'limits_scale'], '`limits_scale` chooses between the original and the transformed target, and `data.target_transform` is not given; expected `target_transform: log | log1p | sqrt` or no `limits_scale`');
+    }
+    if (raw.task === 'classification') {
+        throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.targetTransform, ['data', 'target_transform'], "a classifier's target is two classes, which no transform applies to; expected `target_transform` only with `task: regression`");
+    }
+    return { targetTransform: { kind, limitsScale: scale ?? 'original', line: line(['data', 'target_transform']) } };
 }
 /** `{ weighting }` when there is one, else nothing (so unweighted descriptors keep their shape). */
 function weightingOf(weighting) {
@@ -47564,7 +49916,7 @@ function readTerm(doc, file, term, index, line) {
             return withTransform(readMultiPolynomial(doc, file, p, ['terms', index, 'polynomial'], line), p.transform);
         for (const key of ['shift', 'scale']) {
             if (Array.isArray(p[key]))
-                throw errorAt(doc, file, DESCRIPTOR_ERROR.polynomial, ['terms', index, 'polynomial', key], `\`${key}\` is a list but \`of\` names one column; expected one number`);
+                throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.polynomial, ['terms', index, 'polynomial', key], `\`${key}\` is a list but \`of\` names one column; expected one number`);
         }
         return withTransform({
             kind: 'polynomial',
@@ -47595,7 +49947,7 @@ function readTerm(doc, file, term, index, line) {
     if (Array.isArray(r.of))
         return withTransform(readMultiRbf(doc, file, r, ['terms', index, 'rbf'], line), r.transform);
     if (Array.isArray(r.centers) && r.centers.some((c) => typeof c !== 'number')) {
-        throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, ['terms', index, 'rbf', 'centers'], '`of` names one column, so the centres are numbers (a list), `{ from, to, count }`, `{ from, to, step }` or `at-samples`; rows and grids are for several inputs');
+        throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.centers, ['terms', index, 'rbf', 'centers'], '`of` names one column, so the centres are numbers (a list), `{ from, to, count }`, `{ from, to, step }` or `at-samples`; rows and grids are for several inputs');
     }
     return withTransform({
         kind: 'rbf',
@@ -47619,24 +49971,24 @@ function readMultiRbf(doc, file, r, at, line) {
         const rows = c;
         rows.forEach((row, i) => {
             if (row.length !== k)
-                throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'centers', i], `centre ${i + 1} has ${row.length} values for ${k} inputs; expected one per input of \`of\`, in the same order`);
+                throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'centers', i], `centre ${i + 1} has ${row.length} values for ${k} inputs; expected one per input of \`of\`, in the same order`);
         });
         return spec({ kind: 'rows', rows: rows.map((row) => [...row]) });
     }
     if (Array.isArray(c) && c.every((axis) => typeof axis === 'object' && axis !== null && !Array.isArray(axis))) {
         const axes = c;
         if (axes.length !== k)
-            throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'centers'], `the grid has ${axes.length} axes for ${k} inputs; expected one { from, to, count } per input of \`of\``);
+            throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'centers'], `the grid has ${axes.length} axes for ${k} inputs; expected one { from, to, count } per input of \`of\``);
         const total = axes.reduce((p, a) => p * a.count, 1);
         if (total > MAX_RBF_CENTERS)
-            throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'centers'], `the grid has ${total} centres; expected at most ${MAX_RBF_CENTERS}`);
+            throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'centers'], `the grid has ${total} centres; expected at most ${MAX_RBF_CENTERS}`);
         axes.forEach((a, i) => {
             if (a.to < a.from)
-                throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'centers', i, 'to'], `\`to\` ${showValue(a.to)} is below \`from\` ${showValue(a.from)}; expected from <= to`);
+                throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'centers', i, 'to'], `\`to\` ${(0,schema_errors/* showValue */.vp)(a.to)} is below \`from\` ${(0,schema_errors/* showValue */.vp)(a.from)}; expected from <= to`);
         });
         return spec({ kind: 'grid', axes: axes.map((a) => ({ from: a.from, to: a.to, count: a.count })) });
     }
-    throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'centers'], `\`of\` names ${k} columns, so the centres are a list of rows (one value per input), a grid (one { from, to, count } per input) or \`at-samples\``);
+    throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'centers'], `\`of\` names ${k} columns, so the centres are a list of rows (one value per input), a grid (one { from, to, count } per input) or \`at-samples\``);
 }
 function readMultiPolynomial(doc, file, p, at, line) {
     const perInput = (key) => {
@@ -47646,7 +49998,7 @@ function readMultiPolynomial(doc, file, p, at, line) {
         if (!Array.isArray(v))
             return p.of.map(() => v);
         if (v.length !== p.of.length) {
-            throw errorAt(doc, file, DESCRIPTOR_ERROR.polynomial, [...at, key], `\`${key}\` has ${v.length} values for ${p.of.length} inputs; expected one per input of \`of\`, in the same order`);
+            throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.polynomial, [...at, key], `\`${key}\` has ${v.length} values for ${p.of.length} inputs; expected one per input of \`of\`, in the same order`);
         }
         return [...v];
     };
@@ -47656,13 +50008,13 @@ function readSpline(doc, file, spline, at, line) {
     const degree = spline.degree ?? 3;
     const natural = spline.natural ?? false;
     if (natural && degree !== 3) {
-        throw errorAt(doc, file, DESCRIPTOR_ERROR.spline, [...at, 'degree'], `natural splines are cubic; expected degree 3 (or no degree) with \`natural: true\`, got ${showValue(degree)}`);
+        throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.spline, [...at, 'degree'], `natural splines are cubic; expected degree 3 (or no degree) with \`natural: true\`, got ${(0,schema_errors/* showValue */.vp)(degree)}`);
     }
     if (Array.isArray(spline.knots)) {
         const values = [...spline.knots];
         for (let k = 1; k < values.length; k++) {
             if (!(values[k] > values[k - 1])) {
-                throw errorAt(doc, file, DESCRIPTOR_ERROR.spline, [...at, 'knots', k], `knot ${showValue(values[k])} does not follow ${showValue(values[k - 1])}; expected strictly increasing knots`);
+                throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.spline, [...at, 'knots', k], `knot ${(0,schema_errors/* showValue */.vp)(values[k])} does not follow ${(0,schema_errors/* showValue */.vp)(values[k - 1])}; expected strictly increasing knots`);
             }
         }
         return { kind: 'spline', of: spline.of, knots: { kind: 'list', values }, degree, natural, line };
@@ -47675,17 +50027,17 @@ function readCenters(doc, file, centers, at) {
     if (Array.isArray(centers))
         return { kind: 'list', values: [...centers] };
     if (centers.to < centers.from) {
-        throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'to'], `\`to\` ${showValue(centers.to)} is below \`from\` ${showValue(centers.from)}; expected from <= to`);
+        throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'to'], `\`to\` ${(0,schema_errors/* showValue */.vp)(centers.to)} is below \`from\` ${(0,schema_errors/* showValue */.vp)(centers.from)}; expected from <= to`);
     }
     if ('count' in centers) {
         if (centers.count > 1 && centers.to === centers.from) {
-            throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'count'], `${centers.count} centres from ${centers.from} to ${centers.to} would all coincide; expected from < to or count 1`);
+            throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'count'], `${centers.count} centres from ${centers.from} to ${centers.to} would all coincide; expected from < to or count 1`);
         }
         return { kind: 'count', from: centers.from, to: centers.to, count: centers.count };
     }
     const n = Math.floor((centers.to - centers.from) / centers.step) + 1;
     if (!(n <= MAX_RBF_CENTERS)) {
-        throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'step'], `step ${showValue(centers.step)} gives ${Number.isFinite(n) ? n : 'too many'} centres from ${centers.from} to ${centers.to}; expected at most ${MAX_RBF_CENTERS}`);
+        throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'step'], `step ${(0,schema_errors/* showValue */.vp)(centers.step)} gives ${Number.isFinite(n) ? n : 'too many'} centres from ${centers.from} to ${centers.to}; expected at most ${MAX_RBF_CENTERS}`);
     }
     return { kind: 'step', from: centers.from, to: centers.to, step: centers.step };
 }
@@ -47696,16 +50048,16 @@ function readCenters(doc, file, centers, at) {
  */
 function checkDataForm(doc, file, data) {
     if (data.holdout === undefined && data.split === undefined) {
-        throw errorAt(doc, file, DESCRIPTOR_ERROR.dataForm, ['data'], 'expected `data.holdout` (a hold-out CSV) or `data.split` (a split column in the training file); got neither', 'key');
+        throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.dataForm, ['data'], 'expected `data.holdout` (a hold-out CSV) or `data.split` (a split column in the training file); got neither', 'key');
     }
     if (data.holdout !== undefined && data.split !== undefined) {
-        throw errorAt(doc, file, DESCRIPTOR_ERROR.dataForm, ['data', 'split'], 'expected either `data.holdout` or `data.split`, not both: with a split column the hold-out rows come from the training file', 'key');
+        throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.dataForm, ['data', 'split'], 'expected either `data.holdout` or `data.split`, not both: with a split column the hold-out rows come from the training file', 'key');
     }
     if (data.split !== undefined && data.split.train === data.split.holdout) {
-        throw errorAt(doc, file, DESCRIPTOR_ERROR.dataForm, ['data', 'split', 'holdout'], `expected a hold-out label different from the training label ${showValue(data.split.train)}`);
+        throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.dataForm, ['data', 'split', 'holdout'], `expected a hold-out label different from the training label ${(0,schema_errors/* showValue */.vp)(data.split.train)}`);
     }
     if (data.decimal === ',' && data.separator === ',') {
-        throw errorAt(doc, file, DESCRIPTOR_ERROR.dataForm, ['data', 'decimal'], 'a decimal comma needs a separator other than the comma; expected `data.separator` to be ";" or "\\t" (or `auto`)');
+        throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.dataForm, ['data', 'decimal'], 'a decimal comma needs a separator other than the comma; expected `data.separator` to be ";" or "\\t" (or `auto`)');
     }
 }
 
@@ -47739,7 +50091,7 @@ function errorResult(name, descriptor, error) {
         shipped: null,
         checks: [],
         error: {
-            message: key !== undefined && key !== '' ? `\`${(0,core_errors/* clip */.$Q)(key)}\`: ${error.message}` : error.message,
+            message: key !== undefined && key !== '' ? `\`${(0,errors/* clip */.$Q)(key)}\`: ${error.message}` : error.message,
             file: error.location.file ?? null,
             line: error.location.line ?? null,
             ...(error.location.column !== undefined ? { column: error.location.column } : {}),
@@ -47759,7 +50111,7 @@ const TIME_LIMIT = 'time-limit';
  */
 function timeLimitError(descriptor, limitSeconds, elapsedMs, stage, settingsFile) {
     const where = stage === null ? 'its worker thread was stopped' : `stopped in the ${stage}`;
-    return new core_errors/* InputError */.dz(TIME_LIMIT, `did not finish within the time limit of ${limitSeconds} s per model (${where} after ${(elapsedMs / 1000).toFixed(1)} s); raise caps.max_model_seconds in ${settingsFile ?? 'the settings file (fitgate.yml)'} to allow more time, or make the model smaller (fewer rows, columns, folds or sweep settings)`, { file: descriptor.file, line: descriptor.termsLine });
+    return new errors/* InputError */.dz(TIME_LIMIT, `did not finish within the time limit of ${limitSeconds} s per model (${where} after ${(elapsedMs / 1000).toFixed(1)} s); raise caps.max_model_seconds in ${settingsFile ?? 'the settings file (fitgate.yml)'} to allow more time, or make the model smaller (fewer rows, columns, folds or sweep settings)`, { file: descriptor.file, line: descriptor.termsLine });
 }
 
 // EXTERNAL MODULE: external "node:url"
@@ -47767,7 +50119,7 @@ var external_node_url_ = __nccwpck_require__(3136);
 // EXTERNAL MODULE: external "node:worker_threads"
 var external_node_worker_threads_ = __nccwpck_require__(5919);
 // EXTERNAL MODULE: ./src/checks/index.ts + 24 modules
-var src_checks = __nccwpck_require__(3992);
+var src_checks = __nccwpck_require__(1550);
 // EXTERNAL MODULE: ./src/core/deadline.ts
 var core_deadline = __nccwpck_require__(6343);
 // EXTERNAL MODULE: ./src/diagnostics/cross-validation.ts
@@ -47866,7 +50218,7 @@ function indexRows(inputs, full, holdout) {
 }
 /**
  * Streams the training rows past the tables of distinct hold-out rows in file order:
- * firstMatch[q] receives the first training row whose inputs equal those of distinct row q,
+ * firstMatch[q] receives the file line of the first training row whose inputs equal those of distinct row q,
  * targetToo[q] = 1 when some training row has its inputs and its target.
  */
 function matchRows(inputs, full, holdout, train, firstMatch, targetToo) {
@@ -47878,7 +50230,7 @@ function matchRows(inputs, full, holdout, train, firstMatch, targetToo) {
         if (q < 0)
             continue;
         if (firstMatch[q] < 0)
-            firstMatch[q] = i;
+            firstMatch[q] = train.lines[i];
         q = full.slotHead[findSlot(full, rowTargetHash(hash, train.y, i))];
         while (q >= 0 && !(holdout.y[q] === train.y[i] && sameInputs(holdout.inputs, q, train.inputs, i)))
             q = full.next[q];
@@ -47897,34 +50249,61 @@ function matchRows(inputs, full, holdout, train, firstMatch, targetToo) {
  * @param holdout hold-out rows (same input order)
  */
 function findLeakage(train, holdout) {
-    const columns = train.inputs.length;
-    // Tables of the distinct hold-out rows (the smaller file, usually); the training rows then
-    // stream past them in file order, so each hold-out row's first match is the earliest training row.
-    const h = holdout.rows;
-    const byInputs = newTable(h);
-    const byRow = newTable(h);
-    indexRows(byInputs, byRow, holdout);
-    const firstMatch = new Int32Array(h).fill(-1);
-    const targetToo = new Uint8Array(h);
-    if (h > 0)
-        matchRows(byInputs, byRow, holdout, train, firstMatch, targetToo);
-    let inputMatches = 0;
-    let fullMatches = 0;
-    const holdoutLines = [];
-    const trainLines = [];
-    for (let r = 0; r < h; r++) {
-        const first = firstMatch[byInputs.repOf[r]];
-        if (first < 0)
-            continue;
-        inputMatches++;
-        if (targetToo[byRow.repOf[r]] === 1)
-            fullMatches++;
-        if (holdoutLines.length < LEAKAGE_EXAMPLE_LINES) {
-            holdoutLines.push(holdout.lines[r]);
-            trainLines.push(train.lines[first]);
-        }
+    const scan = new LeakageScan(holdout);
+    scan.add(train);
+    return scan.finish();
+}
+/**
+ * {@link findLeakage} over training rows that arrive in chunks (a streamed model,
+ * data/row-source.ts): the tables of the hold-out rows are built once, each chunk streams past
+ * them in file order ({@link add}), and {@link finish} gives the figures. Memory: the hold-out
+ * tables only, whatever the training rows.
+ */
+class LeakageScan {
+    #holdout;
+    #byInputs;
+    #byRow;
+    #firstMatch;
+    #targetToo;
+    /** @param holdout hold-out rows (inputs in the model's order) */
+    constructor(holdout) {
+        // Tables of the distinct hold-out rows (the smaller file, usually); the training rows then
+        // stream past them in file order, so each hold-out row's first match is the earliest training row.
+        const h = holdout.rows;
+        this.#holdout = holdout;
+        this.#byInputs = newTable(h);
+        this.#byRow = newTable(h);
+        indexRows(this.#byInputs, this.#byRow, holdout);
+        this.#firstMatch = new Int32Array(h).fill(-1);
+        this.#targetToo = new Uint8Array(h);
     }
-    return { inputMatches, fullMatches, holdoutLines, trainLines, holdoutRows: holdout.rows, columns };
+    /** Streams the next training rows (in file order) past the hold-out rows. */
+    add(train) {
+        if (this.#holdout.rows > 0)
+            matchRows(this.#byInputs, this.#byRow, this.#holdout, train, this.#firstMatch, this.#targetToo);
+    }
+    /** The figures over every training row added. */
+    finish() {
+        const holdout = this.#holdout;
+        const h = holdout.rows;
+        let inputMatches = 0;
+        let fullMatches = 0;
+        const holdoutLines = [];
+        const trainLines = [];
+        for (let r = 0; r < h; r++) {
+            const first = this.#firstMatch[this.#byInputs.repOf[r]];
+            if (first < 0)
+                continue;
+            inputMatches++;
+            if (this.#targetToo[this.#byRow.repOf[r]] === 1)
+                fullMatches++;
+            if (holdoutLines.length < LEAKAGE_EXAMPLE_LINES) {
+                holdoutLines.push(holdout.lines[r]);
+                trainLines.push(first);
+            }
+        }
+        return { inputMatches, fullMatches, holdoutLines, trainLines, holdoutRows: holdout.rows, columns: holdout.inputs.length };
+    }
 }
 
 // EXTERNAL MODULE: ./src/diagnostics/swing.ts + 1 modules
@@ -47942,21 +50321,25 @@ class ModelAnalyses {
     #crossValidation;
     #swing;
     #leakage;
+    #swingOptions;
     /**
      * @param inputs the model's design, fit and rows
      * @param known results of the run's own passes; default none
+     * @param swingOptions options of the swing scan (e.g. `curveShare`); default none (every default)
      */
-    constructor(inputs, known = {}) {
+    constructor(inputs, known = {}, swingOptions = {}) {
         this.#inputs = inputs;
+        this.#swingOptions = swingOptions;
         this.#folds = known.folds;
         this.#foldFactors = known.foldFactors;
         this.#crossValidation = known.crossValidation ?? undefined;
+        this.#leakage = known.leakage;
     }
     /** The training rows' cross-validation folds (see {@link assignFolds}). */
     folds() {
         if (this.#folds === undefined) {
             const { folds, foldOrder, seed } = this.#inputs.folds;
-            this.#folds = (0,diagnostics_folds/* assignFolds */.o)(this.#inputs.train.rows, folds, foldOrder, seed);
+            this.#folds = (0,diagnostics_folds/* assignFolds */.oF)(this.#inputs.train.rows, folds, foldOrder, seed);
         }
         return this.#folds;
     }
@@ -47979,7 +50362,8 @@ class ModelAnalyses {
     }
     /** Swing between and beyond the samples of the refit (see {@link measureSwing}). */
     swing() {
-        this.#swing ??= (0,swing/* measureSwing */.Fj)(this.#inputs.design, this.#inputs.train, this.#inputs.fit.coefficients);
+        const back = this.#inputs.backTransform;
+        this.#swing ??= (0,swing/* measureSwing */.Fj)(this.#inputs.design, this.#inputs.train, this.#inputs.fit.coefficients, back ? { ...this.#swingOptions, backTransform: back } : this.#swingOptions);
         return this.#swing;
     }
     /** Hold-out rows that repeat a training row (see {@link findLeakage}). */
@@ -47989,58 +50373,6 @@ class ModelAnalyses {
     }
 }
 
-// EXTERNAL MODULE: ./src/result/result.ts
-var result_result = __nccwpck_require__(1628);
-;// CONCATENATED MODULE: ./src/run/base-curves.ts
-/** True when two lists hold the same values in the same order. */
-function same(a, b) {
-    return a.length === b.length && a.every((v, i) => v === b[i]);
-}
-/** The base curve along the same input as `head`, or undefined when the base has none. */
-function baseOf(head, base, commit) {
-    if (!base || base.input !== head.input || base.x.length === 0)
-        return undefined;
-    return { commit, x: [...base.x], y: [...base.y] };
-}
-/**
- * `charts` with the base commit's curves added (`fit.base`, `partials[i].base`, matched by input
- * name), when the model changed: its design columns or coefficients differ from the base's, or
- * a curve does. A model new in the pull request, one that could not be checked on the base, or
- * one whose fit is the same gets no base curve. The head's charts are not modified.
- * @param charts the head model's chart data
- * @param head the head model's design columns and refit coefficients
- * @param baseline the same model on the base commit, or null
- * @param commit full SHA of the base commit
- */
-function withBaseCurves(charts, head, baseline, commit) {
-    const base = baseline?.charts;
-    if (!base || baseline.verdict === 'error')
-        return charts;
-    const curvesDiffer = (charts.fit !== null && base.fit !== null && !same(charts.fit.y, base.fit.y)) ||
-        charts.partials.some((p) => {
-            const b = base.partials.find((q) => q.input === p.input);
-            return b !== undefined && !same(p.y, b.y);
-        });
-    const changed = !same(head.columns, baseline.columns) || !same(head.coefficients, baseline.coefficients) || curvesDiffer;
-    if (!changed)
-        return charts;
-    const fitBase = charts.fit ? baseOf(charts.fit, base.fit, commit) : undefined;
-    return {
-        ...charts,
-        fit: charts.fit && fitBase ? { ...charts.fit, base: fitBase } : charts.fit,
-        partials: charts.partials.map((p) => {
-            const b = baseOf(p, base.partials.find((q) => q.input === p.input), commit);
-            return b ? { ...p, base: b } : p;
-        }),
-    };
-}
-
-// EXTERNAL MODULE: ./src/design/blocks.ts
-var blocks = __nccwpck_require__(7254);
-// EXTERNAL MODULE: ./src/diagnostics/column-median.ts
-var column_median = __nccwpck_require__(8455);
-// EXTERNAL MODULE: ./src/design/stats.ts
-var stats = __nccwpck_require__(6801);
 ;// CONCATENATED MODULE: ./src/result/chart-types.ts
 /**
  * The chart data of a model in the Result: plain series the reporters draw, built by run/chart-data.ts.
@@ -48072,8 +50404,110 @@ const CURVE_POINTS = 401;
 const CURVE_MARGIN = 0.1;
 /** Significant digits kept in chart numbers (plenty for a picture, a third of the JSON size). */
 const CHART_DIGITS = 7;
+/**
+ * Chart numbers a whole run keeps at most, over all its models, before each model's share
+ * shrinks ({@link chartShare}): a run of many models keeps its charts (and its report) near a
+ * fixed size instead of growing by a full model's charts per model.
+ */
+const RUN_CHART_NUMBERS = 1_500_000;
+/**
+ * Chart numbers of one model at its full share, about: two series of {@link MAX_SERIES_NUMBERS},
+ * the fitted curve with the swing check's points on it and the swing curve itself. Runs of up to
+ * {@link RUN_CHART_NUMBERS} / this = 100 models keep every model's full charts.
+ */
+const MODEL_CHART_NUMBERS = 15_000;
+/** Fewest numbers a point series keeps under a shrunk share (50 rows of a model of one input). */
+const MIN_SERIES_NUMBERS = 250;
+/** Fewest grid points a curve keeps under a shrunk share. */
+const MIN_CURVE_POINTS = 51;
+/** The share of a model in a run of up to 100 models: every amount at its maximum. */
+const FULL_CHART_SHARE = Object.freeze({ fraction: 1, seriesNumbers: MAX_SERIES_NUMBERS, curvePoints: CURVE_POINTS });
+/**
+ * Each model's share of the chart data of a run of `models` models (see {@link RUN_CHART_NUMBERS}):
+ * the full amounts up to 100 models; beyond, scaled by 100 / models down to the floors, so that
+ * the charts of 1,000 models take about as much as those of 100 (until the floors, near 2,000
+ * models of one input, after which each model adds its floor amounts).
+ * @param models models in the run (>= 0)
+ */
+function chartShare(models) {
+    const fraction = Math.min(1, RUN_CHART_NUMBERS / (Math.max(1, models) * MODEL_CHART_NUMBERS));
+    if (fraction >= 1)
+        return FULL_CHART_SHARE;
+    return {
+        fraction,
+        seriesNumbers: Math.max(MIN_SERIES_NUMBERS, Math.floor(MAX_SERIES_NUMBERS * fraction)),
+        curvePoints: Math.max(MIN_CURVE_POINTS, Math.floor(CURVE_POINTS * fraction)),
+    };
+}
+/** Most spike intervals a curve's chart data keeps (the largest variations over what is allowed). */
+const MAX_SPIKE_MARKS = 200;
 
+// EXTERNAL MODULE: ./src/result/result.ts
+var result_result = __nccwpck_require__(1628);
+;// CONCATENATED MODULE: ./src/run/base-curves.ts
+/** True when two lists hold the same values in the same order. */
+function same(a, b) {
+    return a.length === b.length && a.every((v, i) => v === b[i]);
+}
+/** The base curve along the same input as `head`, or undefined when the base has none. */
+function baseOf(head, base, commit) {
+    if (!base || base.input !== head.input || base.x.length === 0)
+        return undefined;
+    return { commit, x: [...base.x], y: [...base.y] };
+}
+/**
+ * `charts` with the base commit's curves added (`fit.base`, `partials[i].base`, matched by input
+ * name), when the model changed: its design columns or coefficients differ from the base's, or
+ * a curve does. A model new in the pull request, one that could not be checked on the base, or
+ * one whose fit is the same gets no base curve. The head's charts are not modified.
+ * @param charts the head model's chart data
+ * @param head the head model's design columns and refit coefficients
+ * @param baseline the same model on the base commit, or null
+ * @param commit full SHA of the base commit
+ */
+function withBaseCurves(charts, head, baseline, commit) {
+    const base = baseline?.charts;
+    if (!base || baseline.verdict === 'error')
+        return charts;
+    // Curves are compared only on grids of the same size: a run of over 100 models shrinks each
+    // model's curves by the model count (result/chart-types.ts `chartShare`), which a pull request
+    // adding models changes; the columns and coefficients are compared whatever the grids.
+    const differ = (head, other) => head.x.length === other.x.length && !same(head.y, other.y);
+    const curvesDiffer = (charts.fit !== null && base.fit !== null && differ(charts.fit, base.fit)) ||
+        charts.partials.some((p) => {
+            const b = base.partials.find((q) => q.input === p.input);
+            return b !== undefined && differ(p, b);
+        });
+    const changed = !same(head.columns, baseline.columns) || !same(head.coefficients, baseline.coefficients) || curvesDiffer;
+    if (!changed)
+        return charts;
+    const fitBase = charts.fit ? baseOf(charts.fit, base.fit, commit) : undefined;
+    return {
+        ...charts,
+        fit: charts.fit && fitBase ? { ...charts.fit, base: fitBase } : charts.fit,
+        partials: charts.partials.map((p) => {
+            const b = baseOf(p, base.partials.find((q) => q.input === p.input), commit);
+            return b ? { ...p, base: b } : p;
+        }),
+    };
+}
+
+// EXTERNAL MODULE: ./src/data/data-parts.ts
+var data_parts = __nccwpck_require__(6837);
+// EXTERNAL MODULE: ./src/design/blocks.ts
+var blocks = __nccwpck_require__(7254);
+// EXTERNAL MODULE: ./src/diagnostics/column-median.ts
+var column_median = __nccwpck_require__(8455);
+// EXTERNAL MODULE: ./src/design/stats.ts
+var stats = __nccwpck_require__(6801);
+// EXTERNAL MODULE: ./src/data/target-transform.ts
+var target_transform = __nccwpck_require__(1938);
+// EXTERNAL MODULE: ./src/diagnostics/spikes.ts
+var spikes = __nccwpck_require__(6873);
 ;// CONCATENATED MODULE: ./src/run/chart-data.ts
+
+
+
 
 
 
@@ -48093,12 +50527,23 @@ function thinRows(n, max = MAX_CHART_POINTS) {
         return Int32Array.from({ length: n }, (_, i) => i);
     return Int32Array.from({ length: max }, (_, t) => Math.floor((t * n) / max));
 }
-/** Rows a series of a model with this many inputs keeps at most: {@link MAX_SERIES_NUMBERS} / (inputs + 4), at most `max`. */
-function seriesPoints(inputs, max = MAX_CHART_POINTS) {
-    return Math.max(1, Math.min(max, Math.floor(MAX_SERIES_NUMBERS / (inputs + 4))));
+/**
+ * Rows a series of a model with this many inputs keeps at most: `numbers` / (inputs + 4), at most `max`.
+ * @param numbers most numbers of the series; default {@link MAX_SERIES_NUMBERS} (less under a shrunk {@link ChartShare})
+ */
+function seriesPoints(inputs, max = MAX_CHART_POINTS, numbers = MAX_SERIES_NUMBERS) {
+    return Math.max(1, Math.min(max, Math.floor(numbers / (inputs + 4))));
 }
-function series(data, predictions, max) {
-    const keep = thinRows(data.rows, seriesPoints(data.inputs.length, max));
+/** Read from parts: the parts and each kept row's part (`files`, `file_index`); nothing for one file. */
+function partIndex(data, keep) {
+    const parts = data.parts;
+    if (parts === undefined)
+        return {};
+    const index = new Map(parts.map((p, k) => [p.file, k]));
+    return { files: parts.map((p) => p.file), file_index: Array.from(keep, (i) => index.get((0,data_parts/* placeOfLine */.xX)(data, data.lines[i]).file) ?? 0) };
+}
+function series(data, predictions, max, numbers) {
+    const keep = thinRows(data.rows, seriesPoints(data.inputs.length, max, numbers));
     const thinned = keep.length < data.rows;
     const pick = (col) => Array.from(keep, (i) => chartNumber(col[i]));
     return {
@@ -48106,7 +50551,8 @@ function series(data, predictions, max) {
         shown: keep.length,
         thinned,
         thinning: thinned ? `${keep.length} of ${data.rows} rows, evenly spaced through the file` : '',
-        lines: Array.from(keep, (i) => data.lines[i]),
+        lines: Array.from(keep, (i) => (0,data_parts/* placeOfLine */.xX)(data, data.lines[i]).line),
+        ...partIndex(data, keep),
         x: data.inputs.map(pick),
         actual: pick(data.y),
         fitted: pick(predictions),
@@ -48128,6 +50574,11 @@ function curveAlong(model, c, lo, hi, medians, extra, points) {
     const grid = Float64Array.from(xs).sort();
     const columns = model.design.inputs.map((_, k) => (k === c ? grid : new Float64Array(grid.length).fill(medians[k])));
     const pred = (0,blocks/* predictRows */.tp)(model.design, { inputs: columns, rows: grid.length }, model.fit.coefficients);
+    // A transformed target judged on the original scale is drawn on it (as the swing check scans it).
+    const scale = originalScale(model);
+    if (scale !== null)
+        for (let i = 0; i < pred.length; i++)
+            pred[i] = (0,target_transform/* inverseTarget */.I)(scale.transform, pred[i]);
     const x = [];
     const y = [];
     for (let i = 0; i < grid.length; i++) {
@@ -48138,6 +50589,50 @@ function curveAlong(model, c, lo, hi, medians, extra, points) {
         y.push(chartNumber(pred[i]));
     }
     return { x, y };
+}
+/** The target scale of a model fitted on a transformed target whose limits judge the original scale, else null. */
+function originalScale(model) {
+    const scale = model.targetScale ?? null;
+    return scale !== null && scale.limitsScale === 'original' ? scale : null;
+}
+/**
+ * The intervals along input c where the curve spikes (diagnostics/spikes.ts, {@link spikeIntervals}),
+ * judged with the `swing-spikes` outcome's warning limit, else its fail limit; only when that check
+ * warns or fails (the marks show where its figure comes from), null otherwise, when none is marked
+ * or the input is a category. The largest {@link MAX_SPIKE_MARKS} are kept.
+ */
+function spikeMarks(model, checks, c) {
+    const check = checks.find((k) => k.id === 'swing-spikes');
+    const limit = check?.warn ?? check?.limit ?? null;
+    // Marks explain a finding: only when the figure is over its warning or fail limit.
+    if (check === undefined || (check.status !== 'warn' && check.status !== 'fail') || limit === null || !(limit > 0))
+        return null;
+    const name = model.design.inputs[c];
+    if (model.design.terms.some((t) => t.discreteValues !== undefined && t.inputs.includes(name)))
+        return null;
+    const scale = originalScale(model);
+    const original = scale !== null ? { kind: scale.transform, y: scale.originalRows.train.y, weights: scale.originalRows.train.weights } : undefined;
+    const found = (0,spikes/* spikeIntervals */.jN)(model.design, model.tables.train, model.fit.coefficients, c, limit, original);
+    if (found.length === 0)
+        return null;
+    const kept = found.length <= MAX_SPIKE_MARKS
+        ? found
+        : found
+            .map((s, i) => ({ s, i }))
+            .sort((a, b) => b.s.curveVariation / b.s.allowed - a.s.curveVariation / a.s.allowed || a.i - b.i)
+            .slice(0, MAX_SPIKE_MARKS)
+            .sort((a, b) => a.i - b.i)
+            .map((e) => e.s);
+    return {
+        limit,
+        intervals: kept.map((s) => ({
+            from: chartNumber(s.from) ?? s.from,
+            to: chartNumber(s.to) ?? s.to,
+            variation: chartNumber(s.curveVariation),
+            allowed: chartNumber(s.allowed),
+        })),
+        ...(found.length > kept.length ? { left_out: found.length - kept.length } : {}),
+    };
 }
 /**
  * Stretches of the curve outside [lo, hi]; edges are placed where the straight line between two
@@ -48254,8 +50749,9 @@ function readSweep(checks) {
  * @param model the fitted model (design, coefficients, data, predictions)
  * @param checks the model's check outcomes (swing and complexity details are read when present)
  * @param maxPoints most points per series; default {@link MAX_CHART_POINTS}
+ * @param share the model's share of the run's chart data (series numbers, curve points); default the full share
  */
-function buildChartData(model, checks, maxPoints = MAX_CHART_POINTS) {
+function buildChartData(model, checks, maxPoints = MAX_CHART_POINTS, share = FULL_CHART_SHARE) {
     const { design, tables, metrics, fit, descriptor } = model;
     const { train, holdout } = tables;
     const inputs = [...design.inputs];
@@ -48266,7 +50762,7 @@ function buildChartData(model, checks, maxPoints = MAX_CHART_POINTS) {
         if (hi > lo)
             spread++;
     }
-    const points = inputs.length === 1 ? CURVE_POINTS : partialCurvePoints(Math.min(spread, MAX_PARTIAL_CURVES));
+    const points = Math.min(share.curvePoints, inputs.length === 1 ? CURVE_POINTS : partialCurvePoints(Math.min(spread, MAX_PARTIAL_CURVES)));
     // One input: the curve over the scanned range with the band; several: partial curves.
     let fitCurve = null;
     const partials = [];
@@ -48290,9 +50786,18 @@ function buildChartData(model, checks, maxPoints = MAX_CHART_POINTS) {
             if (k !== c)
                 others[name] = chartNumber(medians[k]) ?? 0;
         });
-        const curve = { input: inputs[c], others, range: [chartNumber(tlo) ?? tlo, chartNumber(thi) ?? thi], x, y };
+        const spikes = spikeMarks(model, checks, c);
+        const curve = {
+            input: inputs[c],
+            others,
+            range: [chartNumber(tlo) ?? tlo, chartNumber(thi) ?? thi],
+            x,
+            y,
+            ...(spikes !== null ? { spikes } : {}),
+        };
         if (inputs.length === 1) {
-            const band = swing?.band ?? metrics.targetRange;
+            const onOriginal = originalScale(model);
+            const band = swing?.band ?? (onOriginal ? (0,stats/* range */.y1)(onOriginal.originalRows.train.y, train.rows) : metrics.targetRange);
             fitCurve = {
                 ...curve,
                 band: [chartNumber(band[0]) ?? band[0], chartNumber(band[1]) ?? band[1]],
@@ -48314,11 +50819,17 @@ function buildChartData(model, checks, maxPoints = MAX_CHART_POINTS) {
         columns.push(design.columnNames[j]);
         values.push(chartNumber((fit.coefficients[j] * metrics.columnSd[j]) / metrics.targetSd));
     }
+    // A transformed target judged on the original scale: its rows as written, predictions back-transformed.
+    const scale = originalScale(model);
     return {
         target: descriptor.data.target,
         inputs,
-        train: series(train, model.trainPredictions, maxPoints),
-        holdout: series(holdout, model.holdoutPredictions, maxPoints),
+        train: scale
+            ? series({ ...train, y: scale.originalRows.train.y }, scale.predictions.train, maxPoints, share.seriesNumbers)
+            : series(train, model.trainPredictions, maxPoints, share.seriesNumbers),
+        holdout: scale
+            ? series({ ...holdout, y: scale.originalRows.holdout.y }, scale.predictions.holdout, maxPoints, share.seriesNumbers)
+            : series(holdout, model.holdoutPredictions, maxPoints, share.seriesNumbers),
         fit: fitCurve,
         partials,
         ...(partialsLeftOut > 0 ? { partialsLeftOut } : {}),
@@ -48353,8 +50864,458 @@ function runChecks(checks, run, metrics) {
     return { checks: outcomes, verdict };
 }
 
-// EXTERNAL MODULE: ./node_modules/csv-parse/lib/index.js + 1 modules
-var lib = __nccwpck_require__(3046);
+// EXTERNAL MODULE: ./src/diagnostics/radix-sort.ts
+var radix_sort = __nccwpck_require__(8459);
+;// CONCATENATED MODULE: ./src/diagnostics/roc-curve.ts
+/**
+ * The exact ROC curve of a classifier's scores and its thinning for drawing. The curve (Fawcett,
+ * "An introduction to ROC analysis", Pattern Recognition Letters 27, 2006, algorithm 1) steps
+ * through the distinct scores from the highest down: at each, every row with that score turns
+ * positive, so tied rows move the point diagonally, the same ties the AUC's Mann-Whitney count
+ * halves. Thinning keeps the vertices of the curve's upper convex hull (the ROC convex hull,
+ * Provost & Fawcett 2001, Machine Learning 42) so that the drawn curve's hull is the exact one.
+ */
+
+/**
+ * The exact ROC curve of `n` rows: labels `y` in {0, 1}, `score` higher for the positive class
+ * (rows whose score is NaN are left out). Both classes present: from (0, 0) to (1, 1), one point
+ * per distinct score. One class missing: the diagonal (0, 0), (1, 1). Cost: two sorts of the
+ * scores (radix, linear) and one merge.
+ */
+function rocCurve(y, score, n) {
+    let np = 0;
+    let nn = 0;
+    for (let i = 0; i < n; i++) {
+        if (Number.isNaN(score[i]))
+            continue;
+        if (y[i] === 1)
+            np++;
+        else
+            nn++;
+    }
+    if (np === 0 || nn === 0) {
+        return {
+            fpr: Float64Array.of(0, 1),
+            tpr: Float64Array.of(0, 1),
+            score: Float64Array.of(Number.NaN, Number.NaN),
+            positives: np,
+            negatives: nn,
+        };
+    }
+    const pos = new Float64Array(np);
+    const neg = new Float64Array(nn);
+    let a = 0;
+    let b = 0;
+    for (let i = 0; i < n; i++) {
+        if (Number.isNaN(score[i]))
+            continue;
+        if (y[i] === 1)
+            pos[a++] = score[i];
+        else
+            neg[b++] = score[i];
+    }
+    sortFloat64(pos);
+    sortFloat64(neg);
+    return mergeDescending(pos, neg);
+}
+/** The curve from both classes' scores, each sorted ascending. */
+function mergeDescending(pos, neg) {
+    const np = pos.length;
+    const nn = neg.length;
+    const size = np + nn + 1;
+    const fpr = new Float64Array(size);
+    const tpr = new Float64Array(size);
+    const score = new Float64Array(size);
+    score[0] = Number.NaN;
+    let i = np - 1;
+    let j = nn - 1;
+    let tp = 0;
+    let fp = 0;
+    let k = 1;
+    while (i >= 0 || j >= 0) {
+        // The highest score left; every row of either class with it turns positive together.
+        const v = j < 0 || (i >= 0 && pos[i] >= neg[j]) ? pos[i] : neg[j];
+        while (i >= 0 && pos[i] === v) {
+            tp++;
+            i--;
+        }
+        while (j >= 0 && neg[j] === v) {
+            fp++;
+            j--;
+        }
+        fpr[k] = fp / nn;
+        tpr[k] = tp / np;
+        score[k] = v;
+        k++;
+    }
+    return { fpr: fpr.slice(0, k), tpr: tpr.slice(0, k), score: score.slice(0, k), positives: np, negatives: nn };
+}
+/**
+ * Indices of the vertices of the upper convex hull of the curve's points (x = fpr ascending,
+ * y = tpr), first and last point included (Andrew's monotone chain, upper half; collinear points
+ * left out).
+ */
+function upperHull(fpr, tpr) {
+    const hull = [];
+    for (let k = 0; k < fpr.length; k++) {
+        while (hull.length >= 2) {
+            const a = hull[hull.length - 2];
+            const b = hull[hull.length - 1];
+            // Cross product of (b - a) and (k - a): >= 0 means b is not above the chord a..k.
+            const cross = (fpr[b] - fpr[a]) * (tpr[k] - tpr[a]) - (tpr[b] - tpr[a]) * (fpr[k] - fpr[a]);
+            if (cross >= 0)
+                hull.pop();
+            else
+                break;
+        }
+        hull.push(k);
+    }
+    return hull;
+}
+/** `count` evenly spaced entries of a sorted list of indices, its first and last kept. */
+function evenlyOf(list, count) {
+    if (list.length <= count)
+        return [...list];
+    if (count <= 1)
+        return [list[0]];
+    const out = [];
+    for (let t = 0; t < count; t++)
+        out.push(list[Math.round((t * (list.length - 1)) / (count - 1))]);
+    return out;
+}
+/**
+ * The ROC curve of {@link rocCurve} thinned as {@link thinCurve} thins it (the same points), without
+ * holding the whole curve: one walk through the sorted scores counts the points and finds the
+ * upper hull, a second emits the kept points. Memory: the sorted scores and the hull, not three
+ * arrays of n + 1 points (a file of a million rows saves 24 MB).
+ * @param max most points kept (at least 2)
+ */
+function thinnedRocCurve(y, score, n, max) {
+    let np = 0;
+    let nn = 0;
+    for (let i = 0; i < n; i++) {
+        if (Number.isNaN(score[i]))
+            continue;
+        if (y[i] === 1)
+            np++;
+        else
+            nn++;
+    }
+    if (np === 0 || nn === 0) {
+        return { points: 2, kept: [0, 1], fpr: [0, 1], tpr: [0, 1], score: [Number.NaN, Number.NaN], positives: np, negatives: nn };
+    }
+    const pos = new Float64Array(np);
+    const neg = new Float64Array(nn);
+    let a = 0;
+    let b = 0;
+    for (let i = 0; i < n; i++) {
+        if (Number.isNaN(score[i]))
+            continue;
+        if (y[i] === 1)
+            pos[a++] = score[i];
+        else
+            neg[b++] = score[i];
+    }
+    const scratch = new Uint32Array(2 * Math.max(np, nn));
+    (0,radix_sort/* sortFloat64 */.f)(pos, scratch);
+    (0,radix_sort/* sortFloat64 */.f)(neg, scratch);
+    // First walk: the number of points and the upper hull (Andrew's monotone chain, as upperHull).
+    const hull = [0];
+    const hx = [0];
+    const hy = [0];
+    let points = 1;
+    walk(pos, neg, (fpr, tpr) => {
+        while (hull.length >= 2) {
+            const k = hull.length - 1;
+            const cross = (hx[k] - hx[k - 1]) * (tpr - hy[k - 1]) - (hy[k] - hy[k - 1]) * (fpr - hx[k - 1]);
+            if (cross >= 0) {
+                hull.pop();
+                hx.pop();
+                hy.pop();
+            }
+            else
+                break;
+        }
+        hull.push(points);
+        hx.push(fpr);
+        hy.push(tpr);
+        points++;
+    });
+    const kept = chooseKept(points, hull, max);
+    // Second walk: the kept points.
+    const out = { points, kept, fpr: [0], tpr: [0], score: [Number.NaN], positives: np, negatives: nn };
+    let index = 1;
+    let next = 1;
+    walk(pos, neg, (fpr, tpr, v) => {
+        if (next < kept.length && kept[next] === index) {
+            out.fpr.push(fpr);
+            out.tpr.push(tpr);
+            out.score.push(v);
+            next++;
+        }
+        index++;
+    });
+    return out;
+}
+/** Calls `visit(fpr, tpr, score)` for each point after (0, 0), from the highest score down (both lists sorted ascending). */
+function walk(pos, neg, visit) {
+    const np = pos.length;
+    const nn = neg.length;
+    let i = np - 1;
+    let j = nn - 1;
+    let tp = 0;
+    let fp = 0;
+    while (i >= 0 || j >= 0) {
+        const v = j < 0 || (i >= 0 && pos[i] >= neg[j]) ? pos[i] : neg[j];
+        while (i >= 0 && pos[i] === v) {
+            tp++;
+            i--;
+        }
+        while (j >= 0 && neg[j] === v) {
+            fp++;
+            j--;
+        }
+        visit(fp / nn, tp / np, v);
+    }
+}
+/**
+ * The points of a curve to draw: all of them when at most `max`; otherwise the hull vertices
+ * (at most max / 2 of them, thinned evenly beyond) and points evenly spaced along the curve
+ * (by index) to fill `max`, in curve order, first and last always kept.
+ * @param max at least 2
+ * @returns ascending indices into the curve, at most `max`
+ */
+function thinCurve(fpr, tpr, max) {
+    return chooseKept(fpr.length, fpr.length <= max ? [] : upperHull(fpr, tpr), max);
+}
+/** {@link thinCurve} from the number of points and the hull's vertices. */
+function chooseKept(n, hull, max) {
+    if (n <= max)
+        return Array.from({ length: n }, (_, i) => i);
+    const keep = new Set(evenlyOf(hull, Math.max(2, Math.floor(max / 2))));
+    keep.add(0);
+    keep.add(n - 1);
+    const room = max - keep.size;
+    // Evenly spaced points along the curve; some may coincide with hull vertices, so take a few
+    // more rounds with a finer step while room is left (bounded: at most 4 rounds).
+    for (let round = 0, want = room; round < 4 && keep.size < max; round++, want *= 2) {
+        for (let t = 1; t <= want && keep.size < max; t++)
+            keep.add(Math.round((t * (n - 1)) / (want + 1)));
+    }
+    return [...keep].sort((u, v) => u - v);
+}
+
+;// CONCATENATED MODULE: ./src/result/classifier-chart-types.ts
+/**
+ * The chart data of a binary classifier in the Result (`ModelResult.classifier_charts`): plain
+ * series the HTML report draws, built by run/classifier-chart-data.ts. Every number is finite or
+ * null, and every list is bounded whatever the rows: a ROC curve keeps at most
+ * {@link ROC_MAX_POINTS} points, a calibration diagram has {@link CALIBRATION_BINS} bins, the
+ * points of a file at most MAX_CHART_POINTS (chart-types.ts) and the probability curves at most
+ * MAX_PARTIAL_CURVES, as for regression models.
+ */
+/** Most points kept of a ROC curve (training or hold-out); a longer curve is thinned keeping its convex hull. */
+const ROC_MAX_POINTS = 300;
+/** Bins of a calibration diagram: equal-width bins of the predicted probability, [0, 0.1), [0.1, 0.2), ... [0.9, 1]. */
+const CALIBRATION_BINS = 10;
+
+;// CONCATENATED MODULE: ./src/run/classifier-chart-data.ts
+
+
+
+
+
+
+
+/** The ROC curve of one file's rows for drawing (scores: the logits, whose order is the probabilities'). */
+function rocCurveData(y, eta, rows, max = ROC_MAX_POINTS) {
+    const curve = thinnedRocCurve(y, eta, rows, Math.max(2, max));
+    return {
+        rows,
+        positives: curve.positives,
+        negatives: curve.negatives,
+        points: curve.points,
+        thinned: curve.kept.length < curve.points,
+        fpr: curve.fpr.map((v) => chartNumber(v) ?? 0),
+        tpr: curve.tpr.map((v) => chartNumber(v) ?? 0),
+        threshold: curve.score.map((v) => (Number.isNaN(v) ? null : chartNumber(1 / (1 + Math.exp(-v))))),
+        hull: hullOfKept(curve.fpr, curve.tpr),
+    };
+}
+/** Indices of the kept points on the upper hull of the kept points (the whole curve's hull when it was kept whole). */
+function hullOfKept(fpr, tpr) {
+    return upperHull(Float64Array.from(fpr), Float64Array.from(tpr));
+}
+/**
+ * The calibration diagram of one file ({@link CALIBRATION_BINS} equal-width bins of p = 1 / (1 +
+ * exp(-eta)), as diagnostics/classification-metrics.ts calibrationBins bins them), from the
+ * logits without a second array of probabilities.
+ */
+function calibrationData(y, eta, rows) {
+    const bins = CALIBRATION_BINS;
+    const count = new Float64Array(bins);
+    const sumP = new Float64Array(bins);
+    const sumY = new Float64Array(bins);
+    for (let i = 0; i < rows; i++) {
+        const p = 1 / (1 + Math.exp(-eta[i]));
+        const b = Math.min(bins - 1, Math.floor(p * bins));
+        count[b] += 1;
+        sumP[b] += p;
+        sumY[b] += y[i];
+    }
+    return Array.from(count, (c, b) => ({
+        from: b / bins,
+        to: (b + 1) / bins,
+        count: c,
+        predicted: c > 0 ? chartNumber(sumP[b] / c) : null,
+        observed: c > 0 ? chartNumber(sumY[b] / c) : null,
+    }));
+}
+/** The rows of one file as points, thinned evenly (seriesPoints of chart-data.ts). */
+function points(data, eta, max) {
+    const keep = thinRows(data.rows, seriesPoints(data.inputs.length, max));
+    const thinned = keep.length < data.rows;
+    return {
+        rows: data.rows,
+        shown: keep.length,
+        thinned,
+        thinning: thinned ? `${keep.length} of ${data.rows} rows, evenly spaced through the file` : '',
+        lines: Array.from(keep, (i) => data.lines[i]),
+        x: data.inputs.map((col) => Array.from(keep, (i) => chartNumber(col[i]))),
+        label: Array.from(keep, (i) => (data.y[i] === 1 ? 1 : 0)),
+        probability: Array.from(keep, (i) => chartNumber(1 / (1 + Math.exp(-eta[i])))),
+    };
+}
+/**
+ * Builds the chart data of one fitted classifier.
+ * Cost: two sorts of each file's logits (ROC), one pass over each file for the calibration bins,
+ * the training medians of the inputs, and at most {@link CURVE_POINTS} predictions per curve.
+ * @param model the fitted classifier (design, coefficients, rows, logits, labels)
+ * @param maxPoints most points per file; default MAX_CHART_POINTS (fewer for many inputs)
+ */
+function buildClassifierChartData(model, maxPoints = MAX_CHART_POINTS) {
+    const { design, fit, descriptor } = model.context;
+    const { train, holdout, trainEta, holdoutEta } = model;
+    const inputs = [...design.inputs];
+    const medians = train.inputs.map((col) => (0,column_median/* columnMedian */.z)(col, train.rows));
+    const spread = [];
+    for (let c = 0; c < inputs.length; c++) {
+        const [lo, hi] = (0,stats/* range */.y1)(train.inputs[c], train.rows);
+        if (hi > lo)
+            spread.push(c);
+    }
+    const shown = spread.slice(0, MAX_PARTIAL_CURVES);
+    const gridPoints = inputs.length === 1 ? CURVE_POINTS : partialCurvePoints(shown.length);
+    const curves = [];
+    for (const c of shown) {
+        const [tlo, thi] = (0,stats/* range */.y1)(train.inputs[c], train.rows);
+        const lo = tlo - CURVE_MARGIN * (thi - tlo);
+        const hi = thi + CURVE_MARGIN * (thi - tlo);
+        const grid = new Float64Array(gridPoints);
+        for (let t = 0; t < gridPoints; t++)
+            grid[t] = t === gridPoints - 1 ? hi : lo + ((hi - lo) * t) / (gridPoints - 1);
+        const columns = inputs.map((_, k) => (k === c ? grid : new Float64Array(gridPoints).fill(medians[k])));
+        const eta = (0,blocks/* predictRows */.tp)(design, { inputs: columns, rows: gridPoints }, fit.coefficients);
+        const x = [];
+        const p = [];
+        for (let t = 0; t < gridPoints; t++) {
+            const xt = chartNumber(grid[t]);
+            if (xt === null || (x.length > 0 && xt === x[x.length - 1]))
+                continue;
+            x.push(xt);
+            p.push(chartNumber(1 / (1 + Math.exp(-eta[t]))));
+        }
+        // Keyed by column names (user text): no prototype, so `__proto__` is a name like any other.
+        const others = Object.create(null);
+        inputs.forEach((name, k) => {
+            if (k !== c)
+                others[name] = chartNumber(medians[k]) ?? 0;
+        });
+        curves.push({ input: inputs[c], others, range: [chartNumber(tlo) ?? tlo, chartNumber(thi) ?? thi], x, p });
+    }
+    return {
+        target: descriptor.data.target,
+        positive: model.labels.positive,
+        negative: model.labels.negative,
+        threshold: descriptor.fit.threshold ?? 0.5,
+        inputs,
+        roc: { train: rocCurveData(train.y, trainEta, train.rows), holdout: rocCurveData(holdout.y, holdoutEta, holdout.rows) },
+        calibration: {
+            train: calibrationData(train.y, trainEta, train.rows),
+            holdout: calibrationData(holdout.y, holdoutEta, holdout.rows),
+        },
+        train: points(train, trainEta, maxPoints),
+        holdout: points(holdout, holdoutEta, maxPoints),
+        curves,
+        ...(spread.length > shown.length ? { curvesLeftOut: spread.length - shown.length } : {}),
+    };
+}
+
+// EXTERNAL MODULE: external "node:stream"
+var external_node_stream_ = __nccwpck_require__(7075);
+// EXTERNAL MODULE: external "node:zlib"
+var external_node_zlib_ = __nccwpck_require__(8522);
+;// CONCATENATED MODULE: ./src/data/gzip-stream.ts
+/**
+ * Data files compressed with gzip (`.gz` names, e.g. `train.csv.gz`): their bytes are
+ * decompressed as they stream (node:zlib `createGunzip`), never held whole, and the
+ * decompressed size is held to the same cap as a plain file's size, so a small file that
+ * expands without end (a "gzip bomb") stops at the cap.
+ */
+
+
+
+/** True when a data path names a gzip file (ends with `.gz`, any case). */
+function isGzipPath(path) {
+    return path.toLowerCase().endsWith('.gz');
+}
+/**
+ * The file's bytes as the CSV readers read them: decompressed when {@link isGzipPath}, else as
+ * stored.
+ *
+ * @param repo where the file lives
+ * @param path repository-relative path
+ * @param maxBytes cap on the decompressed bytes (the plain-file size cap)
+ * @throws InputError `file-too-large` past the cap, `csv-gzip` for data that is not valid gzip
+ */
+function gzip_stream_openDataFile(repo, path, maxBytes) {
+    if (!isGzipPath(path))
+        return repo.stream(path);
+    return gunzipPieces(repo.stream(path), path, maxBytes);
+}
+/**
+ * Decompresses a gzip stream piece by piece (member after member, as gzip allows).
+ *
+ * @param pieces the compressed bytes in pieces of any size
+ * @param file repository-relative path, for messages
+ * @param maxBytes cap on the decompressed bytes
+ */
+async function* gunzipPieces(pieces, file, maxBytes) {
+    const gunzip = (0,external_node_zlib_.createGunzip)();
+    // Errors of the source or of zlib end the iteration below; the callback only keeps them from being unhandled.
+    (0,external_node_stream_.pipeline)(external_node_stream_.Readable.from(pieces, { objectMode: false }), gunzip, () => undefined);
+    let total = 0;
+    try {
+        for await (const out of gunzip) {
+            total += out.length;
+            if (total > maxBytes) {
+                const mb = (maxBytes / (1024 * 1024)).toFixed(1);
+                throw new errors/* InputError */.dz('file-too-large', `the file decompresses to more than ${mb} MB (${maxBytes} bytes), over the cap; raise caps.max_file_mb in fitgate.yml`, { file });
+            }
+            yield out;
+        }
+    }
+    catch (error) {
+        if (error instanceof errors/* InputError */.dz)
+            throw error;
+        const code = error.code;
+        throw new errors/* InputError */.dz('csv-gzip', `the file is named .gz but is not valid gzip data (${typeof code === 'string' ? code : 'unreadable'}); expected a file written by gzip`, { file });
+    }
+    finally {
+        gunzip.destroy();
+    }
+}
+
 // EXTERNAL MODULE: ./src/data/csv-rules.ts
 var csv_rules = __nccwpck_require__(8706);
 // EXTERNAL MODULE: ./src/data/line-blocks.ts
@@ -48725,71 +51686,6 @@ class FastReader {
     }
 }
 
-// EXTERNAL MODULE: external "node:stream"
-var external_node_stream_ = __nccwpck_require__(7075);
-// EXTERNAL MODULE: external "node:zlib"
-var external_node_zlib_ = __nccwpck_require__(8522);
-;// CONCATENATED MODULE: ./src/data/gzip-stream.ts
-/**
- * Data files compressed with gzip (`.gz` names, e.g. `train.csv.gz`): their bytes are
- * decompressed as they stream (node:zlib `createGunzip`), never held whole, and the
- * decompressed size is held to the same cap as a plain file's size, so a small file that
- * expands without end (a "gzip bomb") stops at the cap.
- */
-
-
-
-/** True when a data path names a gzip file (ends with `.gz`, any case). */
-function isGzipPath(path) {
-    return path.toLowerCase().endsWith('.gz');
-}
-/**
- * The file's bytes as the CSV readers read them: decompressed when {@link isGzipPath}, else as
- * stored.
- *
- * @param repo where the file lives
- * @param path repository-relative path
- * @param maxBytes cap on the decompressed bytes (the plain-file size cap)
- * @throws InputError `file-too-large` past the cap, `csv-gzip` for data that is not valid gzip
- */
-function gzip_stream_openDataFile(repo, path, maxBytes) {
-    if (!isGzipPath(path))
-        return repo.stream(path);
-    return gunzipPieces(repo.stream(path), path, maxBytes);
-}
-/**
- * Decompresses a gzip stream piece by piece (member after member, as gzip allows).
- *
- * @param pieces the compressed bytes in pieces of any size
- * @param file repository-relative path, for messages
- * @param maxBytes cap on the decompressed bytes
- */
-async function* gunzipPieces(pieces, file, maxBytes) {
-    const gunzip = (0,external_node_zlib_.createGunzip)();
-    // Errors of the source or of zlib end the iteration below; the callback only keeps them from being unhandled.
-    (0,external_node_stream_.pipeline)(external_node_stream_.Readable.from(pieces, { objectMode: false }), gunzip, () => undefined);
-    let total = 0;
-    try {
-        for await (const out of gunzip) {
-            total += out.length;
-            if (total > maxBytes) {
-                const mb = (maxBytes / (1024 * 1024)).toFixed(1);
-                throw new core_errors/* InputError */.dz('file-too-large', `the file decompresses to more than ${mb} MB (${maxBytes} bytes), over the cap; raise caps.max_file_mb in fitgate.yml`, { file });
-            }
-            yield out;
-        }
-    }
-    catch (error) {
-        if (error instanceof core_errors/* InputError */.dz)
-            throw error;
-        const code = error.code;
-        throw new core_errors/* InputError */.dz('csv-gzip', `the file is named .gz but is not valid gzip data (${typeof code === 'string' ? code : 'unreadable'}); expected a file written by gzip`, { file });
-    }
-    finally {
-        gunzip.destroy();
-    }
-}
-
 ;// CONCATENATED MODULE: ./src/data/table.ts
 /**
  * CSV data files to numeric columns.
@@ -48826,23 +51722,33 @@ async function* gunzipPieces(pieces, file, maxBytes) {
 
 
 
+
 /**
  * Streams a CSV file as numeric chunks (header checked first).
  *
  * Every chunk but the last holds exactly `chunkRows` rows; a file with a header and no data
- * rows yields no chunk. Errors are InputErrors: `file-too-large` (before reading),
+ * rows yields no chunk. Given a list of parts, the parts are read in the order given (the
+ * descriptor loader sorts them) as one table: a chunk never spans two parts (so each part's last
+ * chunk may be short), carries its `part`, and its lines are table-wide (data-parts.ts); every
+ * part's header must match the first's (`csv-header-parts`); the size cap holds for each part
+ * and for all of them together (`file-too-large`). Errors are InputErrors: `file-too-large` (before reading),
  * `file-missing`, `csv-empty`, `csv-header`, `csv-missing-column`, `csv-ragged`, `csv-cell`,
  * `csv-syntax`, `csv-encoding`; each names the file and, where there is one, the line.
  *
  * @param repo where the file lives
- * @param path repository-relative path of the CSV file
+ * @param path repository-relative path of the CSV file, or the list of its parts (at least one)
  * @param options columns to read; chunk size (default 65536 rows); size cap (default 512 MiB);
  *   `general: true` to skip the fast path
  */
 async function* readTableChunks(repo, path, options) {
     const settings = checkOptions(options);
+    if (typeof path !== 'string') {
+        await checkSizes(repo, path, settings.maxBytes);
+        yield* scanParts(repo, path, settings, () => undefined, false, undefined, (pieces) => pieces, []);
+        return;
+    }
     await table_checkSize(repo, path, settings.maxBytes);
-    yield* scan(() => openDataFile(repo, path, settings.maxBytes), path, settings, () => undefined, false, false);
+    yield* scan(() => gzip_stream_openDataFile(repo, path, settings.maxBytes), path, settings, () => undefined, false, options.recycle === true, options.counts);
 }
 /**
  * Reads the requested columns whole into preallocated arrays (no per-row objects, no list of
@@ -48853,21 +51759,23 @@ async function* readTableChunks(repo, path, options) {
  * one chunk, instead of twice the data.
  *
  * @param repo where the file lives
- * @param path repository-relative path of the CSV file
+ * @param path repository-relative path of the CSV file, or the list of its parts (as for {@link readTableChunks})
  * @param options as for {@link readTableChunks}
- * @returns the header, the row count, one Float64Array of length `rows` per requested name, and the rows' lines
+ * @returns the header, the row count, one Float64Array of length `rows` per requested name, and the
+ *   rows' lines; read from parts, also `parts` (each with its line offset) and a `file` label
  */
 async function readTable(repo, path, options) {
     const settings = checkOptions(options);
-    const size = await table_checkSize(repo, path, settings.maxBytes);
+    const size = typeof path === 'string' ? await table_checkSize(repo, path, settings.maxBytes) : await checkSizes(repo, path, settings.maxBytes);
     let header = [];
     let bytesRead = 0;
-    const counted = async function* () {
-        for await (const piece of gzip_stream_openDataFile(repo, path, settings.maxBytes)) {
+    const count = async function* (pieces) {
+        for await (const piece of pieces) {
             bytesRead += piece.length;
             yield piece;
         }
     };
+    const counted = () => count(gzip_stream_openDataFile(repo, path, settings.maxBytes));
     // First position of each distinct requested name (a repeated name shares one array).
     const firstOf = settings.columns.map((name) => settings.columns.indexOf(name));
     let columns = [];
@@ -48888,7 +51796,11 @@ async function readTable(repo, path, options) {
         lines = nextLines;
     };
     const counts = { dropped: 0 };
-    for await (const chunk of scan(counted, path, settings, (plan) => (header = plan.header), false, true, counts)) {
+    const parts = [];
+    const chunks = typeof path === 'string'
+        ? scan(counted, path, settings, (plan) => (header = plan.header), false, true, counts)
+        : scanParts(repo, path, settings, (plan) => (header = plan.header), true, counts, count, parts);
+    for await (const chunk of chunks) {
         const needed = rows + chunk.rows;
         if (needed > lines.length) {
             let capacity = Math.max(needed, Math.ceil(lines.length * 1.5));
@@ -48912,12 +51824,13 @@ async function readTable(repo, path, options) {
             out.set(name, rows === 0 ? new Float64Array(0) : columns[k].subarray(0, rows));
     });
     return {
-        file: path,
+        file: typeof path === 'string' ? path : (0,data_parts/* partsLabel */.xq)(path),
         header,
         rows,
         columns: out,
         lines: rows === 0 ? new Int32Array(0) : lines.subarray(0, rows),
         dropped: counts.dropped,
+        ...(typeof path === 'string' ? {} : { parts }),
     };
 }
 /**
@@ -48956,9 +51869,110 @@ function checkOptions(options) {
 async function table_checkSize(repo, path, maxBytes) {
     const size = await repo.size(path);
     if (size > maxBytes) {
-        throw new core_errors/* InputError */.dz('file-too-large', `the file is ${megabytes(size)} (${size} bytes), over the cap of ${megabytes(maxBytes)} (${maxBytes} bytes); raise caps.max_file_mb in fitgate.yml`, { file: path });
+        throw new errors/* InputError */.dz('file-too-large', `the file is ${megabytes(size)} (${size} bytes), over the cap of ${megabytes(maxBytes)} (${maxBytes} bytes); raise caps.max_file_mb in fitgate.yml`, { file: path });
     }
     return size;
+}
+/**
+ * The size cap of a table read from parts: each part at most `maxBytes`, and all of them together
+ * too (InputError `file-too-large` naming the part that passes it); returns the total size.
+ */
+async function checkSizes(repo, paths, maxBytes) {
+    if (paths.length === 0)
+        throw new TypeError('readTable: a list of parts must name at least one file');
+    let total = 0;
+    for (const path of paths) {
+        total += await table_checkSize(repo, path, maxBytes);
+        if (total > maxBytes) {
+            throw new errors/* InputError */.dz('file-too-large', `the parts up to this one come to ${megabytes(total)} (${total} bytes), over the cap of ${megabytes(maxBytes)} (${maxBytes} bytes) that holds for all parts together; raise caps.max_file_mb in fitgate.yml`, { file: path });
+        }
+    }
+    return total;
+}
+/**
+ * The chunks of a table read from parts, one part after the other (a chunk never spans two), each
+ * chunk's lines made table-wide (data-parts.ts) and tagged with its part. Every part's header must
+ * name the same columns in the same order as the first part's (InputError `csv-header-parts` at
+ * the first part whose header differs, naming its line and the first column that differs).
+ * Decompressed bytes count against one cap for all parts together: each part may use what the
+ * parts before it left of `maxBytes`.
+ *
+ * @param count wraps each opened byte stream (readTable counts the bytes read for its estimate)
+ * @param parts receives each part with its offset as reading reaches it
+ */
+async function* scanParts(repo, paths, settings, onHeader, recycle, counts, count, parts) {
+    let first = null;
+    let offset = 0;
+    let left = settings.maxBytes;
+    for (const path of paths) {
+        const part = { file: path, lineOffset: offset };
+        parts.push(part);
+        // The decompressed size of the part: the most bytes any one opening of it gave.
+        let used = 0;
+        const cap = Math.min(settings.maxBytes, left);
+        const open = () => {
+            const source = gzip_stream_openDataFile(repo, path, cap);
+            return count((async function* () {
+                let seen = 0;
+                try {
+                    for await (const piece of source) {
+                        seen += piece.length;
+                        if (seen > used)
+                            used = seen;
+                        yield piece;
+                    }
+                }
+                catch (error) {
+                    if (!(error instanceof errors/* InputError */.dz) || error.code !== 'file-too-large' || cap === settings.maxBytes)
+                        throw error;
+                    throw new errors/* InputError */.dz('file-too-large', `the file decompresses to more than the ${cap} bytes the parts before it left of the cap of ${megabytes(settings.maxBytes)} (${settings.maxBytes} bytes) that holds for all parts together; raise caps.max_file_mb in fitgate.yml`, { file: path });
+                }
+            })());
+        };
+        const checkHeader = (plan) => {
+            if (first === null) {
+                first = plan.header;
+                onHeader(plan);
+                return;
+            }
+            const differs = headerDifference(first, plan.header);
+            if (differs !== null) {
+                throw new errors/* InputError */.dz('csv-header-parts', `the header on line ${plan.headerLine} differs from the first part's (${(0,errors/* clip */.$Q)(paths[0])}) at column ${differs.column}: ${differs.text}; expected every part to name the same columns in the same order`, { file: path, line: plan.headerLine, key: differs.name });
+            }
+        };
+        let lastLine = 0;
+        for await (const chunk of scan(open, path, settings, checkHeader, false, recycle, counts)) {
+            if (chunk.rows === 0)
+                continue;
+            lastLine = chunk.lines[chunk.rows - 1];
+            if (offset > 0) {
+                if (offset + lastLine > data_parts/* MAX_TABLE_LINE */.FE) {
+                    throw new errors/* InputError */.dz('too-large', `the parts hold more than ${data_parts/* MAX_TABLE_LINE */.FE} lines together; expected fewer`, { file: path });
+                }
+                for (let i = 0; i < chunk.rows; i++)
+                    chunk.lines[i] += offset;
+            }
+            chunk.part = part;
+            yield chunk;
+        }
+        left -= used;
+        offset += Math.max(1, lastLine);
+    }
+}
+/** Where two headers first differ: the 1-based column, the name there (or the missing one) and words for it; null when equal. */
+function headerDifference(first, other) {
+    const n = Math.max(first.length, other.length);
+    for (let k = 0; k < n; k++) {
+        if (first[k] === other[k])
+            continue;
+        const text = other[k] === undefined
+            ? `it ends before \`${(0,errors/* clip */.$Q)(first[k])}\``
+            : first[k] === undefined
+                ? `it has the extra column \`${(0,errors/* clip */.$Q)(other[k])}\``
+                : `\`${(0,errors/* clip */.$Q)(other[k])}\` where the first part has \`${(0,errors/* clip */.$Q)(first[k])}\``;
+        return { column: k + 1, name: other[k] ?? first[k], text };
+    }
+    return null;
 }
 function megabytes(bytes) {
     return `${(bytes / (1024 * 1024)).toFixed(1)} MB`;
@@ -49017,6 +52031,162 @@ async function* scan(open, path, settings, onHeader, headerOnly, recycle, counts
     yield* generalChunks(first ?? open(), target, handedOut);
 }
 
+;// CONCATENATED MODULE: ./src/data/row-source.ts
+
+
+/**
+ * The rows of in-memory data as one chunk: the passes then work exactly as over the columns
+ * themselves (same blocks, same additions in the same order).
+ */
+function memoryRowSource(data) {
+    return {
+        file: data.file,
+        streamed: false,
+        async forEachChunk(visit) {
+            visit(data, 0);
+        },
+    };
+}
+/**
+ * The training rows streamed from their file through readTable's chunk interface
+ * ({@link readTableChunks}: fast numeric path, general path, gzip) on every pass. Memory: one chunk
+ * of `chunkRows` x (inputs + 1) doubles at a time, independent of the rows in the file.
+ */
+function fileRowSource(repo, path, options) {
+    const columns = [...options.inputs, options.target];
+    const d = options.inputs.length;
+    return {
+        file: path,
+        streamed: true,
+        async forEachChunk(visit, chunkRows = options.chunkRows) {
+            let start = 0;
+            if (options.counts)
+                options.counts.dropped = 0;
+            const read = readTableChunks(repo, path, {
+                columns,
+                maxBytes: options.maxBytes,
+                ...(chunkRows ? { chunkRows } : {}),
+                ...(options.format ? { format: options.format } : {}),
+                ...(options.split ? { split: options.split } : {}),
+                ...(options.counts ? { counts: options.counts } : {}),
+                // Every consumer copies what it keeps (the reservoir, the factors, the sums), so the reader
+                // refills the same arrays: no garbage of a chunk's size per chunk.
+                recycle: true,
+            });
+            for await (const chunk of read) {
+                visit({ inputs: chunk.columns.slice(0, d), y: chunk.columns[d], lines: chunk.lines, rows: chunk.rows, file: path }, start);
+                start += chunk.rows;
+            }
+        },
+    };
+}
+/**
+ * Default threshold of {@link streamsTrainingFile}: 128 MiB of CSV text. About 1.2 million rows of
+ * 8 inputs and a target at the benchmark's 111 bytes a row; held in memory such a file takes about
+ * 100 MiB of columns plus the run's own (the L workload of docs/benchmarks.md, 1 million rows,
+ * 111 MB, peaks near 200 MiB), so files below it keep today's in-memory path and those above
+ * stream, and a model of 8 inputs stays under about 256 MiB either way.
+ */
+const STREAM_ABOVE_BYTES = 128 * 1024 * 1024;
+/**
+ * Assumed ratio of CSV text to gzip bytes when judging a `.gz` file by its stored size (the
+ * decompressed size is not known before reading it; numeric CSV compresses about 2 to 4 times,
+ * the benchmark's random `%.10g` numbers 1.9 times at `gzip -1`): 4, the upper end, so that a
+ * large compressed file streams rather than risks being held.
+ */
+const GZIP_RATIO = 4;
+/**
+ * Whether a training file streams: when its estimated CSV text (the stored size, times
+ * {@link GZIP_RATIO} for `.gz`) is above `aboveBytes` (default {@link STREAM_ABOVE_BYTES}).
+ * @param size stored size in bytes
+ */
+function streamsTrainingFile(path, size, aboveBytes = STREAM_ABOVE_BYTES) {
+    const text = isGzipPath(path) ? size * GZIP_RATIO : size;
+    return text > aboveBytes;
+}
+/** Rows a streamed model keeps for its sampled diagnostics: 100,000 (about 8 MB at 8 inputs). */
+const SAMPLE_ROWS = 100_000;
+/**
+ * A seeded uniform sample of at most `capacity` rows of a stream of rows (reservoir sampling,
+ * Vitter's algorithm R: Vitter, "Random sampling with a reservoir", ACM TOMS 11(1), 1985), kept in
+ * file order. While the rows seen fit, the sample is every row, so a small file's sample is the
+ * file itself. Memory: capacity x (inputs + 2) numbers.
+ */
+class RowReservoir {
+    #capacity;
+    #inputs;
+    #y;
+    #lines;
+    #index;
+    #seen = 0;
+    #state;
+    /**
+     * @param inputs input columns
+     * @param capacity rows kept at most (>= 1)
+     * @param seed seed of the choice (a 32-bit integer)
+     */
+    constructor(inputs, capacity, seed) {
+        this.#capacity = capacity;
+        this.#inputs = Array.from({ length: inputs }, () => new Float64Array(capacity));
+        this.#y = new Float64Array(capacity);
+        this.#lines = new Int32Array(capacity);
+        this.#index = new Float64Array(capacity);
+        this.#state = seed >>> 0;
+    }
+    /** Rows seen so far. */
+    get seen() {
+        return this.#seen;
+    }
+    /** Offers the rows of one chunk, in order. */
+    add(chunk) {
+        for (let i = 0; i < chunk.rows; i++) {
+            const t = this.#seen++;
+            let slot = t;
+            if (t >= this.#capacity) {
+                slot = Math.floor(this.#next() * (t + 1));
+                if (slot >= this.#capacity)
+                    continue;
+            }
+            for (let c = 0; c < this.#inputs.length; c++)
+                this.#inputs[c][slot] = chunk.inputs[c][i];
+            this.#y[slot] = chunk.y[i];
+            this.#lines[slot] = chunk.lines[i];
+            this.#index[slot] = t;
+        }
+    }
+    /** The sample in file order, as model data of `file` (rows = min(seen, capacity)). */
+    rows(file) {
+        const m = Math.min(this.#seen, this.#capacity);
+        const order = Array.from({ length: m }, (_, i) => i).sort((a, b) => this.#index[a] - this.#index[b]);
+        const pick = (from) => Float64Array.from(order, (i) => from[i]);
+        return {
+            inputs: this.#inputs.map(pick),
+            y: pick(this.#y),
+            lines: Int32Array.from(order, (i) => this.#lines[i]),
+            rows: m,
+            file,
+        };
+    }
+    /** Uniform in [0, 1): 53 bits from two steps of a Weyl sequence through a 32-bit mixer. */
+    #next() {
+        const hi = this.#mix() >>> 5;
+        const lo = this.#mix() >>> 6;
+        return (hi * 67108864 + lo) / 9007199254740992;
+    }
+    #mix() {
+        this.#state = (this.#state + 0x9e3779b9) >>> 0;
+        let z = this.#state;
+        z ^= z >>> 16;
+        z = Math.imul(z, 0x7feb352d);
+        z ^= z >>> 15;
+        z = Math.imul(z, 0x846ca68b);
+        z ^= z >>> 16;
+        return z >>> 0;
+    }
+}
+
+// EXTERNAL MODULE: ./node_modules/csv-parse/lib/index.js + 1 modules
+var lib = __nccwpck_require__(3046);
 ;// CONCATENATED MODULE: ./src/data/levels.ts
 /**
  * Category levels as numeric codes, so that the design can read a category input like any other
@@ -49026,13 +52196,14 @@ async function* scan(open, path, settings, onHeader, headerOnly, recycle, counts
  * prediction).
  */
 
+
 /** The training levels of a category column, in text order. */
 function trainingLevels(values) {
     return [...new Set(values)].sort();
 }
 /**
  * Codes of the cells: index of the level in `levels`, or -1 for an unseen level when allowed.
- * @param where file, lines and the descriptor line of the term, for the error
+ * @param where file (and parts, when read from parts), lines and the descriptor line of the term, for the error
  * @throws InputError `unseen-level` at the first unseen level when `unseen` is `error`
  */
 function levelCodes(values, levels, unseen, where) {
@@ -49045,7 +52216,8 @@ function levelCodes(values, levels, unseen, where) {
                 out[i] = -1;
                 continue;
             }
-            throw new core_errors/* InputError */.dz('unseen-level', `column \`${where.column}\` has the level ${JSON.stringify(values[i].slice(0, 80))} on line ${where.lines[i]} of ${where.file}, which no training row has; the category term on line ${where.termLine} of ${where.descriptor} has no column for it (add \`unseen: zero\` to predict it as the reference level)`, { file: where.file, line: where.lines[i], key: where.column });
+            const place = (0,data_parts/* placeOfLine */.xX)(where, where.lines[i]);
+            throw new errors/* InputError */.dz('unseen-level', `column \`${where.column}\` has the level ${JSON.stringify(values[i].slice(0, 80))} on line ${place.line} of ${place.file}, which no training row has; the category term on line ${where.termLine} of ${where.descriptor} has no column for it (add \`unseen: zero\` to predict it as the reference level)`, { file: place.file, line: place.line, key: where.column });
         }
         out[i] = k;
     }
@@ -49090,31 +52262,36 @@ const parse = function (data, opts = {}) {
  */
 
 
+
 /**
  * Reads the named columns as text.
- * @param maxBytes size cap (the caller's; the numeric read of the same file checks it first)
+ * @param maxBytes size cap of the file and of its decompressed bytes (the caller's; the numeric read of the same file checks it first)
  * @throws InputError `csv-missing-column` (naming the columns that exist), `csv-syntax`, `file-too-large`
  */
 async function readTextColumns(repo, path, names, maxBytes) {
     const size = await repo.size(path);
     if (size > maxBytes)
-        throw new core_errors/* InputError */.dz('file-too-large', `${path} is ${size} bytes; the cap is ${maxBytes}`, { file: path });
-    const text = new TextDecoder('utf-8').decode(await repo.read(path));
+        throw new errors/* InputError */.dz('file-too-large', `${path} is ${size} bytes; the cap is ${maxBytes}`, { file: path });
+    // Through the same door as the numeric read: decompressed when `.gz`, the decompressed bytes held to the cap.
+    const pieces = [];
+    for await (const piece of gzip_stream_openDataFile(repo, path, maxBytes))
+        pieces.push(piece);
+    const text = new TextDecoder('utf-8').decode(Buffer.concat(pieces));
     let records;
     try {
         records = parse(text, { bom: true, trim: true, info: true, relax_column_count: true, skip_empty_lines: true });
     }
     catch (error) {
-        throw new core_errors/* InputError */.dz('csv-syntax', `${path} could not be read as CSV: ${error instanceof Error ? error.message.slice(0, 200) : String(error)}`, { file: path });
+        throw new errors/* InputError */.dz('csv-syntax', `${path} could not be read as CSV: ${error instanceof Error ? error.message.slice(0, 200) : String(error)}`, { file: path });
     }
     const kept = records.filter((r) => r.record.some((cell) => cell !== ''));
     if (kept.length === 0)
-        throw new core_errors/* InputError */.dz('csv-empty', `${path} has no header row`, { file: path });
+        throw new errors/* InputError */.dz('csv-empty', `${path} has no header row`, { file: path });
     const header = kept[0].record;
     const index = names.map((name) => {
         const k = header.indexOf(name);
         if (k < 0)
-            throw new core_errors/* InputError */.dz('csv-missing-column', `${path} has no column \`${name}\`; its columns are ${header.slice(0, 20).join(', ')}`, {
+            throw new errors/* InputError */.dz('csv-missing-column', `${path} has no column \`${name}\`; its columns are ${header.slice(0, 20).join(', ')}`, {
                 file: path,
                 line: kept[0].info.lines,
                 key: name,
@@ -49127,6 +52304,8 @@ async function readTextColumns(repo, path, names, maxBytes) {
 }
 
 ;// CONCATENATED MODULE: ./src/data/load-model-data.ts
+
+
 
 
 
@@ -49144,14 +52323,14 @@ function categoryColumns(descriptor) {
  * @throws InputError `target-as-input` when a term reads the target column,
  *   `no-rows` when either file has no data rows
  */
-async function loadModelData(repo, descriptor, inputs, settings) {
+async function loadModelData(repo, descriptor, inputs, settings, options = {}) {
     const { data } = descriptor;
     if (inputs.includes(data.target)) {
-        throw new core_errors/* InputError */.dz('target-as-input', `the target column \`${(0,core_errors/* clip */.$Q)(data.target)}\` is also used as an input by a term; a model may not read its own target`, { file: descriptor.file, line: data.lines.target, key: 'data.target' });
+        throw new errors/* InputError */.dz('target-as-input', `the target column \`${(0,errors/* clip */.$Q)(data.target)}\` is also used as an input by a term; a model may not read its own target`, { file: descriptor.file, line: data.lines.target, key: 'data.target' });
     }
     const weighting = data.weighting ?? null;
     if (weighting !== null && weighting.column === data.target) {
-        throw new core_errors/* InputError */.dz('weight-is-target', `\`data.${weighting.kind}\` names the target column \`${data.target}\`; expected a column of its own`, {
+        throw new errors/* InputError */.dz('weight-is-target', `\`data.${weighting.kind}\` names the target column \`${data.target}\`; expected a column of its own`, {
             file: descriptor.file,
             line: weighting.line,
             key: `data.${weighting.kind}`,
@@ -49165,7 +52344,7 @@ async function loadModelData(repo, descriptor, inputs, settings) {
     const maxBytes = settings.caps.maxFileBytes;
     const format = data.format;
     const split = data.split ?? null;
-    const load = async (path, line, key) => {
+    const load = async (path, partPaths, line, key) => {
         let table;
         // With a split column both sides read the one file, each keeping its own label's rows.
         const side = split === null
@@ -49174,33 +52353,43 @@ async function loadModelData(repo, descriptor, inputs, settings) {
                 ? { column: split.column, keep: split.train, other: split.holdout }
                 : { column: split.column, keep: split.holdout, other: split.train };
         try {
-            table = await readTable(repo, path, { columns, maxBytes, ...(format ? { format } : {}), ...(side ? { split: side } : {}) });
+            table = await readTable(repo, partPaths ?? path, {
+                columns,
+                maxBytes,
+                ...(format ? { format } : {}),
+                ...(side ? { split: side } : {}),
+            });
         }
         catch (error) {
             throw withAsker(error, descriptor);
         }
         if (table.rows === 0) {
             const why = side
-                ? ` labelled ${(0,core_errors/* quoteValue */.cl)(side.keep)} in column ${(0,core_errors/* quoteValue */.cl)(side.column)}`
+                ? ` labelled ${(0,errors/* quoteValue */.cl)(side.keep)} in column ${(0,errors/* quoteValue */.cl)(side.column)}`
                 : table.dropped > 0
                     ? ` left after dropping ${table.dropped} with missing cells`
                     : '';
-            throw new core_errors/* InputError */.dz('no-rows', `\`${(0,core_errors/* clip */.$Q)(path)}\` has no data rows${why}; expected at least one row`, {
+            const named = partPaths === undefined ? `\`${(0,errors/* clip */.$Q)(path)}\`` : `the ${partPaths.length} parts of \`${key}\` (${(0,errors/* clip */.$Q)(table.file)})`;
+            throw new errors/* InputError */.dz('no-rows', `${named} ${partPaths === undefined ? 'has' : 'have'} no data rows${why}; expected at least one row`, {
                 file: descriptor.file,
                 line,
                 key,
             });
         }
         if (categories.size > 0) {
-            const text = await readTextColumns(repo, path, [...categories.keys()], maxBytes);
-            if (text.lines.length !== table.rows || text.lines.some((l, i) => l !== table.lines[i])) {
-                throw new core_errors/* InputError */.dz('csv-rows', `${path} gives ${text.lines.length} rows of text for its category columns but ${table.rows} rows of numbers; expected one record per line (no line breaks inside quoted category cells)`, { file: path });
-            }
+            const text = await readCategoryText(repo, table, [...categories.keys()], maxBytes);
             for (const [name, term] of categories) {
-                const values = text.columns.get(name);
+                const values = text.get(name);
                 if (!levels.has(name))
                     levels.set(name, trainingLevels(values));
-                const where = { file: path, lines: table.lines, column: name, termLine: term.line, descriptor: descriptor.file };
+                const where = {
+                    file: table.file,
+                    ...(table.parts ? { parts: table.parts } : {}),
+                    lines: table.lines,
+                    column: name,
+                    termLine: term.line,
+                    descriptor: descriptor.file,
+                };
                 table.columns.set(name, levelCodes(values, levels.get(name), term.unseen, where));
             }
         }
@@ -49209,19 +52398,88 @@ async function loadModelData(repo, descriptor, inputs, settings) {
             y: table.columns.get(data.target),
             lines: table.lines,
             rows: table.rows,
-            file: path,
+            file: table.file,
+            ...(table.parts ? { parts: table.parts } : {}),
             ...(format?.missing === 'drop' ? { dropped: table.dropped } : {}),
             byName: table.columns,
         };
         return weighting === null
             ? rows
-            : { ...rows, ...rowWeights(weighting, table.columns.get(weighting.column), rows.lines, rows.rows, path) };
+            : {
+                ...rows,
+                ...rowWeights(weighting, table.columns.get(weighting.column), rows.lines, rows.rows, rows.file, rows.parts),
+            };
     };
-    const train = await load(data.train, data.lines.train, 'data.train');
-    const holdout = await load(data.holdout, data.lines.holdout, 'data.holdout');
+    // A training file read from parts is held in memory (bounded by `caps.max_file_mb` over all parts).
+    if (data.trainParts === undefined && streamsTrainingFile(data.train, await repo.size(data.train), options.streamAboveBytes)) {
+        const why = categories.size > 0
+            ? 'a category term'
+            : weighting !== null
+                ? `\`data.${weighting.kind}\``
+                : (data.targetTransform ?? null) !== null
+                    ? '`data.target_transform`'
+                    : null;
+        if (why !== null) {
+            throw new errors/* InputError */.dz('too-large-to-hold', `the training file ${(0,errors/* clip */.$Q)(data.train)} is too large to hold in memory and is read as a stream, which a model with ${why} does not support yet; expected a smaller file, or a model without it`, { file: descriptor.file, line: data.lines.train, key: 'data.train' });
+        }
+        const split = data.split ?? null;
+        const counts = { dropped: 0 };
+        const source = fileRowSource(repo, data.train, {
+            inputs,
+            target: data.target,
+            maxBytes,
+            ...(options.chunkRows ? { chunkRows: options.chunkRows } : {}),
+            ...(format ? { format } : {}),
+            ...(split ? { split: { column: split.column, keep: split.train, other: split.holdout } } : {}),
+            counts,
+        });
+        const reservoir = new RowReservoir(inputs.length, options.sampleRows ?? SAMPLE_ROWS, descriptor.fit.seed);
+        const target = { n: 0, mean: 0, m2: 0, min: Infinity, max: -Infinity };
+        try {
+            await source.forEachChunk((chunk) => {
+                options.onTrainChunk?.(chunk);
+                reservoir.add(chunk);
+                addTargetFigures(target, chunk.y, chunk.rows);
+            });
+        }
+        catch (error) {
+            throw withAsker(error, descriptor);
+        }
+        if (reservoir.seen === 0) {
+            throw new errors/* InputError */.dz('no-rows', `\`${(0,errors/* clip */.$Q)(data.train)}\` has no data rows; expected at least one row`, {
+                file: descriptor.file,
+                line: data.lines.train,
+                key: 'data.train',
+            });
+        }
+        const sample = {
+            ...reservoir.rows(data.train),
+            sampleOf: reservoir.seen,
+            ...(format?.missing === 'drop' ? { dropped: counts.dropped } : {}),
+        };
+        const holdout = await load(data.holdout, data.holdoutParts, data.lines.holdout, 'data.holdout');
+        const { byName: _unused, ...holdoutData } = holdout;
+        const trainColumns = new Map(inputs.map((name, c) => [name, sample.inputs[c]]));
+        return {
+            train: sample,
+            holdout: holdoutData,
+            trainColumns,
+            levels,
+            streamed: {
+                source,
+                rows: reservoir.seen,
+                targetMean: target.mean,
+                targetSd: Math.sqrt(target.m2 / target.n),
+                targetMin: target.min,
+                targetMax: target.max,
+            },
+        };
+    }
+    const train = await load(data.train, data.trainParts, data.lines.train, 'data.train');
+    const holdout = await load(data.holdout, data.holdoutParts, data.lines.holdout, 'data.holdout');
     const { byName, ...trainData } = train;
     if (trainData.weights !== undefined && !trainData.weights.some((w) => w > 0)) {
-        throw new core_errors/* InputError */.dz('bad-weight', `every training row of ${data.train} has weight 0; expected at least one positive weight`, {
+        throw new errors/* InputError */.dz('bad-weight', `every training row of ${trainData.file} has weight 0; expected at least one positive weight`, {
             file: descriptor.file,
             line: data.weighting?.line,
             key: `data.${data.weighting?.kind}`,
@@ -49231,34 +52489,97 @@ async function loadModelData(repo, descriptor, inputs, settings) {
     return { train: trainData, holdout: holdoutData, trainColumns: byName, levels };
 }
 /**
+ * Adds a chunk's targets to running figures: mean and sum of squared deviations merged by the
+ * pairwise formula of Chan, Golub & LeVeque ("Algorithms for computing the sample variance",
+ * The American Statistician 37(3), 1983, eq. 2.1), the chunk's own from two passes.
+ */
+function addTargetFigures(t, y, m) {
+    if (m === 0)
+        return;
+    let sum = 0;
+    for (let i = 0; i < m; i++)
+        sum += y[i];
+    const mean = sum / m;
+    let m2 = 0;
+    for (let i = 0; i < m; i++)
+        m2 += (y[i] - mean) * (y[i] - mean);
+    const n = t.n + m;
+    const delta = mean - t.mean;
+    t.mean = t.n === 0 ? mean : t.mean + (delta * m) / n;
+    t.m2 = t.n === 0 ? m2 : t.m2 + m2 + (delta * delta * t.n * m) / n;
+    t.n = n;
+    for (let i = 0; i < m; i++) {
+        if (y[i] < t.min)
+            t.min = y[i];
+        if (y[i] > t.max)
+            t.max = y[i];
+    }
+}
+/**
  * The row weights of a `data.weight` or `data.sigma` column: w as written (finite, >= 0), or
  * w = 1 / sigma^2 with sigma finite and > 0.
- * @throws InputError `bad-weight` naming the file, line, column and value of the first bad row
+ * @param parts the parts the rows were read from (lines table-wide), absent for one file
+ * @throws InputError `bad-weight` naming the file (the part), line, column and value of the first bad row
  */
-function rowWeights(weighting, values, lines, rows, file) {
+function rowWeights(weighting, values, lines, rows, file, parts) {
     const weights = new Float64Array(rows);
     const sigma = weighting.kind === 'sigma';
     for (let i = 0; i < rows; i++) {
         const v = values[i];
         const ok = sigma ? Number.isFinite(v) && v > 0 : Number.isFinite(v) && v >= 0;
         if (!ok) {
-            throw new core_errors/* InputError */.dz('bad-weight', `column \`${weighting.column}\` (\`data.${weighting.kind}\`) is ${v} on line ${lines[i]} of ${file}; expected ${sigma ? 'a finite standard uncertainty above 0' : 'a finite weight of 0 or more'}`, { file, line: lines[i], key: weighting.column });
+            const place = (0,data_parts/* placeOfLine */.xX)({ file, parts }, lines[i]);
+            throw new errors/* InputError */.dz('bad-weight', `column \`${weighting.column}\` (\`data.${weighting.kind}\`) is ${v} on line ${place.line} of ${place.file}; expected ${sigma ? 'a finite standard uncertainty above 0' : 'a finite weight of 0 or more'}`, { file: place.file, line: place.line, key: weighting.column });
         }
         weights[i] = sigma ? 1 / (v * v) : v;
     }
     return sigma ? { weights, sigma: values.subarray(0, rows) } : { weights };
 }
 /**
+ * The text of the category columns of a table, file by file (each part apart, its lines made
+ * table-wide as the numeric read made them), checked to give the same rows as the numbers.
+ * @throws InputError `csv-rows` when a file gives other rows of text than of numbers
+ */
+async function readCategoryText(repo, table, names, maxBytes) {
+    const files = table.parts ?? [{ file: table.file, lineOffset: 0 }];
+    const out = new Map(names.map((n) => [n, []]));
+    let row = 0;
+    let left = maxBytes;
+    for (const part of files) {
+        const text = await readTextColumns(repo, part.file, names, Math.min(left, maxBytes));
+        left -= await repo.size(part.file);
+        const n = text.lines.length;
+        let same = row + n <= table.rows;
+        for (let i = 0; same && i < n; i++)
+            same = text.lines[i] + part.lineOffset === table.lines[row + i];
+        if (!same) {
+            // One file: the message as it always was; a part: its own count (the numbers' rows are the whole table's).
+            const numbers = table.parts === undefined ? `${table.rows} rows of numbers` : 'other rows of numbers';
+            throw new errors/* InputError */.dz('csv-rows', `${table.parts === undefined ? part.file : (0,errors/* clip */.$Q)(part.file)} gives ${n} rows of text for its category columns but ${numbers}; expected one record per line (no line breaks inside quoted category cells)`, { file: part.file });
+        }
+        for (const name of names) {
+            const values = out.get(name);
+            for (const v of text.columns.get(name))
+                values.push(v);
+        }
+        row += n;
+    }
+    if (row !== table.rows) {
+        throw new errors/* InputError */.dz('csv-rows', `${table.parts === undefined ? table.file : (0,errors/* clip */.$Q)(table.file)} gives ${row} rows of text for its category columns but ${table.rows} rows of numbers; expected one record per line (no line breaks inside quoted category cells)`, { file: table.parts?.[0]?.file ?? table.file });
+    }
+    return out;
+}
+/**
  * A missing column names the descriptor line that asked for it: `data.target`, or the first term
  * that reads the column. Other errors pass unchanged.
  */
 function withAsker(error, descriptor) {
-    if (!(error instanceof core_errors/* InputError */.dz) || error.code !== 'csv-missing-column' || error.location.key === undefined)
+    if (!(error instanceof errors/* InputError */.dz) || error.code !== 'csv-missing-column' || error.location.key === undefined)
         return error;
     const column = error.location.key;
     if (descriptor.data.weighting?.column === column) {
         const w = descriptor.data.weighting;
-        return new core_errors/* InputError */.dz(error.code, `${error.message} (asked for by \`data.${w.kind}\` on line ${w.line} of ${descriptor.file})`, error.location);
+        return new errors/* InputError */.dz(error.code, `${error.message} (asked for by \`data.${w.kind}\` on line ${w.line} of ${descriptor.file})`, error.location);
     }
     const term = descriptor.terms.find((t) => t.kind === 'linear' ? t.columns.includes(column) : Array.isArray(t.of) ? t.of.includes(column) : t.of === column);
     const asker = column === descriptor.data.target
@@ -49268,7 +52589,7 @@ function withAsker(error, descriptor) {
             : null;
     if (asker === null)
         return error;
-    return new core_errors/* InputError */.dz(error.code, `${error.message} (asked for by ${asker} of ${(0,core_errors/* clip */.$Q)(descriptor.file)})`, error.location);
+    return new errors/* InputError */.dz(error.code, `${error.message} (asked for by ${asker} of ${(0,errors/* clip */.$Q)(descriptor.file)})`, error.location);
 }
 
 ;// CONCATENATED MODULE: ./src/data/labels.ts
@@ -49277,6 +52598,8 @@ function withAsker(error, descriptor) {
  * the file writes them (0/1, true/false, or two text labels with `data.positive` naming the
  * positive one), checked and mapped to 1 (positive) and 0 (negative).
  */
+
+
 
 
 
@@ -49299,7 +52622,7 @@ async function loadClassifierData(repo, descriptor, inputs, settings) {
         tables = await loadModelData(repo, descriptor, inputs, settings);
     }
     catch (error) {
-        if (error instanceof core_errors/* InputError */.dz && error.code === 'csv-cell' && error.location.key === descriptor.data.target) {
+        if (error instanceof errors/* InputError */.dz && error.code === 'csv-cell' && error.location.key === descriptor.data.target) {
             return loadTextLabels(repo, descriptor, inputs, settings);
         }
         throw error;
@@ -49318,7 +52641,7 @@ async function loadClassifierData(repo, descriptor, inputs, settings) {
             else if (v === negative)
                 y[i] = 0;
             else
-                throw unknownLabel(descriptor, data.file, data.lines[i], String(v), labels);
+                throw unknownLabel(descriptor, (0,data_parts/* placeOfLine */.xX)(data, data.lines[i]), String(v), labels);
         }
     }
     return { ...tables, labels };
@@ -49326,35 +52649,37 @@ async function loadClassifierData(repo, descriptor, inputs, settings) {
 /** The inputs as numbers and the target as text labels (a second read of each file for the target). */
 async function loadTextLabels(repo, descriptor, inputs, settings) {
     const { data } = descriptor;
-    const read = async (path) => {
-        const table = await readTable(repo, path, { columns: [...inputs], maxBytes: settings.caps.maxFileBytes });
-        const codes = await readLabelCodes(repo, path, data.target, descriptor);
+    const maxBytes = settings.caps.maxFileBytes;
+    const read = async (path, parts) => {
+        const table = await readTable(repo, parts ?? path, { columns: [...inputs], maxBytes });
+        const codes = await partsLabelCodes(repo, parts ?? [path], data.target, descriptor, maxBytes);
         if (codes.rows !== table.rows)
-            throw new Error(`label rows ${codes.rows} differ from data rows ${table.rows} in ${path}`);
+            throw new Error(`label rows ${codes.rows} differ from data rows ${table.rows} in ${table.file}`);
         return { table, codes };
     };
-    const train = await read(data.train);
-    const holdout = await read(data.holdout);
+    const train = await read(data.train, data.trainParts);
+    const holdout = await read(data.holdout, data.holdoutParts);
     const labels = chooseClasses(descriptor, train.codes.labels, 'text');
-    const toY = (part, file) => {
+    const toY = (part) => {
         const y = new Float64Array(part.table.rows);
         const meaning = part.codes.labels.map((label) => (label === labels.positive ? 1 : label === labels.negative ? 0 : -1));
         for (let i = 0; i < y.length; i++) {
             const m = meaning[part.codes.codes[i]];
             if (m < 0)
-                throw unknownLabel(descriptor, file, part.table.lines[i], part.codes.labels[part.codes.codes[i]], labels);
+                throw unknownLabel(descriptor, (0,data_parts/* placeOfLine */.xX)(part.table, part.table.lines[i]), part.codes.labels[part.codes.codes[i]], labels);
             y[i] = m;
         }
         return y;
     };
-    const model = (part, file) => ({
+    const model = (part) => ({
         inputs: inputs.map((c) => part.table.columns.get(c)),
-        y: toY(part, file),
+        y: toY(part),
         lines: part.table.lines,
         rows: part.table.rows,
-        file,
+        file: part.table.file,
+        ...(part.table.parts ? { parts: part.table.parts } : {}),
     });
-    return { train: model(train, data.train), holdout: model(holdout, data.holdout), trainColumns: train.table.columns, labels };
+    return { train: model(train), holdout: model(holdout), trainColumns: train.table.columns, labels };
 }
 /**
  * Picks the positive and negative class among the labels found in the training rows.
@@ -49364,17 +52689,17 @@ function chooseClasses(descriptor, found, kind) {
     const where = { file: descriptor.file, line: descriptor.data.lines.target, key: 'data.target' };
     const list = found
         .slice(0, 6)
-        .map((l) => (0,core_errors/* quoteValue */.cl)(l, 30))
+        .map((l) => (0,errors/* quoteValue */.cl)(l, 30))
         .join(', ') + (found.length > 6 ? ', …' : '');
     if (found.length !== 2) {
         const count = found.length >= MAX_LABELS ? `at least ${MAX_LABELS}` : String(found.length);
-        throw new core_errors/* InputError */.dz('target-classes', `a binary classifier needs exactly two classes in the target \`${descriptor.data.target}\`; the training rows hold ${count} (${list})`, where);
+        throw new errors/* InputError */.dz('target-classes', `a binary classifier needs exactly two classes in the target \`${descriptor.data.target}\`; the training rows hold ${count} (${list})`, where);
     }
     const positive = descriptor.data.positive ?? null;
     if (positive !== null) {
         const at = found.indexOf(positive);
         if (at < 0) {
-            throw new core_errors/* InputError */.dz('positive-label', `\`data.positive\` is ${(0,core_errors/* quoteValue */.cl)(positive, 30)} but the training rows' classes are ${list}; expected one of them`, {
+            throw new errors/* InputError */.dz('positive-label', `\`data.positive\` is ${(0,errors/* quoteValue */.cl)(positive, 30)} but the training rows' classes are ${list}; expected one of them`, {
                 ...where,
                 key: 'data.positive',
             });
@@ -49388,10 +52713,10 @@ function chooseClasses(descriptor, found, kind) {
         const at = lower.indexOf('true');
         return { positive: found[at], negative: found[1 - at], kind };
     }
-    throw new core_errors/* InputError */.dz('positive-label', `the target \`${descriptor.data.target}\` holds the classes ${list}; set \`data.positive\` to the one that is the positive class (0/1 and true/false need no setting)`, where);
+    throw new errors/* InputError */.dz('positive-label', `the target \`${descriptor.data.target}\` holds the classes ${list}; set \`data.positive\` to the one that is the positive class (0/1 and true/false need no setting)`, where);
 }
-function unknownLabel(descriptor, file, line, label, labels) {
-    return new core_errors/* InputError */.dz('target-classes', `the target \`${descriptor.data.target}\` is ${(0,core_errors/* quoteValue */.cl)(label, 30)} on line ${line} of ${file}; the training rows' classes are ${(0,core_errors/* quoteValue */.cl)(labels.positive, 30)} and ${(0,core_errors/* quoteValue */.cl)(labels.negative, 30)}`, { file: descriptor.file, line: descriptor.data.lines.target, key: 'data.target' });
+function unknownLabel(descriptor, place, label, labels) {
+    return new errors/* InputError */.dz('target-classes', `the target \`${descriptor.data.target}\` is ${(0,errors/* quoteValue */.cl)(label, 30)} on line ${place.line} of ${place.file}; the training rows' classes are ${(0,errors/* quoteValue */.cl)(labels.positive, 30)} and ${(0,errors/* quoteValue */.cl)(labels.negative, 30)}`, { file: descriptor.file, line: descriptor.data.lines.target, key: 'data.target' });
 }
 /** Distinct values of y[0..n), in order of first appearance (at most {@link MAX_LABELS}). */
 function distinctNumbers(y, n) {
@@ -49406,7 +52731,41 @@ function distinctNumbers(y, n) {
  * CSV rules as the numeric reader (comma, `"` quotes, blank lines skipped), so rows line up.
  * @throws InputError `target-classes` when more than {@link MAX_LABELS} distinct labels appear
  */
-async function readLabelCodes(repo, path, column, descriptor) {
+async function partsLabelCodes(repo, paths, column, descriptor, maxBytes) {
+    if (paths.length === 1)
+        return readLabelCodes(repo, paths[0], column, descriptor, maxBytes);
+    // Parts one after the other: each part's codes renumbered into the labels of all parts, by first appearance.
+    const labels = [];
+    const chunks = [];
+    let rows = 0;
+    for (const path of paths) {
+        const part = await readLabelCodes(repo, path, column, descriptor, maxBytes);
+        const map = part.labels.map((label) => {
+            const k = labels.indexOf(label);
+            if (k >= 0)
+                return k;
+            labels.push(label);
+            return labels.length - 1;
+        });
+        if (labels.length > MAX_LABELS) {
+            throw new errors/* InputError */.dz('target-classes', `a binary classifier needs exactly two classes in the target \`${column}\`; its parts hold more than ${MAX_LABELS}`, { file: descriptor.file, line: descriptor.data.lines.target, key: 'data.target' });
+        }
+        chunks.push(Int32Array.from(part.codes, (c) => map[c]));
+        rows += part.rows;
+    }
+    const codes = new Int32Array(rows);
+    let at = 0;
+    for (const chunk of chunks) {
+        codes.set(chunk, at);
+        at += chunk.length;
+    }
+    return { labels, codes, rows };
+}
+/**
+ * One file's labels and codes (see {@link partsLabelCodes}); its bytes are read as the numeric
+ * reader reads them (decompressed when `.gz`, held to the same byte cap).
+ */
+async function readLabelCodes(repo, path, column, descriptor, maxBytes) {
     const labels = [];
     const index = new Map();
     let codes = new Int32Array(1024);
@@ -49453,13 +52812,13 @@ async function readLabelCodes(repo, path, column, descriptor) {
         parser.on('end', resolve);
         parser.on('error', reject);
     });
-    for await (const piece of repo.stream(path))
+    for await (const piece of gzip_stream_openDataFile(repo, path, maxBytes))
         parser.write(Buffer.from(piece.buffer, piece.byteOffset, piece.byteLength));
     parser.end();
     await done;
     consume();
     if (tooMany) {
-        throw new core_errors/* InputError */.dz('target-classes', `a binary classifier needs exactly two classes in the target \`${column}\`; ${path} holds more than ${MAX_LABELS}`, {
+        throw new errors/* InputError */.dz('target-classes', `a binary classifier needs exactly two classes in the target \`${column}\`; ${path} holds more than ${MAX_LABELS}`, {
             file: descriptor.file,
             line: descriptor.data.lines.target,
             key: 'data.target',
@@ -49551,6 +52910,12 @@ var src_fit = __nccwpck_require__(2450);
  * second step on, when the Newton decrement of the step just solved (the decrease the quadratic
  * model predicts, d^T (X^T W X + ridge E) d) is at most that, the new coefficients then taken
  * without another pass; at most 100 Newton steps.
+ *
+ * Shared factors for cross-validation: a fit over all rows can keep one factor per part of the
+ * rows (the folds) at each pass; at the same coefficients every fold fit has the same weights
+ * and working responses, so the Newton step of the fit without fold f is solved from the merge
+ * of the other folds' factors ({@link firstStepsWithout}) and the fold fits, started there,
+ * need one pass over the rows fewer.
  */
 
 
@@ -49577,27 +52942,47 @@ const MAX_HALVINGS = 40;
 function fitLogistic(design, data, options, problems) {
     const p = design.p;
     const maxIterations = options.maxIterations ?? LOGISTIC_MAX_ITERATIONS;
-    const states = problems.map((problem) => ({
-        problem,
-        w: problem.start ? Float64Array.from(problem.start) : defaultStart(design, data, problem),
-        previous: null,
-        previousObjective: Number.POSITIVE_INFINITY,
-        acc: new qr_accumulator/* QrAccumulator */.S(p),
-        deviance: 0,
-        rows: 0,
-        iterations: 0,
-        halvings: 0,
-        halvingRun: 0,
-        done: p === 0,
-        converged: p === 0,
-        lastFactor: null,
-        lastDeviance: Number.NaN,
-    }));
+    const states = problems.map((problem) => {
+        const s = {
+            problem,
+            w: problem.start ? Float64Array.from(problem.start) : new Float64Array(0),
+            previous: null,
+            previousObjective: Number.POSITIVE_INFINITY,
+            acc: new qr_accumulator/* QrAccumulator */.S(p),
+            deviance: 0,
+            rows: 0,
+            iterations: 0,
+            halvings: 0,
+            halvingRun: 0,
+            done: p === 0,
+            converged: p === 0,
+            lastFactor: null,
+            lastDeviance: Number.NaN,
+            partAcc: null,
+            partDev: null,
+            lastParts: null,
+        };
+        const first = problem.firstStep;
+        if (first && p > 0) {
+            // Start after the prepared step: as if its pass had just been accepted and solved.
+            s.previous = Float64Array.from(first.from);
+            s.previousObjective = first.objective;
+            s.lastFactor = first.factor;
+            s.lastDeviance = first.deviance;
+            s.w = (0,src_fit/* solveCoefficients */.gQ)(first.factor, { ridge: options.ridge, penalised: options.penalised });
+            s.iterations = 1;
+        }
+        else if (!problem.start)
+            s.w = defaultStart(design, data, problem);
+        return s;
+    });
     const size = Math.max(1, Math.min(data.rows, 1 << 16));
     const eta = new Float64Array(size);
     const scale = new Float64Array(size);
     const target = new Float64Array(size);
     const index = new Int32Array(size);
+    const partScale = new Float64Array(size);
+    const partTarget = new Float64Array(size);
     let work = new Float64Array(0);
     for (let guard = 0; guard < (maxIterations + 1) * (MAX_HALVINGS + 2); guard++) {
         const active = states.filter((s) => !s.done);
@@ -49607,6 +52992,11 @@ function fitLogistic(design, data, options, problems) {
             s.acc = new qr_accumulator/* QrAccumulator */.S(p);
             s.deviance = 0;
             s.rows = 0;
+            const parts = s.problem.parts;
+            if (parts) {
+                s.partAcc = Array.from({ length: parts.count }, () => new qr_accumulator/* QrAccumulator */.S(p));
+                s.partDev = new Float64Array(parts.count);
+            }
         }
         (0,blocks/* forEachBlock */.aN)(design, data, (X, start, m) => {
             if (work.length < m * p)
@@ -49614,7 +53004,25 @@ function fitLogistic(design, data, options, problems) {
             for (const s of active) {
                 eta.fill(0, 0, m);
                 (0,kernels/* addProducts */.kD)(eta, 0, X, m, s.w, p);
-                const { foldOf, exclude } = s.problem;
+                const { foldOf, exclude, parts } = s.problem;
+                if (parts && s.partAcc && s.partDev) {
+                    // Every row, each into its part's factor (rows of a part gathered in row order).
+                    weightRowsByPart(eta, data.y, start, m, parts.of, s.partDev, scale, target);
+                    const offsets = sortByPart(parts.of, start, m, parts.count, index);
+                    for (let q = 0; q < parts.count; q++) {
+                        const r = offsets[q + 1] - offsets[q];
+                        if (r === 0)
+                            continue;
+                        const rows = index.subarray(offsets[q], offsets[q + 1]);
+                        gather(scale, rows, r, partScale);
+                        gather(target, rows, r, partTarget);
+                        for (let j = 0; j < p; j++)
+                            scaleColumn(X, j * m, rows, partScale, r, work, j * r);
+                        s.partAcc[q].addRows(work, partTarget, r);
+                    }
+                    s.rows += m;
+                    continue;
+                }
                 const r = foldOf
                     ? weightRows(eta, data.y, start, m, foldOf, exclude ?? -1, scale, target, index)
                     : weightAllRows(eta, data.y, start, m, scale, target, index);
@@ -49625,8 +53033,18 @@ function fitLogistic(design, data, options, problems) {
                 s.acc.addRows(work, target, r);
             }
         });
-        for (const s of active)
+        for (const s of active) {
+            if (s.partAcc && s.partDev) {
+                // The problem's factor and deviance: the merge of its parts', in part order.
+                s.acc = s.partAcc[0].clone();
+                for (let q = 1; q < s.partAcc.length; q++)
+                    s.acc.merge(s.partAcc[q]);
+                s.deviance = 0;
+                for (let q = 0; q < s.partDev.length; q++)
+                    s.deviance += s.partDev[q];
+            }
             step(s, options, maxIterations);
+        }
     }
     return states.map((s) => ({
         coefficients: s.w,
@@ -49637,7 +53055,41 @@ function fitLogistic(design, data, options, problems) {
         converged: s.converged,
         rows: s.rows,
         weightedFactor: s.lastFactor ?? s.acc,
+        parts: s.lastParts,
     }));
+}
+/**
+ * The first Newton step of each fit without one part of the rows, from the per-part factors of
+ * a fit over all rows ({@link LogisticProblem.parts}): at the common coefficients `at` every row
+ * has the same weight and working response in every such fit, so the factor of the fit without
+ * part f is the merge of the other parts' factors (in part order), and its deviance the sum of
+ * theirs. Each step is exactly the Newton step a pass over those rows at `at` would give (up to
+ * the rounding of the merge), so cross-validation folds started from the full fit need one pass
+ * fewer.
+ * @param parts the full fit's parts (at least 2)
+ * @returns one prepared step per part, for {@link LogisticProblem.firstStep}
+ */
+function firstStepsWithout(parts, options) {
+    const k = parts.factors.length;
+    const penalty = options.ridge * penaltySum(parts.at, options.penalised);
+    const steps = [];
+    for (let f = 0; f < k; f++) {
+        let factor = null;
+        let deviance = 0;
+        for (let q = 0; q < k; q++) {
+            if (q === f)
+                continue;
+            if (factor === null)
+                factor = parts.factors[q].clone();
+            else
+                factor.merge(parts.factors[q]);
+            deviance += parts.deviance[q];
+        }
+        if (factor === null)
+            factor = new qr_accumulator/* QrAccumulator */.S(parts.at.length);
+        steps.push({ from: parts.at, objective: deviance + penalty, deviance, factor });
+    }
+    return steps;
 }
 /** After a pass: accept the step (and solve the next), halve it, or stop. */
 function step(s, options, maxIterations) {
@@ -49659,6 +53111,8 @@ function step(s, options, maxIterations) {
     s.halvingRun = 0;
     s.lastFactor = s.acc;
     s.lastDeviance = s.deviance;
+    if (s.partAcc && s.partDev)
+        s.lastParts = { at: Float64Array.from(s.w), factors: s.partAcc, deviance: s.partDev };
     const decrease = s.previousObjective - objective;
     s.previousObjective = objective;
     if (s.previous !== null && decrease <= LOGISTIC_TOLERANCE * (Math.abs(objective) + 0.1)) {
@@ -49767,6 +53221,76 @@ function weightAllRows(eta, y, start, m, scale, target, index) {
     return m;
 }
 /**
+ * The out-of-fold deviance of k fits each made without one fold: per fold f, the deviance of the
+ * rows of fold f under the coefficients of fit f, in one pass over the rows. Each row's logit is
+ * summed column after column with its own fold's coefficients, as addProducts sums it, so the
+ * figures are those of predicting each fold with its own fit.
+ * @param foldOf fold of each row (0 .. k-1)
+ * @param coefficients the k fits' coefficients, fit f made without fold f
+ * @returns the deviance of each fold's rows (length k)
+ */
+function outOfFoldDeviance(design, data, foldOf, coefficients) {
+    const k = coefficients.length;
+    const p = design.p;
+    const deviance = new Float64Array(k);
+    const eta = new Float64Array(Math.max(1, Math.min(data.rows, 1 << 16)));
+    const W = new Float64Array(p * k);
+    for (let f = 0; f < k; f++)
+        for (let j = 0; j < p; j++)
+            W[j * k + f] = coefficients[f][j];
+    (0,blocks/* forEachBlock */.aN)(design, data, (X, start, m) => {
+        eta.fill(0, 0, m);
+        for (let j = 0; j < p; j++)
+            addFoldColumn(eta, X, j * m, W, j * k, foldOf, start, m);
+        addFoldDeviance(deviance, eta, data.y, foldOf, start, m);
+    });
+    return deviance;
+}
+/** eta[i] += X[col + i] W[base + foldOf[start + i]] for i < m. */
+function addFoldColumn(eta, X, col, W, base, foldOf, start, m) {
+    for (let i = 0; i < m; i++)
+        eta[i] += X[col + i] * W[base + foldOf[start + i]];
+}
+/** deviance[foldOf[start + i]] += rowDeviance(eta[i], y[start + i]) for i < m, in row order. */
+function addFoldDeviance(deviance, eta, y, foldOf, start, m) {
+    for (let i = 0; i < m; i++)
+        deviance[foldOf[start + i]] += rowDeviance(eta[i], y[start + i]);
+}
+/**
+ * {@link weightAllRows} with each row's deviance added to its part's sum (`partDev[of[start + i]]`)
+ * instead of one block sum.
+ */
+function weightRowsByPart(eta, y, start, m, of, partDev, scale, target) {
+    for (let i = 0; i < m; i++) {
+        const e = eta[i];
+        const yi = y[start + i];
+        const x = Math.exp(-Math.abs(e));
+        partDev[of[start + i]] += 2 * (Math.log1p(x) + Math.max(e, 0) - yi * e);
+        const pr = e >= 0 ? 1 / (1 + x) : x / (1 + x);
+        const w = Math.max(pr * (1 - pr), MIN_WEIGHT);
+        const s = Math.sqrt(w);
+        scale[i] = s;
+        target[i] = s * e + (yi - pr) / s;
+    }
+}
+/** Block-row indices grouped by part (a stable counting sort into `index`); returns the offsets of the parts (length count + 1). */
+function sortByPart(of, start, m, count, index) {
+    const offsets = new Int32Array(count + 1);
+    for (let i = 0; i < m; i++)
+        offsets[of[start + i] + 1] += 1;
+    for (let q = 0; q < count; q++)
+        offsets[q + 1] += offsets[q];
+    const next = offsets.slice(0, count);
+    for (let i = 0; i < m; i++)
+        index[next[of[start + i]]++] = i;
+    return offsets;
+}
+/** out[k] = from[rows[k]] for k < r. */
+function gather(from, rows, r, out) {
+    for (let k = 0; k < r; k++)
+        out[k] = from[rows[k]];
+}
+/**
  * One row's deviance -2 [y log p + (1 - y) log(1 - p)] from eta = logit p, without overflow:
  * 2 [log(1 + exp(-|eta|)) + max(eta, 0) - y eta].
  */
@@ -49787,8 +53311,6 @@ var complexity = __nccwpck_require__(7070);
 
 
 
-
-
 /**
  * Rows the classifier sweep uses at most (an even-stride subsample above it): every setting is
  * k IRLS fits, so the sweep is kept to a bounded cost; 20,000 rows rank the settings well within
@@ -49798,7 +53320,8 @@ const CLASSIFIER_SWEEP_MAX_ROWS = 20000;
 /**
  * Sweeps the classifier's complexity setting. Ridge: lambda = s x 10^t, t = 3, 2, ..., -3, with
  * s = max(current lambda, rows / 1000), plus the current lambda, largest (simplest) first, each
- * started from the previous one's fold fits. Degree: 1 .. current + 3 (at most 15). Width: current
+ * setting's fit on all the sweep's rows started from the previous one's, and its fold fits from
+ * it (their first Newton step from its per-fold factors: fit/logistic.ts, firstStepsWithout). Degree: 1 .. current + 3 (at most 15). Width: current
  * x 2^t, t = 4 .. -2. Each setting: the mean of the fold log-losses and its standard error (sample
  * sd / sqrt(k)).
  * @returns null when there is nothing to sweep or fewer than 2 folds
@@ -49808,7 +53331,7 @@ function sweepClassifier(descriptor, design, train) {
     if (target === null || train.rows < 2)
         return null;
     const rows = train.rows > CLASSIFIER_SWEEP_MAX_ROWS ? (0,complexity/* subsample */.pb)(train, CLASSIFIER_SWEEP_MAX_ROWS) : train;
-    const folds = (0,diagnostics_folds/* assignFolds */.o)(rows.rows, descriptor.fit.folds, descriptor.fit.foldOrder, descriptor.fit.seed);
+    const folds = (0,diagnostics_folds/* assignFolds */.oF)(rows.rows, descriptor.fit.folds, descriptor.fit.foldOrder, descriptor.fit.seed);
     if (folds.k < 2)
         return null;
     const ridge = descriptor.fit.ridge;
@@ -49844,28 +53367,25 @@ function sweepClassifier(descriptor, design, train) {
         }
     }
     const curve = [];
-    let starts = null;
+    let start = null;
     for (const point of points) {
         const d = point.design;
+        const options = { ridge: point.ridge, penalised: [...d.penalised] };
+        // The fit on all the sweep's rows first (from the previous setting's, on the same design),
+        // keeping one factor per fold: each fold's first Newton step then needs no pass of its own.
+        const [full] = fitLogistic(d, rows, options, [
+            { parts: { of: folds.foldOf, count: folds.k }, ...(start && d === design ? { start } : {}) },
+        ]);
+        if (d === design)
+            start = full.coefficients;
+        const steps = full.parts !== null ? firstStepsWithout(full.parts, options) : null;
         const problems = Array.from({ length: folds.k }, (_, f) => ({
             foldOf: folds.foldOf,
             exclude: f,
-            ...(starts && d === design ? { start: starts[f] } : {}),
+            ...(steps ? { firstStep: steps[f] } : { start: full.coefficients }),
         }));
-        const fits = fitLogistic(d, rows, { ridge: point.ridge, penalised: [...d.penalised] }, problems);
-        if (d === design)
-            starts = fits.map((x) => x.coefficients);
-        const deviance = new Float64Array(folds.k);
-        const eta = new Float64Array(Math.min(rows.rows, 1 << 16));
-        (0,blocks/* forEachBlock */.aN)(d, rows, (X, start, m) => {
-            for (let f = 0; f < folds.k; f++) {
-                eta.fill(0, 0, m);
-                (0,kernels/* addProducts */.kD)(eta, 0, X, m, fits[f].coefficients, d.p);
-                for (let i = 0; i < m; i++)
-                    if (folds.foldOf[start + i] === f)
-                        deviance[f] += rowDeviance(eta[i], rows.y[start + i]);
-            }
-        });
+        const fits = fitLogistic(d, rows, options, problems);
+        const deviance = outOfFoldDeviance(d, rows, folds.foldOf, fits.map((x) => x.coefficients));
         const losses = Array.from(deviance, (dv, f) => dv / 2 / folds.sizes[f]);
         const mean = losses.reduce((a, b) => a + b, 0) / losses.length;
         const variance = losses.reduce((a, b) => a + (b - mean) ** 2, 0) / (losses.length - 1);
@@ -49875,8 +53395,6 @@ function sweepClassifier(descriptor, design, train) {
     return { kind: target.kind, line: target.line, current: points.findIndex((p) => p.current), points: curve, chosen, best };
 }
 
-// EXTERNAL MODULE: ./src/diagnostics/radix-sort.ts
-var radix_sort = __nccwpck_require__(8459);
 ;// CONCATENATED MODULE: ./src/diagnostics/classification-metrics.ts
 /**
  * Figures of a binary classifier's probabilities against 0/1 labels: log-loss, Brier score,
@@ -50094,6 +53612,8 @@ function rocPoints(y, p, n, max = 50) {
     return { fpr, tpr };
 }
 
+// EXTERNAL MODULE: ./src/core/extremes.ts
+var extremes = __nccwpck_require__(398);
 ;// CONCATENATED MODULE: ./src/diagnostics/separation.ts
 /**
  * Separation of a binary classifier's training rows (Albert & Anderson 1984, Biometrika 71(1),
@@ -50384,58 +53904,9 @@ function simplexMax(c, rows, p) {
 }
 
 // EXTERNAL MODULE: ./src/design/terms/transform.ts
-var transform = __nccwpck_require__(7922);
-;// CONCATENATED MODULE: ./src/design/weighted-design.ts
-/**
- * sqrt(w) and sqrt(w) y of a model's rows, or null when the rows carry no weights. The weights
- * are first divided by their mean (the fit does not change when every weight is multiplied by
- * one constant), so that the scaled problem's mean squared errors (cross-validation, leave-one-out)
- * are weighted mean squared errors sum w r^2 / sum w on the same footing as the weighted RMSE.
- */
-function rowScaling(data) {
-    if (data.weights === undefined)
-        return null;
-    const sqrtW = new Float64Array(data.rows);
-    const y = new Float64Array(data.rows);
-    let total = 0;
-    for (let i = 0; i < data.rows; i++)
-        total += data.weights[i];
-    const mean = total / data.rows;
-    for (let i = 0; i < data.rows; i++) {
-        sqrtW[i] = Math.sqrt(data.weights[i] / mean);
-        y[i] = sqrtW[i] * data.y[i];
-    }
-    return { sqrtW, y };
-}
-/**
- * Multiplies each of the m rows of a column-major m x p block (rows start .. start+m-1 of the
- * data) by sqrt(w) in place.
- */
-function scaleBlockRows(X, m, p, sqrtW, start) {
-    for (let j = 0; j < p; j++)
-        weighted_design_scaleColumn(X, j * m, m, sqrtW, start);
-}
-/** X[at + i] *= s[start + i] for i < m (one loop; see DEVELOPERS.md, "Writing hot loops"). */
-function weighted_design_scaleColumn(X, at, m, s, start) {
-    for (let i = 0; i < m; i++)
-        X[at + i] *= s[start + i];
-}
-/**
- * The design of the scaled problem: the same columns, each row filled by `design` and multiplied
- * by sqrt(w) of its row (`fill`'s `start` indexes `scaling.sqrtW`). Only for the rows the
- * scaling was made from.
- */
-function weightedDesign(design, scaling) {
-    return {
-        ...design,
-        fill(inputs, start, m, out) {
-            const filled = design.fill(inputs, start, m, out);
-            scaleBlockRows(filled, m, design.p, scaling.sqrtW, start);
-            return filled;
-        },
-    };
-}
-
+var terms_transform = __nccwpck_require__(7922);
+// EXTERNAL MODULE: ./src/design/weighted-design.ts
+var weighted_design = __nccwpck_require__(9416);
 // EXTERNAL MODULE: ./src/core/format.ts
 var format = __nccwpck_require__(6228);
 ;// CONCATENATED MODULE: ./src/run/cost.ts
@@ -50486,7 +53957,8 @@ function buildCost(design) {
     return ops;
 }
 /** The sizes of a planned model. */
-function modelShape(descriptor, design, trainRows, holdoutRows) {
+function modelShape(descriptor, design, trainRows, holdoutRows, sampleRows) {
+    const sampled = sampleRows ?? trainRows;
     return {
         trainRows,
         holdoutRows,
@@ -50495,7 +53967,9 @@ function modelShape(descriptor, design, trainRows, holdoutRows) {
         buildPerRow: buildCost(design),
         folds: Math.min(descriptor.fit.folds, trainRows),
         shipped: descriptor.coefficients !== null,
-        sweep: (0,complexity/* sweepShape */.EH)(descriptor, design, trainRows, { maxRows: complexity/* SWEEP_MAX_ROWS */.QA }),
+        sweep: (0,complexity/* sweepShape */.EH)(descriptor, design, sampled, { maxRows: complexity/* SWEEP_MAX_ROWS */.QA }),
+        ...(sampleRows === undefined ? {} : { sampleRows }),
+        ...(descriptor.data.targetTransform ? { targetTransform: true } : {}),
     };
 }
 /** Points of the swing scan at most (every input's grid, the margins, the neighbour segments). */
@@ -50521,7 +53995,8 @@ function swingPoints(inputs, rows) {
  * - leakage: (n + m)({@link LEAKAGE_ROW_OPERATIONS} + 4d); charts: curves of 401 points per input (at most 12);
  * - complexity sweep: a ridge sweep k SVDs and 2 L k p^2 for L penalties; a degree or width
  *   sweep, per setting of p_s columns on its n_s rows, n_s (2 b_s + p_s^2 + p_s) + 4 k p_s^3 +
- *   k ({@link SOLVE_SVDS} SVDs + p_s^3 / 3).
+ *   k ({@link SOLVE_SVDS} SVDs + p_s^3 / 3);
+ * - a transformed target's original scale: the out-of-fold pass n (b + p) and k fold solves.
  */
 function estimateCost(shape) {
     const { trainRows: n, holdoutRows: m, columns: p, buildPerRow: b, inputs: d } = shape;
@@ -50542,21 +54017,25 @@ function estimateCost(shape) {
         },
         { stage: 'cross-validation', operations: solves(k, p), sizes: `${k} fold solves of ${p} columns` },
     ];
-    const grid = swingPoints(d, n);
-    const sampled = Math.min(n, swing/* SWING_DEFAULTS */.qk.maxRows);
-    const sorted = Math.min(n, swing/* SWING_DEFAULTS */.qk.maxGridRows);
+    // A streamed model's swing scan and charts read its sample (ns rows); leakage streams every row.
+    const ns = shape.sampleRows ?? n;
+    const grid = swingPoints(d, ns);
+    const sampled = Math.min(ns, swing/* SWING_DEFAULTS */.qk.maxRows);
+    const sorted = Math.min(ns, swing/* SWING_DEFAULTS */.qk.maxGridRows);
     parts.push({
         stage: 'swing scan',
-        operations: grid * (b + p) + (d >= 2 ? sampled * sampled * d : 0) + d * (32 * sorted + 4 * n),
+        operations: grid * (b + p) + (d >= 2 ? sampled * sampled * d : 0) + d * (32 * sorted + 4 * ns),
         sizes: `${grid} points`,
     });
     const curves = Math.min(d, MAX_PARTIAL_CURVES);
     parts.push({
         stage: 'leakage and charts',
-        operations: (n + m) * (LEAKAGE_ROW_OPERATIONS + 4 * d) + curves * CURVE_POINTS * (b + p) + 4 * n * d,
+        operations: (n + m) * (LEAKAGE_ROW_OPERATIONS + 4 * d) + curves * CURVE_POINTS * (b + p) + 4 * ns * d,
         sizes: `${n} + ${m} rows x ${d} inputs`,
     });
     parts.push(sweepPart(shape, k));
+    if (shape.targetTransform === true)
+        parts.push({ stage: 'original scale of the target', operations: build(n, b) + n * p + solves(k, p), sizes: rowsBy(n) });
     return { total: parts.reduce((sum, part) => sum + part.operations, 0), parts };
 }
 /** The complexity sweep's share (see {@link estimateCost}). */
@@ -50604,10 +54083,13 @@ function checkBudget(descriptor, estimate, settings) {
         .slice(0, 3)
         .map((part) => `${part.stage} ${formatOperations(part.operations)} (${part.sizes})`)
         .join(', ');
-    throw new core_errors/* InputError */.dz(OVER_BUDGET, `the estimated work of this model, ${formatOperations(estimate.total)} operations, is over the cap of ${formatOperations(cap)} (largest: ${largest}); raise caps.max_operations in ${settings.file ?? 'the settings file (fitgate.yml)'} to allow it, or use fewer rows, columns, folds or sweep settings`, { file: descriptor.file, line: descriptor.termsLine, key: 'terms' });
+    throw new errors/* InputError */.dz(OVER_BUDGET, `the estimated work of this model, ${formatOperations(estimate.total)} operations, is over the cap of ${formatOperations(cap)} (largest: ${largest}); raise caps.max_operations in ${settings.file ?? 'the settings file (fitgate.yml)'} to allow it, or use fewer rows, columns, folds or sweep settings`, { file: descriptor.file, line: descriptor.termsLine, key: 'terms' });
 }
 
 ;// CONCATENATED MODULE: ./src/run/plan.ts
+
+
+
 
 
 
@@ -50636,44 +54118,93 @@ const MAX_MAGNITUDE = 1e140;
  * @throws InputError for bad data, a design over the caps, a target out of range or constant
  *   or work estimated over `caps.max_operations` (`over-budget`)
  */
-async function planModel(repo, descriptor, settings, load = loadModelData) {
+async function planModel(repo, descriptor, settings, load = loadModelData, scale = {}) {
     const inputs = [];
     for (const t of descriptor.terms)
         for (const c of (0,design_terms/* termInputs */.Q)(t))
             if (!inputs.includes(c))
                 inputs.push(c);
-    const tables = await load(repo, descriptor, inputs, settings);
+    const file = descriptor.file;
+    // A streamed training file meets the checks of every row chunk by chunk in its sampling read.
+    const everyRow = (data) => {
+        (0,core_deadline/* checkDeadline */.Ft)('reading of the data');
+        for (const spec of descriptor.terms)
+            (0,terms_transform/* checkTransformDomain */.F4)(spec, (0,design_terms/* termInputs */.Q)(spec), data, inputs);
+        checkTargetRange(descriptor, data);
+    };
+    let tables = await load(repo, descriptor, inputs, settings, { ...scale, onTrainChunk: everyRow });
     (0,core_deadline/* checkDeadline */.Ft)('reading of the data');
     const { train } = tables;
-    const file = descriptor.file;
+    const streamed = tables.streamed ?? null;
+    const rows = streamed === null ? train.rows : streamed.rows;
     // A transformed input outside its transform's domain is an error naming file, line, column, value.
     for (const spec of descriptor.terms)
-        for (const data of [train, tables.holdout])
-            (0,transform/* checkTransformDomain */.F4)(spec, (0,design_terms/* termInputs */.Q)(spec), data, inputs);
+        for (const data of streamed === null ? [train, tables.holdout] : [tables.holdout])
+            (0,terms_transform/* checkTransformDomain */.F4)(spec, (0,design_terms/* termInputs */.Q)(spec), data, inputs);
     // Fix term parameters from the training rows, then check the size before taking memory.
     const terms = descriptor.terms.map((spec) => (0,design_terms/* createTerm */.P)(spec, tables.trainColumns, file, tables.levels));
     const design = (0,design_matrix/* createDesign */.x)(terms, descriptor.fit.intercept);
     const p = design.p;
     if (p > MAX_PARAMETERS) {
-        throw new core_errors/* InputError */.dz('too-many-parameters', `the terms build ${p} design columns; at most ${MAX_PARAMETERS} are supported (the diagnostics decompose p x p factors, at a cost that grows with p^3); use fewer radial centres or a lower degree`, { file, line: descriptor.termsLine, key: 'terms' });
+        throw new errors/* InputError */.dz('too-many-parameters', `the terms build ${p} design columns; at most ${MAX_PARAMETERS} are supported (the diagnostics decompose p x p factors, at a cost that grows with p^3); use fewer radial centres or a lower degree`, { file, line: descriptor.termsLine, key: 'terms' });
     }
-    if (train.rows * p > settings.caps.maxCells) {
-        throw new core_errors/* InputError */.dz('too-large', `${train.rows} training rows x ${p} parameters = ${train.rows * p} cells is over the cap of ${settings.caps.maxCells}; raise caps.max_cells in the settings file to allow it`, { file, line: descriptor.termsLine, key: 'terms' });
+    // caps.max_cells guards the memory of columns held whole; a streamed model holds none (its
+    // work is still held to caps.max_operations below).
+    if (streamed === null && rows * p > settings.caps.maxCells) {
+        throw new errors/* InputError */.dz('too-large', `${rows} training rows x ${p} parameters = ${rows * p} cells is over the cap of ${settings.caps.maxCells}; raise caps.max_cells in the settings file to allow it`, { file, line: descriptor.termsLine, key: 'terms' });
     }
-    for (const data of [train, tables.holdout]) {
-        const i = (0,kernels/* firstBeyond */.gy)(data.y, data.rows, MAX_MAGNITUDE);
-        if (i >= 0) {
-            throw new core_errors/* InputError */.dz('target-range', `the target \`${(0,core_errors/* clip */.$Q)(descriptor.data.target)}\` is ${data.y[i]} on line ${data.lines[i]} of ${(0,core_errors/* clip */.$Q)(data.file)}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): rescale the target`, { file, line: descriptor.data.lines.target, key: 'data.target' });
-        }
+    for (const data of streamed === null ? [train, tables.holdout] : [tables.holdout])
+        checkTargetRange(descriptor, data);
+    // `data.target_transform`: the fit and every figure of the passes work on t = g(y) (a streamed
+    // training file is refused with a transform: data/load-model-data.ts).
+    const transform = descriptor.data.targetTransform ?? null;
+    let originalTargets = null;
+    if (transform !== null && streamed === null) {
+        const transformed = (0,target_transform/* transformTables */.mZ)(tables, transform.kind, descriptor.data.target);
+        tables = transformed.tables;
+        originalTargets = transformed.original;
     }
-    const targetStats = (0,stats/* meanAndSd */.ud)(train.y, train.rows);
+    const targetStats = streamed === null ? (0,stats/* meanAndSd */.ud)(tables.train.y, tables.train.rows) : { mean: streamed.targetMean, sd: streamed.targetSd };
     if (!(targetStats.sd > 0)) {
-        throw new core_errors/* InputError */.dz('constant-target', `the target \`${(0,core_errors/* clip */.$Q)(descriptor.data.target)}\` is constant (${train.y[0]}) in every training row; there is nothing to model`, { file, line: descriptor.data.lines.target, key: 'data.target' });
+        throw new errors/* InputError */.dz('constant-target', `the target \`${(0,errors/* clip */.$Q)(descriptor.data.target)}\` is constant (${train.y[0]}) in every training row; there is nothing to model`, { file, line: descriptor.data.lines.target, key: 'data.target' });
     }
     // The whole model's work, estimated from its shape before the first pass over the rows.
-    checkBudget(descriptor, estimateCost(modelShape(descriptor, design, train.rows, tables.holdout.rows)), settings);
-    const folds = (0,diagnostics_folds/* assignFolds */.o)(train.rows, descriptor.fit.folds, descriptor.fit.foldOrder, descriptor.fit.seed);
-    return { descriptor, tables, design, folds, targetSd: targetStats.sd, scaling: rowScaling(train) };
+    checkBudget(descriptor, estimateCost(modelShape(descriptor, design, rows, tables.holdout.rows, streamed === null ? undefined : train.rows)), settings);
+    const { folds: k, foldOrder, seed } = descriptor.fit;
+    if (streamed !== null) {
+        return {
+            descriptor,
+            tables,
+            design,
+            folds: (0,diagnostics_folds/* streamedFolds */.g7)(rows, k, foldOrder, seed),
+            targetSd: targetStats.sd,
+            scaling: null,
+            source: streamed.source,
+            rows,
+            targetRange: [streamed.targetMin, streamed.targetMax],
+            ...(scale.chunkRows ? { chunkRows: scale.chunkRows } : {}),
+        };
+    }
+    const folds = (0,diagnostics_folds/* assignFolds */.oF)(rows, k, foldOrder, seed);
+    return {
+        descriptor,
+        tables,
+        design,
+        folds,
+        targetSd: targetStats.sd,
+        scaling: (0,weighted_design/* rowScaling */.on)(tables.train),
+        originalTargets,
+        source: memoryRowSource(tables.train),
+        rows,
+        targetRange: (0,stats/* range */.y1)(tables.train.y, tables.train.rows),
+    };
+}
+/** InputError `target-range` when a target is not within ±{@link MAX_MAGNITUDE}. */
+function checkTargetRange(descriptor, data) {
+    const i = (0,kernels/* firstBeyond */.gy)(data.y, data.rows, MAX_MAGNITUDE);
+    if (i < 0)
+        return;
+    throw new errors/* InputError */.dz('target-range', `the target \`${(0,errors/* clip */.$Q)(descriptor.data.target)}\` is ${data.y[i]} on ${(0,data_parts/* lineOfFile */.ui)(data, data.lines[i])}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): rescale the target`, { file: descriptor.file, line: descriptor.data.lines.target, key: 'data.target' });
 }
 
 ;// CONCATENATED MODULE: ./src/run/fit-classifier.ts
@@ -50689,11 +54220,23 @@ async function planModel(repo, descriptor, settings, load = loadModelData) {
 
 
 
+
+/**
+ * Largest estimated CSV text of a classifier's training file (data/row-source.ts estimates it):
+ * 512 MiB, the default file cap, so classifiers within the defaults are unaffected.
+ */
+const CLASSIFIER_MAX_BYTES = 512 * 1024 * 1024;
 /**
  * Loads, fits and scores one classifier.
  * @throws InputError for bad data or labels, a design over the caps, or shipped coefficients of the wrong length
  */
 async function fitClassifier(repo, descriptor, settings) {
+    // Classifiers are held in memory (their fit makes several passes of its own): a file above the
+    // default file cap is refused plainly rather than left to run out of memory.
+    const file = descriptor.data.train;
+    if (streamsTrainingFile(file, await repo.size(file), CLASSIFIER_MAX_BYTES)) {
+        throw new errors/* InputError */.dz('too-large-to-hold', `the training file ${(0,errors/* clip */.$Q)(file)} is estimated at over ${CLASSIFIER_MAX_BYTES / (1024 * 1024)} MiB of CSV text; a classifier's rows are held in memory and files this large are read as a stream for regression models only; expected a smaller training file`, { file: descriptor.file, line: descriptor.data.lines.train, key: 'data.train' });
+    }
     let labels = null;
     const plan = await planModel(repo, descriptor, settings, async (r, d, inputs, s) => {
         const tables = await loadClassifierData(r, d, inputs, s);
@@ -50706,7 +54249,9 @@ async function fitClassifier(repo, descriptor, settings) {
     const spread = new ColumnSpread(design.p);
     (0,blocks/* forEachBlock */.aN)(design, train, (X, _start, m) => spread.add(X, m));
     const columnSd = spread.sd();
-    const [fit] = fitLogistic(design, train, options, [{ start: warmStart(design, train, options) }]);
+    // With folds, each pass also keeps one factor per fold, so that the folds' first Newton steps need no pass of their own.
+    const parts = folds.k >= 2 ? { of: folds.foldOf, count: folds.k } : undefined;
+    const [fit] = fitLogistic(design, train, options, [{ start: warmStart(design, train, options), parts }]);
     const weighted = (0,src_fit/* fitFactor */.Ps)(fit.weightedFactor, options);
     const trainEta = (0,blocks/* predictRows */.tp)(design, train, fit.coefficients);
     const holdoutEta = (0,blocks/* predictRows */.tp)(design, holdout, fit.coefficients);
@@ -50729,6 +54274,7 @@ async function fitClassifier(repo, descriptor, settings) {
             shipped: shippedClassifier(descriptor, design, train, holdout, fit, trainEta, holdoutEta),
             columnSd,
             leakage: leakageOf(train, holdout),
+            ...(train.parts !== undefined ? { trainSource: { file: train.file, parts: train.parts } } : {}),
             complexity: sweepClassifier(descriptor, design, train),
         },
         labels: labels,
@@ -50770,25 +54316,23 @@ function warmStart(design, train, options) {
 /**
  * k-fold cross-validation: the fit without each fold (the same terms, fixed from all training
  * rows, and the same ridge), started from the full fit, all folds in shared passes; the pooled
- * log-loss of the out-of-fold probabilities. Null below 2 folds.
+ * log-loss of the out-of-fold probabilities. Null below 2 folds. When the full fit kept its
+ * per-fold factors (`full.parts`, one part per fold), each fold's first Newton step is solved
+ * from them without a pass (fit/logistic.ts, firstStepsWithout); the optimum is the same.
  */
 function crossValidateClassifier(design, train, folds, full, options) {
     const k = folds.k;
     if (k < 2)
         return null;
-    const problems = Array.from({ length: k }, (_, f) => ({ foldOf: folds.foldOf, exclude: f, start: full.coefficients }));
+    const steps = full.parts !== null && full.parts.factors.length === k ? firstStepsWithout(full.parts, options) : null;
+    const problems = Array.from({ length: k }, (_, f) => ({
+        foldOf: folds.foldOf,
+        exclude: f,
+        start: full.coefficients,
+        ...(steps ? { firstStep: steps[f] } : {}),
+    }));
     const fits = fitLogistic(design, train, options, problems);
-    const foldDeviance = new Float64Array(k);
-    const eta = new Float64Array(Math.min(train.rows, 1 << 16));
-    (0,blocks/* forEachBlock */.aN)(design, train, (X, start, m) => {
-        for (let f = 0; f < k; f++) {
-            eta.fill(0, 0, m);
-            (0,kernels/* addProducts */.kD)(eta, 0, X, m, fits[f].coefficients, design.p);
-            for (let i = 0; i < m; i++)
-                if (folds.foldOf[start + i] === f)
-                    foldDeviance[f] += rowDeviance(eta[i], train.y[start + i]);
-        }
-    });
+    const foldDeviance = outOfFoldDeviance(design, train, folds.foldOf, fits.map((x) => x.coefficients));
     let total = 0;
     for (let f = 0; f < k; f++)
         total += foldDeviance[f];
@@ -50806,7 +54350,7 @@ function shippedClassifier(descriptor, design, train, holdout, fit, trainEta, ho
     if (shipped === null)
         return null;
     if (shipped.length !== design.p) {
-        throw new core_errors/* InputError */.dz('coefficients-length', `\`coefficients\` has ${shipped.length} values but the terms build ${design.p} columns (${design.columnNames.slice(0, 12).join(', ')}${design.p > 12 ? ', …' : ''}); expected one value per column, intercept first`, { file: descriptor.file, line: descriptor.coefficientsLine ?? undefined, key: 'coefficients' });
+        throw new errors/* InputError */.dz('coefficients-length', `\`coefficients\` has ${shipped.length} values but the terms build ${design.p} columns (${design.columnNames.slice(0, 12).join(', ')}${design.p > 12 ? ', …' : ''}); expected one value per column, intercept first`, { file: descriptor.file, line: descriptor.coefficientsLine ?? undefined, key: 'coefficients' });
     }
     let maxP = 0;
     const losses = [];
@@ -50833,7 +54377,14 @@ function leakageOf(train, holdout) {
     const found = findLeakage(train, holdout);
     return {
         duplicates: found.fullMatches,
-        examples: found.holdoutLines.map((line, i) => ({ holdoutLine: line, trainLine: found.trainLines[i] })),
+        examples: found.holdoutLines.map((line, i) => {
+            if (train.parts === undefined && holdout.parts === undefined)
+                return { holdoutLine: line, trainLine: found.trainLines[i] };
+            // Read from parts: each part's own line and its file.
+            const h = (0,data_parts/* placeOfLine */.xX)(holdout, line);
+            const t = (0,data_parts/* placeOfLine */.xX)(train, found.trainLines[i]);
+            return { holdoutLine: h.line, trainLine: t.line, holdoutFile: h.file, trainFile: t.file };
+        }),
     };
 }
 
@@ -50843,6 +54394,9 @@ function leakageOf(train, holdout) {
  * every check of the registry with its classifier measure (checks that apply to regression only
  * are skipped with `<id>/not-for-classification`), and build its part of the Result.
  */
+
+
+
 
 
 
@@ -50906,12 +54460,14 @@ async function evaluateClassifier(repo, descriptor, settings, base) {
         descriptor: descriptor.file,
         verdict,
         rows: { train: model.train.rows, holdout: model.holdout.rows },
+        ...(0,data_paths/* dataFilesField */.IJ)(descriptor.data),
         parameters: model.context.design.p,
         columns: [...model.context.design.columnNames],
         metrics,
         coefficients: Array.from(model.context.fit.coefficients, result_result/* jsonNumber */.qj),
         shipped: null,
         checks,
+        ...(base ? { base: (0,base_comparison/* compareWithBase */.te)(metrics, baseMatch, base.commit) } : {}),
         error: null,
         extra: {
             task: 'classification',
@@ -50932,15 +54488,511 @@ async function evaluateClassifier(repo, descriptor, settings, base) {
                 fixed: t.fixed,
             })),
         },
+        classifier_charts: buildClassifierChartData(model),
     };
+}
+
+;// CONCATENATED MODULE: ./src/data/load-predictions.ts
+
+
+
+
+
+/** Stable codes of the errors this module throws. */
+const PREDICTIONS_ERROR = Object.freeze({
+    /** The prediction column is the target or an input. */
+    column: 'predictions-column',
+    /** Data and side file do not hold the same rows (count, or keys missing on either side). */
+    rows: 'predictions-rows',
+    /** A key cell is empty or a key repeats. */
+    key: 'predictions-key',
+    /** A prediction is not finite, or a classifier's probability is outside [0, 1]. */
+    value: 'predictions-value',
+});
+/**
+ * Loads a model trained elsewhere: inputs (`predictions.inputs`, for leakage), target and
+ * predictions of both files. Classifiers' targets become 0/1 as for models of terms (labels.ts),
+ * and their predictions must be probabilities in [0, 1].
+ * @throws InputError every data-file error of {@link loadModelData}, plus `predictions-column`,
+ *   `predictions-rows` (naming both files and the first bad line), `predictions-key`,
+ *   `predictions-value`
+ */
+async function loadPredictionsData(repo, descriptor, settings) {
+    const spec = descriptor.predictions;
+    if (!spec)
+        throw new TypeError('loadPredictionsData needs a descriptor with `predictions`');
+    for (const which of ['train', 'holdout']) {
+        const source = spec[which];
+        if (source.file !== null)
+            continue;
+        const clash = source.column === descriptor.data.target ? 'the target column' : spec.inputs.includes(source.column) ? 'an input' : null;
+        if (clash !== null) {
+            throw new errors/* InputError */.dz(PREDICTIONS_ERROR.column, `\`predictions.${which}.column\` names ${clash} (\`${(0,errors/* clip */.$Q)(source.column)}\`); expected the column that holds the model's predictions`, { file: descriptor.file, line: source.line, key: `predictions.${which}.column` });
+        }
+    }
+    const classifier = descriptor.task === 'classification';
+    let tables;
+    let labels = null;
+    try {
+        if (classifier) {
+            const t = await loadClassifierData(repo, descriptor, spec.inputs, settings);
+            labels = t.labels;
+            tables = t;
+        }
+        else {
+            tables = await loadModelData(repo, descriptor, spec.inputs, settings);
+        }
+    }
+    catch (error) {
+        throw namedInput(error, descriptor);
+    }
+    const out = {};
+    for (const which of ['train', 'holdout']) {
+        const data = tables[which];
+        const read = await load_predictions_readPredictions(repo, descriptor, settings, data, spec[which], which);
+        checkValues(read, spec[which], which, classifier);
+        out[which] = { ...data, predictions: read.values, predictionFile: read.file, predictionLines: read.lines };
+    }
+    return { train: out.train, holdout: out.holdout, labels };
+}
+async function load_predictions_readPredictions(repo, descriptor, settings, data, source, which) {
+    const maxBytes = settings.caps.maxFileBytes;
+    const format = descriptor.data.format;
+    if (source.file === null)
+        return columnOfDataFile(repo, descriptor, data, source, which, maxBytes);
+    // A side file: its own rows, every cell of the column present.
+    const side = await readTable(repo, source.file, {
+        columns: [source.column],
+        maxBytes,
+        ...(format ? { format: { ...format, missing: 'error' } } : {}),
+    });
+    const values = side.columns.get(source.column);
+    if (source.key === null)
+        return inFileOrder(descriptor, data, source.file, side.lines, values, side.rows, which);
+    return byKey(repo, data, source, side.lines, values, side.rows, maxBytes);
+}
+/** The prediction column of the data file itself, row for row (the same split side; missing cells refused). */
+async function columnOfDataFile(repo, descriptor, data, source, which, maxBytes) {
+    const split = descriptor.data.split ?? null;
+    const side = split === null
+        ? undefined
+        : which === 'train'
+            ? { column: split.column, keep: split.train, other: split.holdout }
+            : { column: split.column, keep: split.holdout, other: split.train };
+    const format = descriptor.data.format;
+    let table;
+    try {
+        table = await readTable(repo, data.file, {
+            columns: [source.column],
+            maxBytes,
+            ...(format ? { format } : {}),
+            ...(side ? { split: side } : {}),
+        });
+    }
+    catch (error) {
+        if (error instanceof errors/* InputError */.dz && error.code === 'csv-missing-column' && error.location.key === source.column)
+            throw new errors/* InputError */.dz(error.code, `${error.message} (asked for by \`predictions.${which}.column\` on line ${source.line} of ${(0,errors/* clip */.$Q)(descriptor.file)})`, error.location);
+        throw error;
+    }
+    const all = table.columns.get(source.column);
+    // With `data.missing: drop` either read may have dropped rows: pair them by line.
+    const values = new Float64Array(data.rows);
+    let j = 0;
+    for (let i = 0; i < data.rows; i++) {
+        const line = data.lines[i];
+        while (j < table.rows && table.lines[j] < line)
+            j++;
+        if (j >= table.rows || table.lines[j] !== line) {
+            throw new errors/* InputError */.dz(PREDICTIONS_ERROR.rows, `line ${line} of ${(0,errors/* clip */.$Q)(data.file)} has no prediction in column \`${(0,errors/* clip */.$Q)(source.column)}\` (\`predictions.${which}.column\`); expected a prediction for every data row`, { file: data.file, line, key: source.column });
+        }
+        values[i] = all[j];
+    }
+    return { values, file: data.file, lines: data.lines };
+}
+/** A side file without a key: its rows go with the data rows in file order, one for one. */
+function inFileOrder(descriptor, data, sideFile, sideLines, values, sideRows, which) {
+    if ((data.dropped ?? 0) > 0) {
+        throw new errors/* InputError */.dz(PREDICTIONS_ERROR.rows, `${data.dropped} rows of ${(0,errors/* clip */.$Q)(data.file)} were dropped for missing cells, so the rows of ${(0,errors/* clip */.$Q)(sideFile)} cannot be paired with them in file order; expected \`predictions.${which}.key\` (a key column both files hold)`, { file: descriptor.file, line: descriptor.predictions?.[which].line, key: `predictions.${which}` });
+    }
+    if (sideRows !== data.rows) {
+        const short = sideRows < data.rows;
+        const message = short
+            ? `${(0,errors/* clip */.$Q)(sideFile)} has ${sideRows} prediction rows but ${(0,errors/* clip */.$Q)(data.file)} has ${data.rows} data rows: line ${data.lines[sideRows]} of ${(0,errors/* clip */.$Q)(data.file)} (data row ${sideRows + 1}) has no prediction row`
+            : `${(0,errors/* clip */.$Q)(sideFile)} has ${sideRows} prediction rows but ${(0,errors/* clip */.$Q)(data.file)} has ${data.rows} data rows: line ${sideLines[data.rows]} of ${(0,errors/* clip */.$Q)(sideFile)} (prediction row ${data.rows + 1}) has no data row`;
+        throw new errors/* InputError */.dz(PREDICTIONS_ERROR.rows, `${message}; expected one prediction row per data row, in the same order (or \`predictions.${which}.key\` to match rows by a key column)`, short ? { file: data.file, line: data.lines[sideRows] } : { file: sideFile, line: sideLines[data.rows] });
+    }
+    return { values: values.slice(0, sideRows), file: sideFile, lines: sideLines.slice(0, sideRows) };
+}
+/**
+ * A side file with a key column: each data row takes the side row of the same key. Keys are text
+ * as written (trimmed; `07` and `7` differ) and unique in each file. A side key held by no row of
+ * the data file is an error; one held by a row of the other split side or a dropped row is not.
+ */
+async function byKey(repo, data, source, sideLines, values, sideRows, maxBytes) {
+    const keyColumn = source.key;
+    const dataKeys = await readTextColumns(repo, data.file, [keyColumn], maxBytes);
+    const sideKeys = await readTextColumns(repo, source.file, [keyColumn], maxBytes);
+    // Every key of the data file (all its rows) by line, for the rows used and for the others.
+    const allDataKeys = new Set();
+    const dataKeyOf = keysByLine(dataKeys, keyColumn, data.file);
+    for (const k of dataKeyOf.values())
+        allDataKeys.add(k);
+    // Side rows by key (unique), paired with their numeric row by line.
+    const sideKeyOf = keysByLine(sideKeys, keyColumn, source.file);
+    const sideIndex = new Map();
+    for (let j = 0; j < sideRows; j++) {
+        const k = sideKeyOf.get(sideLines[j]);
+        if (k === undefined) {
+            throw new errors/* InputError */.dz(PREDICTIONS_ERROR.rows, `line ${sideLines[j]} of ${(0,errors/* clip */.$Q)(source.file)} has a prediction but no key`, {
+                file: source.file,
+                line: sideLines[j],
+                key: keyColumn,
+            });
+        }
+        const first = sideIndex.get(k);
+        if (first !== undefined)
+            throw duplicateKey(source.file, keyColumn, k, sideLines[first], sideLines[j]);
+        sideIndex.set(k, j);
+    }
+    const out = new Float64Array(data.rows);
+    const lines = new Int32Array(data.rows);
+    const used = new Map();
+    for (let i = 0; i < data.rows; i++) {
+        const k = dataKeyOf.get(data.lines[i]);
+        if (k === undefined) {
+            throw new errors/* InputError */.dz(PREDICTIONS_ERROR.key, `line ${data.lines[i]} of ${(0,errors/* clip */.$Q)(data.file)} has no key in column \`${(0,errors/* clip */.$Q)(keyColumn)}\` as its text is read; expected one record per line (no line breaks inside quoted cells)`, { file: data.file, line: data.lines[i], key: keyColumn });
+        }
+        const seen = used.get(k);
+        if (seen !== undefined)
+            throw duplicateKey(data.file, keyColumn, k, data.lines[seen], data.lines[i]);
+        used.set(k, i);
+        const j = sideIndex.get(k);
+        if (j === undefined) {
+            throw new errors/* InputError */.dz(PREDICTIONS_ERROR.rows, `line ${data.lines[i]} of ${(0,errors/* clip */.$Q)(data.file)} has key ${(0,errors/* quoteValue */.cl)(k, 40)} (column \`${(0,errors/* clip */.$Q)(keyColumn)}\`), which no row of ${(0,errors/* clip */.$Q)(source.file)} holds; expected a prediction row for every data row (${data.rows} data rows, ${sideRows} prediction rows)`, { file: data.file, line: data.lines[i], key: keyColumn });
+        }
+        out[i] = values[j];
+        lines[i] = sideLines[j];
+    }
+    for (let j = 0; j < sideRows; j++) {
+        const k = sideKeyOf.get(sideLines[j]);
+        if (!allDataKeys.has(k)) {
+            throw new errors/* InputError */.dz(PREDICTIONS_ERROR.rows, `line ${sideLines[j]} of ${(0,errors/* clip */.$Q)(source.file)} has key ${(0,errors/* quoteValue */.cl)(k, 40)} (column \`${(0,errors/* clip */.$Q)(keyColumn)}\`), which no row of ${(0,errors/* clip */.$Q)(data.file)} holds; expected predictions of the data file's rows only (${data.rows} data rows, ${sideRows} prediction rows)`, { file: source.file, line: sideLines[j], key: keyColumn });
+        }
+    }
+    return { values: out, file: source.file, lines };
+}
+/** Key of each row by its line; an empty key cell is an error naming the file and line. */
+function keysByLine(text, column, file) {
+    const keys = text.columns.get(column);
+    const out = new Map();
+    for (let r = 0; r < keys.length; r++) {
+        if (keys[r] === '') {
+            throw new errors/* InputError */.dz(PREDICTIONS_ERROR.key, `line ${text.lines[r]} of ${(0,errors/* clip */.$Q)(file)} has an empty key in column \`${(0,errors/* clip */.$Q)(column)}\`; expected a key in every row`, {
+                file,
+                line: text.lines[r],
+                key: column,
+            });
+        }
+        out.set(text.lines[r], keys[r]);
+    }
+    return out;
+}
+function duplicateKey(file, column, key, firstLine, line) {
+    return new errors/* InputError */.dz(PREDICTIONS_ERROR.key, `line ${line} of ${(0,errors/* clip */.$Q)(file)} repeats key ${(0,errors/* quoteValue */.cl)(key, 40)} of line ${firstLine} (column \`${(0,errors/* clip */.$Q)(column)}\`); expected each key once`, { file, line, key: column });
+}
+/** Predictions are finite; a classifier's are probabilities in [0, 1]. */
+function checkValues(read, source, which, classifier) {
+    for (let i = 0; i < read.values.length; i++) {
+        const v = read.values[i];
+        const bad = classifier ? !(v >= 0 && v <= 1) : !Number.isFinite(v);
+        if (!bad)
+            continue;
+        throw new errors/* InputError */.dz(PREDICTIONS_ERROR.value, classifier
+            ? `the prediction ${v} on line ${read.lines[i]} of ${(0,errors/* clip */.$Q)(read.file)} (column \`${(0,errors/* clip */.$Q)(source.column)}\`, \`predictions.${which}\`) is not a probability; a classifier's predictions (\`task: classification\`) are probabilities of the positive class in [0, 1]`
+            : `the prediction ${v} on line ${read.lines[i]} of ${(0,errors/* clip */.$Q)(read.file)} (column \`${(0,errors/* clip */.$Q)(source.column)}\`, \`predictions.${which}\`) is not a finite number`, { file: read.file, line: read.lines[i], key: source.column });
+    }
+}
+/** A missing input column names `predictions.inputs` as the asker. */
+function namedInput(error, descriptor) {
+    if (!(error instanceof errors/* InputError */.dz) || error.code !== 'csv-missing-column' || error.location.key === undefined)
+        return error;
+    if (!descriptor.predictions?.inputs.includes(error.location.key))
+        return error;
+    return new errors/* InputError */.dz(error.code, `${error.message} (asked for by \`predictions.inputs\` on line ${descriptor.predictions.line} of ${(0,errors/* clip */.$Q)(descriptor.file)})`, error.location);
+}
+
+;// CONCATENATED MODULE: ./src/diagnostics/observed-spread.ts
+/**
+ * The swing figure of a model known only by its predictions: how far its predictions of the
+ * observed rows (training and hold-out) leave the band of training targets. Without the model
+ * itself nothing can be predicted between or beyond the rows, so this is the part of the swing
+ * scan (diagnostics/swing.ts) that predictions allow.
+ */
+/**
+ * The spread of the predictions of the observed rows against the training target band (the same
+ * figure as the `swing` check's, on these rows only).
+ * @param y training targets (the first `trainRows` entries are read)
+ * @param files the training and hold-out rows with their predictions
+ */
+function observedSpread(y, trainRows, files) {
+    let lo = Infinity;
+    let hi = -Infinity;
+    for (let i = 0; i < trainRows; i++) {
+        if (y[i] < lo)
+            lo = y[i];
+        if (y[i] > hi)
+            hi = y[i];
+    }
+    let pLo = Infinity;
+    let pHi = -Infinity;
+    let worstOut = 0;
+    let worst = null;
+    let rows = 0;
+    for (const f of files) {
+        for (let i = 0; i < f.rows; i++) {
+            const p = f.predictions[i];
+            if (p < pLo)
+                pLo = p;
+            if (p > pHi)
+                pHi = p;
+            const out = Math.max(p - hi, lo - p);
+            if (out > worstOut) {
+                worstOut = out;
+                worst = { file: f.file, line: f.lines[i], prediction: p };
+            }
+        }
+        rows += f.rows;
+    }
+    const width = hi - lo;
+    return { band: [lo, hi], predicted: [pLo, pHi], value: width > 0 ? worstOut / width : Number.NaN, rows, worst };
 }
 
 // EXTERNAL MODULE: ./src/diagnostics/regression-metrics.ts
 var regression_metrics = __nccwpck_require__(155);
+;// CONCATENATED MODULE: ./src/run/evaluate-predictions.ts
+/**
+ * One model trained elsewhere (`predictions`) from descriptor to outcome: its rows and
+ * predictions (data/load-predictions.ts), the figures that need only predictions, every check of
+ * the registry through its `measurePredictions` (the others skipped with `<id>/needs-refit`),
+ * and its part of the Result (`kind: 'predictions'`). Nothing is fitted.
+ */
+
+
+
+
+
+
+
+
+
+
+/**
+ * Probabilities are kept inside [EPS, 1 - EPS] where a logit is taken (log-loss, calibration), so
+ * that a stated 0 or 1 gives a large finite loss instead of an infinite one (common practice;
+ * 1e-15 as many metric libraries use, from memory). Brier score, accuracy and AUC use the
+ * probabilities as given.
+ */
+const PROBABILITY_EPS = 1e-15;
+/** logit(clamp(p, EPS, 1 - EPS)) of each entry. */
+function clampedLogits(p, n) {
+    const out = new Float64Array(n);
+    for (let i = 0; i < n; i++) {
+        const q = Math.min(1 - PROBABILITY_EPS, Math.max(PROBABILITY_EPS, p[i]));
+        out[i] = Math.log(q / (1 - q));
+    }
+    return out;
+}
+function errorsOf(rows) {
+    const sums = (0,regression_metrics/* emptySums */.y3)();
+    (0,regression_metrics/* addErrors */.xB)(sums, rows.y, rows.predictions, rows.rows);
+    const m = (0,regression_metrics/* errorMeasures */._I)(sums);
+    return { rmse: m.rmse, mae: m.mae, r2: m.r2 };
+}
+/**
+ * Scores one model trained elsewhere and runs every check on it. Errors are handled by the caller
+ * (evaluate.ts), as for models of terms.
+ * @param base outcomes on the base commit to compare with; default none
+ */
+async function evaluatePredictions(repo, descriptor, settings, base) {
+    const spec = descriptor.predictions;
+    if (!spec)
+        throw new TypeError('evaluatePredictions needs a descriptor with `predictions`');
+    const tables = await loadPredictionsData(repo, descriptor, settings);
+    (0,core_deadline/* checkDeadline */.Ft)('predictions');
+    const { train, holdout } = tables;
+    const parameters = descriptor.parameters ?? null;
+    const isClassifier = descriptor.task === 'classification';
+    // The figures of the predictions: errors (regression) or the probabilities' figures (classifiers).
+    let classifier = null;
+    let regression = null;
+    let charts = {};
+    if (isClassifier) {
+        const threshold = descriptor.fit.threshold ?? 0.5;
+        const trainEta = clampedLogits(train.predictions, train.rows);
+        const holdoutEta = clampedLogits(holdout.predictions, holdout.rows);
+        classifier = {
+            train: classificationFigures(train.y, trainEta, train.predictions, train.rows, threshold),
+            holdout: classificationFigures(holdout.y, holdoutEta, holdout.predictions, holdout.rows, threshold),
+            calibration: calibration(holdout.y, holdoutEta, holdout.rows),
+        };
+        charts = {
+            roc: { train: rocPoints(train.y, train.predictions, train.rows), holdout: rocPoints(holdout.y, holdout.predictions, holdout.rows) },
+            calibration_bins: calibrationBins(holdout.y, holdout.predictions, holdout.rows).map((b) => ({
+                from: b.from,
+                to: b.to,
+                count: b.count,
+                predicted: (0,result_result/* jsonNumber */.qj)(b.predicted),
+                observed: (0,result_result/* jsonNumber */.qj)(b.observed),
+            })),
+        };
+    }
+    else {
+        regression = { train: errorsOf(train), holdout: errorsOf(holdout) };
+    }
+    (0,core_deadline/* checkDeadline */.Ft)('predictions');
+    const leakage = spec.inputs.length > 0 ? findLeakage(train, holdout) : null;
+    const spread = observedSpread(train.y, train.rows, [
+        { file: train.predictionFile, lines: train.predictionLines, predictions: train.predictions, rows: train.rows },
+        { file: holdout.predictionFile, lines: holdout.predictionLines, predictions: holdout.predictions, rows: holdout.rows },
+    ]);
+    const baseMatch = base?.matches.get(descriptor.file) ?? null;
+    const context = {
+        descriptor,
+        parameters,
+        inputs: spec.inputs,
+        rows: { train: train.rows, holdout: holdout.rows },
+        files: { train: train.file, holdout: holdout.file },
+        regression,
+        classifier,
+        leakage,
+        spread,
+        baseline: baseMatch?.model ?? null,
+    };
+    const metrics = classifier !== null
+        ? evaluate_predictions_classifierMetrics(classifier, parameters, train.rows, descriptor, tables.labels)
+        : regressionMetrics(regression, parameters, train.rows);
+    const { checks, verdict } = runChecks((0,src_checks/* checksFor */.NR)(descriptor.task), (check) => (0,src_checks/* runPredictionsCheck */.KK)(check, context), metrics);
+    const source = (which) => {
+        const s = spec[which];
+        return { column: s.column, file: s.file, key: s.key };
+    };
+    return {
+        name: descriptor.name,
+        descriptor: descriptor.file,
+        kind: 'predictions',
+        verdict,
+        rows: { train: train.rows, holdout: holdout.rows },
+        ...(train.dropped !== undefined ? { dropped: { train: train.dropped, holdout: holdout.dropped ?? 0 } } : {}),
+        parameters: parameters ?? 0,
+        columns: [],
+        metrics,
+        coefficients: [],
+        shipped: null,
+        checks,
+        ...(base && !isClassifier ? { base: (0,base_comparison/* compareWithBase */.te)(metrics, baseMatch, base.commit) } : {}),
+        error: null,
+        extra: {
+            kind: 'predictions',
+            ...(isClassifier ? { task: 'classification', labels: tables.labels } : {}),
+            predictions: { train: source('train'), holdout: source('holdout'), inputs: [...spec.inputs] },
+            parameters_stated: parameters !== null,
+            observed_spread: {
+                band: spread.band.map(result_result/* jsonNumber */.qj),
+                predicted: spread.predicted.map(result_result/* jsonNumber */.qj),
+                rows: spread.rows,
+                worst: spread.worst === null ? null : { ...spread.worst, prediction: (0,result_result/* jsonNumber */.qj)(spread.worst.prediction) },
+            },
+            ...charts,
+        },
+    };
+}
+/**
+ * The report's metrics of a regression model trained elsewhere: the error figures of its
+ * predictions. The keys of coefficients and of the design (`max_std_coefficient`, `rank`...) are
+ * left out: there are none; so is `params_per_sample` without a stated `parameters`.
+ */
+function regressionMetrics(r, parameters, rows) {
+    const n = (x) => (0,result_result/* jsonNumber */.qj)(x);
+    return {
+        train_rmse: n(r.train.rmse),
+        holdout_rmse: n(r.holdout.rmse),
+        train_mae: n(r.train.mae),
+        holdout_mae: n(r.holdout.mae),
+        train_r2: n(r.train.r2),
+        holdout_r2: n(r.holdout.r2),
+        gap_ratio: n((0,regression_metrics/* gapRatio */.yr)(r.train.rmse, r.holdout.rmse)),
+        ...(parameters === null ? {} : { params_per_sample: n(parameters / rows) }),
+    };
+}
+/**
+ * The report's metrics of a classifier trained elsewhere: the keys of evaluate-classifier.ts that
+ * predictions give (log-loss, Brier, accuracy, AUC, class counts); the regression, coefficient and
+ * design keys are left out.
+ */
+function evaluate_predictions_classifierMetrics(c, parameters, rows, descriptor, labels) {
+    const n = (x) => (0,result_result/* jsonNumber */.qj)(x);
+    const train = c.train;
+    const holdout = c.holdout;
+    return {
+        task: 'classification',
+        gap_ratio: n((0,regression_metrics/* gapRatio */.yr)(train.logLoss, holdout.logLoss)),
+        ...(parameters === null ? {} : { params_per_sample: n(parameters / rows) }),
+        train_log_loss: n(train.logLoss),
+        holdout_log_loss: n(holdout.logLoss),
+        train_brier: n(train.brier),
+        holdout_brier: n(holdout.brier),
+        train_accuracy: n(train.accuracy),
+        holdout_accuracy: n(holdout.accuracy),
+        train_auc: n(train.auc),
+        holdout_auc: n(holdout.auc),
+        threshold: descriptor.fit.threshold ?? 0.5,
+        train_positives: train.positives,
+        train_negatives: train.negatives,
+        holdout_positives: holdout.positives,
+        holdout_negatives: holdout.negatives,
+        positive_label: labels?.positive ?? null,
+        negative_label: labels?.negative ?? null,
+    };
+}
+
+// EXTERNAL MODULE: ./src/diagnostics/weighted-metrics.ts
+var weighted_metrics = __nccwpck_require__(3759);
+;// CONCATENATED MODULE: ./src/diagnostics/refit-compare.ts
+
+
+function rmse(data, predictions) {
+    if (data.weights !== undefined)
+        return (0,weighted_metrics/* weightedErrorMeasures */.v)(data.y, predictions, data.weights, data.rows).rmse;
+    const sums = (0,regression_metrics/* emptySums */.y3)();
+    (0,regression_metrics/* addErrors */.xB)(sums, data.y, predictions, data.rows);
+    return (0,regression_metrics/* errorMeasures */._I)(sums).rmse;
+}
+/**
+ * The refit's figures from its predictions of both files and its cross-validation.
+ * @param trainPredictions the refit's predictions of the training rows (length train.rows)
+ * @param holdoutPredictions the refit's predictions of the hold-out rows (length holdout.rows)
+ * @param cv the refit's cross-validation, or null
+ */
+function refitFigures(train, holdout, trainPredictions, holdoutPredictions, cv) {
+    const trainRmse = rmse(train, trainPredictions);
+    const holdoutRmse = rmse(holdout, holdoutPredictions);
+    return {
+        trainRmse,
+        holdoutRmse,
+        gapRatio: (0,regression_metrics/* gapRatio */.yr)(trainRmse, holdoutRmse),
+        cvRmse: cv === null ? Number.NaN : cv.cvRmse,
+        folds: cv === null ? 0 : cv.k,
+    };
+}
+
 ;// CONCATENATED MODULE: ./src/diagnostics/shipped.ts
 
 
+
+/** RMSE, MAE and R^2 of the rows; weighted rows get the weighted measures (weighted-metrics.ts), as the refit's. */
 function measures(data, predictions) {
+    if (data.weights !== undefined)
+        return (0,weighted_metrics/* weightedErrorMeasures */.v)(data.y, predictions, data.weights, data.rows);
     const sums = (0,regression_metrics/* emptySums */.y3)();
     (0,regression_metrics/* addErrors */.xB)(sums, data.y, predictions, data.rows);
     return (0,regression_metrics/* errorMeasures */._I)(sums);
@@ -50964,8 +55016,6 @@ function scoreShipped(design, train, holdout, shipped, refit) {
     };
 }
 
-// EXTERNAL MODULE: ./src/diagnostics/weighted-metrics.ts
-var weighted_metrics = __nccwpck_require__(3759);
 ;// CONCATENATED MODULE: ./src/run/passes.ts
 /**
  * The planned passes over a model's training rows, each building the design block by block
@@ -50975,7 +55025,16 @@ var weighted_metrics = __nccwpck_require__(3759);
  *    the design's range check and column spreads alongside;
  * 2. the refinement pass, where one step of iterative refinement converges and gains digits;
  * 3. the scoring pass: predictions, out-of-fold errors and leverages together.
+ *
+ * The rows come from the plan's row source (data/row-source.ts): the columns in memory as one
+ * chunk, or, for a training file too large to hold, the file read again on each pass; then the
+ * scoring pass also gathers the training errors and the leakage scan, so that nothing of length
+ * n is ever held ({@link streamedScoringPass}).
  */
+
+
+
+
 
 
 
@@ -50989,21 +55048,26 @@ var weighted_metrics = __nccwpck_require__(3759);
  * Pass 1: folds every training row into its fold's factor, merges them and solves.
  * @throws InputError `design-overflow` when a design value is not within ±{@link MAX_MAGNITUDE}
  */
-function foldPass(plan) {
-    const { design, tables, folds, descriptor } = plan;
-    const train = tables.train;
+async function foldPass(plan) {
+    const { design, folds, descriptor } = plan;
     const builder = new cross_validation/* FoldFactorBuilder */.UN(design.p, folds);
     const spread = new ColumnSpread(design.p);
     const scaling = plan.scaling ?? null;
-    (0,blocks/* forEachBlock */.aN)(design, train, (X, start, m) => {
-        (0,core_deadline/* checkDeadline */.Ft)('fold pass');
-        checkRange(plan, X, start, m);
-        spread.add(X, m);
-        // A weighted fit folds the rows scaled by sqrt(w) (design/weighted-design.ts).
-        if (scaling !== null)
-            scaleBlockRows(X, m, design.p, scaling.sqrtW, start);
-        builder.add(X, scaling === null ? train.y : scaling.y, start, m);
-    });
+    let ids = new Int32Array(0);
+    await plan.source.forEachChunk((chunk, first) => {
+        if (folds.streamed === true && ids.length < chunk.rows)
+            ids = new Int32Array(chunk.rows);
+        const foldOf = (0,diagnostics_folds/* foldIdsOf */.Fe)(folds, first, chunk.rows, ids);
+        (0,blocks/* forEachBlock */.aN)(design, chunk, (X, start, m) => {
+            (0,core_deadline/* checkDeadline */.Ft)('fold pass');
+            checkRange(plan, chunk, X, start, m);
+            spread.add(X, m);
+            // A weighted fit folds the rows scaled by sqrt(w) (design/weighted-design.ts).
+            if (scaling !== null)
+                (0,weighted_design/* scaleBlockRows */.hx)(X, m, design.p, scaling.sqrtW, start);
+            builder.add(X, scaling === null ? chunk.y : scaling.y, start, m, foldOf);
+        });
+    }, streamChunkRows(plan));
     (0,core_deadline/* checkDeadline */.Ft)('fold merges');
     const fit = (0,src_fit/* fitFactor */.Ps)((0,cross_validation/* mergeFactors */.Z4)(builder.factors, design.p), { ridge: descriptor.fit.ridge, penalised: design.penalised });
     (0,core_deadline/* checkDeadline */.Ft)('fit');
@@ -51014,20 +55078,31 @@ function foldPass(plan) {
  * Pass 2: one step of iterative refinement where it applies (not for well-conditioned designs,
  * whose QR solution is already accurate to about 1e-14); the fit unchanged otherwise.
  */
-function refinePass(plan, fit) {
+async function refinePass(plan, fit) {
     if (!(0,src_fit/* refinementApplies */.C4)(fit))
         return fit;
-    const train = plan.tables.train;
     const pass = new src_fit/* RefinementPass */.rT(fit);
     const scaling = plan.scaling ?? null;
-    const y = scaling === null ? train.y : scaling.y;
-    (0,blocks/* forEachBlock */.aN)(plan.design, train, (X, start, m) => {
-        (0,core_deadline/* checkDeadline */.Ft)('refinement pass');
-        if (scaling !== null)
-            scaleBlockRows(X, m, plan.design.p, scaling.sqrtW, start);
-        pass.addRows(X, y.subarray(start, start + m), m);
-    });
+    await plan.source.forEachChunk((chunk) => {
+        const y = scaling === null ? chunk.y : scaling.y;
+        (0,blocks/* forEachBlock */.aN)(plan.design, chunk, (X, start, m) => {
+            (0,core_deadline/* checkDeadline */.Ft)('refinement pass');
+            if (scaling !== null)
+                (0,weighted_design/* scaleBlockRows */.hx)(X, m, plan.design.p, scaling.sqrtW, start);
+            pass.addRows(X, y.subarray(start, start + m), m);
+        });
+    }, streamChunkRows(plan));
     return pass.finish();
+}
+/**
+ * Rows per chunk of a streamed pass: a whole number of the design's blocks (design/blocks.ts)
+ * near 65536 rows, so that the blocks, and with them every sum, are those of the in-memory path.
+ */
+function streamChunkRows(plan) {
+    if (plan.chunkRows !== undefined)
+        return plan.chunkRows;
+    const block = (0,blocks/* blockRows */.h1)(plan.design.p);
+    return block * Math.max(1, Math.floor(65536 / block));
 }
 /** Pass 3: training predictions with the cross-validation in one pass, then the hold-out rows. */
 function scoringPass(plan, fit, foldFactors) {
@@ -51047,7 +55122,7 @@ function scoringPass(plan, fit, foldFactors) {
         else {
             // The scaled problem's errors are sqrt(w) times the residuals: weighted cross-validation.
             const rows = { inputs: train.inputs, y: scaling.y, rows: train.rows };
-            crossValidation = (0,cross_validation/* crossValidate */.DJ)(weightedDesign(design, scaling), rows, fit, folds, {
+            crossValidation = (0,cross_validation/* crossValidate */.DJ)((0,weighted_design/* weightedDesign */.Uo)(design, scaling), rows, fit, folds, {
                 factors: foldFactors.perFold,
                 complements: foldFactors.complements,
             });
@@ -51065,13 +55140,50 @@ function scoringPass(plan, fit, foldFactors) {
     return { trainPredictions, holdoutPredictions: (0,blocks/* predictRows */.tp)(design, holdout, fit.coefficients), crossValidation };
 }
 /**
+ * Pass 3 of a streamed model, in one read of the file: per chunk the cross-validation scoring
+ * (out-of-fold errors, residuals, leverages), the training error sums of the fit and of shipped
+ * coefficients, and the leakage scan; predictions are made block by block and dropped.
+ */
+async function streamedScoringPass(plan, fit, foldFactors, shipped) {
+    const { design, tables, folds } = plan;
+    const { holdout } = tables;
+    const scorer = new cross_validation/* CrossValidationScorer */.OY(design, fit, folds, { factors: foldFactors.perFold, complements: foldFactors.complements });
+    const trainSums = (0,regression_metrics/* emptySums */.y3)();
+    const shippedTrainSums = shipped === null ? null : (0,regression_metrics/* emptySums */.y3)();
+    const leakage = new LeakageScan(holdout);
+    let predictions = new Float64Array(0);
+    let other = new Float64Array(0);
+    await plan.source.forEachChunk((chunk) => {
+        (0,core_deadline/* checkDeadline */.Ft)('scoring pass');
+        if (predictions.length < chunk.rows) {
+            predictions = new Float64Array(chunk.rows);
+            other = new Float64Array(shipped === null ? 0 : chunk.rows);
+        }
+        scorer.addRows(chunk, predictions);
+        (0,regression_metrics/* addErrors */.xB)(trainSums, chunk.y, predictions, chunk.rows);
+        if (shipped !== null && shippedTrainSums !== null) {
+            other.fill(0, 0, chunk.rows);
+            (0,blocks/* forEachBlock */.aN)(design, chunk, (X, start, m) => (0,kernels/* addProducts */.kD)(other, start, X, m, shipped, design.p));
+            (0,regression_metrics/* addErrors */.xB)(shippedTrainSums, chunk.y, other, chunk.rows);
+        }
+        leakage.add(chunk);
+    }, streamChunkRows(plan));
+    return {
+        trainSums,
+        shippedTrainSums,
+        samplePredictions: (0,blocks/* predictRows */.tp)(design, tables.train, fit.coefficients),
+        holdoutPredictions: (0,blocks/* predictRows */.tp)(design, holdout, fit.coefficients),
+        crossValidation: scorer.finish(plan.rows),
+        leakage: leakage.finish(),
+    };
+}
+/**
  * InputError `design-overflow` when a block of the training design holds a value that is not a
  * finite number within ±{@link MAX_MAGNITUDE}: finite data can still overflow in a term (a huge
  * `shift` or `scale`, a high power of a large input), and sums of squares must stay finite.
  */
-function checkRange(plan, X, start, m) {
+function checkRange(plan, train, X, start, m) {
     const { design, descriptor } = plan;
-    const train = plan.tables.train;
     const at = (0,kernels/* firstBeyond */.gy)(X, design.p * m, MAX_MAGNITUDE);
     if (at < 0)
         return;
@@ -51081,7 +55193,171 @@ function checkRange(plan, X, start, m) {
     while (term + 1 < design.termOffsets.length && design.termOffsets[term + 1] <= j)
         term += 1;
     const line = design.terms[term]?.spec.line ?? descriptor.termsLine;
-    throw new core_errors/* InputError */.dz('design-overflow', `design column \`${(0,core_errors/* clip */.$Q)(design.columnNames[j])}\` is ${X[at]} at training row on line ${train.lines[start + i]} of ${(0,core_errors/* clip */.$Q)(train.file)}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): use inputs of a smaller size, a lower degree, or a shift and scale near the data`, { file: descriptor.file, line, key: 'terms' });
+    throw new errors/* InputError */.dz('design-overflow', `design column \`${(0,errors/* clip */.$Q)(design.columnNames[j])}\` is ${X[at]} at training row on line ${train.lines[start + i]} of ${(0,errors/* clip */.$Q)(train.file)}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): use inputs of a smaller size, a lower degree, or a shift and scale near the data`, { file: descriptor.file, line, key: 'terms' });
+}
+
+;// CONCATENATED MODULE: ./src/diagnostics/target-scale.ts
+
+
+
+
+
+
+/** g^-1 of every prediction (a new array). */
+function backTransform(kind, t) {
+    const out = new Float64Array(t.length);
+    for (let i = 0; i < t.length; i++)
+        out[i] = (0,target_transform/* inverseTarget */.I)(kind, t[i]);
+    return out;
+}
+/** RMSE, MAE and R^2 of predictions against y, weighted when weights are given. */
+function scaleMeasures(y, predictions, n, weights) {
+    if (weights !== undefined)
+        return (0,weighted_metrics/* weightedErrorMeasures */.v)(y, predictions, weights, n);
+    const sums = (0,regression_metrics/* emptySums */.y3)();
+    (0,regression_metrics/* addErrors */.xB)(sums, y, predictions, n);
+    return (0,regression_metrics/* errorMeasures */._I)(sums);
+}
+/** The figures of one scale from its rows and predictions. */
+function scaleFigures(train, holdout, predictions, rows, cvRmse) {
+    const tr = scaleMeasures(train.y, predictions.train, rows.train, train.weights);
+    const ho = scaleMeasures(holdout.y, predictions.holdout, rows.holdout, holdout.weights);
+    const chi = (part, pred, n, dof) => part.sigma === undefined ? Number.NaN : (0,weighted_metrics/* reducedChiSquare */.G)(part.y, pred, part.sigma, n, dof);
+    return {
+        trainRmse: tr.rmse,
+        holdoutRmse: ho.rmse,
+        trainMae: tr.mae,
+        holdoutMae: ho.mae,
+        trainR2: tr.r2,
+        holdoutR2: ho.r2,
+        gapRatio: (0,regression_metrics/* gapRatio */.yr)(tr.rmse, ho.rmse),
+        cvRmse,
+        trainChiSquare: chi(train, predictions.train, rows.train, rows.train - rows.p),
+        holdoutChiSquare: chi(holdout, predictions.holdout, rows.holdout, rows.holdout),
+    };
+}
+/**
+ * Pooled k-fold RMSE on the original scale: each training row predicted by the fit without its
+ * fold (the complements' solves, with the fit's ridge penalty; weighted fits' complements are
+ * factors of the scaled rows, so these are the weighted fits), back-transformed, against y;
+ * sqrt(sum w r^2 / sum w) (w = 1 without weights). NaN below 2 folds. One pass over the rows.
+ *
+ * @param design the model's design
+ * @param train the transformed training rows (inputs are read)
+ * @param folds the folds of the fit
+ * @param complements each fold's complement factor (cross-validation.ts)
+ * @param fit the full fit (ridge and penalised columns)
+ * @param kind the transform
+ * @param original the training target as written, with its original-scale weights
+ */
+function originalScaleCvRmse(design, train, folds, complements, fit, kind, original) {
+    if (folds.k < 2 || complements.length !== folds.k)
+        return Number.NaN;
+    const coefficients = (0,cross_validation/* complementCoefficients */.dn)(complements, [fit.ridge], fit.penalised)[0];
+    const p = design.p;
+    const foldOf = folds.foldOf;
+    const y = original.y;
+    const w = original.weights;
+    let sse = 0;
+    let total = 0;
+    (0,blocks/* forEachBlock */.aN)(design, train, (X, start, m) => {
+        (0,core_deadline/* checkDeadline */.Ft)('original-scale cross-validation');
+        for (let i = 0; i < m; i++) {
+            const b = coefficients[foldOf[start + i]];
+            let t = 0;
+            for (let j = 0; j < p; j++)
+                t += X[j * m + i] * b[j];
+            const r = y[start + i] - (0,target_transform/* inverseTarget */.I)(kind, t);
+            const wi = w === undefined ? 1 : w[start + i];
+            sse += wi * r * r;
+            total += wi;
+        }
+    });
+    return total > 0 ? Math.sqrt(sse / total) : Number.NaN;
+}
+
+;// CONCATENATED MODULE: ./src/run/target-scale.ts
+/**
+ * A model fitted on a transformed target (`data.target_transform`): its error figures on both
+ * scales (diagnostics/target-scale.ts), and the core metrics every check reads switched to the
+ * scale the limits judge (`data.limits_scale`, default `original`). Coefficient sizes, the target's
+ * spread and range stay those of the fit's own scale.
+ */
+
+
+/**
+ * The model with `targetScale` set and its metrics on the limits' scale; the model unchanged
+ * without a target transform.
+ * @param plan the model's plan (its original targets)
+ * @param model the fitted model, with figures on the transformed scale
+ */
+function withTargetScale(plan, model) {
+    const spec = plan.descriptor.data.targetTransform ?? null;
+    const original = plan.originalTargets ?? null;
+    if (spec === null || original === null)
+        return model;
+    const kind = spec.kind;
+    const { train, holdout } = model.tables;
+    const rows = { train: train.rows, holdout: holdout.rows, p: model.design.p };
+    const own = (d) => ({
+        y: d.y,
+        ...(d.weights !== undefined ? { weights: d.weights } : {}),
+        ...(d.sigma !== undefined ? { sigma: d.sigma } : {}),
+    });
+    const fitted = { train: model.trainPredictions, holdout: model.holdoutPredictions };
+    const transformed = scaleFigures(own(train), own(holdout), fitted, rows, model.crossValidation?.cvRmse ?? Number.NaN);
+    const predictions = { train: backTransform(kind, fitted.train), holdout: backTransform(kind, fitted.holdout) };
+    const cv = model.crossValidation === null
+        ? Number.NaN
+        : originalScaleCvRmse(model.design, train, model.folds, model.foldFactors.complements, model.fit, kind, original.train);
+    const back = scaleFigures(original.train, original.holdout, predictions, rows, cv);
+    const targetScale = {
+        transform: kind,
+        limitsScale: spec.limitsScale,
+        original: back,
+        transformed,
+        originalRows: original,
+        predictions,
+    };
+    const judged = spec.limitsScale === 'original' ? back : transformed;
+    return {
+        ...model,
+        metrics: {
+            ...model.metrics,
+            trainRmse: judged.trainRmse,
+            holdoutRmse: judged.holdoutRmse,
+            trainMae: judged.trainMae,
+            holdoutMae: judged.holdoutMae,
+            trainR2: judged.trainR2,
+            holdoutR2: judged.holdoutR2,
+            gapRatio: judged.gapRatio,
+        },
+        targetScale,
+    };
+}
+/** The report's block of a model with a transformed target (see {@link TargetScaleResult}). */
+function targetScaleResult(scale) {
+    const figures = (f) => {
+        return {
+            train_rmse: (0,result_result/* jsonNumber */.qj)(f.trainRmse),
+            holdout_rmse: (0,result_result/* jsonNumber */.qj)(f.holdoutRmse),
+            train_mae: (0,result_result/* jsonNumber */.qj)(f.trainMae),
+            holdout_mae: (0,result_result/* jsonNumber */.qj)(f.holdoutMae),
+            train_r2: (0,result_result/* jsonNumber */.qj)(f.trainR2),
+            holdout_r2: (0,result_result/* jsonNumber */.qj)(f.holdoutR2),
+            gap_ratio: (0,result_result/* jsonNumber */.qj)(f.gapRatio),
+            cv_rmse: Number.isNaN(f.cvRmse) ? null : (0,result_result/* jsonNumber */.qj)(f.cvRmse),
+            ...(Number.isNaN(f.trainChiSquare) ? {} : { train_chi_square: (0,result_result/* jsonNumber */.qj)(f.trainChiSquare) }),
+            ...(Number.isNaN(f.holdoutChiSquare) ? {} : { holdout_chi_square: (0,result_result/* jsonNumber */.qj)(f.holdoutChiSquare) }),
+        };
+    };
+    return {
+        transform: scale.transform,
+        limits_scale: scale.limitsScale,
+        back_transform: scale.transform === 'log' ? 'exp' : scale.transform === 'log1p' ? 'expm1' : 'square',
+        original: figures(scale.original),
+        transformed: figures(scale.transformed),
+    };
 }
 
 ;// CONCATENATED MODULE: ./src/run/fit-model.ts
@@ -51093,21 +55369,61 @@ function checkRange(plan, X, start, m) {
 
 
 
+
+
+
+
+/**
+ * Runs `step` and, when the training rows were read from parts, rewrites the `line N of FILE` of
+ * a `design-overflow` error (passes.ts names a training row by its table-wide line) into the
+ * part's own line and path (data-parts.ts). Other errors, and data of one file, pass unchanged.
+ */
+async function partsNamed(tables, step) {
+    try {
+        return await step();
+    }
+    catch (error) {
+        const train = tables.train;
+        if (!(error instanceof errors/* InputError */.dz) || error.code !== 'design-overflow' || train.parts === undefined)
+            throw error;
+        const found = / on line (\d+) of /.exec(error.message);
+        const label = (0,errors/* clip */.$Q)(train.file);
+        if (found === null)
+            throw error;
+        const after = found.index + found[0].length;
+        if (error.message.slice(after, after + label.length) !== label)
+            throw error;
+        const message = `${error.message.slice(0, found.index)} on ${(0,data_parts/* lineOfFile */.ui)(train, Number(found[1]))}${error.message.slice(after + label.length)}`;
+        throw new errors/* InputError */.dz(error.code, message, error.location);
+    }
+}
 /**
  * Loads, fits and scores one model (no checks).
  * @throws InputError for bad data, a constant target, a design over the caps, or shipped
  *   coefficients of the wrong length
  */
-async function fitModel(repo, descriptor, settings) {
-    const plan = await planModel(repo, descriptor, settings);
+async function fitModel(repo, descriptor, settings, scale = {}) {
+    const plan = await planModel(repo, descriptor, settings, loadModelData, scale);
     const { design, tables, folds } = plan;
-    const first = foldPass(plan);
-    const fit = refinePass(plan, first.fit);
+    if (tables.streamed !== undefined && descriptor.fit.refit === false) {
+        throw new errors/* InputError */.dz('too-large-to-hold', `the training file ${(0,errors/* clip */.$Q)(descriptor.data.train)} is read as a stream (too large to hold in memory), which \`fit.refit: false\` does not support yet; expected a smaller file, or a refit`, { file: descriptor.file, line: descriptor.data.lines.train, key: 'data.train' });
+    }
+    const first = await partsNamed(plan.tables, () => foldPass(plan));
+    const fit = await refinePass(plan, first.fit);
+    if (tables.streamed !== undefined)
+        return streamedModel(plan, fit, first);
     const scored = scoringPass(plan, fit, first.foldFactors);
-    if (descriptor.fit.refit === false)
-        return scoredAsShipped(descriptor, design, tables, fit, plan.targetSd, first.columnSd, folds, first.foldFactors);
+    if (descriptor.fit.refit === false) {
+        const shipped = withTargetScale(plan, scoredAsShipped(descriptor, design, tables, fit, plan.targetSd, first.columnSd, folds, first.foldFactors));
+        if (descriptor.fit.refitCompare !== true)
+            return shipped;
+        return {
+            ...shipped,
+            refitCompare: refitFigures(tables.train, tables.holdout, scored.trainPredictions, scored.holdoutPredictions, scored.crossValidation),
+        };
+    }
     const metrics = coreMetrics(plan.targetSd, first.columnSd, fit, design, tables, scored.trainPredictions, scored.holdoutPredictions);
-    return {
+    return withTargetScale(plan, {
         descriptor,
         design,
         fit,
@@ -51119,7 +55435,55 @@ async function fitModel(repo, descriptor, settings) {
         crossValidation: scored.crossValidation,
         foldFactors: first.foldFactors,
         shipped: shippedScore(descriptor, design, tables, fit),
+    });
+}
+/**
+ * A streamed model (data/row-source.ts) from its scoring pass: every figure of the training rows
+ * (errors, cross-validation, leakage, the shipped coefficients' errors) over every row of the
+ * file; `trainPredictions` and `tables.train` are those of the sample.
+ */
+async function streamedModel(plan, fit, first) {
+    const { descriptor, design, tables, folds } = plan;
+    const shipped = checkedShipped(descriptor, design);
+    const scored = await streamedScoringPass(plan, fit, first.foldFactors, shipped);
+    const metrics = coreMetricsFrom(plan.targetSd, first.columnSd, fit, design, plan.rows, (0,regression_metrics/* errorMeasures */._I)(scored.trainSums), measuresOf(tables.holdout, scored.holdoutPredictions), plan.targetRange);
+    let shippedScore = null;
+    if (shipped !== null && scored.shippedTrainSums !== null) {
+        const holdoutPredictions = (0,blocks/* predictRows */.tp)(design, tables.holdout, shipped);
+        let diff = 0;
+        for (let j = 0; j < design.p; j++)
+            diff = Math.max(diff, Math.abs(shipped[j] - fit.coefficients[j]));
+        shippedScore = {
+            coefficients: shipped,
+            holdoutPredictions,
+            train: (0,regression_metrics/* errorMeasures */._I)(scored.shippedTrainSums),
+            holdout: measuresOf(tables.holdout, holdoutPredictions),
+            maxCoefficientDifference: diff,
+        };
+    }
+    return {
+        descriptor,
+        design,
+        fit,
+        tables,
+        metrics,
+        trainPredictions: scored.samplePredictions,
+        holdoutPredictions: scored.holdoutPredictions,
+        folds,
+        crossValidation: scored.crossValidation,
+        foldFactors: first.foldFactors,
+        shipped: shippedScore,
+        leakage: scored.leakage,
     };
+}
+/** RMSE, MAE and R^2 of predictions of some rows (weighted when the rows carry weights). */
+function measuresOf(data, predictions) {
+    // Weighted rows get the weighted measures (diagnostics/weighted-metrics.ts).
+    if (data.weights !== undefined)
+        return (0,weighted_metrics/* weightedErrorMeasures */.v)(data.y, predictions, data.weights, data.rows);
+    const sums = (0,regression_metrics/* emptySums */.y3)();
+    (0,regression_metrics/* addErrors */.xB)(sums, data.y, predictions, data.rows);
+    return (0,regression_metrics/* errorMeasures */._I)(sums);
 }
 /**
  * A model scored as shipped (`fit.refit: false`): the shipped coefficients take the refit's place
@@ -51156,16 +55520,12 @@ function scoredAsShipped(descriptor, design, tables, refit, targetSd, columnSd, 
  */
 function coreMetrics(targetSd, columnSd, fit, design, tables, trainPredictions, holdoutPredictions) {
     const { train, holdout } = tables;
-    const measures = (data, predictions) => {
-        // Weighted rows get the weighted measures (diagnostics/weighted-metrics.ts).
-        if (data.weights !== undefined)
-            return (0,weighted_metrics/* weightedErrorMeasures */.v)(data.y, predictions, data.weights, data.rows);
-        const sums = (0,regression_metrics/* emptySums */.y3)();
-        (0,regression_metrics/* addErrors */.xB)(sums, data.y, predictions, data.rows);
-        return (0,regression_metrics/* errorMeasures */._I)(sums);
-    };
-    const tr = measures(train, trainPredictions);
-    const ho = measures(holdout, holdoutPredictions);
+    const tr = measuresOf(train, trainPredictions);
+    const ho = measuresOf(holdout, holdoutPredictions);
+    return coreMetricsFrom(targetSd, columnSd, fit, design, train.rows, tr, ho, (0,stats/* range */.y1)(train.y, train.rows));
+}
+/** {@link coreMetrics} from the error measures of both files, the training rows and the target's range. */
+function coreMetricsFrom(targetSd, columnSd, fit, design, trainRows, tr, ho, targetRange) {
     let maxStd = Number.NaN;
     let maxStdColumn = -1;
     let maxAbs = 0;
@@ -51189,13 +55549,13 @@ function coreMetrics(targetSd, columnSd, fit, design, tables, trainPredictions, 
         trainR2: tr.r2,
         holdoutR2: ho.r2,
         gapRatio: (0,regression_metrics/* gapRatio */.yr)(tr.rmse, ho.rmse),
-        paramsPerSample: design.p / train.rows,
+        paramsPerSample: design.p / trainRows,
         maxStdCoefficient: maxStd,
         maxStdCoefficientColumn: maxStdColumn,
         maxAbsCoefficient: maxAbs,
         columnSd,
         targetSd,
-        targetRange: (0,stats/* range */.y1)(train.y, train.rows),
+        targetRange,
     };
 }
 /**
@@ -51217,14 +55577,16 @@ function checkedShipped(descriptor, design) {
     if (shipped === null)
         return null;
     if (shipped.length !== design.p) {
-        throw new core_errors/* InputError */.dz('coefficients-length', `\`coefficients\` has ${shipped.length} values but the terms build ${design.p} columns (${design.columnNames
+        throw new errors/* InputError */.dz('coefficients-length', `\`coefficients\` has ${shipped.length} values but the terms build ${design.p} columns (${design.columnNames
             .slice(0, 12)
-            .map((c) => (0,core_errors/* clip */.$Q)(c))
+            .map((c) => (0,errors/* clip */.$Q)(c))
             .join(', ')}${design.p > 12 ? ', …' : ''}); expected one value per column, intercept first`, { file: descriptor.file, line: descriptor.coefficientsLine ?? undefined, key: 'coefficients' });
     }
     return shipped;
 }
 
+// EXTERNAL MODULE: ./src/data/model-data.ts
+var model_data = __nccwpck_require__(9642);
 ;// CONCATENATED MODULE: ./src/run/evaluate.ts
 /**
  * One model from descriptor to outcome: fit and score it (fit-model.ts), run every check of the
@@ -51242,6 +55604,22 @@ function checkedShipped(descriptor, design) {
 
 
 
+
+
+
+
+
+/**
+ * What a streamed model's report says of its sampling (docs/scale.md): which figures come from
+ * every row and which from the sample.
+ */
+function streamedNote(sampleRows, rows) {
+    return {
+        rows,
+        sample_rows: sampleRows,
+        note: `the training file was streamed (${rows} rows); errors, cross-validation, leave-one-out, leakage, coefficients and conditioning use every row; swing, spikes, the complexity sweep, term parameters and charts use a seeded sample of ${sampleRows} rows`,
+    };
+}
 /** The report's figures of the shipped coefficients, or null. */
 function shippedMetrics(shipped) {
     if (shipped === null)
@@ -51270,6 +55648,16 @@ function reportMetrics(model) {
         rank: fit.rank,
         condition_number: (0,result_result/* jsonNumber */.qj)(fit.conditionNumber),
         condition_number_scaled: (0,result_result/* jsonNumber */.qj)(fit.conditionNumberScaled),
+        // `fit.refit_compare`: what a refit would give, beside the shipped model's figures above.
+        ...(model.refitCompare
+            ? {
+                refit_train_rmse: (0,result_result/* jsonNumber */.qj)(model.refitCompare.trainRmse),
+                refit_holdout_rmse: (0,result_result/* jsonNumber */.qj)(model.refitCompare.holdoutRmse),
+                refit_gap_ratio: (0,result_result/* jsonNumber */.qj)(model.refitCompare.gapRatio),
+                refit_cv_rmse: (0,result_result/* jsonNumber */.qj)(model.refitCompare.cvRmse),
+                refit_cv_folds: model.refitCompare.folds,
+            }
+            : {}),
     };
 }
 /**
@@ -51278,11 +55666,13 @@ function reportMetrics(model) {
  * time limit become a model with verdict `error` (the run goes on).
  * @param base outcomes on the base commit to compare with; default none (no `base` field)
  * @param deadline the model's deadline; default one of `caps.max_model_seconds` from now
+ * @param share the model's share of the run's chart data (result/chart-types.ts `chartShare`); default the full share
+ * @param scale when to stream the training file and how (plan.ts {@link ScaleOptions}); default the built-in threshold
  */
-async function evaluateModel(repo, descriptor, settings, base, deadline) {
+async function evaluateModel(repo, descriptor, settings, base, deadline, share = FULL_CHART_SHARE, scale = {}) {
     const within = deadline ?? new core_deadline/* Deadline */.B2(settings.caps.maxModelSeconds * 1000);
     try {
-        return await (0,core_deadline/* withDeadline */.NE)(within, () => evaluateWithin(repo, descriptor, settings, base));
+        return await (0,core_deadline/* withDeadline */.NE)(within, () => evaluateWithin(repo, descriptor, settings, share, base, scale));
     }
     catch (error) {
         if (!(error instanceof core_deadline/* TimeLimitExceeded */.Qo))
@@ -51291,26 +55681,41 @@ async function evaluateModel(repo, descriptor, settings, base, deadline) {
     }
 }
 /** {@link evaluateModel} inside its deadline; TimeLimitExceeded passes through. */
-async function evaluateWithin(repo, descriptor, settings, base) {
+async function evaluateWithin(repo, descriptor, settings, share, base, scale) {
     let model;
     try {
+        if (descriptor.predictions)
+            return await evaluatePredictions(repo, descriptor, settings, base);
         if (descriptor.task === 'classification')
             return await evaluateClassifier(repo, descriptor, settings, base);
-        model = await fitModel(repo, descriptor, settings);
+        model = await fitModel(repo, descriptor, settings, scale);
     }
     catch (error) {
         if (error instanceof core_deadline/* TimeLimitExceeded */.Qo)
             throw error;
-        if (error instanceof core_errors/* InputError */.dz)
+        if (error instanceof errors/* InputError */.dz)
             return errorResult(descriptor.name, descriptor.file, error);
         // A fault of fitgate's own on this model's data: report it on this model (exit status 2) so
         // that every other model still gets its outcome; the code marks it as a bug to report.
         const detail = error instanceof Error ? error.message : String(error);
-        return errorResult(descriptor.name, descriptor.file, new core_errors/* InputError */.dz(INTERNAL_ERROR, `fitgate could not compute this model (${detail}); this is a fault in fitgate, please report it with the descriptor and data`, { file: descriptor.file, line: descriptor.termsLine }));
+        return errorResult(descriptor.name, descriptor.file, new errors/* InputError */.dz(INTERNAL_ERROR, `fitgate could not compute this model (${detail}); this is a fault in fitgate, please report it with the descriptor and data`, { file: descriptor.file, line: descriptor.termsLine }));
     }
     const baseMatch = base?.matches.get(descriptor.file) ?? null;
     // The run's own passes already produced the folds, their factors and the cross-validation.
-    const analyses = new ModelAnalyses({ design: model.design, fit: model.fit, train: model.tables.train, holdout: model.tables.holdout, folds: descriptor.fit }, { folds: model.folds, foldFactors: model.foldFactors, crossValidation: model.crossValidation });
+    const analyses = new ModelAnalyses({
+        design: model.design,
+        fit: model.fit,
+        train: model.tables.train,
+        holdout: model.tables.holdout,
+        folds: descriptor.fit,
+        // A transformed target judged on the original scale: swing back-transforms the predictions.
+        ...(model.targetScale?.limitsScale === 'original' ? { backTransform: model.targetScale.transform } : {}),
+    }, {
+        folds: model.folds,
+        foldFactors: model.foldFactors,
+        crossValidation: model.crossValidation,
+        ...(model.leakage ? { leakage: model.leakage } : {}),
+    }, share.fraction < 1 ? { curveShare: share.fraction } : {});
     const context = {
         descriptor,
         design: model.design,
@@ -51322,6 +55727,7 @@ async function evaluateWithin(repo, descriptor, settings, base) {
         analyses,
         predictions: { train: model.trainPredictions, holdout: model.holdoutPredictions },
         shipped: model.shipped,
+        targetScale: model.targetScale ?? null,
     };
     const metrics = reportMetrics(model);
     const { checks, verdict } = runChecks((0,src_checks/* checksFor */.NR)('regression'), (check) => (0,src_checks/* runCheck */.k_)(check, context), metrics);
@@ -51329,7 +55735,8 @@ async function evaluateWithin(repo, descriptor, settings, base) {
         name: descriptor.name,
         descriptor: descriptor.file,
         verdict,
-        rows: { train: model.tables.train.rows, holdout: model.tables.holdout.rows },
+        rows: { train: (0,model_data/* trainingRows */.E)(model.tables.train), holdout: model.tables.holdout.rows },
+        ...(0,data_paths/* dataFilesField */.IJ)(descriptor.data),
         ...(model.tables.train.dropped !== undefined
             ? { dropped: { train: model.tables.train.dropped, holdout: model.tables.holdout.dropped ?? 0 } }
             : {}),
@@ -51338,11 +55745,15 @@ async function evaluateWithin(repo, descriptor, settings, base) {
         metrics,
         coefficients: Array.from(model.fit.coefficients, result_result/* jsonNumber */.qj),
         shipped: shippedMetrics(model.shipped),
+        ...(model.targetScale ? { target_scale: targetScaleResult(model.targetScale) } : {}),
         checks,
         ...(base ? { base: (0,base_comparison/* compareWithBase */.te)(metrics, baseMatch, base.commit) } : {}),
         error: null,
         extra: {
             rank_deficient: model.fit.rankDeficient,
+            ...(model.tables.train.sampleOf !== undefined
+                ? { streamed: streamedNote(model.tables.train.rows, model.tables.train.sampleOf) }
+                : {}),
             terms: model.design.terms.map((t, i) => ({
                 kind: t.spec.kind,
                 line: t.spec.line,
@@ -51351,7 +55762,7 @@ async function evaluateWithin(repo, descriptor, settings, base) {
                 fixed: t.fixed,
             })),
         },
-        charts: withBaseCurves(buildChartData(model, checks), { columns: model.design.columnNames, coefficients: Array.from(model.fit.coefficients, result_result/* jsonNumber */.qj) }, context.baseline, base?.commit ?? ''),
+        charts: withBaseCurves(buildChartData(model, checks, MAX_CHART_POINTS, share), { columns: model.design.columnNames, coefficients: Array.from(model.fit.coefficients, result_result/* jsonNumber */.qj) }, context.baseline, base?.commit ?? ''),
     };
 }
 
@@ -51361,6 +55772,82 @@ var fs_repository = __nccwpck_require__(4526);
 var pool = __nccwpck_require__(2499);
 // EXTERNAL MODULE: ./src/run/worker-role.ts
 var worker_role = __nccwpck_require__(5280);
+;// CONCATENATED MODULE: ./src/run/work-guess.ts
+/** Operations a model costs whatever its size: its descriptor, plan, checks and part of the Result (about 5 ms). */
+const MODEL_FIXED_OPERATIONS = 2.5e6;
+/** Operations per byte of a model's data files, for a design of {@link BYTE_COLUMNS} columns (reading, passes and diagnostics). */
+const OPERATIONS_PER_BYTE = 40;
+/** Design columns {@link OPERATIONS_PER_BYTE} was measured at; the guess grows with the square of the columns guessed. */
+const BYTE_COLUMNS = 25;
+/** Operations a model must be guessed at, in total, for each worker thread the run starts (about 0.5 s of work each). */
+const WORKER_OPERATIONS = 2.5e8;
+/**
+ * Design columns guessed from the descriptor alone: 1 for the intercept, then per term its
+ * `degree` (polynomial), the count of its inputs (linear), or 4 for any other kind (knots,
+ * centres and levels depend on the data). Only ranks the models and sizes the pool.
+ */
+function guessColumns(descriptor) {
+    let p = descriptor.fit.intercept ? 1 : 0;
+    for (const term of descriptor.terms) {
+        if (term.kind === 'polynomial')
+            p += term.degree;
+        else if (term.kind === 'linear')
+            p += term.columns.length;
+        else
+            p += 4;
+    }
+    return Math.max(1, p);
+}
+/**
+ * The guessed work of one model: {@link MODEL_FIXED_OPERATIONS} plus its data bytes times
+ * {@link OPERATIONS_PER_BYTE}, scaled by (guessed columns / {@link BYTE_COLUMNS})^2 but never
+ * below a quarter of it (reading the bytes costs the same whatever the design).
+ * @param descriptor the loaded descriptor
+ * @param dataBytes bytes of its training and hold-out files (each file once)
+ */
+function guessWork(descriptor, dataBytes) {
+    const scale = Math.max(0.25, (guessColumns(descriptor) / BYTE_COLUMNS) ** 2);
+    return MODEL_FIXED_OPERATIONS + dataBytes * OPERATIONS_PER_BYTE * scale;
+}
+/**
+ * Bytes of a model's data files (training and hold-out; a file named twice counts once). A file
+ * that cannot be read counts 0: the model's own run reports it.
+ */
+async function dataBytes(repo, descriptor) {
+    const files = new Set([descriptor.data.train, descriptor.data.holdout].flat());
+    let bytes = 0;
+    for (const file of files) {
+        try {
+            bytes += await repo.size(file);
+        }
+        catch {
+            // The model's run reads the file again and reports the problem on that model.
+        }
+    }
+    return bytes;
+}
+/**
+ * Worker threads that the guessed work pays for: one per {@link WORKER_OPERATIONS} of the total,
+ * at most `jobs` and at most one per model; 0 or 1 means the main thread alone.
+ * @param works guessed work of each model ({@link guessWork})
+ * @param jobs largest number of workers allowed (>= 1)
+ */
+function workersThatPay(works, jobs) {
+    let total = 0;
+    for (const w of works)
+        total += w;
+    return Math.max(0, Math.min(Math.floor(jobs), works.length, Math.floor(total / WORKER_OPERATIONS)));
+}
+/**
+ * The order to hand models to workers: largest guessed work first (so that no large model starts
+ * last and keeps one worker busy alone at the end), ties in descriptor order. Results still come
+ * back in descriptor order.
+ * @returns indices into `works`
+ */
+function largestFirst(works) {
+    return works.map((_, i) => i).sort((a, b) => works[b] - works[a] || a - b);
+}
+
 ;// CONCATENATED MODULE: ./src/run/model-worker.ts
 /**
  * Models on worker threads: the main thread sends each model's descriptor (with the settings
@@ -51375,6 +55862,8 @@ var worker_role = __nccwpck_require__(5280);
  * When the module is not JavaScript (a `.ts` file run through a transpiler, as in tests),
  * worker threads cannot load it and models run serially.
  */
+
+
 
 
 
@@ -51399,7 +55888,8 @@ function workerScript() {
 }
 /**
  * Evaluates models, on worker threads when that is possible and worth it (more than one model,
- * `jobs` > 1, a disk root, and a JavaScript module file), serially otherwise.
+ * `jobs` > 1, a disk root, a JavaScript module file, and guessed work that pays for the workers:
+ * work-guess.ts, unless `exactJobs`), serially otherwise. Workers get the models largest guessed work first.
  * @param repo the repository reader (used by the serial path)
  * @param descriptors the models, in report order
  * @param settings the settings file
@@ -51409,19 +55899,28 @@ function workerScript() {
 async function evaluateModels(repo, descriptors, settings, options = {}) {
     const jobs = Math.min(options.jobs ?? 1, descriptors.length);
     const script = workerScript();
-    if (jobs <= 1 || options.root === undefined || script === null) {
+    const share = options.share ?? FULL_CHART_SHARE;
+    const serial = async () => {
         const results = [];
         for (const descriptor of descriptors)
-            results.push(await evaluateModel(repo, descriptor, settings, options.base));
+            results.push(await evaluateModel(repo, descriptor, settings, options.base, undefined, share));
         return results;
-    }
+    };
+    if (jobs <= 1 || options.root === undefined || script === null)
+        return serial();
+    const works = [];
+    for (const descriptor of descriptors)
+        works.push(guessWork(descriptor, await dataBytes(repo, descriptor)));
+    const workers = options.exactJobs === true ? jobs : workersThatPay(works, jobs);
+    if (workers <= 1)
+        return serial();
     const base = options.base;
     const tasks = descriptors.map((descriptor) => base ? { descriptor, baseline: base.matches.get(descriptor.file) ?? null, commit: base.commit } : { descriptor });
-    const data = { [worker_role/* WORKER_FLAG */.o]: true, root: options.root, settings };
+    const data = { [worker_role/* WORKER_FLAG */.o]: true, root: options.root, settings, share };
     // The worker checks the model's time limit itself between stages; a model still running
     // HARD_STOP_GRACE_MS later is stuck in one step, and its thread is ended from here.
     const limitSeconds = settings.caps.maxModelSeconds;
-    const replies = await (0,pool/* runPool */.kD)(tasks, { jobs, script, workerData: data }, {
+    const replies = await (0,pool/* runPool */.kD)(tasks, { jobs: workers, script, workerData: data, order: largestFirst(works) }, {
         ms: limitSeconds * 1000 + HARD_STOP_GRACE_MS,
         onTimeLimit: (task, elapsedMs) => ({
             result: errorResult(task.descriptor.name, task.descriptor.file, timeLimitError(task.descriptor, limitSeconds, elapsedMs, null, settings.file)),
@@ -51445,7 +55944,7 @@ function startModelWorker() {
         const base = task.baseline === undefined
             ? undefined
             : { matches: new Map(task.baseline === null ? [] : [[task.descriptor.file, task.baseline]]), commit: task.commit ?? '' };
-        const result = await evaluateModel(repo, task.descriptor, data.settings, base);
+        const result = await evaluateModel(repo, task.descriptor, data.settings, base, undefined, data.share);
         return { result, kernelNotes: (0,kernels/* kernelNotes */.TJ)() };
     });
 }
@@ -51461,6 +55960,7 @@ var version = __nccwpck_require__(3323);
  * The whole run: settings file -> descriptors -> one outcome per model -> Result.
  * No output of its own: reporters format the Result; the entry points decide the exit status.
  */
+
 
 
 
@@ -51503,7 +56003,7 @@ async function runPipeline(settings, repo, options = {}) {
             loaded.push(await loadDescriptor(repo, path, file));
         }
         catch (error) {
-            if (!(error instanceof core_errors/* InputError */.dz))
+            if (!(error instanceof errors/* InputError */.dz))
                 throw error;
             models.push(errorResult(path, path, error));
         }
@@ -51520,7 +56020,13 @@ async function runPipeline(settings, repo, options = {}) {
             for (const m of matching.unmatched)
                 notes.push(removedNote(m));
     }
-    for (const model of await evaluateModels(repo, loaded, file, { jobs: options.jobs, root: options.root, base }))
+    for (const model of await evaluateModels(repo, loaded, file, {
+        jobs: options.jobs,
+        root: options.root,
+        exactJobs: options.exactJobs,
+        base,
+        share: chartShare(paths.length),
+    }))
         models.push(model);
     if (shard)
         notes.push(`shard ${(0,run_shard/* formatShard */._D)(shard)}: ${paths.length} model${paths.length === 1 ? '' : 's'} of this run's share`);
@@ -51615,6 +56121,10 @@ function runPool(tasks, options, limit) {
     const results = new Array(tasks.length);
     if (tasks.length === 0)
         return Promise.resolve(results);
+    const order = options.order;
+    if (order !== undefined &&
+        (order.length !== tasks.length || new Set(order).size !== tasks.length || !order.every((i) => i >= 0 && i < tasks.length)))
+        return Promise.reject(new RangeError('runPool: `order` must list every task index once'));
     return new Promise((resolve, reject) => {
         const workers = new Set();
         let next = 0;
@@ -51651,7 +56161,8 @@ function runPool(tasks, options, limit) {
             const feed = () => {
                 if (next >= tasks.length)
                     return;
-                current = next++;
+                current = order === undefined ? next : order[next];
+                next++;
                 const message = { index: current, task: tasks[current] };
                 worker.postMessage(message);
             };

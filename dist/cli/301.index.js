@@ -160,8 +160,8 @@ var fs_repository = __webpack_require__(4526);
 var repo_write = __webpack_require__(9056);
 // EXTERNAL MODULE: ./src/result/result.ts
 var result_result = __webpack_require__(1628);
-// EXTERNAL MODULE: ./src/run/pipeline.ts + 30 modules
-var pipeline = __webpack_require__(1015);
+// EXTERNAL MODULE: ./src/run/pipeline.ts + 40 modules
+var pipeline = __webpack_require__(3035);
 // EXTERNAL MODULE: ./src/report/escape.ts
 var report_escape = __webpack_require__(4031);
 ;// CONCATENATED MODULE: ./src/entries/refit-command.ts
@@ -219,6 +219,10 @@ async function runRefit(command) {
                     ? `line ${m.error.line}: `
                     : '';
             lines.push(`error: ${where}: ${(0,report_escape/* escapeTerminal */.en)(at + m.error.message)}`);
+            continue;
+        }
+        if (m.kind === 'predictions') {
+            lines.push(`kept: ${where}: trained elsewhere (\`predictions\`), nothing to refit`);
             continue;
         }
         const refit = m.coefficients.map((c) => (0,result_result/* fromJsonNumber */.M)(c));

@@ -52,8 +52,8 @@ var links = __webpack_require__(4982);
 var nearest = __webpack_require__(761);
 // EXTERNAL MODULE: ./src/core/version.ts
 var version = __webpack_require__(3323);
-// EXTERNAL MODULE: ./src/data/table.ts + 4 modules
-var data_table = __webpack_require__(7192);
+// EXTERNAL MODULE: ./src/data/table.ts + 1 modules
+var data_table = __webpack_require__(8785);
 // EXTERNAL MODULE: ./src/diagnostics/random.ts
 var random = __webpack_require__(5089);
 ;// CONCATENATED MODULE: ./src/diagnostics/holdout-split.ts

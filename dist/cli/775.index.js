@@ -36,7 +36,7 @@ __webpack_require__.d(__webpack_exports__, {
 });
 
 // EXTERNAL MODULE: ./src/checks/index.ts + 23 modules
-var checks = __webpack_require__(1981);
+var checks = __webpack_require__(6903);
 // EXTERNAL MODULE: ./src/core/errors.ts
 var errors = __webpack_require__(4296);
 // EXTERNAL MODULE: ./src/core/nearest.ts

@@ -19,6 +19,10 @@ __webpack_require__.d(__webpack_exports__, {
 
 // EXTERNAL MODULE: ./src/report/classifier-figures.ts
 var classifier_figures = __webpack_require__(2953);
+// EXTERNAL MODULE: ./src/report/model-kind.ts
+var model_kind = __webpack_require__(698);
+// EXTERNAL MODULE: ./src/report/refit-compare.ts
+var refit_compare = __webpack_require__(3524);
 // EXTERNAL MODULE: ./src/core/format.ts
 var format = __webpack_require__(6228);
 // EXTERNAL MODULE: ./src/report/escape.ts
@@ -142,6 +146,8 @@ function mermaidChart(model, options = {}) {
 var result = __webpack_require__(1628);
 // EXTERNAL MODULE: ./src/report/wording.ts
 var wording = __webpack_require__(5594);
+// EXTERNAL MODULE: ./src/report/target-scale-text.ts
+var target_scale_text = __webpack_require__(764);
 ;// CONCATENATED MODULE: ./src/report/markdown.ts
 /**
  * The Markdown report: the job summary, the pull-request comment and `--format markdown`.
@@ -150,6 +156,9 @@ var wording = __webpack_require__(5594);
  * writes it. Text from the repository is escaped with {@link escapeMarkdown} and cut to a
  * readable length; the whole report stays under `maxBytes`.
  */
+
+
+
 
 
 
@@ -194,12 +203,15 @@ function baseCell(m) {
         return 'new';
     const from = b.status === 'renamed' && b.previous ? `renamed from ${markdown_text(b.previous.name)}: ` : '';
     const rmse = b.holdout_rmse_change === null ? null : (0,result/* fromJsonNumber */.M)(b.holdout_rmse_change);
+    const loss = b.holdout_log_loss_change === undefined || b.holdout_log_loss_change === null ? null : (0,result/* fromJsonNumber */.M)(b.holdout_log_loss_change);
     const gap = b.gap_ratio_change === null ? null : (0,result/* fromJsonNumber */.M)(b.gap_ratio_change);
-    if (rmse === null && gap === null)
+    if (rmse === null && loss === null && gap === null)
         return `${from}base not checked`;
     const parts = [];
     if (rmse !== null)
         parts.push(`RMSE ${Number.isFinite(rmse) ? signed(rmse * 100, '%') : signed(rmse)}`);
+    if (loss !== null)
+        parts.push(`log-loss ${Number.isFinite(loss) ? signed(loss * 100, '%') : signed(loss)}`);
     if (gap !== null)
         parts.push(`gap ${signed(gap)}`);
     return `${from}${parts.join(', ')}`;
@@ -214,7 +226,7 @@ function overviewHead(withBase) {
 /** One row of the model overview. */
 function overviewRow(m, withBase) {
     const x = m.metrics;
-    return `| ${MARK[m.verdict]} | ${markdown_text(m.name)} | ${cell(x?.holdout_rmse)} | ${cell(x?.gap_ratio)} | ${cell(x?.params_per_sample)} | ${cell(x?.max_std_coefficient)} |${withBase ? ` ${baseCell(m)} |` : ''}`;
+    return `| ${MARK[m.verdict]} | ${markdown_text(m.name + (0,model_kind/* kindMark */.w6)(m))} | ${cell(x?.holdout_rmse)} | ${cell(x?.gap_ratio)} | ${cell(x?.params_per_sample)} | ${cell(x?.max_std_coefficient)} |${withBase ? ` ${baseCell(m)} |` : ''}`;
 }
 /** The block of one model that did not pass. */
 function modelDetail(m) {
@@ -225,8 +237,21 @@ function modelDetail(m) {
         return lines;
     }
     const shown = m.checks.filter((c) => c.status === 'fail' || c.status === 'warn');
+    const kind = (0,model_kind/* kindLine */.J0)(m);
+    if (kind !== null)
+        lines.push(markdown_text(kind), '');
+    const refit = (0,refit_compare/* refitCompareLine */.C)(m);
+    if (refit !== null)
+        lines.push(markdown_text(refit), '');
     if ((0,classifier_figures/* isClassifier */.aA)(m))
         lines.push(markdown_text((0,classifier_figures/* classifierLine */.KT)(m)), '');
+    const scale = (0,target_scale_text/* targetScaleSentence */.tt)(m);
+    if (scale !== null) {
+        lines.push(`${scale}:`, '', `| ${target_scale_text/* TARGET_SCALE_HEADINGS */.x8.join(' | ')} |`, '| --- | ---: | ---: | ---: | ---: | ---: | ---: |');
+        for (const row of (0,target_scale_text/* targetScaleRows */.rY)(m))
+            lines.push(`| ${row.join(' | ')} |`);
+        lines.push('');
+    }
     lines.push('| Check | Status | Value | Limit | Line |', '| --- | --- | ---: | --- | ---: |');
     for (const c of shown)
         lines.push(`| ${c.id} | ${MARK[c.status]} | ${cell(c.value)} | ${(0,wording/* limitText */.PW)(c)} | ${c.line} |`);

@@ -152,7 +152,13 @@ function finish(doc: YamlDocument, file: string, key: (string | number)[], paths
  * descriptor's folder) and checked to be a regular file.
  * @throws InputError `path-outside`, `data-missing`, `not-a-file` at the key's value
  */
-export async function resolveDataFile(repo: RepoReader, doc: YamlDocument, file: string, key: (string | number)[], written: string): Promise<string> {
+export async function resolveDataFile(
+  repo: RepoReader,
+  doc: YamlDocument,
+  file: string,
+  key: (string | number)[],
+  written: string,
+): Promise<string> {
   const at = doc.valuePositionOf(key);
   const where = { line: at?.line ?? 1, column: at?.column ?? 1, key: keyText(key) };
   const resolved = await repo.resolve(file, written, where);

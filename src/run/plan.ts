@@ -125,7 +125,8 @@ export async function planModel(
     tables = transformed.tables;
     originalTargets = transformed.original;
   }
-  const targetStats = streamed === null ? meanAndSd(tables.train.y, tables.train.rows) : { mean: streamed.targetMean, sd: streamed.targetSd };
+  const targetStats =
+    streamed === null ? meanAndSd(tables.train.y, tables.train.rows) : { mean: streamed.targetMean, sd: streamed.targetSd };
   if (!(targetStats.sd > 0)) {
     throw new InputError(
       'constant-target',
@@ -170,7 +171,10 @@ export async function planModel(
 }
 
 /** InputError `target-range` when a target is not within ±{@link MAX_MAGNITUDE}. */
-function checkTargetRange(descriptor: Descriptor, data: Pick<RowChunk, 'y' | 'rows' | 'lines' | 'file'> & { parts?: readonly DataPart[] }): void {
+function checkTargetRange(
+  descriptor: Descriptor,
+  data: Pick<RowChunk, 'y' | 'rows' | 'lines' | 'file'> & { parts?: readonly DataPart[] },
+): void {
   const i = firstBeyond(data.y, data.rows, MAX_MAGNITUDE);
   if (i < 0) return;
   throw new InputError(

@@ -14,9 +14,7 @@ const MARKER = /^(?:<{7} |={7}$|>{7} )/m;
 /** The tracked text files outside dist/ (generated) and binary data. */
 function trackedFiles(): string[] {
   const out = execFileSync('git', ['ls-files', '-z'], { cwd: root, encoding: 'utf8' });
-  return out
-    .split('\0')
-    .filter((f) => f !== '' && !f.startsWith('dist/') && /\.(?:ts|mts|mjs|js|json|md|ya?ml|wat|sh)$|^\.ci\//.test(f));
+  return out.split('\0').filter((f) => f !== '' && !f.startsWith('dist/') && /\.(?:ts|mts|mjs|js|json|md|ya?ml|wat|sh)$|^\.ci\//.test(f));
 }
 
 describe('merge conflict markers', () => {

@@ -57,7 +57,7 @@ const repo = createFsRepository(root);
 const base = defaultSettings();
 const settings = { ...base, caps: { ...base.caps, maxModelSeconds: 600 } };
 const descriptor = await loadDescriptor(repo, 'm.model.yml', settings);
-const result = await evaluateModel(repo, descriptor, settings, undefined, undefined, { streamAboveBytes: 0 });
+const result = await evaluateModel(repo, descriptor, settings, undefined, undefined, undefined, { streamAboveBytes: 0 });
 process.stdout.write(JSON.stringify({ maxRssKiB: process.resourceUsage().maxRSS, rows: result.rows, error: result.error, streamed: result.extra?.streamed ?? null }));
 `;
 

@@ -49,7 +49,15 @@ async function evaluate(trainFile: string, extra: string, gz: boolean, streamed:
   const repo = repository(trainFile, extra, gz);
   const settings = defaultSettings();
   const descriptor = await loadDescriptor(repo, 'models/m.model.yml', settings);
-  return evaluateModel(repo, descriptor, settings, undefined, undefined, undefined, streamed ? { streamAboveBytes: 0, chunkRows: 1500 } : {});
+  return evaluateModel(
+    repo,
+    descriptor,
+    settings,
+    undefined,
+    undefined,
+    undefined,
+    streamed ? { streamAboveBytes: 0, chunkRows: 1500 } : {},
+  );
 }
 
 /** Every number of `a` equals the one at the same place of `b` within TOLERANCE relative; the rest equal. */
@@ -111,7 +119,10 @@ describe('a streamed training file against the same file held in memory', () => 
     const settings = defaultSettings();
     const descriptor = await loadDescriptor(repo, 'models/m.model.yml', settings);
     const memory = await evaluateModel(repo, descriptor, settings);
-    const streamed = await evaluateModel(repo, descriptor, settings, undefined, undefined, undefined, { streamAboveBytes: 0, sampleRows: 1000 });
+    const streamed = await evaluateModel(repo, descriptor, settings, undefined, undefined, undefined, {
+      streamAboveBytes: 0,
+      sampleRows: 1000,
+    });
     expect(streamed.error).toBeNull();
     expect(streamed.rows.train).toBe(5000);
     expect((streamed.extra as { streamed?: unknown }).streamed).toMatchObject({ rows: 5000, sample_rows: 1000 });

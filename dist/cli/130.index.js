@@ -1,5 +1,5 @@
-export const id = 574;
-export const ids = [574];
+export const id = 130;
+export const ids = [130];
 export const modules = {
 
 /***/ 4982:
@@ -26,7 +26,7 @@ function checkDocsUrl(id) {
 
 /***/ }),
 
-/***/ 574:
+/***/ 1130:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 
@@ -41,17 +41,31 @@ var external_node_path_default = /*#__PURE__*/__webpack_require__.n(external_nod
 // EXTERNAL MODULE: ./src/core/errors.ts
 var errors = __webpack_require__(4296);
 // EXTERNAL MODULE: ./src/checks/index.ts + 23 modules
-var checks = __webpack_require__(1981);
+var checks = __webpack_require__(6903);
+// EXTERNAL MODULE: ./src/report/model-kind.ts
+var model_kind = __webpack_require__(698);
+// EXTERNAL MODULE: ./src/report/refit-compare.ts
+var refit_compare = __webpack_require__(3524);
 // EXTERNAL MODULE: ./src/core/format.ts
 var format = __webpack_require__(6228);
 // EXTERNAL MODULE: ./src/result/result.ts
 var result_result = __webpack_require__(1628);
 // EXTERNAL MODULE: ./src/report/escape.ts
 var report_escape = __webpack_require__(4031);
-// EXTERNAL MODULE: ./src/report/wording.ts
-var wording = __webpack_require__(5594);
-// EXTERNAL MODULE: ./src/core/extremes.ts
-var extremes = __webpack_require__(398);
+;// CONCATENATED MODULE: ./src/report/svg/class-label.ts
+/**
+ * A class label of a classifier as chart text: labels come from the user's CSV file, so at most
+ * {@link CLASS_LABEL_CHARS} characters of one are shown (cut with `…`); plain text, escaped by the
+ * frame like every other chart text.
+ */
+/** Most characters of a label shown in a chart. */
+const CLASS_LABEL_CHARS = 40;
+/** The label, cut to {@link CLASS_LABEL_CHARS} characters (by code point) with `…` when longer. */
+function classLabel(label) {
+    const chars = Array.from(label);
+    return chars.length <= CLASS_LABEL_CHARS ? label : `${chars.slice(0, CLASS_LABEL_CHARS - 1).join('')}…`;
+}
+
 ;// CONCATENATED MODULE: ./src/report/svg/palette.ts
 /**
  * Colours and marks of every chart. Colours come from the colour-blind-safe set of Okabe & Ito
@@ -319,6 +333,343 @@ function logScale(domain, range) {
     return Object.assign(f, { domain: [lo, hi], range, ticks, log: true });
 }
 
+;// CONCATENATED MODULE: ./src/report/svg/calibration-diagram.ts
+
+
+
+
+/** Marks (and the line through them) of one file's non-empty bins, with each bin's count as a label. */
+function binMarks(bins, series, sx, sy) {
+    const marks = [];
+    const labels = [];
+    let d = '';
+    const mark = series === 'train' ? trainMark : holdoutMark;
+    for (const b of bins) {
+        if (b.count === 0 || b.predicted === null || b.observed === null)
+            continue;
+        const x = sx(b.predicted);
+        const y = sy(b.observed);
+        marks.push(mark(x, y));
+        d += `${d ? 'L' : 'M'}${px(x)} ${px(y)}`;
+        // Training counts above the mark, hold-out counts below, so the two rarely overlap.
+        const dy = series === 'train' ? -7 : 15;
+        labels.push(`<text x="${px(x)}" y="${px(y + dy)}" text-anchor="middle">${b.count}</text>`);
+    }
+    const colour = series === 'train' ? COLOURS.train : COLOURS.holdout;
+    const style = series === 'train' ? TRAIN_STYLE : HOLDOUT_STYLE;
+    return {
+        markup: `<path d="${d}" fill="none" stroke="${colour}" stroke-width="1.2" stroke-opacity="0.6"${series === 'holdout' ? ` stroke-dasharray="${DASHES.limit}"` : ''}/><g data-series="${series}" data-count="${marks.length}" ${style}>${marks.join('')}</g>`,
+        labels: `<g class="counts" data-series="${series}" font-size="9.5" fill="${colour}">${labels.join('')}</g>`,
+        drawn: marks.length,
+    };
+}
+/** One file's bins in words. */
+function sentence(name, bins) {
+    const used = bins.filter((b) => b.count > 0 && b.predicted !== null && b.observed !== null);
+    if (used.length === 0)
+        return `${name}: no rows.`;
+    const list = used.map((b) => `${b.count} rows at ${b.predicted.toFixed(2)} predicted, ${b.observed.toFixed(2)} observed`);
+    return `${name}: ${list.join('; ')}.`;
+}
+/**
+ * Renders the calibration diagram of a classifier.
+ * @param chart the classifier's chart data (reads `calibration`)
+ */
+function calibrationDiagramChart(chart, options) {
+    const { id } = options;
+    const positive = classLabel(chart.positive);
+    const { x0, y0, x1, y1 } = plotArea();
+    const sx = linearScale([0, 1], [x0, x1]);
+    const sy = linearScale([0, 1], [y1, y0]);
+    const a = binMarks(chart.calibration.train, 'train', sx, sy);
+    const b = binMarks(chart.calibration.holdout, 'holdout', sx, sy);
+    const body = [
+        `<line class="diagonal" x1="${px(sx(0))}" y1="${px(sy(0))}" x2="${px(sx(1))}" y2="${px(sy(1))}" stroke="${COLOURS.reference}" stroke-width="1.2" stroke-dasharray="${DASHES.reference}"/>`,
+        a.markup,
+        b.markup,
+        a.labels,
+        b.labels,
+    ].join('');
+    const bins = chart.calibration.holdout.length;
+    return frame_frame({
+        id,
+        kind: 'calibration-diagram',
+        title: `Calibration: observed share of ${chart.target} = ${positive}`,
+        desc: `Observed share of positives (vertical) against the mean predicted probability (horizontal) in ${bins} equal-width bins of the predicted probability, the number of rows of each bin written beside its mark. ${sentence('Training rows (filled circles)', chart.calibration.train)} ${sentence('Hold-out rows (hollow squares)', chart.calibration.holdout)} Marks on the dotted diagonal are calibrated; hold-out marks flatter than the diagonal mean the predictions are too extreme.`,
+        x: sx,
+        y: sy,
+        xLabel: 'mean predicted probability',
+        yLabel: 'observed share positive',
+        body,
+        legend: [
+            { mark: LEGEND_TRAIN, label: 'training' },
+            { mark: LEGEND_HOLDOUT, label: 'hold-out' },
+            { mark: legendLine(COLOURS.reference, DASHES.reference, 1.2), label: 'calibrated' },
+        ],
+        data: { 'train-bins': a.drawn, 'holdout-bins': b.drawn, bins },
+    });
+}
+
+;// CONCATENATED MODULE: ./src/report/svg/points.ts
+
+/**
+ * Draws one series.
+ * @param series `train` (filled circles) or `holdout` (hollow squares)
+ * @param xs x values of the rows (null = not finite)
+ * @param ys y values of the rows
+ */
+function marks(series, xs, ys, sx, sy) {
+    const out = [];
+    let omitted = 0;
+    const mark = series === 'train' ? trainMark : holdoutMark;
+    for (let i = 0; i < ys.length; i++) {
+        const x = xs[i];
+        const y = ys[i];
+        if (x === null || y === null || x === undefined) {
+            omitted++;
+            continue;
+        }
+        out.push(mark(sx(x), sy(y)));
+    }
+    const style = series === 'train' ? TRAIN_STYLE : HOLDOUT_STYLE;
+    return {
+        markup: `<g data-series="${series}" data-count="${out.length}" ${style}>${out.join('')}</g>`,
+        drawn: out.length,
+        omitted,
+    };
+}
+/** `data-*` attributes stating rows, kept points and drawn marks of both series. */
+function pointData(train, holdout, a, b) {
+    return {
+        'train-rows': train.rows,
+        'train-shown': train.shown,
+        'train-points': a.drawn,
+        'train-omitted': a.omitted,
+        'holdout-rows': holdout.rows,
+        'holdout-shown': holdout.shown,
+        'holdout-points': b.drawn,
+        'holdout-omitted': b.omitted,
+    };
+}
+/** Sentence on thinning and omitted rows for a chart's description (empty when nothing to say). */
+function pointNote(train, holdout, a, b) {
+    const parts = [];
+    if (train.shown < train.rows)
+        parts.push(`${train.shown} of ${train.rows} training rows shown, evenly spaced through the file`);
+    if (holdout.shown < holdout.rows)
+        parts.push(`${holdout.shown} of ${holdout.rows} hold-out rows shown, evenly spaced through the file`);
+    if (a.omitted + b.omitted > 0)
+        parts.push(`${a.omitted + b.omitted} rows with values that are not finite are not drawn`);
+    return parts.length ? ` ${parts.join('; ')}.` : '';
+}
+
+// EXTERNAL MODULE: ./src/report/svg/units.ts
+var units = __webpack_require__(3332);
+;// CONCATENATED MODULE: ./src/report/svg/probability-curve.ts
+/**
+ * A classifier's predicted probability along one input: the curve over the input's training
+ * range and a margin with the other inputs at their training medians (dotted lines: the training
+ * range), and the rows as points at 0 (negative) and 1 (positive), training rows as filled
+ * circles and hold-out rows as hollow squares, jittered a little up or down so that stacked rows
+ * show as a band. A curve that jumps between 0 and 1 between neighbouring rows is the picture of
+ * separation or overfitting.
+ */
+
+
+
+
+
+
+
+/** Height of the jitter band of the points at 0 and 1, in probability units. */
+const JITTER = 0.035;
+/**
+ * The y value of each kept row: its label, moved towards the middle by up to {@link JITTER}
+ * (a fixed pattern by position, so the chart is the same on every run).
+ */
+function jittered(points) {
+    return points.label.map((l, i) => {
+        const offset = (((i * 7919) % 97) / 96) * JITTER;
+        return l === 1 ? 1 - offset : offset;
+    });
+}
+/**
+ * Renders the probability curve along one input.
+ * @param chart the classifier's chart data
+ * @param curve one entry of `chart.curves`
+ */
+function probabilityCurveChart(chart, curve, options) {
+    const { id } = options;
+    const positive = classLabel(chart.positive);
+    const negative = classLabel(chart.negative);
+    const { x0, y0, x1, y1 } = plotArea();
+    const c = chart.inputs.indexOf(curve.input);
+    const trainX = c >= 0 ? chart.train.x[c] : [];
+    const holdoutX = c >= 0 ? chart.holdout.x[c] : [];
+    const sx = linearScale(extent(curve.x, trainX, holdoutX) ?? [0, 1], [x0, x1]);
+    const sy = linearScale([-0.05, 1.05], [y1, y0]);
+    const a = marks('train', trainX, jittered(chart.train), sx, sy);
+    const b = marks('holdout', holdoutX, jittered(chart.holdout), sx, sy);
+    const t = chart.threshold;
+    const body = [
+        `<g stroke="${COLOURS.reference}" stroke-width="1" stroke-dasharray="1 3"><line x1="${px(sx(curve.range[0]))}" y1="${y0}" x2="${px(sx(curve.range[0]))}" y2="${y1}"/><line x1="${px(sx(curve.range[1]))}" y1="${y0}" x2="${px(sx(curve.range[1]))}" y2="${y1}"/></g>`,
+        `<line class="threshold" x1="${x0}" y1="${px(sy(t))}" x2="${x1}" y2="${px(sy(t))}" stroke="${COLOURS.reference}" stroke-width="1" stroke-dasharray="4 4"/>`,
+        a.markup,
+        b.markup,
+        `<path class="curve" d="${linePath(curve.x, curve.p, sx, sy)}" fill="none" stroke="${COLOURS.curve}" stroke-width="2" stroke-linejoin="round"/>`,
+    ].join('');
+    const others = Object.entries(curve.others)
+        .map(([k, v]) => `${k} = ${(0,format/* formatNumber */.Z)(v)}`)
+        .join(', ');
+    return frame_frame({
+        id,
+        kind: 'probability-curve',
+        title: `Probability of ${chart.target} = ${positive} along ${curve.input}`,
+        desc: `Predicted probability of ${chart.target} = ${positive} (vertical) as ${curve.input} runs from ${(0,format/* formatNumber */.Z)(curve.x[0])} to ${(0,format/* formatNumber */.Z)(curve.x[curve.x.length - 1])} (training range ${(0,format/* formatNumber */.Z)(curve.range[0])} to ${(0,format/* formatNumber */.Z)(curve.range[1])}, dotted lines)${others ? `, the other inputs at their training medians (${others})` : ''}; the dashed line is the threshold ${(0,format/* formatNumber */.Z)(t)}. ${a.drawn} training rows (filled circles) and ${b.drawn} hold-out rows (hollow squares) sit at 1 when ${positive} and at 0 when ${negative}, spread a little to show how many.${pointNote(chart.train, chart.holdout, a, b)}`,
+        x: sx,
+        y: sy,
+        xLabel: (0,units/* axisLabel */.M)(curve.input),
+        yLabel: `probability of ${positive}`,
+        body,
+        legend: [
+            { mark: legendLine(COLOURS.curve), label: others ? 'predicted, others at medians' : 'predicted' },
+            { mark: LEGEND_TRAIN, label: 'training' },
+            { mark: LEGEND_HOLDOUT, label: 'hold-out' },
+        ],
+        data: { input: curve.input, ...pointData(chart.train, chart.holdout, a, b) },
+    });
+}
+
+;// CONCATENATED MODULE: ./src/report/svg/roc-curve.ts
+/**
+ * The ROC curves of a classifier: true positive rate against false positive rate for the
+ * training rows (solid blue) and the hold-out rows (dashed vermillion), with the diagonal of a
+ * model that guesses. A training curve hugging the top left corner while the hold-out curve
+ * sags towards the diagonal is the picture of an overfit classifier.
+ */
+
+
+
+
+
+/** The area under a drawn (kept) curve by the trapezoid rule: the exact AUC when the curve was not thinned. */
+function drawnArea(curve) {
+    let area = 0;
+    for (let k = 1; k < curve.fpr.length; k++)
+        area += ((curve.fpr[k] - curve.fpr[k - 1]) * (curve.tpr[k] + curve.tpr[k - 1])) / 2;
+    return area;
+}
+/** One file's curve in words for the description. */
+function roc_curve_sentence(name, curve) {
+    if (curve.positives === 0 || curve.negatives === 0)
+        return `${name}: one class only (${curve.rows} rows), no curve.`;
+    const kept = curve.thinned
+        ? `${curve.fpr.length} of its ${curve.points} points drawn, every convex hull vertex kept`
+        : `${curve.points} points`;
+    return `${name}: ${curve.positives} positive and ${curve.negatives} negative rows, ${kept}, area under the drawn curve ${(0,format/* formatNumber */.Z)(drawnArea(curve), 4)}.`;
+}
+/**
+ * Renders the ROC chart of a classifier.
+ * @param chart the classifier's chart data (reads `roc`)
+ */
+function rocCurveChart(chart, options) {
+    const { id } = options;
+    const positive = classLabel(chart.positive);
+    const { x0, y0, x1, y1 } = plotArea();
+    const sx = linearScale([0, 1], [x0, x1]);
+    const sy = linearScale([0, 1], [y1, y0]);
+    const { train, holdout } = chart.roc;
+    const path = (curve, series, colour, dash) => `<path class="roc" data-series="${series}" data-count="${curve.fpr.length}" d="${linePath(curve.fpr, curve.tpr, sx, sy)}" fill="none" stroke="${colour}" stroke-width="2" stroke-linejoin="round"${dash ? ` stroke-dasharray="${dash}"` : ''}/>`;
+    const body = [
+        `<line class="diagonal" x1="${px(sx(0))}" y1="${px(sy(0))}" x2="${px(sx(1))}" y2="${px(sy(1))}" stroke="${COLOURS.reference}" stroke-width="1.2" stroke-dasharray="${DASHES.reference}"/>`,
+        path(train, 'train', COLOURS.train, null),
+        path(holdout, 'holdout', COLOURS.holdout, DASHES.limit),
+    ].join('');
+    return frame_frame({
+        id,
+        kind: 'roc-curve',
+        title: `ROC curves: ${chart.target} = ${positive}`,
+        desc: `True positive rate (vertical) against false positive rate (horizontal) as the probability threshold for "${positive}" falls from 1 to 0. ${roc_curve_sentence('Training rows (solid line)', train)} ${roc_curve_sentence('Hold-out rows (dashed line)', holdout)} The dotted diagonal is a model that guesses; a training curve far above the hold-out curve shows overfitting.`,
+        x: sx,
+        y: sy,
+        xLabel: 'false positive rate',
+        yLabel: 'true positive rate',
+        body,
+        legend: [
+            { mark: legendLine(COLOURS.train), label: 'training' },
+            { mark: legendLine(COLOURS.holdout, DASHES.limit), label: 'hold-out' },
+            { mark: legendLine(COLOURS.reference, DASHES.reference, 1.2), label: 'guessing' },
+        ],
+        data: {
+            'train-points': train.fpr.length,
+            'holdout-points': holdout.fpr.length,
+            'train-area': (0,format/* formatNumber */.Z)(drawnArea(train), 6),
+            'holdout-area': (0,format/* formatNumber */.Z)(drawnArea(holdout), 6),
+        },
+    });
+}
+
+;// CONCATENATED MODULE: ./src/report/classifier-html.ts
+/**
+ * The HTML report's part for a binary classifier (report/html.ts calls it): its facts line and
+ * its charts, the ROC curves, the calibration diagram and the predicted probability along each
+ * input, drawn from the pipeline's `classifier_charts` (nothing here computes a figure).
+ */
+
+
+
+
+
+
+function num(v) {
+    if (v === null || v === undefined || (typeof v === 'string' && v !== 'Infinity' && v !== '-Infinity' && v !== 'NaN'))
+        return '–';
+    return (0,report_escape/* escapeHtml */.ZD)((0,format/* formatNumber */.Z)((0,result_result/* fromJsonNumber */.M)(v)));
+}
+function figure(svg, caption) {
+    return `<figure>${svg}<figcaption>${(0,report_escape/* escapeHtml */.ZD)(caption)}</figcaption></figure>`;
+}
+/** The facts line of a classifier: rows, parameters, log-loss, AUC and calibration slope (HTML). */
+function classifierFacts(m) {
+    const x = m.metrics;
+    return (`<p class="facts"><span>training rows <b>${m.rows.train}</b></span><span>hold-out rows <b>${m.rows.holdout}</b></span><span>parameters <b>${m.parameters}</b></span>` +
+        `<span>log-loss <b>${num(x?.train_log_loss)}</b> / <b>${num(x?.holdout_log_loss)}</b> (training / hold-out)</span>` +
+        `<span>AUC <b>${num(x?.train_auc)}</b> / <b>${num(x?.holdout_auc)}</b></span><span>calibration slope <b>${num(x?.calibration_slope)}</b></span></p>`);
+}
+/** The chart figures of a classifier, in reading order. */
+function classifierCharts(chart, prefix) {
+    const out = [
+        figure(rocCurveChart(chart, { id: `${prefix}-roc` }), 'ROC curves of the training and hold-out rows; a training curve well above the hold-out curve shows overfitting.'),
+        figure(calibrationDiagramChart(chart, { id: `${prefix}-calibration` }), `Calibration: observed share of positives against the mean prediction in ${chart.calibration.holdout.length} equal-width bins, with the rows per bin.`),
+    ];
+    chart.curves.forEach((curve, k) => {
+        out.push(figure(probabilityCurveChart(chart, curve, { id: `${prefix}-probability-${k + 1}` }), `Predicted probability along ${curve.input}${chart.inputs.length > 1 ? ', the other inputs at their training medians' : ''}; rows at 1 (positive) and 0 (negative).`));
+    });
+    return out;
+}
+/** Notes above a classifier's charts: thinned rows and ROC curves, and inputs left without a curve (HTML; empty when none). */
+function classifierChartNotes(chart) {
+    const notes = [];
+    if (chart.train.thinned)
+        notes.push(`Training rows: ${chart.train.thinning}.`);
+    if (chart.holdout.thinned)
+        notes.push(`Hold-out rows: ${chart.holdout.thinning}.`);
+    for (const [name, roc] of [
+        ['training', chart.roc.train],
+        ['hold-out', chart.roc.holdout],
+    ]) {
+        if (roc.thinned)
+            notes.push(`The ${name} ROC curve: ${roc.fpr.length} of ${roc.points} points drawn, every vertex of its convex hull kept.`);
+    }
+    if ((chart.curvesLeftOut ?? 0) > 0)
+        notes.push(`Probability curves of the first ${chart.curves.length} inputs; ${chart.curvesLeftOut} more left out.`);
+    return notes.length ? `<p class="note">${notes.map(report_escape/* escapeHtml */.ZD).join(' ')}</p>` : '';
+}
+
+// EXTERNAL MODULE: ./src/report/wording.ts
+var wording = __webpack_require__(5594);
+// EXTERNAL MODULE: ./src/core/extremes.ts
+var extremes = __webpack_require__(398);
 ;// CONCATENATED MODULE: ./src/report/svg/coefficient-bars.ts
 /**
  * Standardised coefficients |w_j| sd(phi_j) / sd(y) as horizontal bars, one per non-intercept
@@ -549,67 +900,67 @@ function shortSha(commit) {
     return commit.replace(/[^0-9a-f]/gi, '').slice(0, 7);
 }
 
-;// CONCATENATED MODULE: ./src/report/svg/points.ts
-
+;// CONCATENATED MODULE: ./src/report/svg/spike-marks.ts
 /**
- * Draws one series.
- * @param series `train` (filled circles) or `holdout` (hollow squares)
- * @param xs x values of the rows (null = not finite)
- * @param ys y values of the rows
+ * Spike marks on a curve chart: the intervals between neighbouring training values where the curve
+ * varies more than the `swing-spikes` limit allows (chart data `spikes`, run/chart-data.ts), drawn
+ * as solid bars along the top edge of the plot area over each interval, so that they read apart
+ * from the hatched band regions (which span the whole height) without resting on colour alone.
  */
-function marks(series, xs, ys, sx, sy) {
-    const out = [];
-    let omitted = 0;
-    const mark = series === 'train' ? trainMark : holdoutMark;
-    for (let i = 0; i < ys.length; i++) {
-        const x = xs[i];
-        const y = ys[i];
-        if (x === null || y === null || x === undefined) {
-            omitted++;
-            continue;
-        }
-        out.push(mark(sx(x), sy(y)));
-    }
-    const style = series === 'train' ? TRAIN_STYLE : HOLDOUT_STYLE;
-    return {
-        markup: `<g data-series="${series}" data-count="${out.length}" ${style}>${out.join('')}</g>`,
-        drawn: out.length,
-        omitted,
-    };
+
+
+/** Bar colour: Okabe–Ito bluish green #009E73 (apart from the band's and the regions' colours). */
+const SPIKE_COLOUR = '#009E73';
+/** Height of a spike bar in px. */
+const spike_marks_BAR = 7;
+/** Intervals named in the text alternative, at most. */
+const NAMED = 5;
+/**
+ * The bars (a `<g class="spikes">` with one `<rect class="spike">` per interval, each at least
+ * 2 px wide), or an empty string when there are none.
+ * @param spikes the curve's spike marks (absent: none)
+ * @param sx the x scale
+ * @param top the plot area's top edge in px
+ */
+function spikeBars(spikes, sx, top) {
+    if (spikes === undefined || spikes.intervals.length === 0)
+        return '';
+    const bars = spikes.intervals.map((s) => {
+        const a = sx(s.from);
+        const b = sx(s.to);
+        return `<rect class="spike" data-from="${s.from}" data-to="${s.to}" x="${px(a)}" y="${top}" width="${px(Math.max(2, b - a))}" height="${spike_marks_BAR}"/>`;
+    });
+    return `<g class="spikes" data-count="${spikes.intervals.length}" fill="${SPIKE_COLOUR}">${bars.join('')}</g>`;
 }
-/** `data-*` attributes stating rows, kept points and drawn marks of both series. */
-function pointData(train, holdout, a, b) {
-    return {
-        'train-rows': train.rows,
-        'train-shown': train.shown,
-        'train-points': a.drawn,
-        'train-omitted': a.omitted,
-        'holdout-rows': holdout.rows,
-        'holdout-shown': holdout.shown,
-        'holdout-points': b.drawn,
-        'holdout-omitted': b.omitted,
-    };
+/** Legend picture of a spike bar. */
+const LEGEND_SPIKE = `<rect x="0" y="0" width="14" height="${spike_marks_BAR}" fill="${SPIKE_COLOUR}"/>`;
+/** Legend label of the spike bars. */
+function spikeLegendLabel(spikes) {
+    return `spikes (> ${(0,format/* formatNumber */.Z)(spikes.limit)}x)`;
 }
-/** Sentence on thinning and omitted rows for a chart's description (empty when nothing to say). */
-function pointNote(train, holdout, a, b) {
-    const parts = [];
-    if (train.shown < train.rows)
-        parts.push(`${train.shown} of ${train.rows} training rows shown, evenly spaced through the file`);
-    if (holdout.shown < holdout.rows)
-        parts.push(`${holdout.shown} of ${holdout.rows} hold-out rows shown, evenly spaced through the file`);
-    if (a.omitted + b.omitted > 0)
-        parts.push(`${a.omitted + b.omitted} rows with values that are not finite are not drawn`);
-    return parts.length ? ` ${parts.join('; ')}.` : '';
+/**
+ * One sentence for the chart's text alternative (with a leading space): how many intervals spike
+ * and the first few; an empty string when none do or the marks are absent.
+ */
+function spikeNote(spikes) {
+    if (spikes === undefined || spikes.intervals.length === 0)
+        return '';
+    const count = spikes.intervals.length + (spikes.left_out ?? 0);
+    const named = spikes.intervals
+        .slice(0, NAMED)
+        .map((s) => `${(0,format/* formatNumber */.Z)(s.from)} to ${(0,format/* formatNumber */.Z)(s.to)}`)
+        .join('; ');
+    const more = count > NAMED ? '; …' : '';
+    return ` Bars along the top mark ${count} interval${count === 1 ? '' : 's'} between neighbouring training values where the curve varies more than ${(0,format/* formatNumber */.Z)(spikes.limit)} times what the data allow (${named}${more}).`;
 }
 
-// EXTERNAL MODULE: ./src/report/svg/units.ts
-var units = __webpack_require__(3332);
 ;// CONCATENATED MODULE: ./src/report/svg/fit-curve.ts
 /**
  * Chart of a model of one input: the fitted curve over the whole scanned range, the observed
  * target band, hatched stretches where the curve leaves the band, training rows as filled
  * circles and hold-out rows as hollow squares.
  */
+
 
 
 
@@ -646,7 +997,7 @@ function fitCurveChart(chart, fit, options) {
         return `<rect class="region" data-side="${r.side}" x="${px(a)}" y="${y0}" width="${px(Math.max(1.5, b - a))}" height="${y1 - y0}" fill="url(#${id}-hatch)"/>`;
     })
         .join('');
-    body.push(`<g class="regions" data-count="${fit.regions.length}">${regions}</g>`);
+    body.push(`<g class="regions" data-count="${fit.regions.length}">${regions}</g>`, spikeBars(fit.spikes, sx, y0));
     // Training range edges: the curve past them is extrapolation.
     body.push(`<g stroke="${COLOURS.reference}" stroke-width="1" stroke-dasharray="1 3"><line x1="${px(sx(fit.range[0]))}" y1="${y0}" x2="${px(sx(fit.range[0]))}" y2="${y1}"/><line x1="${px(sx(fit.range[1]))}" y1="${y0}" x2="${px(sx(fit.range[1]))}" y2="${y1}"/></g>`);
     if (fit.base)
@@ -663,6 +1014,8 @@ function fitCurveChart(chart, fit, options) {
     ];
     if (fit.regions.length > 0)
         legend.push({ mark: legendRegion(id), label: 'leaves band' });
+    if (fit.spikes && fit.spikes.intervals.length > 0)
+        legend.push({ mark: LEGEND_SPIKE, label: spikeLegendLabel(fit.spikes) });
     if (fit.base)
         legend.push(baseCurveLegend());
     const where = fit.regions.length
@@ -670,7 +1023,7 @@ function fitCurveChart(chart, fit, options) {
         : ' The curve stays inside the band.';
     const desc = `Fitted ${chart.target} against ${fit.input} from ${(0,format/* formatNumber */.Z)(fit.x[0])} to ${(0,format/* formatNumber */.Z)(fit.x[fit.x.length - 1])} ` +
         `(training range ${(0,format/* formatNumber */.Z)(fit.range[0])} to ${(0,format/* formatNumber */.Z)(fit.range[1])}), with ${a.drawn} training rows as filled circles and ${b.drawn} hold-out rows as hollow squares. ` +
-        `Observed target band ${(0,format/* formatNumber */.Z)(blo)} to ${(0,format/* formatNumber */.Z)(bhi)}.${where}${fit.base ? baseCurveNote(fit.base) : ''}${pointNote(chart.train, chart.holdout, a, b)}`;
+        `Observed target band ${(0,format/* formatNumber */.Z)(blo)} to ${(0,format/* formatNumber */.Z)(bhi)}.${where}${spikeNote(fit.spikes)}${fit.base ? baseCurveNote(fit.base) : ''}${pointNote(chart.train, chart.holdout, a, b)}`;
     return frame_frame({
         id,
         kind: 'fit-curve',
@@ -682,7 +1035,12 @@ function fitCurveChart(chart, fit, options) {
         yLabel: (0,units/* axisLabel */.M)(chart.target),
         body: body.join(''),
         legend,
-        data: { ...pointData(chart.train, chart.holdout, a, b), regions: fit.regions.length, source: fit.source },
+        data: {
+            ...pointData(chart.train, chart.holdout, a, b),
+            regions: fit.regions.length,
+            source: fit.source,
+            ...(fit.spikes ? { spikes: fit.spikes.intervals.length } : {}),
+        },
     });
 }
 
@@ -692,6 +1050,7 @@ function fitCurveChart(chart, fit, options) {
  * input held at its training median, over the input's training range and a margin, with the
  * training values of the input as a rug of ticks under the curve.
  */
+
 
 
 
@@ -719,6 +1078,7 @@ function partialCurveChart(chart, curve, options) {
         `<path class="rug" d="${ticks.join('')}" stroke="${COLOURS.train}" stroke-opacity="0.55" stroke-width="1"/>`,
         curve.base ? baseCurvePath(curve.base, sx, sy) : '',
         `<path class="curve" d="${linePath(curve.x, curve.y, sx, sy)}" fill="none" stroke="${COLOURS.curve}" stroke-width="2" stroke-linejoin="round"/>`,
+        spikeBars(curve.spikes, sx, y0),
     ].join('');
     const others = Object.entries(curve.others)
         .map(([k, v]) => `${k} = ${(0,format/* formatNumber */.Z)(v)}`)
@@ -727,7 +1087,7 @@ function partialCurveChart(chart, curve, options) {
         id,
         kind: 'partial-curve',
         title: `Partial curve: ${chart.target} along ${curve.input}`,
-        desc: `Predicted ${chart.target} as ${curve.input} runs from ${(0,format/* formatNumber */.Z)(curve.x[0])} to ${(0,format/* formatNumber */.Z)(curve.x[curve.x.length - 1])} (training range ${(0,format/* formatNumber */.Z)(curve.range[0])} to ${(0,format/* formatNumber */.Z)(curve.range[1])}, dotted lines), with the other inputs at their training medians${others ? ` (${others})` : ''}. Ticks along the bottom mark the training values of ${curve.input}.${curve.base ? baseCurveNote(curve.base) : ''}`,
+        desc: `Predicted ${chart.target} as ${curve.input} runs from ${(0,format/* formatNumber */.Z)(curve.x[0])} to ${(0,format/* formatNumber */.Z)(curve.x[curve.x.length - 1])} (training range ${(0,format/* formatNumber */.Z)(curve.range[0])} to ${(0,format/* formatNumber */.Z)(curve.range[1])}, dotted lines), with the other inputs at their training medians${others ? ` (${others})` : ''}. Ticks along the bottom mark the training values of ${curve.input}.${spikeNote(curve.spikes)}${curve.base ? baseCurveNote(curve.base) : ''}`,
         x: sx,
         y: sy,
         xLabel: (0,units/* axisLabel */.M)(curve.input),
@@ -736,9 +1096,10 @@ function partialCurveChart(chart, curve, options) {
         legend: [
             { mark: legendLine(COLOURS.curve), label: 'predicted, others at medians' },
             { mark: `<path d="M3 12V5M7 12V5M11 12V5" stroke="${COLOURS.train}" stroke-width="1"/>`, label: 'training values' },
+            ...(curve.spikes && curve.spikes.intervals.length > 0 ? [{ mark: LEGEND_SPIKE, label: spikeLegendLabel(curve.spikes) }] : []),
             ...(curve.base ? [baseCurveLegend()] : []),
         ],
-        data: { input: curve.input, 'rug-count': ticks.length },
+        data: { input: curve.input, 'rug-count': ticks.length, ...(curve.spikes ? { spikes: curve.spikes.intervals.length } : {}) },
     });
 }
 
@@ -823,6 +1184,8 @@ function residualsChart(chart, options) {
     });
 }
 
+// EXTERNAL MODULE: ./src/report/target-scale-text.ts
+var target_scale_text = __webpack_require__(764);
 ;// CONCATENATED MODULE: ./src/report/html.ts
 /**
  * The HTML report: one self-contained page (inline CSS and SVG, no script, no network; a
@@ -831,6 +1194,10 @@ function residualsChart(chart, options) {
  * repository is escaped with {@link escapeHtml}; charts come from the pipeline's chart data
  * (`ModelResult.charts`), so nothing here computes a figure.
  */
+
+
+
+
 
 
 
@@ -891,7 +1258,7 @@ footer{margin-top:40px;font-size:.82rem;color:var(--muted)}
  footer{display:none}
 }
 `;
-function num(v) {
+function html_num(v) {
     if (v === null || v === undefined)
         return '–';
     return (0,report_escape/* escapeHtml */.ZD)((0,format/* formatNumber */.Z)((0,result_result/* fromJsonNumber */.M)(v)));
@@ -905,9 +1272,9 @@ function verdictText(result) {
 function overviewRow(m, i) {
     const x = m.metrics;
     const over = m.checks.filter((c) => c.status === 'fail' || c.status === 'warn').map((c) => `<code>${(0,report_escape/* escapeHtml */.ZD)(c.id)}</code>`);
-    return (`<tr><td>${badge(m.verdict)}</td><td><a href="#model-${i + 1}">${(0,report_escape/* escapeHtml */.ZD)(m.name)}</a></td>` +
-        `<td class="num">${m.rows.train}</td><td class="num">${m.rows.holdout}</td><td class="num">${m.parameters}</td>` +
-        `<td class="num">${num(x?.holdout_rmse)}</td><td class="num">${num(x?.gap_ratio)}</td><td class="num">${num(x?.max_std_coefficient)}</td>` +
+    return (`<tr><td>${badge(m.verdict)}</td><td><a href="#model-${i + 1}">${(0,report_escape/* escapeHtml */.ZD)(m.name)}</a>${(0,report_escape/* escapeHtml */.ZD)((0,model_kind/* kindMark */.w6)(m))}</td>` +
+        `<td class="num">${m.rows.train}</td><td class="num">${m.rows.holdout}</td><td class="num">${(0,report_escape/* escapeHtml */.ZD)((0,model_kind/* parametersText */.Or)(m))}</td>` +
+        `<td class="num">${html_num(x?.holdout_rmse)}</td><td class="num">${html_num(x?.gap_ratio)}</td><td class="num">${html_num(x?.max_std_coefficient)}</td>` +
         `<td>${m.error ? 'could not be checked' : over.length ? over.join(', ') : '–'}</td></tr>`);
 }
 /** The overview table, one piece per row. */
@@ -928,34 +1295,34 @@ function checksTable(m) {
             ? ` <span class="advice">Suggestion (line ${c.suggestion.line}): ${(0,report_escape/* escapeHtml */.ZD)(c.suggestion.text)}</span>`
             : '';
         return (`<tr data-check="${(0,report_escape/* escapeHtml */.ZD)(c.id)}" data-status="${(0,report_escape/* escapeHtml */.ZD)(c.status)}"><td>${(0,report_escape/* escapeHtml */.ZD)(title)}<br><code class="muted">${(0,report_escape/* escapeHtml */.ZD)(c.id)}</code></td><td>${badge(c.status)}</td>` +
-            `<td class="num">${num(c.value)}</td><td class="num">${(0,report_escape/* escapeHtml */.ZD)((0,wording/* limitText */.PW)(c))}</td><td class="num">${c.line}</td>` +
+            `<td class="num">${html_num(c.value)}</td><td class="num">${(0,report_escape/* escapeHtml */.ZD)((0,wording/* limitText */.PW)(c))}</td><td class="num">${c.line}</td>` +
             `<td class="finding">${(0,report_escape/* escapeHtml */.ZD)(c.message)}.${advice}${suggestion}</td></tr>`);
     });
     return ('<table class="checks"><thead><tr><th>Check</th><th>Status</th><th class="num">Value</th><th class="num">Limit</th><th class="num">Line</th><th>Finding</th></tr></thead>' +
         `<tbody>${rows.join('')}</tbody></table>`);
 }
-function figure(svg, caption, wide = false) {
+function html_figure(svg, caption, wide = false) {
     return `<figure${wide ? ' class="wide"' : ''}>${svg}<figcaption>${(0,report_escape/* escapeHtml */.ZD)(caption)}</figcaption></figure>`;
 }
 /** The charts of one model, in reading order. */
 function charts(chart, prefix) {
     const out = [];
     if (chart.fit) {
-        out.push(figure(fitCurveChart(chart, chart.fit, { id: `${prefix}-fit` }), 'The fitted curve over the scanned range (dotted lines: the training range). A curve that leaves the observed band between the samples is chasing noise.'));
+        out.push(html_figure(fitCurveChart(chart, chart.fit, { id: `${prefix}-fit` }), 'The fitted curve over the scanned range (dotted lines: the training range). A curve that leaves the observed band between the samples is chasing noise.'));
     }
     else {
-        out.push(figure(predictedActualChart(chart, { id: `${prefix}-pa` }), 'Predicted against actual values; hold-out points far from the dashed line while training points sit on it show overfitting.'));
+        out.push(html_figure(predictedActualChart(chart, { id: `${prefix}-pa` }), 'Predicted against actual values; hold-out points far from the dashed line while training points sit on it show overfitting.'));
     }
-    out.push(figure(residualsChart(chart, { id: `${prefix}-res` }), 'Residuals against fitted values.'));
+    out.push(html_figure(residualsChart(chart, { id: `${prefix}-res` }), 'Residuals against fitted values.'));
     chart.partials.forEach((curve, k) => {
-        out.push(figure(partialCurveChart(chart, curve, { id: `${prefix}-partial-${k + 1}` }), `Partial curve along ${curve.input}, the other inputs at their training medians.`));
+        out.push(html_figure(partialCurveChart(chart, curve, { id: `${prefix}-partial-${k + 1}` }), `Partial curve along ${curve.input}, the other inputs at their training medians.`));
     });
     if (chart.sweep) {
-        out.push(figure(cvCurveChart(chart.sweep, { id: `${prefix}-cv` }), 'Cross-validated error over the complexity sweep.'));
+        out.push(html_figure(cvCurveChart(chart.sweep, { id: `${prefix}-cv` }), 'Cross-validated error over the complexity sweep.'));
     }
     const bars = coefficientBarsChart(chart.coefficients, { id: `${prefix}-coef` });
     if (bars)
-        out.push(figure(bars, 'Standardised coefficients: the change in the prediction, in target standard deviations, for one standard deviation of each column.'));
+        out.push(html_figure(bars, 'Standardised coefficients: the change in the prediction, in target standard deviations, for one standard deviation of each column.'));
     return out;
 }
 function modelSection(m, index) {
@@ -968,10 +1335,32 @@ function modelSection(m, index) {
         return parts.join('');
     }
     const x = m.metrics;
-    parts.push(`<p class="facts"><span>training rows <b>${m.rows.train}</b></span><span>hold-out rows <b>${m.rows.holdout}</b></span><span>parameters <b>${m.parameters}</b></span>` +
-        `<span>training RMSE <b>${num(x?.train_rmse)}</b></span><span>hold-out RMSE <b>${num(x?.holdout_rmse)}</b></span><span>gap ratio <b>${num(x?.gap_ratio)}</b></span></p>`);
+    parts.push(`<p class="facts"><span>training rows <b>${m.rows.train}</b></span><span>hold-out rows <b>${m.rows.holdout}</b></span><span>parameters <b>${(0,report_escape/* escapeHtml */.ZD)((0,model_kind/* parametersText */.Or)(m))}</b></span>` +
+        `<span>training RMSE <b>${html_num(x?.train_rmse)}</b></span><span>hold-out RMSE <b>${html_num(x?.holdout_rmse)}</b></span><span>gap ratio <b>${html_num(x?.gap_ratio)}</b></span></p>`);
+    // A classifier's facts are its log-loss, AUC and calibration slope instead.
+    if (x?.task === 'classification')
+        parts[parts.length - 1] = classifierFacts(m);
+    const kind = (0,model_kind/* kindLine */.J0)(m);
+    if (kind !== null)
+        parts.push(`<p class="note" data-kind="predictions">${(0,report_escape/* escapeHtml */.ZD)(kind)}</p>`);
+    const refit = (0,refit_compare/* refitCompareLine */.C)(m);
+    if (refit !== null)
+        parts.push(`<p class="note" data-refit-compare>${(0,report_escape/* escapeHtml */.ZD)(refit)}</p>`);
+    const scale = (0,target_scale_text/* targetScaleSentence */.tt)(m);
+    if (scale !== null) {
+        const head = target_scale_text/* TARGET_SCALE_HEADINGS */.x8.map((h, j) => `<th${j > 0 ? ' class="num"' : ''}>${(0,report_escape/* escapeHtml */.ZD)(h)}</th>`).join('');
+        const body = (0,target_scale_text/* targetScaleRows */.rY)(m)
+            .map((row) => `<tr>${row.map((c, j) => `<td${j > 0 ? ' class="num"' : ''}>${(0,report_escape/* escapeHtml */.ZD)(c)}</td>`).join('')}</tr>`)
+            .join('');
+        parts.push(`<p class="note">${(0,report_escape/* escapeHtml */.ZD)(scale)}.</p><table class="target-scale"><thead><tr>${head}</tr></thead><tbody>${body}</tbody></table>`);
+    }
     parts.push('<h3>Checks</h3>', checksTable(m));
-    if (m.charts) {
+    if (m.classifier_charts) {
+        const list = classifierCharts(m.classifier_charts, id);
+        parts.push('<h3>Charts</h3>', classifierChartNotes(m.classifier_charts));
+        parts.push(`<div class="charts" data-charts="${list.length}">${list.join('')}</div>`);
+    }
+    else if (m.charts) {
         const list = charts(m.charts, id);
         const thinned = [m.charts.train, m.charts.holdout].filter((s) => s.thinned);
         parts.push(`<h3>Charts</h3>`);
@@ -1090,6 +1479,9 @@ function suite(m, failOn) {
         }
     }
     const head = `  <testsuite${attrs({ name: m.name, tests: counts.tests, failures: counts.failures, errors: counts.errors, skipped: counts.skipped, file: m.descriptor })}`;
+    // A model trained elsewhere says so in the suite's properties (JUnit's place for facts of a suite).
+    if (m.kind)
+        cases.unshift(`    <properties>\n      <property${attrs({ name: 'kind', value: m.kind })}/>\n    </properties>`);
     return { xml: cases.length ? `${head}>\n${cases.join('\n')}\n  </testsuite>` : `${head}/>`, counts };
 }
 /**
@@ -1234,6 +1626,7 @@ function sarifLog(result, options = {}) {
                 partialFingerprints: { 'fitgateFinding/v1': fingerprint(m.name, c.id) },
                 properties: {
                     model: m.name,
+                    ...(m.kind ? { kind: m.kind } : {}),
                     code: c.code,
                     value: c.value === null ? null : (0,format/* formatNumber */.Z)((0,result_result/* fromJsonNumber */.M)(c.value)),
                     limit: c.limit,
