@@ -34044,7 +34044,7 @@ function linearTerm(spec) {
 // EXTERNAL MODULE: ./src/core/errors.ts
 var errors = __nccwpck_require__(4296);
 // EXTERNAL MODULE: ./src/design/stats.ts
-var stats = __nccwpck_require__(6801);
+var design_stats = __nccwpck_require__(6801);
 ;// CONCATENATED MODULE: ./src/design/terms/multi-polynomial.ts
 
 
@@ -34078,15 +34078,16 @@ function monomialName(m, names) {
     return parts.join('*');
 }
 /**
- * Fixes each input's shift and scale from the training columns and returns the term.
+ * Fixes each input's shift and scale from the training columns (or from `stats`, measured over
+ * every training row when the columns are a sample) and returns the term.
  * @throws InputError `constant-input` when an input's default scale would be 0
  */
-function multiPolynomialTerm(spec, training, file) {
+function multiPolynomialTerm(spec, training, file, stats) {
     const shift = [];
     const scale = [];
     spec.of.forEach((name, i) => {
         const x = training.get(name);
-        const { mean, sd } = (0,stats/* meanAndSd */.ud)(x);
+        const { mean, sd } = stats?.get(name) ?? (0,design_stats/* meanAndSd */.ud)(x);
         const sc = spec.scale[i] ?? sd;
         if (!(sc > 0)) {
             throw new errors/* InputError */.dz('constant-input', `column \`${name}\` is constant in the training data, so its default scale (standard deviation) is 0; give \`scale\` explicitly or drop it from \`of\``, {
@@ -34161,7 +34162,7 @@ function multiRbfTerm(spec, training, file) {
     const shift = [];
     const scale = [];
     spec.of.forEach((name, i) => {
-        const { mean, sd } = (0,stats/* meanAndSd */.ud)(columns[i]);
+        const { mean, sd } = (0,design_stats/* meanAndSd */.ud)(columns[i]);
         if (!(sd > 0)) {
             throw new errors/* InputError */.dz('constant-input', `column \`${name}\` is constant in the training data, so it cannot be standardised for a radial term over several inputs; drop it from \`of\``, {
                 file,
@@ -34223,15 +34224,16 @@ var kernels = __nccwpck_require__(8667);
 
 
 /**
- * Fixes shift and scale from the training column and returns the term.
+ * Fixes shift and scale from the training column (or from `stats`, measured over every training
+ * row when the column is a sample) and returns the term.
  * @throws InputError `constant-input` when the default scale would be 0 (a constant column)
  */
-function polynomialTerm(spec, training, file) {
+function polynomialTerm(spec, training, file, stats) {
     const x = training.get(spec.of);
     let shift = spec.shift;
     let scale = spec.scale;
     if (shift === null || scale === null) {
-        const { mean, sd } = (0,stats/* meanAndSd */.ud)(x);
+        const { mean, sd } = stats?.get(spec.of) ?? (0,design_stats/* meanAndSd */.ud)(x);
         shift ??= mean;
         if (scale === null) {
             if (!(sd > 0)) {
@@ -34546,7 +34548,7 @@ function termInputs(spec) {
  * @param file descriptor path, for errors
  * @param levels training levels of category columns (needed by `category` terms only)
  */
-function createTerm(spec, training, file, levels = new Map()) {
+function createTerm(spec, training, file, levels = new Map(), stats) {
     if (spec.kind !== 'linear' && spec.kind !== 'category' && spec.transform !== undefined) {
         return (0,transform/* transformedTerm */.Yv)(spec, training, file, termInputs(spec), (inner, columns) => createTerm(inner, columns, file));
     }
@@ -34554,7 +34556,7 @@ function createTerm(spec, training, file, levels = new Map()) {
         case 'linear':
             return linearTerm(spec);
         case 'polynomial':
-            return polynomialTerm(spec, training, file);
+            return polynomialTerm(spec, training, file, stats);
         case 'rbf':
             return rbfTerm(spec, training);
         case 'fourier':
@@ -34562,7 +34564,7 @@ function createTerm(spec, training, file, levels = new Map()) {
         case 'spline':
             return splineTerm(spec, training, file);
         case 'multi-polynomial':
-            return multiPolynomialTerm(spec, training, file);
+            return multiPolynomialTerm(spec, training, file, stats);
         case 'multi-rbf':
             return multiRbfTerm(spec, training, file);
         case 'category':
@@ -52435,11 +52437,14 @@ async function loadModelData(repo, descriptor, inputs, settings, options = {}) {
         });
         const reservoir = new RowReservoir(inputs.length, options.sampleRows ?? SAMPLE_ROWS, descriptor.fit.seed);
         const target = { n: 0, mean: 0, m2: 0, min: Infinity, max: -Infinity };
+        const inputFigures = inputs.map(() => ({ n: 0, mean: 0, m2: 0, min: Infinity, max: -Infinity }));
         try {
             await source.forEachChunk((chunk) => {
                 options.onTrainChunk?.(chunk);
                 reservoir.add(chunk);
                 addTargetFigures(target, chunk.y, chunk.rows);
+                for (let c = 0; c < inputs.length; c++)
+                    addTargetFigures(inputFigures[c], chunk.inputs[c], chunk.rows);
             });
         }
         catch (error) {
@@ -52472,6 +52477,7 @@ async function loadModelData(repo, descriptor, inputs, settings, options = {}) {
                 targetSd: Math.sqrt(target.m2 / target.n),
                 targetMin: target.min,
                 targetMax: target.max,
+                inputStats: new Map(inputs.map((name, c) => [name, { mean: inputFigures[c].mean, sd: Math.sqrt(inputFigures[c].m2 / inputFigures[c].n) }])),
             },
         };
     }
@@ -52489,7 +52495,7 @@ async function loadModelData(repo, descriptor, inputs, settings, options = {}) {
     return { train: trainData, holdout: holdoutData, trainColumns: byName, levels };
 }
 /**
- * Adds a chunk's targets to running figures: mean and sum of squared deviations merged by the
+ * Adds a chunk's values of one column (the target, or an input) to running figures: mean and sum of squared deviations merged by the
  * pairwise formula of Chan, Golub & LeVeque ("Algorithms for computing the sample variance",
  * The American Statistician 37(3), 1983, eq. 2.1), the chunk's own from two passes.
  */
@@ -54142,7 +54148,7 @@ async function planModel(repo, descriptor, settings, load = loadModelData, scale
         for (const data of streamed === null ? [train, tables.holdout] : [tables.holdout])
             (0,terms_transform/* checkTransformDomain */.F4)(spec, (0,design_terms/* termInputs */.Q)(spec), data, inputs);
     // Fix term parameters from the training rows, then check the size before taking memory.
-    const terms = descriptor.terms.map((spec) => (0,design_terms/* createTerm */.P)(spec, tables.trainColumns, file, tables.levels));
+    const terms = descriptor.terms.map((spec) => (0,design_terms/* createTerm */.P)(spec, tables.trainColumns, file, tables.levels, tables.streamed?.inputStats));
     const design = (0,design_matrix/* createDesign */.x)(terms, descriptor.fit.intercept);
     const p = design.p;
     if (p > MAX_PARAMETERS) {

@@ -38,6 +38,8 @@ export interface StreamedTraining {
   /** Smallest and largest target. */
   targetMin: number;
   targetMax: number;
+  /** Mean and population standard deviation of each input over every row (the same merge), by name. */
+  inputStats: Map<string, { mean: number; sd: number }>;
 }
 
 /** How the loader treats a large training file. */
@@ -203,11 +205,13 @@ export async function loadModelData(
     });
     const reservoir = new RowReservoir(inputs.length, options.sampleRows ?? SAMPLE_ROWS, descriptor.fit.seed);
     const target = { n: 0, mean: 0, m2: 0, min: Infinity, max: -Infinity };
+    const inputFigures = inputs.map(() => ({ n: 0, mean: 0, m2: 0, min: Infinity, max: -Infinity }));
     try {
       await source.forEachChunk((chunk) => {
         options.onTrainChunk?.(chunk);
         reservoir.add(chunk);
         addTargetFigures(target, chunk.y, chunk.rows);
+        for (let c = 0; c < inputs.length; c++) addTargetFigures(inputFigures[c], chunk.inputs[c], chunk.rows);
       });
     } catch (error) {
       throw withAsker(error, descriptor);
@@ -239,6 +243,9 @@ export async function loadModelData(
         targetSd: Math.sqrt(target.m2 / target.n),
         targetMin: target.min,
         targetMax: target.max,
+        inputStats: new Map(
+          inputs.map((name, c) => [name, { mean: inputFigures[c].mean, sd: Math.sqrt(inputFigures[c].m2 / inputFigures[c].n) }]),
+        ),
       },
     };
   }
@@ -257,7 +264,7 @@ export async function loadModelData(
 }
 
 /**
- * Adds a chunk's targets to running figures: mean and sum of squared deviations merged by the
+ * Adds a chunk's values of one column (the target, or an input) to running figures: mean and sum of squared deviations merged by the
  * pairwise formula of Chan, Golub & LeVeque ("Algorithms for computing the sample variance",
  * The American Statistician 37(3), 1983, eq. 2.1), the chunk's own from two passes.
  */

@@ -96,7 +96,7 @@ export async function planModel(
     for (const data of streamed === null ? [train, tables.holdout] : [tables.holdout])
       checkTransformDomain(spec, termInputs(spec), data, inputs);
   // Fix term parameters from the training rows, then check the size before taking memory.
-  const terms = descriptor.terms.map((spec) => createTerm(spec, tables.trainColumns, file, tables.levels));
+  const terms = descriptor.terms.map((spec) => createTerm(spec, tables.trainColumns, file, tables.levels, tables.streamed?.inputStats));
   const design = createDesign(terms, descriptor.fit.intercept);
   const p = design.p;
   if (p > MAX_PARAMETERS) {

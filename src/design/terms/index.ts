@@ -12,10 +12,10 @@ import { polynomialTerm } from './polynomial.js';
 import { rbfTerm } from './rbf.js';
 import { splineTerm } from './spline.js';
 import { transformedTerm } from './transform.js';
-import type { Term, TrainingColumns, TrainingLevels } from './types.js';
+import type { Term, TrainingColumns, TrainingLevels, TrainingStats } from './types.js';
 import { categoryTerm } from './category.js';
 
-export type { Term, TrainingColumns, TrainingLevels } from './types.js';
+export type { Term, TrainingColumns, TrainingLevels, TrainingStats } from './types.js';
 
 /** Every input column a term reads (without duplicates, in first-use order). */
 export function termInputs(spec: TermSpec): string[] {
@@ -30,7 +30,13 @@ export function termInputs(spec: TermSpec): string[] {
  * @param file descriptor path, for errors
  * @param levels training levels of category columns (needed by `category` terms only)
  */
-export function createTerm(spec: TermSpec, training: TrainingColumns, file: string, levels: TrainingLevels = new Map()): Term {
+export function createTerm(
+  spec: TermSpec,
+  training: TrainingColumns,
+  file: string,
+  levels: TrainingLevels = new Map(),
+  stats?: TrainingStats,
+): Term {
   if (spec.kind !== 'linear' && spec.kind !== 'category' && spec.transform !== undefined) {
     return transformedTerm(spec, training, file, termInputs(spec), (inner, columns) => createTerm(inner, columns, file));
   }
@@ -38,7 +44,7 @@ export function createTerm(spec: TermSpec, training: TrainingColumns, file: stri
     case 'linear':
       return linearTerm(spec);
     case 'polynomial':
-      return polynomialTerm(spec, training, file);
+      return polynomialTerm(spec, training, file, stats);
     case 'rbf':
       return rbfTerm(spec, training);
     case 'fourier':
@@ -46,7 +52,7 @@ export function createTerm(spec: TermSpec, training: TrainingColumns, file: stri
     case 'spline':
       return splineTerm(spec, training, file);
     case 'multi-polynomial':
-      return multiPolynomialTerm(spec, training, file);
+      return multiPolynomialTerm(spec, training, file, stats);
     case 'multi-rbf':
       return multiRbfTerm(spec, training, file);
     case 'category':

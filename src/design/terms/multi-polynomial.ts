@@ -9,7 +9,7 @@
 import type { MultiPolynomialTermSpec } from '../../config/types.js';
 import { InputError } from '../../core/errors.js';
 import { meanAndSd } from '../stats.js';
-import type { Term, TrainingColumns } from './types.js';
+import type { Term, TrainingColumns, TrainingStats } from './types.js';
 
 /** The monomials of total degree 1 .. d over k inputs, as sorted index tuples in graded lexicographic order. */
 export function monomials(k: number, d: number): number[][] {
@@ -38,15 +38,16 @@ function monomialName(m: readonly number[], names: readonly string[]): string {
 }
 
 /**
- * Fixes each input's shift and scale from the training columns and returns the term.
+ * Fixes each input's shift and scale from the training columns (or from `stats`, measured over
+ * every training row when the columns are a sample) and returns the term.
  * @throws InputError `constant-input` when an input's default scale would be 0
  */
-export function multiPolynomialTerm(spec: MultiPolynomialTermSpec, training: TrainingColumns, file: string): Term {
+export function multiPolynomialTerm(spec: MultiPolynomialTermSpec, training: TrainingColumns, file: string, stats?: TrainingStats): Term {
   const shift: number[] = [];
   const scale: number[] = [];
   spec.of.forEach((name, i) => {
     const x = training.get(name) as Float64Array;
-    const { mean, sd } = meanAndSd(x);
+    const { mean, sd } = stats?.get(name) ?? meanAndSd(x);
     const sc = spec.scale[i] ?? sd;
     if (!(sc > 0)) {
       throw new InputError(

@@ -7,18 +7,19 @@ import type { PolynomialTermSpec } from '../../config/types.js';
 import { InputError, clip } from '../../core/errors.js';
 import { polynomialColumns } from '../../kernels/index.js';
 import { meanAndSd } from '../stats.js';
-import type { Term, TrainingColumns } from './types.js';
+import type { Term, TrainingColumns, TrainingStats } from './types.js';
 
 /**
- * Fixes shift and scale from the training column and returns the term.
+ * Fixes shift and scale from the training column (or from `stats`, measured over every training
+ * row when the column is a sample) and returns the term.
  * @throws InputError `constant-input` when the default scale would be 0 (a constant column)
  */
-export function polynomialTerm(spec: PolynomialTermSpec, training: TrainingColumns, file: string): Term {
+export function polynomialTerm(spec: PolynomialTermSpec, training: TrainingColumns, file: string, stats?: TrainingStats): Term {
   const x = training.get(spec.of) as Float64Array;
   let shift = spec.shift;
   let scale = spec.scale;
   if (shift === null || scale === null) {
-    const { mean, sd } = meanAndSd(x);
+    const { mean, sd } = stats?.get(spec.of) ?? meanAndSd(x);
     shift ??= mean;
     if (scale === null) {
       if (!(sd > 0)) {

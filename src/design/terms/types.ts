@@ -42,3 +42,11 @@ export type TrainingColumns = ReadonlyMap<string, Float64Array>;
 
 /** Training levels (text order) of each category column, by name; their codes are the columns' values. */
 export type TrainingLevels = ReadonlyMap<string, readonly string[]>;
+
+/**
+ * Mean and population standard deviation of input columns measured over every training row, by
+ * column name, when the training columns at hand are only a sample (a streamed training file:
+ * data/load-model-data.ts). Polynomial terms take their default shift and scale from here when a
+ * column is listed, so that they equal the full-data ones; absent: from the columns themselves.
+ */
+export type TrainingStats = ReadonlyMap<string, { mean: number; sd: number }>;
