@@ -32830,6 +32830,33 @@ function jsonMetrics(record) {
 
 /***/ }),
 
+/***/ 6736:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   Q: () => (/* binding */ mix32)
+/* harmony export */ });
+/**
+ * One 32-bit integer hash finaliser, shared by the seeded generators and the row hashes.
+ */
+/**
+ * The 32-bit integer finaliser of diagnostics/random.ts's `seededRandom` and of the streamed sample's
+ * generator (data/row-source.ts) ("lowbias32", C. Wellons, "Prospecting for
+ * hash functions", 2018): xor-shift, multiply, xor-shift, multiply, xor-shift; every input bit
+ * reaches every output bit. Returns an unsigned 32-bit integer. Leakage hashes rows with it too.
+ */
+function mix32(z) {
+    z ^= z >>> 16;
+    z = Math.imul(z, 0x7feb352d);
+    z ^= z >>> 15;
+    z = Math.imul(z, 0x846ca68b);
+    z ^= z >>> 16;
+    return z >>> 0;
+}
+
+
+/***/ }),
+
 /***/ 3323:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
@@ -35051,8 +35078,8 @@ function ridgePath(data, lambdas, penalised) {
 
 // EXTERNAL MODULE: ./src/diagnostics/cross-validation.ts
 var cross_validation = __nccwpck_require__(4733);
-// EXTERNAL MODULE: ./src/diagnostics/folds.ts
-var diagnostics_folds = __nccwpck_require__(9236);
+// EXTERNAL MODULE: ./src/diagnostics/folds.ts + 1 modules
+var diagnostics_folds = __nccwpck_require__(7694);
 // EXTERNAL MODULE: ./src/core/deadline.ts
 var deadline = __nccwpck_require__(6343);
 // EXTERNAL MODULE: ./src/design/weighted-design.ts
@@ -35423,7 +35450,7 @@ function sweepComplexity(descriptor, design, train, fit, options = {}) {
 /* harmony import */ var _fit_index_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(2450);
 /* harmony import */ var _design_blocks_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(7254);
 /* harmony import */ var _kernels_index_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(8667);
-/* harmony import */ var _folds_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(9236);
+/* harmony import */ var _folds_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(7694);
 /* harmony import */ var _core_deadline_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(6343);
 
 
@@ -35841,16 +35868,79 @@ class CrossValidationScorer {
 
 /***/ }),
 
-/***/ 9236:
+/***/ 7694:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
-/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   Fe: () => (/* binding */ foldIdsOf),
-/* harmony export */   g7: () => (/* binding */ streamedFolds),
-/* harmony export */   oF: () => (/* binding */ assignFolds)
-/* harmony export */ });
-/* unused harmony export foldSizes */
-/* harmony import */ var _random_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(5089);
+
+// EXPORTS
+__nccwpck_require__.d(__webpack_exports__, {
+  oF: () => (/* binding */ assignFolds),
+  Fe: () => (/* binding */ foldIdsOf),
+  g7: () => (/* binding */ streamedFolds)
+});
+
+// UNUSED EXPORTS: foldSizes
+
+// EXTERNAL MODULE: ./src/core/mix32.ts
+var mix32 = __nccwpck_require__(6736);
+;// CONCATENATED MODULE: ./src/diagnostics/random.ts
+/**
+ * A small seeded pseudo-random generator, so that shuffled cross-validation folds are the same on
+ * every machine and every run with the same seed.
+ */
+
+/**
+ * Returns a generator of uniform numbers in [0, 1) from a 32-bit seed. The state advances by the
+ * odd constant 0x9e3779b9 (the golden-ratio increment of a Weyl sequence) and each output is the
+ * state passed through a 32-bit integer finaliser (two xor-shift-multiply rounds, the constants of
+ * the "lowbias32" mixer published by C. Wellons, "Prospecting for hash functions", 2018). Period
+ * 2^32; good enough to shuffle rows, not for cryptography.
+ *
+ * @param seed any finite number; it is reduced to an unsigned 32-bit integer (the fraction is dropped)
+ * @returns a function giving the next number in [0, 1)
+ * @throws RangeError when the seed is not finite
+ */
+function seededRandom(seed) {
+    if (!Number.isFinite(seed))
+        throw new RangeError(`seededRandom: seed must be a finite number, got ${String(seed)}`);
+    let state = Math.trunc(seed) >>> 0;
+    return () => {
+        state = (state + 0x9e3779b9) >>> 0;
+        return (0,mix32/* mix32 */.Q)(state) / 4294967296;
+    };
+}
+/** The 32-bit integer finaliser (core/mix32.ts), here for the modules that hash or shuffle. */
+
+/**
+ * A uniformly random permutation of 0..n-1 (Fisher-Yates shuffle, Durstenfeld's in-place form;
+ * Knuth, The Art of Computer Programming vol. 2, 3rd ed., algorithm 3.4.2 P).
+ *
+ * @param n length (a non-negative integer)
+ * @param random uniform numbers in [0, 1)
+ * @returns Int32Array of length n
+ */
+function permutation(n, random) {
+    const out = identity(n);
+    shuffle(out, random);
+    return out;
+}
+// One loop per function (see DEVELOPERS.md, "Writing hot loops").
+function identity(n) {
+    const out = new Int32Array(n);
+    for (let i = 0; i < n; i++)
+        out[i] = i;
+    return out;
+}
+function shuffle(out, random) {
+    for (let i = out.length - 1; i > 0; i--) {
+        const j = Math.floor(random() * (i + 1));
+        const t = out[i];
+        out[i] = out[j];
+        out[j] = t;
+    }
+}
+
+;// CONCATENATED MODULE: ./src/diagnostics/folds.ts
 
 /**
  * Fold sizes of k-fold cross-validation on n rows: the first n mod k folds hold floor(n/k) + 1
@@ -35885,7 +35975,7 @@ function assignFolds(n, k, order, seed) {
     const kk = Math.max(1, Math.min(k, n));
     const sizes = foldSizes(n, kk);
     const foldOf = new Int32Array(n);
-    const perm = order === 'shuffled' ? (0,_random_js__WEBPACK_IMPORTED_MODULE_0__/* .permutation */ .dL)(n, (0,_random_js__WEBPACK_IMPORTED_MODULE_0__/* .seededRandom */ .Is)(seed)) : null;
+    const perm = order === 'shuffled' ? permutation(n, seededRandom(seed)) : null;
     let pos = 0;
     for (let f = 0; f < kk; f++)
         pos = markFold(foldOf, perm, pos, sizes[f], f);
@@ -35963,7 +36053,7 @@ function shuffledFolds(bounds, n, seed, start, m, out) {
         bits += 2;
     const half = bits / 2;
     const mask = 2 ** half - 1;
-    const key = (0,_random_js__WEBPACK_IMPORTED_MODULE_0__/* .mix32 */ .QV)(Math.trunc(seed) >>> 0);
+    const key = (0,mix32/* mix32 */.Q)(Math.trunc(seed) >>> 0);
     for (let i = 0; i < m; i++) {
         const position = feistelIndex(start + i, n, half, mask, key);
         // Binary search of the fold whose positions hold it.
@@ -35990,7 +36080,7 @@ function feistelIndex(x, n, half, mask, key) {
         let left = Math.floor(v / 2 ** half);
         let right = v % 2 ** half;
         for (let round = 0; round < 4; round++) {
-            const next = (left ^ ((0,_random_js__WEBPACK_IMPORTED_MODULE_0__/* .mix32 */ .QV)((key ^ Math.imul(round + 1, 0x9e3779b1) ^ Math.imul(right, 0x85ebca6b)) >>> 0) & mask)) >>> 0;
+            const next = (left ^ ((0,mix32/* mix32 */.Q)((key ^ Math.imul(round + 1, 0x9e3779b1) ^ Math.imul(right, 0x85ebca6b)) >>> 0) & mask)) >>> 0;
             left = right;
             right = next;
         }
@@ -36166,83 +36256,6 @@ function radixSort(a, scratch) {
         }
     }
     return a;
-}
-
-
-/***/ }),
-
-/***/ 5089:
-/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
-
-/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   Is: () => (/* binding */ seededRandom),
-/* harmony export */   QV: () => (/* binding */ mix32),
-/* harmony export */   dL: () => (/* binding */ permutation)
-/* harmony export */ });
-/**
- * A small seeded pseudo-random generator, so that shuffled cross-validation folds are the same on
- * every machine and every run with the same seed.
- */
-/**
- * Returns a generator of uniform numbers in [0, 1) from a 32-bit seed. The state advances by the
- * odd constant 0x9e3779b9 (the golden-ratio increment of a Weyl sequence) and each output is the
- * state passed through a 32-bit integer finaliser (two xor-shift-multiply rounds, the constants of
- * the "lowbias32" mixer published by C. Wellons, "Prospecting for hash functions", 2018). Period
- * 2^32; good enough to shuffle rows, not for cryptography.
- *
- * @param seed any finite number; it is reduced to an unsigned 32-bit integer (the fraction is dropped)
- * @returns a function giving the next number in [0, 1)
- * @throws RangeError when the seed is not finite
- */
-function seededRandom(seed) {
-    if (!Number.isFinite(seed))
-        throw new RangeError(`seededRandom: seed must be a finite number, got ${String(seed)}`);
-    let state = Math.trunc(seed) >>> 0;
-    return () => {
-        state = (state + 0x9e3779b9) >>> 0;
-        return mix32(state) / 4294967296;
-    };
-}
-/**
- * The 32-bit integer finaliser of {@link seededRandom} ("lowbias32", C. Wellons, "Prospecting for
- * hash functions", 2018): xor-shift, multiply, xor-shift, multiply, xor-shift; every input bit
- * reaches every output bit. Returns an unsigned 32-bit integer. Leakage hashes rows with it too.
- */
-function mix32(z) {
-    z ^= z >>> 16;
-    z = Math.imul(z, 0x7feb352d);
-    z ^= z >>> 15;
-    z = Math.imul(z, 0x846ca68b);
-    z ^= z >>> 16;
-    return z >>> 0;
-}
-/**
- * A uniformly random permutation of 0..n-1 (Fisher-Yates shuffle, Durstenfeld's in-place form;
- * Knuth, The Art of Computer Programming vol. 2, 3rd ed., algorithm 3.4.2 P).
- *
- * @param n length (a non-negative integer)
- * @param random uniform numbers in [0, 1)
- * @returns Int32Array of length n
- */
-function permutation(n, random) {
-    const out = identity(n);
-    shuffle(out, random);
-    return out;
-}
-// One loop per function (see DEVELOPERS.md, "Writing hot loops").
-function identity(n) {
-    const out = new Int32Array(n);
-    for (let i = 0; i < n; i++)
-        out[i] = i;
-    return out;
-}
-function shuffle(out, random) {
-    for (let i = out.length - 1; i > 0; i--) {
-        const j = Math.floor(random() * (i + 1));
-        const t = out[i];
-        out[i] = out[j];
-        out[j] = t;
-    }
 }
 
 
@@ -50126,10 +50139,10 @@ var src_checks = __nccwpck_require__(1550);
 var core_deadline = __nccwpck_require__(6343);
 // EXTERNAL MODULE: ./src/diagnostics/cross-validation.ts
 var cross_validation = __nccwpck_require__(4733);
-// EXTERNAL MODULE: ./src/diagnostics/folds.ts
-var diagnostics_folds = __nccwpck_require__(9236);
-// EXTERNAL MODULE: ./src/diagnostics/random.ts
-var random = __nccwpck_require__(5089);
+// EXTERNAL MODULE: ./src/diagnostics/folds.ts + 1 modules
+var diagnostics_folds = __nccwpck_require__(7694);
+// EXTERNAL MODULE: ./src/core/mix32.ts
+var mix32 = __nccwpck_require__(6736);
 ;// CONCATENATED MODULE: ./src/diagnostics/leakage.ts
 
 /** How many line numbers of each file to report. */
@@ -50150,7 +50163,7 @@ function rowHash(columns, i) {
         h = Math.imul(h ^ (h >>> 15) ^ u32[1], 0x85ebca6b);
         h ^= h >>> 13;
     }
-    return (0,random/* mix32 */.QV)(h);
+    return (0,mix32/* mix32 */.Q)(h);
 }
 function sameInputs(a, i, b, j) {
     for (let c = 0; c < a.length; c++)
@@ -50161,7 +50174,7 @@ function sameInputs(a, i, b, j) {
 /** Hash of row i's inputs and target (the target folded into {@link rowHash} of the inputs). */
 function rowTargetHash(inputHash, y, i) {
     f64[0] = y[i] + 0;
-    return (0,random/* mix32 */.QV)(Math.imul(Math.imul(inputHash ^ u32[0], 0x9e3779b1) ^ u32[1], 0x85ebca6b));
+    return (0,mix32/* mix32 */.Q)(Math.imul(Math.imul(inputHash ^ u32[0], 0x9e3779b1) ^ u32[1], 0x85ebca6b));
 }
 function newTable(rows) {
     let size = 1024;
@@ -52034,6 +52047,17 @@ async function* scan(open, path, settings, onHeader, headerOnly, recycle, counts
 }
 
 ;// CONCATENATED MODULE: ./src/data/row-source.ts
+/**
+ * Where the passes over a model's training rows get them: from columns held in memory (today's
+ * path, {@link memoryRowSource}), or streamed again from the file on every pass
+ * ({@link fileRowSource}) for a training file too large to hold, so that memory does not grow
+ * with the rows. Both hand out the rows in file order, in chunks of consecutive rows.
+ *
+ * Which one a model takes: {@link streamsTrainingFile}. A streamed model keeps a bounded sample
+ * of its training rows in memory ({@link RowReservoir}) for the diagnostics that need rows at
+ * hand (swing, spikes, the complexity sweep, charts); docs/scale.md describes what each uses.
+ */
+
 
 
 /**
@@ -52177,13 +52201,7 @@ class RowReservoir {
     }
     #mix() {
         this.#state = (this.#state + 0x9e3779b9) >>> 0;
-        let z = this.#state;
-        z ^= z >>> 16;
-        z = Math.imul(z, 0x7feb352d);
-        z ^= z >>> 15;
-        z = Math.imul(z, 0x846ca68b);
-        z ^= z >>> 16;
-        return z >>> 0;
+        return (0,mix32/* mix32 */.Q)(this.#state);
     }
 }
 

@@ -8404,6 +8404,33 @@ function jsonMetrics(record) {
 
 /***/ }),
 
+/***/ 6736:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   Q: () => (/* binding */ mix32)
+/* harmony export */ });
+/**
+ * One 32-bit integer hash finaliser, shared by the seeded generators and the row hashes.
+ */
+/**
+ * The 32-bit integer finaliser of diagnostics/random.ts's `seededRandom` and of the streamed sample's
+ * generator (data/row-source.ts) ("lowbias32", C. Wellons, "Prospecting for
+ * hash functions", 2018): xor-shift, multiply, xor-shift, multiply, xor-shift; every input bit
+ * reaches every output bit. Returns an unsigned 32-bit integer. Leakage hashes rows with it too.
+ */
+function mix32(z) {
+    z ^= z >>> 16;
+    z = Math.imul(z, 0x7feb352d);
+    z ^= z >>> 15;
+    z = Math.imul(z, 0x846ca68b);
+    z ^= z >>> 16;
+    return z >>> 0;
+}
+
+
+/***/ }),
+
 /***/ 761:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
@@ -9107,7 +9134,7 @@ function partLines(data, lines) {
 
 /***/ }),
 
-/***/ 6736:
+/***/ 4355:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -9816,7 +9843,7 @@ class FastReader {
 }
 
 // EXTERNAL MODULE: ./src/data/gzip-stream.ts + 2 modules
-var gzip_stream = __nccwpck_require__(6736);
+var gzip_stream = __nccwpck_require__(4355);
 ;// CONCATENATED MODULE: ./src/data/table.ts
 /**
  * CSV data files to numeric columns.
@@ -12312,6 +12339,7 @@ class CrossValidationScorer {
 /* harmony export */ });
 /* unused harmony export foldSizes */
 /* harmony import */ var _random_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(5089);
+/* harmony import */ var _random_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(6736);
 
 /**
  * Fold sizes of k-fold cross-validation on n rows: the first n mod k folds hold floor(n/k) + 1
@@ -12424,7 +12452,7 @@ function shuffledFolds(bounds, n, seed, start, m, out) {
         bits += 2;
     const half = bits / 2;
     const mask = 2 ** half - 1;
-    const key = (0,_random_js__WEBPACK_IMPORTED_MODULE_0__/* .mix32 */ .QV)(Math.trunc(seed) >>> 0);
+    const key = (0,_random_js__WEBPACK_IMPORTED_MODULE_1__/* .mix32 */ .Q)(Math.trunc(seed) >>> 0);
     for (let i = 0; i < m; i++) {
         const position = feistelIndex(start + i, n, half, mask, key);
         // Binary search of the fold whose positions hold it.
@@ -12451,7 +12479,7 @@ function feistelIndex(x, n, half, mask, key) {
         let left = Math.floor(v / 2 ** half);
         let right = v % 2 ** half;
         for (let round = 0; round < 4; round++) {
-            const next = (left ^ ((0,_random_js__WEBPACK_IMPORTED_MODULE_0__/* .mix32 */ .QV)((key ^ Math.imul(round + 1, 0x9e3779b1) ^ Math.imul(right, 0x85ebca6b)) >>> 0) & mask)) >>> 0;
+            const next = (left ^ ((0,_random_js__WEBPACK_IMPORTED_MODULE_1__/* .mix32 */ .Q)((key ^ Math.imul(round + 1, 0x9e3779b1) ^ Math.imul(right, 0x85ebca6b)) >>> 0) & mask)) >>> 0;
             left = right;
             right = next;
         }
@@ -12637,13 +12665,14 @@ function radixSort(a, scratch) {
 
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
 /* harmony export */   Is: () => (/* binding */ seededRandom),
-/* harmony export */   QV: () => (/* binding */ mix32),
 /* harmony export */   dL: () => (/* binding */ permutation)
 /* harmony export */ });
+/* harmony import */ var _core_mix32_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(6736);
 /**
  * A small seeded pseudo-random generator, so that shuffled cross-validation folds are the same on
  * every machine and every run with the same seed.
  */
+
 /**
  * Returns a generator of uniform numbers in [0, 1) from a 32-bit seed. The state advances by the
  * odd constant 0x9e3779b9 (the golden-ratio increment of a Weyl sequence) and each output is the
@@ -12661,22 +12690,11 @@ function seededRandom(seed) {
     let state = Math.trunc(seed) >>> 0;
     return () => {
         state = (state + 0x9e3779b9) >>> 0;
-        return mix32(state) / 4294967296;
+        return (0,_core_mix32_js__WEBPACK_IMPORTED_MODULE_0__/* .mix32 */ .Q)(state) / 4294967296;
     };
 }
-/**
- * The 32-bit integer finaliser of {@link seededRandom} ("lowbias32", C. Wellons, "Prospecting for
- * hash functions", 2018): xor-shift, multiply, xor-shift, multiply, xor-shift; every input bit
- * reaches every output bit. Returns an unsigned 32-bit integer. Leakage hashes rows with it too.
- */
-function mix32(z) {
-    z ^= z >>> 16;
-    z = Math.imul(z, 0x7feb352d);
-    z ^= z >>> 15;
-    z = Math.imul(z, 0x846ca68b);
-    z ^= z >>> 16;
-    return z >>> 0;
-}
+/** The 32-bit integer finaliser (core/mix32.ts), here for the modules that hash or shuffle. */
+
 /**
  * A uniformly random permutation of 0..n-1 (Fisher-Yates shuffle, Durstenfeld's in-place form;
  * Knuth, The Art of Computer Programming vol. 2, 3rd ed., algorithm 3.4.2 P).
@@ -18765,8 +18783,8 @@ var core_deadline = __nccwpck_require__(2091);
 var cross_validation = __nccwpck_require__(7114);
 // EXTERNAL MODULE: ./src/diagnostics/folds.ts
 var diagnostics_folds = __nccwpck_require__(9236);
-// EXTERNAL MODULE: ./src/diagnostics/random.ts
-var random = __nccwpck_require__(5089);
+// EXTERNAL MODULE: ./src/core/mix32.ts
+var mix32 = __nccwpck_require__(6736);
 ;// CONCATENATED MODULE: ./src/diagnostics/leakage.ts
 
 /** How many line numbers of each file to report. */
@@ -18787,7 +18805,7 @@ function rowHash(columns, i) {
         h = Math.imul(h ^ (h >>> 15) ^ u32[1], 0x85ebca6b);
         h ^= h >>> 13;
     }
-    return (0,random/* mix32 */.QV)(h);
+    return (0,mix32/* mix32 */.Q)(h);
 }
 function sameInputs(a, i, b, j) {
     for (let c = 0; c < a.length; c++)
@@ -18798,7 +18816,7 @@ function sameInputs(a, i, b, j) {
 /** Hash of row i's inputs and target (the target folded into {@link rowHash} of the inputs). */
 function rowTargetHash(inputHash, y, i) {
     f64[0] = y[i] + 0;
-    return (0,random/* mix32 */.QV)(Math.imul(Math.imul(inputHash ^ u32[0], 0x9e3779b1) ^ u32[1], 0x85ebca6b));
+    return (0,mix32/* mix32 */.Q)(Math.imul(Math.imul(inputHash ^ u32[0], 0x9e3779b1) ^ u32[1], 0x85ebca6b));
 }
 function newTable(rows) {
     let size = 1024;
@@ -19891,10 +19909,21 @@ function buildClassifierChartData(model, maxPoints = MAX_CHART_POINTS) {
 }
 
 // EXTERNAL MODULE: ./src/data/gzip-stream.ts + 2 modules
-var gzip_stream = __nccwpck_require__(6736);
+var gzip_stream = __nccwpck_require__(4355);
 // EXTERNAL MODULE: ./src/data/table.ts + 1 modules
 var data_table = __nccwpck_require__(8785);
 ;// CONCATENATED MODULE: ./src/data/row-source.ts
+/**
+ * Where the passes over a model's training rows get them: from columns held in memory (today's
+ * path, {@link memoryRowSource}), or streamed again from the file on every pass
+ * ({@link fileRowSource}) for a training file too large to hold, so that memory does not grow
+ * with the rows. Both hand out the rows in file order, in chunks of consecutive rows.
+ *
+ * Which one a model takes: {@link streamsTrainingFile}. A streamed model keeps a bounded sample
+ * of its training rows in memory ({@link RowReservoir}) for the diagnostics that need rows at
+ * hand (swing, spikes, the complexity sweep, charts); docs/scale.md describes what each uses.
+ */
+
 
 
 /**
@@ -20038,13 +20067,7 @@ class RowReservoir {
     }
     #mix() {
         this.#state = (this.#state + 0x9e3779b9) >>> 0;
-        let z = this.#state;
-        z ^= z >>> 16;
-        z = Math.imul(z, 0x7feb352d);
-        z ^= z >>> 15;
-        z = Math.imul(z, 0x846ca68b);
-        z ^= z >>> 16;
-        return z >>> 0;
+        return (0,mix32/* mix32 */.Q)(this.#state);
     }
 }
 

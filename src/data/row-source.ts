@@ -8,6 +8,7 @@
  * of its training rows in memory ({@link RowReservoir}) for the diagnostics that need rows at
  * hand (swing, spikes, the complexity sweep, charts); docs/scale.md describes what each uses.
  */
+import { mix32 } from '../core/mix32.js';
 import type { RepoReader } from '../repo/types.js';
 import type { CsvFormat, SplitFilter } from './csv-format.js';
 import { isGzipPath } from './gzip-stream.js';
@@ -197,12 +198,6 @@ export class RowReservoir {
 
   #mix(): number {
     this.#state = (this.#state + 0x9e3779b9) >>> 0;
-    let z = this.#state;
-    z ^= z >>> 16;
-    z = Math.imul(z, 0x7feb352d);
-    z ^= z >>> 15;
-    z = Math.imul(z, 0x846ca68b);
-    z ^= z >>> 16;
-    return z >>> 0;
+    return mix32(this.#state);
   }
 }

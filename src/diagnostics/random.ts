@@ -2,6 +2,7 @@
  * A small seeded pseudo-random generator, so that shuffled cross-validation folds are the same on
  * every machine and every run with the same seed.
  */
+import { mix32 } from '../core/mix32.js';
 
 /**
  * Returns a generator of uniform numbers in [0, 1) from a 32-bit seed. The state advances by the
@@ -23,19 +24,8 @@ export function seededRandom(seed: number): () => number {
   };
 }
 
-/**
- * The 32-bit integer finaliser of {@link seededRandom} ("lowbias32", C. Wellons, "Prospecting for
- * hash functions", 2018): xor-shift, multiply, xor-shift, multiply, xor-shift; every input bit
- * reaches every output bit. Returns an unsigned 32-bit integer. Leakage hashes rows with it too.
- */
-export function mix32(z: number): number {
-  z ^= z >>> 16;
-  z = Math.imul(z, 0x7feb352d);
-  z ^= z >>> 15;
-  z = Math.imul(z, 0x846ca68b);
-  z ^= z >>> 16;
-  return z >>> 0;
-}
+/** The 32-bit integer finaliser (core/mix32.ts), here for the modules that hash or shuffle. */
+export { mix32 };
 
 /**
  * A uniformly random permutation of 0..n-1 (Fisher-Yates shuffle, Durstenfeld's in-place form;
