@@ -5,11 +5,19 @@ import type { Descriptor, SettingsFile, Weighting } from '../config/types.js';
 import { InputError, clip, quoteValue } from '../core/errors.js';
 import type { ModelData } from './model-data.js';
 import { readTable, type Table } from './table.js';
-import { placeOfLine, type DataPart } from './data-parts.js';
+import { partsLabel, placeOfLine, type DataPart } from './data-parts.js';
 import { levelCodes, trainingLevels } from './levels.js';
 import { readTextColumns } from './text-columns.js';
 import type { RepoReader } from '../repo/types.js';
-import { fileRowSource, RowReservoir, SAMPLE_ROWS, streamsTrainingFile, type RowChunk, type RowSource } from './row-source.js';
+import {
+  fileRowSource,
+  RowReservoir,
+  SAMPLE_ROWS,
+  streamsTrainingData,
+  trainingFileSizes,
+  type RowChunk,
+  type RowSource,
+} from './row-source.js';
 
 /** Training and hold-out columns of one model. */
 export interface ModelTables {
@@ -20,8 +28,9 @@ export interface ModelTables {
   /** Training levels (text order) of each category column; the columns hold their codes. */
   levels?: Map<string, string[]>;
   /**
-   * Present when the training file streams (row-source.ts): `train` then holds a seeded sample of
-   * at most {@link SAMPLE_ROWS} rows (every row when the file has no more), `trainColumns` its
+   * Present when the training file (or its parts together) streams (row-source.ts): `train` then
+   * holds a seeded sample of at most {@link SAMPLE_ROWS} rows (every row when the file has no
+   * more; read from parts, with the `parts` list and table-wide lines), `trainColumns` its
    * columns, and this the source of every row with the figures of the whole file's target.
    */
   streamed?: StreamedTraining;
@@ -30,7 +39,7 @@ export interface ModelTables {
 /** The training rows of a streamed model: their source and what the sampling read measured. */
 export interface StreamedTraining {
   source: RowSource;
-  /** Rows in the training file. */
+  /** Rows in the training file (all parts together). */
   rows: number;
   /** Mean and population standard deviation of the target over every row (Chan et al.'s merge of chunk figures). */
   targetMean: number;
@@ -175,8 +184,10 @@ export async function loadModelData(
           ...rowWeights(weighting, table.columns.get(weighting.column) as Float64Array, rows.lines, rows.rows, rows.file, rows.parts),
         };
   };
-  // A training file read from parts is held in memory (bounded by `caps.max_file_mb` over all parts).
-  if (data.trainParts === undefined && streamsTrainingFile(data.train, await repo.size(data.train), options.streamAboveBytes)) {
+  // Training data streams when its files together (one, or the parts) are estimated too large to hold.
+  const trainParts = data.trainParts;
+  if (streamsTrainingData(await trainingFileSizes(repo, data.train, trainParts), options.streamAboveBytes)) {
+    const trainLabel = trainParts === undefined ? data.train : partsLabel(trainParts);
     const why =
       categories.size > 0
         ? 'a category term'
@@ -188,13 +199,13 @@ export async function loadModelData(
     if (why !== null) {
       throw new InputError(
         'too-large-to-hold',
-        `the training file ${clip(data.train)} is too large to hold in memory and is read as a stream, which a model with ${why} does not support yet; expected a smaller file, or a model without it`,
+        `${trainParts === undefined ? 'the training file' : `the ${trainParts.length} training parts`} ${clip(trainLabel)} ${trainParts === undefined ? 'is' : 'are'} too large to hold in memory and ${trainParts === undefined ? 'is' : 'are'} read as a stream, which a model with ${why} does not support yet; expected ${trainParts === undefined ? 'a smaller file' : 'smaller parts'}, or a model without it`,
         { file: descriptor.file, line: data.lines.train, key: 'data.train' },
       );
     }
     const split = data.split ?? null;
     const counts = { dropped: 0 };
-    const source = fileRowSource(repo, data.train, {
+    const source = fileRowSource(repo, trainParts ?? data.train, {
       inputs,
       target: data.target,
       maxBytes,
@@ -206,8 +217,11 @@ export async function loadModelData(
     const reservoir = new RowReservoir(inputs.length, options.sampleRows ?? SAMPLE_ROWS, descriptor.fit.seed);
     const target = { n: 0, mean: 0, m2: 0, min: Infinity, max: -Infinity };
     const inputFigures = inputs.map(() => ({ n: 0, mean: 0, m2: 0, min: Infinity, max: -Infinity }));
+    // Read from parts: the parts with their line offsets, complete once the read has reached the last.
+    let parts: DataPart[] | undefined;
     try {
       await source.forEachChunk((chunk) => {
+        parts = chunk.parts;
         options.onTrainChunk?.(chunk);
         reservoir.add(chunk);
         addTargetFigures(target, chunk.y, chunk.rows);
@@ -217,14 +231,25 @@ export async function loadModelData(
       throw withAsker(error, descriptor);
     }
     if (reservoir.seen === 0) {
-      throw new InputError('no-rows', `\`${clip(data.train)}\` has no data rows; expected at least one row`, {
+      // The words of the in-memory path (`load` above), which also names the parts and why none are left.
+      const why = split
+        ? ` labelled ${quoteValue(split.train)} in column ${quoteValue(split.column)}`
+        : counts.dropped > 0
+          ? ` left after dropping ${counts.dropped} with missing cells`
+          : '';
+      const named =
+        trainParts === undefined
+          ? `\`${clip(data.train)}\` has`
+          : `the ${trainParts.length} parts of \`data.train\` (${clip(trainLabel)}) have`;
+      throw new InputError('no-rows', `${named} no data rows${why}; expected at least one row`, {
         file: descriptor.file,
         line: data.lines.train,
         key: 'data.train',
       });
     }
     const sample: ModelData = {
-      ...reservoir.rows(data.train),
+      ...reservoir.rows(trainLabel),
+      ...(parts !== undefined ? { parts } : {}),
       sampleOf: reservoir.seen,
       ...(format?.missing === 'drop' ? { dropped: counts.dropped } : {}),
     };

@@ -14,13 +14,19 @@ import type { CsvFormat, SplitFilter } from './csv-format.js';
 import { isGzipPath } from './gzip-stream.js';
 import type { ModelData } from './model-data.js';
 import { readTableChunks } from './table.js';
+import { DEFAULT_CHUNK_ROWS } from './csv-rules.js';
+import { partsLabel, type DataPart } from './data-parts.js';
 
-/** A chunk of consecutive training rows: the columns of {@link ModelData} for those rows only. */
-export type RowChunk = Pick<ModelData, 'inputs' | 'y' | 'lines' | 'rows' | 'file'>;
+/**
+ * A chunk of consecutive training rows: the columns of {@link ModelData} for those rows only. Read
+ * from parts, `file` is the parts' label, `lines` are table-wide and `parts` lists the parts
+ * reached so far with their line offsets (data-parts.ts: `placeOfLine` names a row's part and line).
+ */
+export type RowChunk = Pick<ModelData, 'inputs' | 'y' | 'lines' | 'rows' | 'file' | 'parts'>;
 
-/** The training rows of one model, handed out chunk by chunk in file order. */
+/** The training rows of one model, handed out chunk by chunk in file order (parts one after the other). */
 export interface RowSource {
-  /** Repository-relative path of the file. */
+  /** Repository-relative path of the file; read from parts, their label (data-parts.ts `partsLabel`). */
   readonly file: string;
   /** True when every pass reads the file again (the rows are never held whole). */
   readonly streamed: boolean;
@@ -63,36 +69,97 @@ export interface FileRowSourceOptions {
 }
 
 /**
- * The training rows streamed from their file through readTable's chunk interface
- * ({@link readTableChunks}: fast numeric path, general path, gzip) on every pass. Memory: one chunk
- * of `chunkRows` x (inputs + 1) doubles at a time, independent of the rows in the file.
+ * The training rows streamed from their file, or from its parts in the order given, through
+ * readTable's chunk interface ({@link readTableChunks}: fast numeric path, general path, gzip, one
+ * header check across parts) on every pass. Memory: one chunk of `chunkRows` x (inputs + 1)
+ * doubles at a time (two read from parts), independent of the rows in the file.
+ *
+ * Read from parts, the chunks are cut again across the parts' ends ({@link PartsRechunker}): every
+ * chunk but the last holds `chunkRows` rows, as from one file, so that the design's blocks, and
+ * with them every sum of the passes, are those of the same rows held in memory.
+ *
+ * @param path the file, or its parts in reading order (at least one)
  */
-export function fileRowSource(repo: RepoReader, path: string, options: FileRowSourceOptions): RowSource {
+export function fileRowSource(repo: RepoReader, path: string | readonly string[], options: FileRowSourceOptions): RowSource {
   const columns = [...options.inputs, options.target];
   const d = options.inputs.length;
+  const file = typeof path === 'string' ? path : partsLabel(path);
   return {
-    file: path,
+    file,
     streamed: true,
-    async forEachChunk(visit, chunkRows = options.chunkRows) {
+    async forEachChunk(visit, chunkRows = options.chunkRows ?? DEFAULT_CHUNK_ROWS) {
       let start = 0;
       if (options.counts) options.counts.dropped = 0;
+      const parts: DataPart[] | undefined = typeof path === 'string' ? undefined : [];
       const read = readTableChunks(repo, path, {
         columns,
         maxBytes: options.maxBytes,
-        ...(chunkRows ? { chunkRows } : {}),
+        chunkRows,
         ...(options.format ? { format: options.format } : {}),
         ...(options.split ? { split: options.split } : {}),
         ...(options.counts ? { counts: options.counts } : {}),
+        ...(parts ? { parts } : {}),
         // Every consumer copies what it keeps (the reservoir, the factors, the sums), so the reader
         // refills the same arrays: no garbage of a chunk's size per chunk.
         recycle: true,
       });
-      for await (const chunk of read) {
-        visit({ inputs: chunk.columns.slice(0, d), y: chunk.columns[d], lines: chunk.lines, rows: chunk.rows, file: path }, start);
-        start += chunk.rows;
+      if (parts === undefined) {
+        for await (const chunk of read) {
+          visit({ inputs: chunk.columns.slice(0, d), y: chunk.columns[d], lines: chunk.lines, rows: chunk.rows, file }, start);
+          start += chunk.rows;
+        }
+        return;
       }
+      const whole = new PartsRechunker(d + 1, chunkRows);
+      const hand = (rows: number): void => {
+        const cut = whole.columns.map((c) => c.subarray(0, rows));
+        visit({ inputs: cut.slice(0, d), y: cut[d], lines: whole.lines.subarray(0, rows), rows, file, parts }, start);
+        start += rows;
+      };
+      for await (const chunk of read) whole.add(chunk.columns, chunk.lines, chunk.rows, hand);
+      if (whole.rows > 0) hand(whole.rows);
     },
   };
+}
+
+/**
+ * Cuts chunks of rows again into chunks of exactly `chunkRows` rows (the last may be short),
+ * copying them into arrays of its own: the chunks of a table read from parts, which end at every
+ * part's end, become those of one file. Memory: `chunkRows` x (columns + 1/2) doubles.
+ */
+class PartsRechunker {
+  /** The rows gathered so far, column by column. */
+  readonly columns: Float64Array[];
+  readonly lines: Int32Array;
+  /** Rows gathered and not yet handed out. */
+  rows = 0;
+  readonly #size: number;
+
+  /**
+   * @param columns columns of each row
+   * @param size rows of each chunk handed out (>= 1)
+   */
+  constructor(columns: number, size: number) {
+    this.#size = size;
+    this.columns = Array.from({ length: columns }, () => new Float64Array(size));
+    this.lines = new Int32Array(size);
+  }
+
+  /** Adds `rows` rows; calls `full(size)` each time `size` rows are gathered (then starts again at 0). */
+  add(columns: readonly Float64Array[], lines: Int32Array, rows: number, full: (rows: number) => void): void {
+    let from = 0;
+    while (from < rows) {
+      const take = Math.min(rows - from, this.#size - this.rows);
+      for (let c = 0; c < this.columns.length; c++) this.columns[c].set(columns[c].subarray(from, from + take), this.rows);
+      this.lines.set(lines.subarray(from, from + take), this.rows);
+      this.rows += take;
+      from += take;
+      if (this.rows === this.#size) {
+        full(this.rows);
+        this.rows = 0;
+      }
+    }
+  }
 }
 
 /**
@@ -113,13 +180,43 @@ export const STREAM_ABOVE_BYTES = 128 * 1024 * 1024;
 export const GZIP_RATIO = 4;
 
 /**
- * Whether a training file streams: when its estimated CSV text (the stored size, times
- * {@link GZIP_RATIO} for `.gz`) is above `aboveBytes` (default {@link STREAM_ABOVE_BYTES}).
+ * Estimated CSV text of a data file in bytes: its stored size, times {@link GZIP_RATIO} for `.gz`.
+ * @param size stored size in bytes
+ */
+export function estimatedTextBytes(path: string, size: number): number {
+  return isGzipPath(path) ? size * GZIP_RATIO : size;
+}
+
+/**
+ * Whether a training file streams: when its estimated CSV text ({@link estimatedTextBytes}) is
+ * above `aboveBytes` (default {@link STREAM_ABOVE_BYTES}).
  * @param size stored size in bytes
  */
 export function streamsTrainingFile(path: string, size: number, aboveBytes: number = STREAM_ABOVE_BYTES): boolean {
-  const text = isGzipPath(path) ? size * GZIP_RATIO : size;
+  return estimatedTextBytes(path, size) > aboveBytes;
+}
+
+/**
+ * Whether training data streams, read from one file or from parts: when the estimated CSV text of
+ * all its files together (each as {@link estimatedTextBytes}, so gzip parts at {@link GZIP_RATIO}
+ * times their size) is above `aboveBytes` (default {@link STREAM_ABOVE_BYTES}).
+ * @param files each file's path and stored size in bytes (one entry for one file)
+ */
+export function streamsTrainingData(files: readonly { path: string; size: number }[], aboveBytes: number = STREAM_ABOVE_BYTES): boolean {
+  let text = 0;
+  for (const f of files) text += estimatedTextBytes(f.path, f.size);
   return text > aboveBytes;
+}
+
+/** The stored sizes of training data's files: the parts when given, else the one file. */
+export async function trainingFileSizes(
+  repo: RepoReader,
+  file: string,
+  parts: readonly string[] | undefined,
+): Promise<{ path: string; size: number }[]> {
+  const out: { path: string; size: number }[] = [];
+  for (const path of parts ?? [file]) out.push({ path, size: await repo.size(path) });
+  return out;
 }
 
 /** Rows a streamed model keeps for its sampled diagnostics: 100,000 (about 8 MB at 8 inputs). */

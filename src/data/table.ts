@@ -71,6 +71,8 @@ export interface ReadTableOptions {
    * (it must copy what it keeps). Default false.
    */
   recycle?: boolean;
+  /** readTableChunks from parts: receives each part with its line offset as reading reaches it (empty parts too). */
+  parts?: DataPart[];
 }
 
 /** A whole table's requested columns. */
@@ -121,10 +123,10 @@ export async function* readTableChunks(
       path,
       settings,
       () => undefined,
-      false,
-      undefined,
+      options.recycle === true,
+      options.counts,
       (pieces) => pieces,
-      [],
+      options.parts ?? [],
     );
     return;
   }

@@ -7,10 +7,10 @@
 import type { ClassifierContext, ClassifierCrossValidation, ClassifierShipped } from '../checks/classifier/context.js';
 import type { Descriptor, SettingsFile } from '../config/types.js';
 import { clip, InputError } from '../core/errors.js';
-import { streamsTrainingFile } from '../data/row-source.js';
+import { streamsTrainingData, trainingFileSizes } from '../data/row-source.js';
 import { loadClassifierData, type ClassLabels } from '../data/labels.js';
 import type { ModelData } from '../data/model-data.js';
-import { placeOfLine } from '../data/data-parts.js';
+import { partsLabel, placeOfLine } from '../data/data-parts.js';
 import { forEachBlock, predictRows } from '../design/blocks.js';
 import { ColumnSpread } from '../design/column-spread.js';
 import type { Design } from '../design/design-matrix.js';
@@ -58,11 +58,11 @@ export interface FittedClassifier {
 export async function fitClassifier(repo: RepoReader, descriptor: Descriptor, settings: SettingsFile): Promise<FittedClassifier> {
   // Classifiers are held in memory (their fit makes several passes of its own): a file above the
   // default file cap is refused plainly rather than left to run out of memory.
-  const file = descriptor.data.train;
-  if (streamsTrainingFile(file, await repo.size(file), CLASSIFIER_MAX_BYTES)) {
+  const { train: file, trainParts } = descriptor.data;
+  if (streamsTrainingData(await trainingFileSizes(repo, file, trainParts), CLASSIFIER_MAX_BYTES)) {
     throw new InputError(
       'too-large-to-hold',
-      `the training file ${clip(file)} is estimated at over ${CLASSIFIER_MAX_BYTES / (1024 * 1024)} MiB of CSV text; a classifier's rows are held in memory and files this large are read as a stream for regression models only; expected a smaller training file`,
+      `${trainParts === undefined ? 'the training file' : `the ${trainParts.length} training parts`} ${clip(trainParts === undefined ? file : partsLabel(trainParts))} ${trainParts === undefined ? 'is' : 'are'} estimated at over ${CLASSIFIER_MAX_BYTES / (1024 * 1024)} MiB of CSV text; a classifier's rows are held in memory and files this large are read as a stream for regression models only; expected a smaller training file`,
       { file: descriptor.file, line: descriptor.data.lines.train, key: 'data.train' },
     );
   }
