@@ -1,0 +1,122 @@
+// Bounded memory of training data in parts read as a stream (data/row-source.ts), as
+// test/run/streamed-memory.test.ts proves it for one file: the pipeline runs in a child process
+// (the sources transpiled, test/run/transpile.ts) with V8's heap capped at 192 MiB
+// (`--max-old-space-size=192`, the flag of issue 18), on generated gzip parts of 100,000 rows of 8
+// inputs each: 2 parts (200,000 rows), then 8 parts (800,000 rows). Held in memory, the 600,000
+// extra rows would add 600,000 x 10 columns x 8 bytes = 46 MiB of columns (plus their lines, the
+// fold table and the predictions); streamed, the peak resident memory must not grow by more than
+// 16 MiB between the two (chunks, sample and hold-out rows are the same size for both, and a part
+// is closed before the next is opened) and stays under 256 MiB.
+import { spawnSync } from 'node:child_process';
+import { createWriteStream, mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import { once } from 'node:events';
+import { createGzip } from 'node:zlib';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { transpileSources } from './transpile.js';
+
+const INPUTS = 8;
+const PART_ROWS = 100_000;
+
+/** Writes `rows` rows of x1..x8, y (y linear in the inputs plus a wobble) as gzip CSV. */
+async function writeGzip(file: string, rows: number, seed: number): Promise<void> {
+  const gzip = createGzip({ level: 1 });
+  const out = createWriteStream(file);
+  gzip.pipe(out);
+  let s = seed >>> 0;
+  gzip.write(`${Array.from({ length: INPUTS }, (_, j) => `x${j + 1}`).join(',')},y\n`);
+  const batch: string[] = [];
+  for (let i = 0; i < rows; i++) {
+    let y = 0;
+    const cells: string[] = [];
+    for (let j = 0; j < INPUTS; j++) {
+      s = (Math.imul(s, 1664525) + 1013904223) >>> 0;
+      const x = s / 2 ** 32;
+      y += (j + 1) * x;
+      cells.push(x.toFixed(6));
+    }
+    s = (Math.imul(s, 1664525) + 1013904223) >>> 0;
+    cells.push((y + s / 2 ** 32 - 0.5).toFixed(6));
+    batch.push(cells.join(','));
+    if (batch.length === 20000 || i === rows - 1) {
+      if (!gzip.write(`${batch.join('\n')}\n`)) await once(gzip, 'drain');
+      batch.length = 0;
+    }
+  }
+  gzip.end();
+  await once(out, 'finish');
+}
+
+const SCRIPT = `
+const [dir, root] = process.argv.slice(1);
+const { createFsRepository } = await import(dir + '/repo/fs-repository.js');
+const { loadDescriptor } = await import(dir + '/config/descriptor.js');
+const { defaultSettings } = await import(dir + '/config/settings-file.js');
+const { evaluateModel } = await import(dir + '/run/evaluate.js');
+const repo = createFsRepository(root);
+const base = defaultSettings();
+const settings = { ...base, caps: { ...base.caps, maxModelSeconds: 600 } };
+const descriptor = await loadDescriptor(repo, 'm.model.yml', settings);
+const result = await evaluateModel(repo, descriptor, settings, undefined, undefined, undefined, { streamAboveBytes: 0 });
+process.stdout.write(JSON.stringify({ maxRssKiB: process.resourceUsage().maxRSS, rows: result.rows, error: result.error, streamed: result.extra?.streamed ?? null, data: result.data ?? null }));
+`;
+
+let work = '';
+let sources: { dir: string; remove: () => void } | null = null;
+
+beforeAll(() => {
+  work = mkdtempSync(path.join(os.tmpdir(), 'fitgate-stream-parts-'));
+  sources = transpileSources();
+});
+
+afterAll(() => {
+  sources?.remove();
+  if (work) rmSync(work, { recursive: true, force: true });
+});
+
+interface Peak {
+  maxRssKiB: number;
+  rows: { train: number };
+  error: unknown;
+  streamed: unknown;
+  data: { train?: string[] } | null;
+}
+
+async function peak(parts: number): Promise<Peak> {
+  const root = path.join(work, String(parts));
+  mkdirSync(path.join(root, 'train'), { recursive: true });
+  for (let k = 0; k < parts; k++) await writeGzip(path.join(root, 'train', `part-${k + 1}.csv.gz`), PART_ROWS, 5 + k);
+  await writeGzip(path.join(root, 'holdout.csv.gz'), 20000, 99);
+  const terms = Array.from({ length: INPUTS }, (_, j) => `x${j + 1}`).join(', ');
+  writeFileSync(
+    path.join(root, 'm.model.yml'),
+    `version: 1\nname: big\ndata:\n  train: "train/part-*.csv.gz"\n  holdout: holdout.csv.gz\n  target: y\nterms:\n  - linear: [${terms}]\nfit:\n  folds: 5\n  fold_order: blocks\n`,
+  );
+  const run = spawnSync(process.execPath, ['--max-old-space-size=192', '--input-type=module', '-e', SCRIPT, sources?.dir ?? '', root], {
+    encoding: 'utf8',
+    maxBuffer: 16 * 1024 * 1024,
+  });
+  expect(run.status, run.stderr).toBe(0);
+  return JSON.parse(run.stdout);
+}
+
+describe('training data in gzip parts streamed in bounded memory (heap capped at 192 MiB)', () => {
+  it('peaks under 256 MiB and does not grow from 2 parts (200,000 rows) to 8 parts (800,000 rows)', async () => {
+    const small = await peak(2);
+    const large = await peak(8);
+    for (const [r, parts] of [
+      [small, 2],
+      [large, 8],
+    ] as const) {
+      expect(r.error).toBeNull();
+      expect(r.rows.train).toBe(parts * PART_ROWS);
+      expect(r.streamed).toMatchObject({ rows: parts * PART_ROWS, sample_rows: 100_000 });
+      expect(r.data?.train).toHaveLength(parts);
+    }
+    const mib = (kib: number): number => kib / 1024;
+    const growth = mib(large.maxRssKiB) - mib(small.maxRssKiB);
+    expect(mib(large.maxRssKiB), 'peak resident MiB at 800,000 rows').toBeLessThan(256);
+    expect(growth, `peak grew from ${mib(small.maxRssKiB).toFixed(0)} to ${mib(large.maxRssKiB).toFixed(0)} MiB`).toBeLessThan(16);
+  }, 240_000);
+});
