@@ -13,6 +13,7 @@ import { fileRowSource, streamsTrainingData } from '../../src/data/row-source.js
 import { placeOfLine } from '../../src/data/data-parts.js';
 import { createMemoryRepository } from '../../src/repo/memory-repository.js';
 import type { ModelResult } from '../../src/result/result.js';
+import type { RepoReader } from '../../src/repo/types.js';
 import { evaluateModel } from '../../src/run/evaluate.js';
 
 const TOLERANCE = 1e-9;
@@ -250,6 +251,31 @@ describe('training data in parts read as a stream against the same parts held in
     expect(result.error).toMatchObject({ code: 'too-large-to-hold', file: 'm.model.yml', line: 4 });
     expect(result.error?.message).toContain('the 2 training parts a.csv (+1 more part) are too large to hold');
     expect(result.error?.message).toContain('`data.weight`');
+  });
+
+  it('refuses a classifier whose training parts together are too large to hold, naming the parts', async () => {
+    const memory = createMemoryRepository({
+      'm.model.yml':
+        'version: 1\nname: m\ntask: classification\ndata:\n  train: [t1.csv, t2.csv]\n  holdout: t1.csv\n  target: y\nterms:\n  - linear: [x]\n',
+      't1.csv': 'x,y\n1,0\n2,1\n3,0\n4,1\n',
+      't2.csv': 'x,y\n5,0\n6,1\n7,0\n8,1\n',
+    });
+    // The same files, each part said to be 300 MiB: none over the 512 MiB a classifier may hold, both together over it.
+    const repo: RepoReader = {
+      label: memory.label,
+      resolve: (f, t, w) => memory.resolve(f, t, w),
+      isFile: (p) => memory.isFile(p),
+      entryKind: (p) => memory.entryKind(p),
+      size: async (p) => (p.startsWith('t') ? 300 * 1024 * 1024 : memory.size(p)),
+      read: (p) => memory.read(p),
+      stream: (p, c) => memory.stream(p, c),
+      glob: (g) => memory.glob(g),
+    };
+    const settings = defaultSettings();
+    const descriptor = await loadDescriptor(repo, 'm.model.yml', settings);
+    const result = await evaluateModel(repo, descriptor, settings);
+    expect(result.error).toMatchObject({ code: 'too-large-to-hold', file: 'm.model.yml', line: 5 });
+    expect(result.error?.message).toContain('the 2 training parts t1.csv (+1 more part) are estimated at over 512 MiB');
   });
 
   it('streams when the parts together are above the threshold (gzip parts judged at 4x their size)', () => {
