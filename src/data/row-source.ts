@@ -1,10 +1,10 @@
 /**
  * Where the passes over a model's training rows get them: from columns held in memory (today's
- * path, {@link memoryRowSource}), or streamed again from the file on every pass
- * ({@link fileRowSource}) for a training file too large to hold, so that memory does not grow
- * with the rows. Both hand out the rows in file order, in chunks of consecutive rows.
+ * path, {@link memoryRowSource}), or streamed again from the file, or from its parts in order, on
+ * every pass ({@link fileRowSource}) for training data too large to hold, so that memory does not
+ * grow with the rows. Both hand out the rows in file order, in chunks of consecutive rows.
  *
- * Which one a model takes: {@link streamsTrainingFile}. A streamed model keeps a bounded sample
+ * Which one a model takes: {@link streamsTrainingData} (one file: {@link streamsTrainingFile}). A streamed model keeps a bounded sample
  * of its training rows in memory ({@link RowReservoir}) for the diagnostics that need rows at
  * hand (swing, spikes, the complexity sweep, charts); docs/scale.md describes what each uses.
  */
@@ -208,7 +208,12 @@ export function streamsTrainingData(files: readonly { path: string; size: number
   return text > aboveBytes;
 }
 
-/** The stored sizes of training data's files: the parts when given, else the one file. */
+/**
+ * The stored sizes of training data's files, for {@link streamsTrainingData}.
+ * @param file the training file (`data.train`)
+ * @param parts its parts in reading order, when read from parts
+ * @returns each file's path and stored size in bytes: the parts when given, else the one file
+ */
 export async function trainingFileSizes(
   repo: RepoReader,
   file: string,
