@@ -80,9 +80,10 @@ export async function fitClassifier(repo: RepoReader, descriptor: Descriptor, se
   forEachBlock(design, train, (X, _start, m) => spread.add(X, m));
   const columnSd = spread.sd();
 
-  // With folds, each pass also keeps one factor per fold, so that the folds' first Newton steps need no pass of their own.
+  // With folds, each pass also keeps one Gram per fold, so that the folds' first Newton steps need no pass of their own.
   const parts = folds.k >= 2 ? { of: folds.foldOf, count: folds.k } : undefined;
-  const [fit] = fitLogistic(design, train, options, [{ start: warmStart(design, train, options), parts }]);
+  const [fit] = fitLogistic(design, train, options, [{ start: warmStart(design, train, options), parts, factor: true }]);
+  if (fit.weightedFactor === null) throw new Error('fitLogistic: the weighted factor asked for is missing');
   const weighted = fitFactor(fit.weightedFactor, options);
   const trainEta = predictRows(design, train, fit.coefficients);
   const holdoutEta = predictRows(design, holdout, fit.coefficients);
@@ -150,7 +151,7 @@ function warmStart(design: Design, train: ModelData, options: { ridge: number; p
  * k-fold cross-validation: the fit without each fold (the same terms, fixed from all training
  * rows, and the same ridge), started from the full fit, all folds in shared passes; the pooled
  * log-loss of the out-of-fold probabilities. Null below 2 folds. When the full fit kept its
- * per-fold factors (`full.parts`, one part per fold), each fold's first Newton step is solved
+ * per-fold Grams (`full.parts`, one part per fold), each fold's first Newton step is solved
  * from them without a pass (fit/logistic.ts, firstStepsWithout); the optimum is the same.
  */
 export function crossValidateClassifier(
@@ -162,7 +163,7 @@ export function crossValidateClassifier(
 ): ClassifierCrossValidation | null {
   const k = folds.k;
   if (k < 2) return null;
-  const steps = full.parts !== null && full.parts.factors.length === k ? firstStepsWithout(full.parts, options) : null;
+  const steps = full.parts !== null && full.parts.grams.length === k ? firstStepsWithout(full.parts, options) : null;
   const problems = Array.from({ length: k }, (_, f) => ({
     foldOf: folds.foldOf,
     exclude: f,
