@@ -92,18 +92,23 @@ export async function fitClassifier(repo: RepoReader, descriptor: Descriptor, se
   const holdoutP = probabilities(holdoutEta);
   const trainFigures = classificationFigures(train.y, trainEta, trainP, train.rows, threshold);
   const holdoutFigures = classificationFigures(holdout.y, holdoutEta, holdoutP, holdout.rows, threshold);
+  const separation = findSeparation(design, train);
+  // Without a penalty, separated rows have no finite maximum-likelihood coefficients (Albert &
+  // Anderson 1984): the stopping rule is then met only because the objective approaches 0 as the
+  // coefficients grow, so neither the fit nor its folds count as converged.
+  const unbounded = options.ridge === 0 && separation.kind !== 'none';
 
   return {
     context: {
       descriptor,
       design,
-      fit,
+      fit: unbounded ? { ...fit, converged: false } : fit,
       weighted,
       train: trainFigures,
       holdout: holdoutFigures,
       calibration: calibration(holdout.y, holdoutEta, holdout.rows),
-      crossValidation: crossValidateClassifier(design, train, folds, fit, options),
-      separation: findSeparation(design, train),
+      crossValidation: crossValidateClassifier(design, train, folds, fit, options, unbounded),
+      separation,
       shipped: shippedClassifier(descriptor, design, train, holdout, fit, trainEta, holdoutEta),
       columnSd,
       leakage: leakageOf(train, holdout),
@@ -153,6 +158,10 @@ function warmStart(design: Design, train: ModelData, options: { ridge: number; p
  * log-loss of the out-of-fold probabilities. Null below 2 folds. When the full fit kept its
  * per-fold Grams (`full.parts`, one part per fold), each fold's first Newton step is solved
  * from them without a pass (fit/logistic.ts, firstStepsWithout); the optimum is the same.
+ * With `unbounded` (ridge 0 and separated training rows: no finite optimum) the fold fits are
+ * reported as not converged, whatever the stopping rule said: their log-loss is where the
+ * iterations stopped on the way to infinite coefficients (on completely separated rows it tends
+ * to 0, the out-of-fold rows being separated by the same direction).
  */
 export function crossValidateClassifier(
   design: Design,
@@ -160,6 +169,7 @@ export function crossValidateClassifier(
   folds: Folds,
   full: LogisticFit,
   options: { ridge: number; penalised: boolean[] },
+  unbounded = false,
 ): ClassifierCrossValidation | null {
   const k = folds.k;
   if (k < 2) return null;
@@ -184,7 +194,7 @@ export function crossValidateClassifier(
     logLoss: total / 2 / train.rows,
     foldLogLoss: Array.from(foldDeviance, (d, f) => d / 2 / folds.sizes[f]),
     foldRows: [...folds.sizes],
-    converged: fits.every((x) => x.converged),
+    converged: !unbounded && fits.every((x) => x.converged),
   };
 }
 
