@@ -1,7 +1,8 @@
 /**
  * Binary logistic regression by iteratively reweighted least squares (IRLS), each Newton step
- * solved through the streaming QR engine on the weighted design, block by block (memory grows
- * with p^2 and the block size, never with rows x p).
+ * solved from the weighted Gram matrix or, when that is not certainly well conditioned, through
+ * the streaming QR engine on the weighted design, block by block (memory grows with p^2 and the
+ * block size, never with rows x p).
  *
  * Objective: F(w) = D(w) + ridge * sum over penalised j of w_j^2, with the deviance
  * D(w) = -2 sum_i [y_i log p_i + (1 - y_i) log(1 - p_i)], p_i = 1 / (1 + exp(-x_i^T w)). This is
@@ -13,6 +14,7 @@
  * working response z_i = eta_i + (y_i - p_i) / W_i, the next w minimises
  * sum_i W_i (z_i - x_i^T w)^2 + ridge ||E w||^2, i.e. the least squares of the rows
  * sqrt(W_i) x_i against sqrt(W_i) z_i with the ridge penalty rows, which the QR accumulator folds
+ * (or, equivalently, (X^T W X + ridge E) d = X^T (y - p) - ridge E w for the step d = w_new - w)
  * (W_i is floored at 1e-14 so that a saturated row keeps a finite working response; the floor
  * changes the path, not the minimiser, where the gradient X^T (y - p) - ridge E w is zero).
  *
