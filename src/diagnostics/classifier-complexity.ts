@@ -43,7 +43,7 @@ export const CLASSIFIER_SWEEP_MAX_ROWS = 20000;
  * Sweeps the classifier's complexity setting. Ridge: lambda = s x 10^t, t = 3, 2, ..., -3, with
  * s = max(current lambda, rows / 1000), plus the current lambda, largest (simplest) first, each
  * setting's fit on all the sweep's rows started from the previous one's, and its fold fits from
- * it (their first Newton step from its per-fold factors: fit/logistic.ts, firstStepsWithout). Degree: 1 .. current + 3 (at most 15). Width: current
+ * it (their first Newton step from its per-fold Grams: fit/logistic.ts, firstStepsWithout). Degree: 1 .. current + 3 (at most 15). Width: current
  * x 2^t, t = 4 .. -2. Each setting: the mean of the fold log-losses and its standard error (sample
  * sd / sqrt(k)).
  * @returns null when there is nothing to sweep or fewer than 2 folds
@@ -87,7 +87,7 @@ export function sweepClassifier(descriptor: Descriptor, design: Design, train: L
     const d = point.design;
     const options = { ridge: point.ridge, penalised: [...d.penalised] };
     // The fit on all the sweep's rows first (from the previous setting's, on the same design),
-    // keeping one factor per fold: each fold's first Newton step then needs no pass of its own.
+    // keeping one Gram per fold: each fold's first Newton step then needs no pass of its own.
     const [full] = fitLogistic(d, rows, options, [
       { parts: { of: folds.foldOf, count: folds.k }, ...(start && d === design ? { start } : {}) },
     ]);

@@ -239,6 +239,7 @@ export function simplexMax(c: Float64Array, rows: readonly Float64Array[], p: nu
     T[z + j] = -c[j];
     T[z + p + j] = c[j];
   }
+  const nonZero = new Int32Array(cols);
   const eps = 1e-12;
   let stalled = 0;
   let objective = 0;
@@ -270,11 +271,14 @@ export function simplexMax(c: Float64Array, rows: readonly Float64Array[], p: nu
     if (leave < 0) break; // unbounded cannot happen (every variable is bounded)
     const pivot = T[leave * cols + enter];
     for (let j = 0; j < cols; j++) T[leave * cols + j] /= pivot;
+    // Only the pivot row's non-zero entries change the other rows (most of its slack part is zero).
+    let nnz = 0;
+    for (let j = 0; j < cols; j++) if (T[leave * cols + j] !== 0) nonZero[nnz++] = j;
     for (let k = 0; k <= mRows; k++) {
       if (k === leave) continue;
       const f = T[k * cols + enter];
       if (f === 0) continue;
-      for (let j = 0; j < cols; j++) T[k * cols + j] -= f * T[leave * cols + j];
+      eliminate(T, k * cols, leave * cols, f, nonZero, nnz);
     }
     basis[leave] = enter;
     const now = T[z + cols - 1];
@@ -286,4 +290,12 @@ export function simplexMax(c: Float64Array, rows: readonly Float64Array[], p: nu
   const b = new Float64Array(p);
   for (let j = 0; j < p; j++) b[j] = x[j] - x[p + j];
   return b;
+}
+
+/** T[row + j] -= f T[pivot + j] for the pivot row's non-zero columns j = nonZero[t], t < nnz. */
+function eliminate(T: Float64Array, row: number, pivot: number, f: number, nonZero: Int32Array, nnz: number): void {
+  for (let t = 0; t < nnz; t++) {
+    const j = nonZero[t];
+    T[row + j] -= f * T[pivot + j];
+  }
 }

@@ -1,7 +1,8 @@
 /**
  * Binary logistic regression by iteratively reweighted least squares (IRLS), each Newton step
- * solved through the streaming QR engine on the weighted design, block by block (memory grows
- * with p^2 and the block size, never with rows x p).
+ * solved from the weighted Gram matrix or, when that is not certainly well conditioned, through
+ * the streaming QR engine on the weighted design, block by block (memory grows with p^2 and the
+ * block size, never with rows x p).
  *
  * Objective: F(w) = D(w) + ridge * sum over penalised j of w_j^2, with the deviance
  * D(w) = -2 sum_i [y_i log p_i + (1 - y_i) log(1 - p_i)], p_i = 1 / (1 + exp(-x_i^T w)). This is
@@ -13,6 +14,7 @@
  * working response z_i = eta_i + (y_i - p_i) / W_i, the next w minimises
  * sum_i W_i (z_i - x_i^T w)^2 + ridge ||E w||^2, i.e. the least squares of the rows
  * sqrt(W_i) x_i against sqrt(W_i) z_i with the ridge penalty rows, which the QR accumulator folds
+ * (or, equivalently, (X^T W X + ridge E) d = X^T (y - p) - ridge E w for the step d = w_new - w)
  * (W_i is floored at 1e-14 so that a saturated row keeps a finite working response; the floor
  * changes the path, not the minimiser, where the gradient X^T (y - p) - ridge E w is zero).
  *
@@ -26,15 +28,24 @@
  * model predicts, d^T (X^T W X + ridge E) d) is at most that, the new coefficients then taken
  * without another pass; at most 100 Newton steps.
  *
- * Shared factors for cross-validation: a fit over all rows can keep one factor per part of the
- * rows (the folds) at each pass; at the same coefficients every fold fit has the same weights
- * and working responses, so the Newton step of the fit without fold f is solved from the merge
- * of the other folds' factors ({@link firstStepsWithout}) and the fold fits, started there,
- * need one pass over the rows fewer.
+ * Gram steps (gram-step.ts): a pass accumulates the weighted Gram matrix X^T W X and the gradient
+ * X^T (y - p) instead of the QR factor (about a quarter of the multiply-adds per row), and the
+ * Newton step is solved by Cholesky when the scaled Hessian is certainly well conditioned
+ * (condition number bound at most 1e7); otherwise the problem repeats that pass at the same
+ * coefficients with the QR engine and keeps it. Both solve the same Newton step up to rounding,
+ * and the gradient that decides the optimum is summed row by row either way, so the optimum and
+ * the stopping rule are the same. A problem that asks for its weighted factor
+ * ({@link LogisticProblem.factor}) gets it from one QR pass at the returned coefficients.
+ *
+ * Shared Grams for cross-validation: a fit over all rows can keep one Gram per part of the rows
+ * (the folds) at each pass; at the same coefficients every fold fit has the same weights, so the
+ * Newton step of the fit without fold f is solved from the sum of the other folds' Grams
+ * ({@link firstStepsWithout}) and the fold fits, started there, need one pass over the rows fewer.
  */
 import { forEachBlock } from '../design/blocks.js';
 import type { Design } from '../design/design-matrix.js';
-import { addProducts } from '../kernels/index.js';
+import { addGramRows, addProducts } from '../kernels/index.js';
+import { addInto, gramSize, gramStep } from './gram-step.js';
 import { QrAccumulator } from './qr-accumulator.js';
 import { solveCoefficients } from './index.js';
 
@@ -72,33 +83,37 @@ export interface LogisticProblem {
   /** Starting coefficients (length p); default 0 but the intercept at logit(mean y). */
   start?: Float64Array;
   /**
-   * Also keep, at the coefficients of each pass, one factor and one deviance per part of the
-   * rows (`of[i]` in 0..count-1, e.g. the cross-validation folds), the problem's own factor being
-   * their merge: {@link LogisticFit.parts}. Default none.
+   * Also keep, at the coefficients of each pass, one Gram and one deviance per part of the rows
+   * (`of[i]` in 0..count-1, e.g. the cross-validation folds), the problem's own Gram being their
+   * sum: {@link LogisticFit.parts} (while the problem takes Gram steps). Default none.
    */
   parts?: { of: Int32Array; count: number };
+  /** Return the QR factor of the weighted design at the returned coefficients ({@link LogisticFit.weightedFactor}). Default false. */
+  factor?: boolean;
   /** A Newton step already prepared (see {@link firstStepsWithout}): the fit starts at its solution; `start` is then not read. */
   firstStep?: LogisticFirstStep;
 }
 
 /**
  * The first Newton step of a fit, prepared without a pass over the rows: the coefficients it
- * starts from, the problem's objective and deviance there, and the QR factor of its weighted
- * rows sqrt(W) [X | z] there.
+ * starts from, the problem's objective and deviance there, and the extended Gram of its rows
+ * there (gram-step.ts: X^T W X and the gradient X^T (y - p)).
  */
 export interface LogisticFirstStep {
   from: Float64Array;
   objective: number;
   deviance: number;
-  factor: QrAccumulator;
+  gram: Float64Array;
 }
 
-/** The per-part factors of a fit with {@link LogisticProblem.parts}, at the last coefficients evaluated. */
+/** The per-part Grams of a fit with {@link LogisticProblem.parts}, at the last coefficients accepted. */
 export interface LogisticParts {
-  /** The coefficients the factors and deviances were taken at. */
+  /** The coefficients the Grams and deviances were taken at. */
   at: Float64Array;
-  /** QR factor of each part's weighted rows sqrt(W) [X | z] (no penalty rows). */
-  factors: QrAccumulator[];
+  /** Extended Gram of each part's rows (size gramSize(p) squared, upper triangle). */
+  grams: Float64Array[];
+  /** Rows of each part. */
+  rows: Float64Array;
   /** Deviance of each part's rows. */
   deviance: Float64Array;
 }
@@ -119,9 +134,13 @@ export interface LogisticFit {
   converged: boolean;
   /** Rows fitted. */
   rows: number;
-  /** QR factor of the weighted rows sqrt(W) X at the last coefficients evaluated (no penalty rows). */
-  weightedFactor: QrAccumulator;
-  /** With {@link LogisticProblem.parts}: the factors and deviances per part at those coefficients; null otherwise (or when no pass was accepted). */
+  /**
+   * QR factor of the weighted rows sqrt(W) X (no penalty rows): with {@link LogisticProblem.factor}
+   * at the returned coefficients; otherwise at the last coefficients evaluated when the problem
+   * solved its steps with the QR engine, else null.
+   */
+  weightedFactor: QrAccumulator | null;
+  /** With {@link LogisticProblem.parts}: the Grams and deviances per part at the last coefficients accepted; null otherwise (or when no pass was accepted, or the problem left Gram steps). */
   parts: LogisticParts | null;
 }
 
@@ -140,10 +159,17 @@ interface State {
   converged: boolean;
   lastFactor: QrAccumulator | null;
   lastDeviance: number;
-  /** Per-part accumulators and deviances of the pass under way (problems with `parts`). */
-  partAcc: QrAccumulator[] | null;
+  /** Per-part Grams (one after another), rows and deviances of the pass under way (problems with `parts`, Gram steps). */
+  partGram: Float64Array | null;
+  partRows: Float64Array | null;
   partDev: Float64Array | null;
   lastParts: LogisticParts | null;
+  /** Gram steps (else the QR engine, for good). */
+  gram: boolean;
+  /** The extended Gram of the pass under way. */
+  G: Float64Array;
+  /** The last pass's Gram gave no step: the next pass, at the same coefficients with the QR engine, only solves. */
+  redo: boolean;
 }
 
 /**
@@ -180,41 +206,58 @@ export function fitLogistic(
       converged: p === 0,
       lastFactor: null,
       lastDeviance: Number.NaN,
-      partAcc: null,
+      partGram: null,
+      partRows: null,
       partDev: null,
       lastParts: null,
+      gram: true,
+      G: new Float64Array(0),
+      redo: false,
     };
     const first = problem.firstStep;
-    if (first && p > 0) {
+    const prepared = first && p > 0 ? gramStep(first.gram, first.from, options.ridge, options.penalised) : null;
+    if (first && prepared) {
       // Start after the prepared step: as if its pass had just been accepted and solved.
       s.previous = Float64Array.from(first.from);
       s.previousObjective = first.objective;
-      s.lastFactor = first.factor;
       s.lastDeviance = first.deviance;
-      s.w = solveCoefficients(first.factor, { ridge: options.ridge, penalised: options.penalised });
+      s.w = prepared.w;
       s.iterations = 1;
+    } else if (first) {
+      // The prepared Gram is not well conditioned: start where it was taken, with the QR engine.
+      s.w = Float64Array.from(first.from);
+      s.gram = false;
     } else if (!problem.start) s.w = defaultStart(design, data, problem);
     return s;
   });
+  const q = gramSize(p);
   const size = Math.max(1, Math.min(data.rows, 1 << 16));
   const eta = new Float64Array(size);
   const scale = new Float64Array(size);
   const target = new Float64Array(size);
   const index = new Int32Array(size);
   const partScale = new Float64Array(size);
-  const partTarget = new Float64Array(size);
+  const resid = new Float64Array(size);
+  const partResid = new Float64Array(size);
+  const single = new Int32Array(2);
   let work = new Float64Array(0);
   for (let guard = 0; guard < (maxIterations + 1) * (MAX_HALVINGS + 2); guard++) {
     const active = states.filter((s) => !s.done);
     if (active.length === 0) break;
     for (const s of active) {
       s.acc = new QrAccumulator(p);
+      s.G = new Float64Array(s.gram ? q * q : 0);
       s.deviance = 0;
       s.rows = 0;
       const parts = s.problem.parts;
-      if (parts) {
-        s.partAcc = Array.from({ length: parts.count }, () => new QrAccumulator(p));
+      if (parts && s.gram) {
+        s.partGram = new Float64Array(parts.count * q * q);
+        s.partRows = new Float64Array(parts.count);
         s.partDev = new Float64Array(parts.count);
+      } else {
+        s.partGram = null;
+        s.partRows = null;
+        s.partDev = null;
       }
     }
     forEachBlock(design, data, (X, start, m) => {
@@ -223,41 +266,49 @@ export function fitLogistic(
         eta.fill(0, 0, m);
         addProducts(eta, 0, X, m, s.w, p);
         const { foldOf, exclude, parts } = s.problem;
-        if (parts && s.partAcc && s.partDev) {
-          // Every row, each into its part's factor (rows of a part gathered in row order).
-          weightRowsByPart(eta, data.y, start, m, parts.of, s.partDev, scale, target);
+        if (parts && s.partGram && s.partRows && s.partDev) {
+          // Every row, each into its part's Gram (rows of a part gathered in row order).
+          weightRowsByPart(eta, data.y, start, m, parts.of, s.partDev, scale, resid);
           const offsets = sortByPart(parts.of, start, m, parts.count, index);
-          for (let q = 0; q < parts.count; q++) {
-            const r = offsets[q + 1] - offsets[q];
-            if (r === 0) continue;
-            const rows = index.subarray(offsets[q], offsets[q + 1]);
-            gather(scale, rows, r, partScale);
-            gather(target, rows, r, partTarget);
-            for (let j = 0; j < p; j++) scaleColumn(X, j * m, rows, partScale, r, work, j * r);
-            s.partAcc[q].addRows(work, partTarget, r);
-          }
+          gather(scale, index, m, partScale);
+          gather(resid, index, m, partResid);
+          addGramRows(s.partGram, q, X, m, p, index, partScale, partResid, offsets, parts.count);
+          for (let f = 0; f < parts.count; f++) s.partRows[f] += offsets[f + 1] - offsets[f];
           s.rows += m;
           continue;
         }
         const r = foldOf
-          ? weightRows(eta, data.y, start, m, foldOf, exclude ?? -1, scale, target, index)
-          : weightAllRows(eta, data.y, start, m, scale, target, index);
+          ? weightRows(eta, data.y, start, m, foldOf, exclude ?? -1, scale, target, resid, index)
+          : weightAllRows(eta, data.y, start, m, scale, target, resid, index);
         s.deviance += blockDeviance;
         s.rows += r;
-        for (let j = 0; j < p; j++) scaleColumn(X, j * m, index, scale, r, work, j * r);
-        s.acc.addRows(work, target, r);
+        if (s.gram) {
+          single[1] = r;
+          addGramRows(s.G, q, X, m, p, index, scale, resid, single, 1);
+        } else {
+          for (let j = 0; j < p; j++) scaleColumn(X, j * m, index, scale, r, work, j * r);
+          s.acc.addRows(work, target, r);
+        }
       }
     });
     for (const s of active) {
-      if (s.partAcc && s.partDev) {
-        // The problem's factor and deviance: the merge of its parts', in part order.
-        s.acc = s.partAcc[0].clone();
-        for (let q = 1; q < s.partAcc.length; q++) s.acc.merge(s.partAcc[q]);
+      if (s.partGram && s.partDev) {
+        // The problem's Gram and deviance: the sums of its parts', in part order.
+        for (let f = 0; f < s.partDev.length; f++) addInto(s.G, s.partGram.subarray(f * q * q, (f + 1) * q * q));
         s.deviance = 0;
-        for (let q = 0; q < s.partDev.length; q++) s.deviance += s.partDev[q];
+        for (let f = 0; f < s.partDev.length; f++) s.deviance += s.partDev[f];
       }
       step(s, options, maxIterations);
     }
+  }
+  for (const s of states) {
+    // Problems that asked for their factor: one QR pass at the returned coefficients, which also
+    // gives the deviance and objective there.
+    if (!s.problem.factor || p === 0) continue;
+    const at = factorAt(design, data, s.problem, s.w);
+    s.lastFactor = at.factor;
+    s.lastDeviance = at.deviance;
+    s.previousObjective = at.deviance + options.ridge * penaltySum(s.w, options.penalised);
   }
   return states.map((s) => ({
     coefficients: s.w,
@@ -267,37 +318,66 @@ export function fitLogistic(
     halvings: s.halvings,
     converged: s.converged,
     rows: s.rows,
-    weightedFactor: s.lastFactor ?? s.acc,
+    weightedFactor: s.lastFactor ?? (s.gram ? null : s.acc),
     parts: s.lastParts,
   }));
 }
 
+/** The QR factor of the weighted rows sqrt(W) [X | z] of a problem at coefficients w, and its deviance there, in one pass. */
+function factorAt(
+  design: Design,
+  data: LogisticRows,
+  problem: LogisticProblem,
+  w: Float64Array,
+): { factor: QrAccumulator; deviance: number } {
+  const p = design.p;
+  const size = Math.max(1, Math.min(data.rows, 1 << 16));
+  const eta = new Float64Array(size);
+  const scale = new Float64Array(size);
+  const target = new Float64Array(size);
+  const resid = new Float64Array(size);
+  const index = new Int32Array(size);
+  const factor = new QrAccumulator(p);
+  let deviance = 0;
+  let work = new Float64Array(0);
+  forEachBlock(design, data, (X, start, m) => {
+    if (work.length < m * p) work = new Float64Array(m * p);
+    eta.fill(0, 0, m);
+    addProducts(eta, 0, X, m, w, p);
+    const r = problem.foldOf
+      ? weightRows(eta, data.y, start, m, problem.foldOf, problem.exclude ?? -1, scale, target, resid, index)
+      : weightAllRows(eta, data.y, start, m, scale, target, resid, index);
+    deviance += blockDeviance;
+    for (let j = 0; j < p; j++) scaleColumn(X, j * m, index, scale, r, work, j * r);
+    factor.addRows(work, target, r);
+  });
+  return { factor, deviance };
+}
+
 /**
- * The first Newton step of each fit without one part of the rows, from the per-part factors of
- * a fit over all rows ({@link LogisticProblem.parts}): at the common coefficients `at` every row
- * has the same weight and working response in every such fit, so the factor of the fit without
- * part f is the merge of the other parts' factors (in part order), and its deviance the sum of
- * theirs. Each step is exactly the Newton step a pass over those rows at `at` would give (up to
- * the rounding of the merge), so cross-validation folds started from the full fit need one pass
- * fewer.
+ * The first Newton step of each fit without one part of the rows, from the per-part Grams of a
+ * fit over all rows ({@link LogisticProblem.parts}): at the common coefficients `at` every row
+ * has the same weight and residual in every such fit, so the Gram of the fit without part f is
+ * the sum of the other parts' Grams (in part order; an exact addition, no subtraction), and its
+ * deviance the sum of theirs. Each step is the Newton step a pass over those rows at `at` would
+ * give (up to the rounding of the sums), so cross-validation folds started from the full fit need
+ * one pass fewer. A fold whose summed Gram is not well conditioned starts at `at` instead.
  * @param parts the full fit's parts (at least 2)
  * @returns one prepared step per part, for {@link LogisticProblem.firstStep}
  */
 export function firstStepsWithout(parts: LogisticParts, options: LogisticOptions): LogisticFirstStep[] {
-  const k = parts.factors.length;
+  const k = parts.grams.length;
   const penalty = options.ridge * penaltySum(parts.at, options.penalised);
   const steps: LogisticFirstStep[] = [];
   for (let f = 0; f < k; f++) {
-    let factor: QrAccumulator | null = null;
+    const gram = new Float64Array(gramSize(parts.at.length) ** 2);
     let deviance = 0;
     for (let q = 0; q < k; q++) {
       if (q === f) continue;
-      if (factor === null) factor = parts.factors[q].clone();
-      else factor.merge(parts.factors[q]);
+      addInto(gram, parts.grams[q]);
       deviance += parts.deviance[q];
     }
-    if (factor === null) factor = new QrAccumulator(parts.at.length);
-    steps.push({ from: parts.at, objective: deviance + penalty, deviance, factor });
+    steps.push({ from: parts.at, objective: deviance + penalty, deviance, gram });
   }
   return steps;
 }
@@ -305,6 +385,13 @@ export function firstStepsWithout(parts: LogisticParts, options: LogisticOptions
 /** After a pass: accept the step (and solve the next), halve it, or stop. */
 function step(s: State, options: LogisticOptions, maxIterations: number): void {
   const objective = s.deviance + options.ridge * penaltySum(s.w, options.penalised);
+  if (s.redo) {
+    // The pass that was accepted, repeated at the same coefficients with the QR engine: solve only.
+    s.redo = false;
+    s.lastFactor = s.acc;
+    solveNext(s, options, objective);
+    return;
+  }
   const noise = 1e-12 * (Math.abs(s.previousObjective) + 0.1);
   if (s.previous !== null && !(objective <= s.previousObjective + noise)) {
     // Not lower: halve the step back towards the previous coefficients.
@@ -319,9 +406,17 @@ function step(s: State, options: LogisticOptions, maxIterations: number): void {
     return;
   }
   s.halvingRun = 0;
-  s.lastFactor = s.acc;
+  s.lastFactor = s.gram ? null : s.acc;
   s.lastDeviance = s.deviance;
-  if (s.partAcc && s.partDev) s.lastParts = { at: Float64Array.from(s.w), factors: s.partAcc, deviance: s.partDev };
+  s.lastParts =
+    s.partGram && s.partRows && s.partDev
+      ? {
+          at: Float64Array.from(s.w),
+          grams: Array.from(s.partDev, (_, f) => (s.partGram as Float64Array).subarray(f * s.G.length, (f + 1) * s.G.length)),
+          rows: s.partRows,
+          deviance: s.partDev,
+        }
+      : null;
   const decrease = s.previousObjective - objective;
   s.previousObjective = objective;
   if (s.previous !== null && decrease <= LOGISTIC_TOLERANCE * (Math.abs(objective) + 0.1)) {
@@ -333,13 +428,33 @@ function step(s: State, options: LogisticOptions, maxIterations: number): void {
     s.done = true;
     return;
   }
-  s.previous = Float64Array.from(s.w);
-  s.w = solveCoefficients(s.acc, { ridge: options.ridge, penalised: options.penalised });
+  solveNext(s, options, objective);
+}
+
+/** Solves the Newton step from the pass just accepted (Gram, else QR factor), and stops when its decrement is below the tolerance. */
+function solveNext(s: State, options: LogisticOptions, objective: number): void {
+  const previous = Float64Array.from(s.w);
+  let decrement: number;
+  if (s.gram) {
+    const next = gramStep(s.G, s.w, options.ridge, options.penalised);
+    if (next === null) {
+      // Not certainly well conditioned: the same pass again with the QR engine, from now on.
+      s.gram = false;
+      s.redo = true;
+      return;
+    }
+    s.w = next.w;
+    decrement = next.decrement;
+  } else {
+    s.w = solveCoefficients(s.acc, { ridge: options.ridge, penalised: options.penalised });
+    decrement = newtonDecrease(s.acc.R, s.w, previous, options);
+  }
+  s.previous = previous;
   s.iterations += 1;
   // Newton decrement: the quadratic model's decrease for the full step d = w_new - w, d^T (X^T W X + ridge E) d
-  // = ||R d||^2 + ridge ||E d||^2. When it is below the tolerance the new coefficients are taken
-  // without another pass (Boyd & Vandenberghe, Convex Optimization, 2004, sec. 9.5.1).
-  if (s.iterations > 1 && newtonDecrease(s.acc.R, s.w, s.previous, options) <= LOGISTIC_TOLERANCE * (Math.abs(objective) + 0.1)) {
+  // (= ||R d||^2 + ridge ||E d||^2 from a QR factor). When it is below the tolerance the new
+  // coefficients are taken without another pass (Boyd & Vandenberghe, Convex Optimization, 2004, sec. 9.5.1).
+  if (s.iterations > 1 && decrement <= LOGISTIC_TOLERANCE * (Math.abs(objective) + 0.1)) {
     s.done = true;
     s.converged = true;
   }
@@ -385,8 +500,8 @@ function defaultStart(design: Design, data: LogisticRows, problem: LogisticProbl
 let blockDeviance = 0;
 
 /**
- * The IRLS weights of one block: for each row kept, its index, sqrt(W) and sqrt(W) z, packed
- * from 0; the block's deviance in {@link blockDeviance}.
+ * The IRLS weights of one block: for each row kept, its index, sqrt(W), u = (y - p) / sqrt(W) and
+ * sqrt(W) z = sqrt(W) eta + u, packed from 0; the block's deviance in {@link blockDeviance}.
  * @returns the number of rows kept
  */
 function weightRows(
@@ -398,6 +513,7 @@ function weightRows(
   exclude: number,
   scale: Float64Array,
   target: Float64Array,
+  resid: Float64Array,
   index: Int32Array,
 ): number {
   let r = 0;
@@ -412,7 +528,8 @@ function weightRows(
     const w = Math.max(pr * (1 - pr), MIN_WEIGHT);
     const s = Math.sqrt(w);
     scale[r] = s;
-    target[r] = s * e + (yi - pr) / s;
+    resid[r] = (yi - pr) / s;
+    target[r] = s * e + resid[r];
     index[r] = i;
     r++;
   }
@@ -428,6 +545,7 @@ function weightAllRows(
   m: number,
   scale: Float64Array,
   target: Float64Array,
+  resid: Float64Array,
   index: Int32Array,
 ): number {
   let dev = 0;
@@ -440,7 +558,8 @@ function weightAllRows(
     const w = Math.max(pr * (1 - pr), MIN_WEIGHT);
     const s = Math.sqrt(w);
     scale[i] = s;
-    target[i] = s * e + (yi - pr) / s;
+    resid[i] = (yi - pr) / s;
+    target[i] = s * e + resid[i];
     index[i] = i;
   }
   blockDeviance = dev;
@@ -496,8 +615,8 @@ function addFoldDeviance(deviance: Float64Array, eta: Float64Array, y: Float64Ar
 }
 
 /**
- * {@link weightAllRows} with each row's deviance added to its part's sum (`partDev[of[start + i]]`)
- * instead of one block sum.
+ * sqrt(W) and u = (y - p) / sqrt(W) of every row of the block (as {@link weightRows}), each
+ * row's deviance added to its part's sum (`partDev[of[start + i]]`).
  */
 function weightRowsByPart(
   eta: Float64Array,
@@ -507,7 +626,7 @@ function weightRowsByPart(
   of: Int32Array,
   partDev: Float64Array,
   scale: Float64Array,
-  target: Float64Array,
+  resid: Float64Array,
 ): void {
   for (let i = 0; i < m; i++) {
     const e = eta[i];
@@ -518,7 +637,7 @@ function weightRowsByPart(
     const w = Math.max(pr * (1 - pr), MIN_WEIGHT);
     const s = Math.sqrt(w);
     scale[i] = s;
-    target[i] = s * e + (yi - pr) / s;
+    resid[i] = (yi - pr) / s;
   }
 }
 

@@ -9,6 +9,7 @@ export { kernelEngine, kernelNotes, KERNEL_FALLBACK_NOTE, recordKernelNotes, use
 export { leverageRows } from './leverages.js';
 export { outOfFoldRows } from './out-of-fold.js';
 export { polynomialColumns } from './polynomial-columns.js';
+export { addGramRows } from './gram.js';
 export { addProducts } from './products.js';
 export { foldRows, sumOfSquares, type BadValue, type FoldOutcome } from './qr-fold.js';
 export { firstBeyond } from './range-check.js';

@@ -1,6 +1,6 @@
 ;; Row kernels of the fit in WebAssembly: the streaming Householder QR fold (qr-fold.ts), the
 ;; refinement pass (refine.ts), the leverages of a full-rank fit (leverages.ts), predictions
-;; (products.ts), out-of-fold errors (out-of-fold.ts), polynomial columns (polynomial-columns.ts)
+;; (products.ts), the weighted Gram (gram.ts), out-of-fold errors (out-of-fold.ts), polynomial columns (polynomial-columns.ts)
 ;; and the design's range check (range-check.ts). WebAssembly is compiled before its first call
 ;; and computes with unboxed doubles from the start, where JavaScript would run these loops in
 ;; V8's interpreter for most of a small model's run. Each function does the operations of its
@@ -493,6 +493,109 @@
                 (br $row)))))
         (local.set $j (i32.add (local.get $j) (i32.const 1)))
         (br $column))))
+
+;; For each part f < count (kept rows offsets[f] .. offsets[f+1] - 1, i32 offsets): the chunks
+  ;; of `chunk` rows of the extended rows [scale[t] X[index[t], :] | u[t] | 0] gathered into `work`
+  ;; (leading dimension chunk), then the tiles (j, j+1) x (k, k+1), k >= j, of their Gram added to
+  ;; G_f = G + f q q (gram.ts, addGramRowsJs: the same operations in the same order).
+  (func (export "gramRows") (param $G i32) (param $q i32) (param $X i32) (param $m i32) (param $p i32)
+    (param $index i32) (param $scale i32) (param $u i32) (param $offsets i32) (param $count i32) (param $work i32) (param $chunk i32)
+    (local $f i32) (local $g i32) (local $s i32) (local $stop i32) (local $n i32) (local $j i32) (local $k i32) (local $t i32)
+    (local $src i32) (local $dst i32) (local $ldb i32) (local $at i32)
+    (local $a0 i32) (local $a1 i32) (local $b0 i32) (local $b1 i32) (local $i i32) (local $end i32) (local $e i32)
+    (local $s00 f64) (local $s01 f64) (local $s10 f64) (local $s11 f64)
+    (local $x0 f64) (local $x1 f64) (local $y0 f64) (local $y1 f64)
+    (local.set $ldb (i32.shl (local.get $chunk) (i32.const 3)))
+    (block $parts
+      (loop $part
+        (br_if $parts (i32.ge_s (local.get $f) (local.get $count)))
+        (local.set $g (i32.add (local.get $G) (i32.shl (i32.mul (local.get $f) (i32.mul (local.get $q) (local.get $q))) (i32.const 3))))
+        (local.set $s (i32.load (i32.add (local.get $offsets) (i32.shl (local.get $f) (i32.const 2)))))
+        (local.set $stop (i32.load (i32.add (local.get $offsets) (i32.shl (i32.add (local.get $f) (i32.const 1)) (i32.const 2)))))
+        (block $chunks
+          (loop $chunkLoop
+            (br_if $chunks (i32.ge_s (local.get $s) (local.get $stop)))
+            (local.set $n (i32.sub (local.get $stop) (local.get $s)))
+            (if (i32.gt_s (local.get $n) (local.get $chunk)) (then (local.set $n (local.get $chunk))))
+            ;; work[j][t] = scale[s + t] * X[j*m + index[s + t]] for j < p
+            (local.set $j (i32.const 0))
+            (block $cols
+              (loop $col
+                (br_if $cols (i32.ge_s (local.get $j) (local.get $p)))
+                (local.set $src (i32.add (local.get $X) (i32.shl (i32.mul (local.get $j) (local.get $m)) (i32.const 3))))
+                (local.set $dst (i32.add (local.get $work) (i32.mul (local.get $j) (local.get $ldb))))
+                (local.set $t (i32.const 0))
+                (block $gathered
+                  (loop $gather
+                    (br_if $gathered (i32.ge_s (local.get $t) (local.get $n)))
+                    (local.set $at (i32.add (local.get $s) (local.get $t)))
+                    (f64.store (i32.add (local.get $dst) (i32.shl (local.get $t) (i32.const 3)))
+                      (f64.mul
+                        (f64.load (i32.add (local.get $scale) (i32.shl (local.get $at) (i32.const 3))))
+                        (f64.load (i32.add (local.get $src) (i32.shl (i32.load (i32.add (local.get $index) (i32.shl (local.get $at) (i32.const 2)))) (i32.const 3))))))
+                    (local.set $t (i32.add (local.get $t) (i32.const 1)))
+                    (br $gather)))
+                (local.set $j (i32.add (local.get $j) (i32.const 1)))
+                (br $col)))
+            ;; work[p][t] = u[s + t]; the padding columns zero
+            (memory.copy
+              (i32.add (local.get $work) (i32.mul (local.get $p) (local.get $ldb)))
+              (i32.add (local.get $u) (i32.shl (local.get $s) (i32.const 3)))
+              (i32.shl (local.get $n) (i32.const 3)))
+            (local.set $j (i32.add (local.get $p) (i32.const 1)))
+            (block $pads
+              (loop $pad
+                (br_if $pads (i32.ge_s (local.get $j) (local.get $q)))
+                (memory.fill (i32.add (local.get $work) (i32.mul (local.get $j) (local.get $ldb))) (i32.const 0) (i32.shl (local.get $n) (i32.const 3)))
+                (local.set $j (i32.add (local.get $j) (i32.const 1)))
+                (br $pad)))
+            ;; the tiles
+            (local.set $end (i32.shl (local.get $n) (i32.const 3)))
+            (local.set $j (i32.const 0))
+            (block $js
+              (loop $jLoop
+                (br_if $js (i32.ge_s (local.get $j) (local.get $q)))
+                (local.set $a0 (i32.add (local.get $work) (i32.mul (local.get $j) (local.get $ldb))))
+                (local.set $a1 (i32.add (local.get $a0) (local.get $ldb)))
+                (local.set $k (local.get $j))
+                (block $ks
+                  (loop $kLoop
+                    (br_if $ks (i32.ge_s (local.get $k) (local.get $q)))
+                    (local.set $b0 (i32.add (local.get $work) (i32.mul (local.get $k) (local.get $ldb))))
+                    (local.set $b1 (i32.add (local.get $b0) (local.get $ldb)))
+                    (local.set $s00 (f64.const 0))
+                    (local.set $s01 (f64.const 0))
+                    (local.set $s10 (f64.const 0))
+                    (local.set $s11 (f64.const 0))
+                    (local.set $i (i32.const 0))
+                    (block $rows
+                      (loop $row
+                        (br_if $rows (i32.ge_s (local.get $i) (local.get $end)))
+                        (local.set $x0 (f64.load (i32.add (local.get $a0) (local.get $i))))
+                        (local.set $x1 (f64.load (i32.add (local.get $a1) (local.get $i))))
+                        (local.set $y0 (f64.load (i32.add (local.get $b0) (local.get $i))))
+                        (local.set $y1 (f64.load (i32.add (local.get $b1) (local.get $i))))
+                        (local.set $s00 (f64.add (local.get $s00) (f64.mul (local.get $x0) (local.get $y0))))
+                        (local.set $s01 (f64.add (local.get $s01) (f64.mul (local.get $x0) (local.get $y1))))
+                        (local.set $s10 (f64.add (local.get $s10) (f64.mul (local.get $x1) (local.get $y0))))
+                        (local.set $s11 (f64.add (local.get $s11) (f64.mul (local.get $x1) (local.get $y1))))
+                        (local.set $i (i32.add (local.get $i) (i32.const 8)))
+                        (br $row)))
+                    ;; G_f[k*q + j] += s00, [k*q + j + 1] += s10, [(k+1)*q + j] += s01, [(k+1)*q + j + 1] += s11
+                    (local.set $e (i32.add (local.get $g) (i32.shl (i32.add (i32.mul (local.get $k) (local.get $q)) (local.get $j)) (i32.const 3))))
+                    (f64.store (local.get $e) (f64.add (f64.load (local.get $e)) (local.get $s00)))
+                    (f64.store offset=8 (local.get $e) (f64.add (f64.load offset=8 (local.get $e)) (local.get $s10)))
+                    (local.set $e (i32.add (local.get $e) (i32.shl (local.get $q) (i32.const 3))))
+                    (f64.store (local.get $e) (f64.add (f64.load (local.get $e)) (local.get $s01)))
+                    (f64.store offset=8 (local.get $e) (f64.add (f64.load offset=8 (local.get $e)) (local.get $s11)))
+                    (local.set $k (i32.add (local.get $k) (i32.const 2)))
+                    (br $kLoop)))
+                (local.set $j (i32.add (local.get $j) (i32.const 2)))
+                (br $jLoop)))
+            (local.set $s (i32.add (local.get $s) (local.get $n)))
+            (br $chunkLoop)))
+        (local.set $f (i32.add (local.get $f) (i32.const 1)))
+        (br $part))))
 
   ;; Out-of-fold errors of one block for one setting (out-of-fold.ts,
   ;; outOfFoldRowsJs): pred = the prediction of each row with the coefficients fitted without its

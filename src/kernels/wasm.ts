@@ -38,6 +38,20 @@ export interface KernelExports {
   firstNotFinite(a: number, n: number): number;
   refine(X: number, y: number, m: number, w: number, p: number, hi: number, lo: number, gHi: number, gLo: number): number;
   addProducts(out: number, X: number, m: number, w: number, p: number): void;
+  gramRows(
+    G: number,
+    q: number,
+    X: number,
+    m: number,
+    p: number,
+    index: number,
+    scale: number,
+    u: number,
+    offsets: number,
+    count: number,
+    work: number,
+    chunk: number,
+  ): void;
   outOfFold(
     X: number,
     m: number,

@@ -80,9 +80,10 @@ export async function fitClassifier(repo: RepoReader, descriptor: Descriptor, se
   forEachBlock(design, train, (X, _start, m) => spread.add(X, m));
   const columnSd = spread.sd();
 
-  // With folds, each pass also keeps one factor per fold, so that the folds' first Newton steps need no pass of their own.
+  // With folds, each pass also keeps one Gram per fold, so that the folds' first Newton steps need no pass of their own.
   const parts = folds.k >= 2 ? { of: folds.foldOf, count: folds.k } : undefined;
-  const [fit] = fitLogistic(design, train, options, [{ start: warmStart(design, train, options), parts }]);
+  const [fit] = fitLogistic(design, train, options, [{ start: warmStart(design, train, options), parts, factor: true }]);
+  if (fit.weightedFactor === null) throw new Error('fitLogistic: the weighted factor asked for is missing');
   const weighted = fitFactor(fit.weightedFactor, options);
   const trainEta = predictRows(design, train, fit.coefficients);
   const holdoutEta = predictRows(design, holdout, fit.coefficients);
@@ -91,18 +92,23 @@ export async function fitClassifier(repo: RepoReader, descriptor: Descriptor, se
   const holdoutP = probabilities(holdoutEta);
   const trainFigures = classificationFigures(train.y, trainEta, trainP, train.rows, threshold);
   const holdoutFigures = classificationFigures(holdout.y, holdoutEta, holdoutP, holdout.rows, threshold);
+  const separation = findSeparation(design, train);
+  // Without a penalty, separated rows have no finite maximum-likelihood coefficients (Albert &
+  // Anderson 1984): the stopping rule is then met only because the objective approaches 0 as the
+  // coefficients grow, so neither the fit nor its folds count as converged.
+  const unbounded = options.ridge === 0 && separation.kind !== 'none';
 
   return {
     context: {
       descriptor,
       design,
-      fit,
+      fit: unbounded ? { ...fit, converged: false } : fit,
       weighted,
       train: trainFigures,
       holdout: holdoutFigures,
       calibration: calibration(holdout.y, holdoutEta, holdout.rows),
-      crossValidation: crossValidateClassifier(design, train, folds, fit, options),
-      separation: findSeparation(design, train),
+      crossValidation: crossValidateClassifier(design, train, folds, fit, options, unbounded),
+      separation,
       shipped: shippedClassifier(descriptor, design, train, holdout, fit, trainEta, holdoutEta),
       columnSd,
       leakage: leakageOf(train, holdout),
@@ -150,8 +156,12 @@ function warmStart(design: Design, train: ModelData, options: { ridge: number; p
  * k-fold cross-validation: the fit without each fold (the same terms, fixed from all training
  * rows, and the same ridge), started from the full fit, all folds in shared passes; the pooled
  * log-loss of the out-of-fold probabilities. Null below 2 folds. When the full fit kept its
- * per-fold factors (`full.parts`, one part per fold), each fold's first Newton step is solved
+ * per-fold Grams (`full.parts`, one part per fold), each fold's first Newton step is solved
  * from them without a pass (fit/logistic.ts, firstStepsWithout); the optimum is the same.
+ * With `unbounded` (ridge 0 and separated training rows: no finite optimum) the fold fits are
+ * reported as not converged, whatever the stopping rule said: their log-loss is where the
+ * iterations stopped on the way to infinite coefficients (on completely separated rows it tends
+ * to 0, the out-of-fold rows being separated by the same direction).
  */
 export function crossValidateClassifier(
   design: Design,
@@ -159,10 +169,11 @@ export function crossValidateClassifier(
   folds: Folds,
   full: LogisticFit,
   options: { ridge: number; penalised: boolean[] },
+  unbounded = false,
 ): ClassifierCrossValidation | null {
   const k = folds.k;
   if (k < 2) return null;
-  const steps = full.parts !== null && full.parts.factors.length === k ? firstStepsWithout(full.parts, options) : null;
+  const steps = full.parts !== null && full.parts.grams.length === k ? firstStepsWithout(full.parts, options) : null;
   const problems = Array.from({ length: k }, (_, f) => ({
     foldOf: folds.foldOf,
     exclude: f,
@@ -183,7 +194,7 @@ export function crossValidateClassifier(
     logLoss: total / 2 / train.rows,
     foldLogLoss: Array.from(foldDeviance, (d, f) => d / 2 / folds.sizes[f]),
     foldRows: [...folds.sizes],
-    converged: fits.every((x) => x.converged),
+    converged: !unbounded && fits.every((x) => x.converged),
   };
 }
 

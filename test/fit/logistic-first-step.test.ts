@@ -52,9 +52,9 @@ describe('folds started from the prepared first steps', () => {
       // Keeping the parts changes only the rounding of the full fit (its factor is their merge).
       for (let j = 0; j < design.p; j++) expect(relative(full.coefficients[j], plain.coefficients[j])).toBeLessThan(1e-12);
       expect(relative(full.deviance, plain.deviance)).toBeLessThan(1e-12);
-      expect(full.parts?.factors.length).toBe(5);
+      expect(full.parts?.grams.length).toBe(5);
       let rowsInParts = 0;
-      for (const f of full.parts!.factors) rowsInParts += f.rows;
+      for (const r of full.parts!.rows) rowsInParts += r;
       expect(rowsInParts).toBe(data.rows);
 
       // Passes over the rows, counted by the design's block fills (3,000 rows: one block a pass).

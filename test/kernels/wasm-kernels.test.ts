@@ -15,6 +15,7 @@ import { assignFolds } from '../../src/diagnostics/folds.js';
 import { fitFactor, leveragesInto, RefinementPass, refinementApplies } from '../../src/fit/index.js';
 import { QrAccumulator } from '../../src/fit/qr-accumulator.js';
 import {
+  addGramRows,
   addProducts,
   firstBeyond,
   foldRows,
@@ -30,6 +31,7 @@ import {
 import { leverageRowsJs } from '../../src/kernels/leverages.js';
 import { outOfFoldRowsJs } from '../../src/kernels/out-of-fold.js';
 import { polynomialColumnsJs } from '../../src/kernels/polynomial-columns.js';
+import { addGramRowsJs } from '../../src/kernels/gram.js';
 import { addProductsJs } from '../../src/kernels/products.js';
 import { foldRowsJs } from '../../src/kernels/qr-fold.js';
 import { firstBeyondJs } from '../../src/kernels/range-check.js';
@@ -416,6 +418,26 @@ const CASES: KernelCase[] = [
       return [out];
     },
   },
+  ...[false, true].map(
+    (parts): KernelCase => ({
+      label: `addGramRows over several chunks${parts ? ', three parts (one empty)' : ''}`,
+      run(js) {
+        const m = 1300;
+        const p = 7;
+        const q = 8;
+        const { X } = block(m, p, 32);
+        const rnd = seeded(34);
+        const index = Int32Array.from({ length: 1201 }, () => Math.floor(rnd() * m));
+        const scale = vector(1201, 35);
+        const u = vector(1201, 36);
+        const offsets = Int32Array.from(parts ? [0, 700, 700, 1201] : [0, 1201]);
+        const count = offsets.length - 1;
+        const G = vector(count * q * q, 33);
+        (js ? addGramRowsJs : addGramRows)(G, q, X, m, p, index, scale, u, offsets, count);
+        return [G];
+      },
+    }),
+  ),
   {
     label: 'addProducts with zero weights',
     run(js) {

@@ -57,6 +57,15 @@ describe('examples/classifiers', async () => {
     expect(status('stem-check', 'separation')).toBe('fail');
     expect(model('stem-check').verdict).toBe('fail');
   });
+  it('stem-check (ridge 0, separated rows): neither the fit nor its folds count as converged, and the report says so', () => {
+    const m = model('stem-check');
+    expect((m.metrics as Record<string, unknown>).fit_converged).toBe(0);
+    const cv = m.checks.find((c) => c.id === 'cross-validation');
+    expect((cv?.detail as { converged?: boolean } | undefined)?.converged).toBe(false);
+    expect(cv?.message).toContain('(a fold fit did not converge)');
+    // The penalised examples are unaffected.
+    expect((model('bruise-reject').metrics as Record<string, unknown>).fit_converged).toBe(1);
+  });
   it('wax-defect fails on events per parameter and calibration slope', () => {
     expect(status('wax-defect', 'events-per-parameter')).toBe('fail');
     expect(status('wax-defect', 'calibration-slope')).toBe('fail');
