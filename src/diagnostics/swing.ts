@@ -156,7 +156,8 @@ export function excursion(prediction: ArrayLike<number>, lo: number, hi: number)
  */
 export function inputGrid(values: ArrayLike<number>, options: SwingOptions = {}): { inside: Float64Array; beyond: Float64Array } {
   const sorted = Float64Array.from(values).sort();
-  return gridFromSorted(sorted, sorted.length, options);
+  const { inside, beyond } = gridFromSorted(sorted, sorted.length, options);
+  return { inside, beyond };
 }
 
 /**
@@ -168,7 +169,7 @@ function gridFromSorted(
   n: number,
   options: SwingOptions,
   work?: Float64Array,
-): { inside: Float64Array; beyond: Float64Array } {
+): { inside: Float64Array; beyond: Float64Array; gaps: number } {
   const perGap = options.perGap ?? SWING_DEFAULTS.perGap;
   const uniform = options.uniform ?? SWING_DEFAULTS.uniform;
   const margin = options.margin ?? SWING_DEFAULTS.margin;
@@ -176,7 +177,7 @@ function gridFromSorted(
   const maxGaps = options.maxGaps ?? SWING_DEFAULTS.maxGaps;
   const count = packDistinct(sorted, n);
   const distinct = sorted.subarray(0, count);
-  if (count < 2) return { inside: new Float64Array(0), beyond: new Float64Array(0) };
+  if (count < 2) return { inside: new Float64Array(0), beyond: new Float64Array(0), gaps: 0 };
   const lo = distinct[0];
   const hi = distinct[count - 1];
   const width = hi - lo;
@@ -186,7 +187,7 @@ function gridFromSorted(
   fillUniform(inside, uniform, lo, hi);
   const w = fillGaps(inside, uniform, distinct, gaps, per);
   const beyond = marginGrid(lo, hi, margin * width, marginPoints);
-  return { inside: uniqueOfRuns(inside, uniform, w), beyond: unique(beyond, beyond.length) };
+  return { inside: uniqueOfRuns(inside, uniform, w), beyond: unique(beyond, beyond.length), gaps: count - 1 };
 }
 
 // The loops of the grid are functions of their own, each a loop and its return (see
@@ -370,7 +371,7 @@ function predictorAlong(
   const name = design.inputs[c];
   const varying = design.terms.map((t) => t.inputs.includes(name));
   const constantColumns = (n: number): Float64Array[] => design.inputs.map((_, k) => new Float64Array(n).fill(fixed[k]));
-  if (varying.every(Boolean)) {
+  if (readByEveryTerm(design, c)) {
     return (xs) => {
       const columns = constantColumns(xs.length);
       columns[c] = xs;
@@ -402,6 +403,12 @@ function predictorAlong(
     for (let i = 0; i < out.length; i++) out[i] += base;
     return out;
   };
+}
+
+/** True when every term of the design reads input c (its predictions along c take the whole design). */
+function readByEveryTerm(design: Design, c: number): boolean {
+  const name = design.inputs[c];
+  return design.terms.every((t) => t.inputs.includes(name));
 }
 
 /**
@@ -473,6 +480,12 @@ export interface SwingGrid {
   /** Points inside the range and in the margins, each ascending. */
   inside: Float64Array;
   beyond: Float64Array;
+  /**
+   * True when `inside` is {@link inputGrid} of every training value of the input with the default
+   * sizes (no row sample, no transformed scale): the points the spike figure scans
+   * (diagnostics/spikes.ts), which then takes the predictions there from {@link scoreSwing}.
+   */
+  whole?: boolean;
 }
 
 /**
@@ -571,7 +584,8 @@ export function planSwing(design: Design, train: Rows, options: SwingOptions = {
       grid.inside = grid.inside.map(onScale.inverse);
       grid.beyond = grid.beyond.map(onScale.inverse);
     }
-    if (grid.inside.length > 0) grids.push({ input: c, inside: grid.inside, beyond: admitted(design, c, grid.beyond) });
+    const whole = len === n && onScale === null && defaultInsideGrid(options, gridOptions, grid.gaps);
+    if (grid.inside.length > 0) grids.push({ input: c, inside: grid.inside, beyond: admitted(design, c, grid.beyond), whole });
   }
 
   // Several inputs: segments between sampled rows and their nearest neighbours.
@@ -611,6 +625,20 @@ export function planSwing(design: Design, train: Rows, options: SwingOptions = {
   };
 }
 
+/**
+ * True when a grid of `gaps` gaps built with `gridOptions` (the share of the gaps of one input)
+ * holds the same inside points as {@link inputGrid} with the default sizes: the same points per
+ * gap and uniform points, and either the same number of gaps kept or every gap kept by both.
+ */
+function defaultInsideGrid(options: SwingOptions, gridOptions: SwingOptions, gaps: number): boolean {
+  const maxGaps = gridOptions.maxGaps ?? SWING_DEFAULTS.maxGaps;
+  return (
+    (options.perGap ?? SWING_DEFAULTS.perGap) === SWING_DEFAULTS.perGap &&
+    (options.uniform ?? SWING_DEFAULTS.uniform) === SWING_DEFAULTS.uniform &&
+    (maxGaps === SWING_DEFAULTS.maxGaps || gaps <= Math.min(maxGaps, SWING_DEFAULTS.maxGaps))
+  );
+}
+
 /** The points (rows of `columns`) at which every term is defined: a segment between two levels of a category has no levels between them. */
 function admittedRows(design: Design, columns: Float64Array[]): Float64Array[] {
   const checks = design.terms.filter((t) => t.admits !== undefined);
@@ -640,13 +668,31 @@ function admitted(design: Design, c: number, points: Float64Array): Float64Array
 }
 
 /**
+ * The predictions along one input at the points of its whole grid ({@link SwingGrid.whole}), the
+ * other inputs at their training medians, predicted with the whole design: what the spike figure
+ * computes along that input (diagnostics/spikes.ts), kept so that it is computed once.
+ */
+export interface InsideCurve {
+  /** Index of the input in `design.inputs`. */
+  input: number;
+  /** The grid's inside points, ascending. */
+  grid: Float64Array;
+  /** The predictions at `grid`, back-transformed under `backTransform`. */
+  prediction: Float64Array;
+  /** The plan's {@link SwingPlan.backTransform}, or absent. */
+  backTransform?: TargetTransformKind;
+}
+
+/**
  * Scores a {@link SwingPlan} under the fitted coefficients: the swing figures and curves.
  *
  * @param plan from {@link planSwing} on the same design and rows
  * @param design the fitted design
  * @param coefficients fitted coefficients (length p)
+ * @param insideCurves when given, receives an {@link InsideCurve} for every whole grid predicted
+ *   with the whole design (an input every term reads); default none
  */
-export function scoreSwing(plan: SwingPlan, design: Design, coefficients: ArrayLike<number>): Swing {
+export function scoreSwing(plan: SwingPlan, design: Design, coefficients: ArrayLike<number>, insideCurves?: InsideCurve[]): Swing {
   const [ylo, yhi] = plan.band;
   const { medians, maxCurvePoints } = plan;
   let inside = 0;
@@ -697,6 +743,14 @@ export function scoreSwing(plan: SwingPlan, design: Design, coefficients: ArrayL
     const predict = predictorAlong(design, coefficients, c, medians);
     const pin = score(along(grid.inside), grid.inside.length, 'inside', predict(grid.inside));
     const pout = score(along(grid.beyond), grid.beyond.length, 'beyond', predict(grid.beyond));
+    if (insideCurves !== undefined && grid.whole === true && readByEveryTerm(design, c)) {
+      insideCurves.push({
+        input: c,
+        grid: grid.inside,
+        prediction: pin,
+        ...(plan.backTransform !== undefined ? { backTransform: plan.backTransform } : {}),
+      });
+    }
     if (curves.length >= plan.maxCurves) continue;
     // Curve for charts: all points ascending, thinned with the extremes kept.
     const xs = new Float64Array(grid.inside.length + grid.beyond.length);
@@ -747,7 +801,14 @@ export function scoreSwing(plan: SwingPlan, design: Design, coefficients: ArrayL
  * @param train training rows (inputs in `design.inputs` order)
  * @param coefficients fitted coefficients (length p)
  * @param options grid sizes (see {@link SwingOptions})
+ * @param insideCurves as in {@link scoreSwing}; default none
  */
-export function measureSwing(design: Design, train: Rows, coefficients: ArrayLike<number>, options: SwingOptions = {}): Swing {
-  return scoreSwing(planSwing(design, train, options), design, coefficients);
+export function measureSwing(
+  design: Design,
+  train: Rows,
+  coefficients: ArrayLike<number>,
+  options: SwingOptions = {},
+  insideCurves?: InsideCurve[],
+): Swing {
+  return scoreSwing(planSwing(design, train, options), design, coefficients, insideCurves);
 }
