@@ -341,13 +341,38 @@ function stridedSample(column: Float64Array, n: number, count: number, out: Floa
   for (let t = 0; t < count; t++) out[t] = column[Math.floor((t * n) / count)];
 }
 
-/** Indices of at most `count` points (ascending) spread evenly, always keeping `keep`. */
+/**
+ * Indices of at most `count` points (ascending, distinct) spread evenly, always keeping `keep`:
+ * every index when `length <= count`, else the indices in `keep` plus round(t (length - 1) /
+ * (slots - 1)) for t = 0 .. slots - 1, slots = max(2, count - (distinct indices kept)).
+ */
 function thinIndices(length: number, count: number, keep: readonly number[]): number[] {
   if (length <= count) return Array.from({ length }, (_, i) => i);
-  const chosen = new Set<number>(keep.filter((i) => i >= 0 && i < length));
-  const slots = Math.max(2, count - chosen.size);
-  for (let t = 0; t < slots; t++) chosen.add(Math.round((t * (length - 1)) / (slots - 1)));
-  return [...chosen].sort((a, b) => a - b);
+  const kept = [...new Set(keep.filter((i) => i >= 0 && i < length))].sort((a, b) => a - b);
+  const slots = Math.max(2, count - kept.length);
+  // The even indices rise by more than 1 each (length - 1 >= slots), so they are distinct and ascending.
+  const even = evenIndices(length, slots);
+  return withKept(even, kept);
+}
+
+/** round(t (length - 1) / (slots - 1)) for t = 0 .. slots - 1 (one loop; see DEVELOPERS.md, "Writing hot loops"). */
+function evenIndices(length: number, slots: number): number[] {
+  const out = new Array<number>(slots);
+  for (let t = 0; t < slots; t++) out[t] = Math.round((t * (length - 1)) / (slots - 1));
+  return out;
+}
+
+/** The ascending distinct union of the ascending distinct `even` and the few ascending distinct `kept`. */
+function withKept(even: number[], kept: readonly number[]): number[] {
+  const out: number[] = [];
+  let k = 0;
+  for (const i of even) {
+    while (k < kept.length && kept[k] < i) out.push(kept[k++]);
+    if (k < kept.length && kept[k] === i) k++;
+    out.push(i);
+  }
+  while (k < kept.length) out.push(kept[k++]);
+  return out;
 }
 
 /**
@@ -412,46 +437,90 @@ function readByEveryTerm(design: Design, c: number): boolean {
 }
 
 /**
- * Merges two ascending point sets that never share a value (the margins lie outside the range)
- * with their predictions into xs and ps (length of both sets together): the order a stable sort
- * by x gives.
+ * Where the points of `bx` fall when the ascending point sets `ax` and `bx` are merged as a stable
+ * sort by x gives (a point of `ax` before an equal one of `bx`): place[b] is bx[b]'s index in the
+ * merged order, ascending. The merged order is never built: the curve reads its few kept points
+ * through {@link mergedValues}.
  */
-function mergeAscending(ax: Float64Array, ap: Float64Array, bx: Float64Array, bp: Float64Array, xs: Float64Array, ps: Float64Array): void {
-  const na = ax.length;
-  const nb = bx.length;
-  for (let a = 0, b = 0, dst = 0; dst < na + nb; dst++) {
-    if (b >= nb || (a < na && ax[a] <= bx[b])) {
-      xs[dst] = ax[a];
-      ps[dst] = ap[a++];
-    } else {
-      xs[dst] = bx[b];
-      ps[dst] = bp[b++];
+function mergedPlaces(ax: Float64Array, bx: Float64Array): Int32Array {
+  const place = new Int32Array(bx.length);
+  let a = 0;
+  for (let b = 0; b < bx.length; b++) {
+    a = firstAfter(ax, a, bx[b]);
+    place[b] = a + b;
+  }
+  return place;
+}
+
+/** The first index i >= from of xs with !(xs[i] <= v), or xs.length: how far a merge takes xs before v. */
+function firstAfter(xs: Float64Array, from: number, v: number): number {
+  let i = from;
+  while (i < xs.length && xs[i] <= v) i++;
+  return i;
+}
+
+/** The values at the merged indices `indices` (ascending) of `a` and `b` merged with `b` at `place` (see {@link mergedPlaces}). */
+function mergedValues(a: Float64Array, b: Float64Array, place: Int32Array, indices: readonly number[]): number[] {
+  const out = new Array<number>(indices.length);
+  let k = 0;
+  for (let q = 0; q < indices.length; q++) {
+    const i = indices[q];
+    while (k < place.length && place[k] < i) k++;
+    out[q] = k < place.length && place[k] === i ? b[k] : a[i - k];
+  }
+  return out;
+}
+
+/**
+ * [merged index of the smallest, of the largest] value of `a` and `b` merged with `b` at `place`
+ * (first of equals, as a scan of the merged values in order keeps the first; a NaN first value is
+ * kept, since nothing compares below or above it); [0, 0] when both are empty.
+ */
+function mergedExtremes(a: Float64Array, b: Float64Array, place: Int32Array): [number, number] {
+  const total = a.length + b.length;
+  if (total === 0) return [0, 0];
+  const first = place.length > 0 && place[0] === 0 ? b[0] : a[0];
+  const best = { min: first, max: first, imin: 0, imax: 0 };
+  // The merged order: runs of `a` between the points of `b`.
+  let from = 0;
+  for (let k = 0; k <= place.length; k++) {
+    const to = k < place.length ? place[k] - k : a.length;
+    extremesOfRun(a, from, to, k, best);
+    if (k < place.length) extremesOfRun(b, k, k + 1, place[k] - k, best);
+    from = to;
+  }
+  return [best.imin, best.imax];
+}
+
+/** Updates `best` over values[from..to), whose merged index is the index plus `shift` (one loop). */
+function extremesOfRun(
+  values: Float64Array,
+  from: number,
+  to: number,
+  shift: number,
+  best: { min: number; max: number; imin: number; imax: number },
+): void {
+  let { min, max, imin, imax } = best;
+  for (let i = from; i < to; i++) {
+    const v = values[i];
+    if (v < min) {
+      min = v;
+      imin = i + shift;
+    }
+    if (v > max) {
+      max = v;
+      imax = i + shift;
     }
   }
+  best.min = min;
+  best.max = max;
+  best.imin = imin;
+  best.imax = imax;
 }
 
 /** v[i] = g^-1(v[i]) for i < m (one loop; see DEVELOPERS.md, "Writing hot loops"). */
 function backTransformInPlace(v: Float64Array, m: number, kind: TargetTransformKind): void {
   for (let i = 0; i < m; i++) v[i] = inverseTarget(kind, v[i]);
-}
-
-/** [index of the smallest, index of the largest] value (first of equals); [0, 0] when empty. */
-function extremeIndices(values: Float64Array): [number, number] {
-  return [indexOfSmallest(values), indexOfLargest(values)];
-}
-
-// One loop per function (see DEVELOPERS.md, "Writing hot loops").
-
-function indexOfSmallest(values: Float64Array): number {
-  let imin = 0;
-  for (let i = 1; i < values.length; i++) if (values[i] < values[imin]) imin = i;
-  return imin;
-}
-
-function indexOfLargest(values: Float64Array): number {
-  let imax = 0;
-  for (let i = 1; i < values.length; i++) if (values[i] > values[imax]) imax = i;
-  return imax;
 }
 
 /** Excursion of one prediction: max(0, v - hi, lo - v) / (hi - lo); Infinity for NaN. */
@@ -752,12 +821,11 @@ export function scoreSwing(plan: SwingPlan, design: Design, coefficients: ArrayL
       });
     }
     if (curves.length >= plan.maxCurves) continue;
-    // Curve for charts: all points ascending, thinned with the extremes kept.
-    const xs = new Float64Array(grid.inside.length + grid.beyond.length);
-    const ps = new Float64Array(xs.length);
-    mergeAscending(grid.inside, pin, grid.beyond, pout, xs, ps);
-    const [imin, imax] = extremeIndices(ps);
-    const keep = thinIndices(xs.length, maxCurvePoints, [imax, imin]);
+    // Curve for charts: all points ascending (inside and margins merged), thinned with the
+    // extremes kept; only the kept points are read out of the merged order.
+    const place = mergedPlaces(grid.inside, grid.beyond);
+    const [imin, imax] = mergedExtremes(pin, pout, place);
+    const keep = thinIndices(grid.inside.length + grid.beyond.length, maxCurvePoints, [imax, imin]);
     const others: Record<string, number> = Object.create(null);
     design.inputs.forEach((name, k) => {
       if (k !== c) others[name] = medians[k];
@@ -766,8 +834,8 @@ export function scoreSwing(plan: SwingPlan, design: Design, coefficients: ArrayL
       input: design.inputs[c],
       others,
       range: [grid.inside[0], grid.inside[grid.inside.length - 1]],
-      x: keep.map((i) => xs[i]),
-      prediction: keep.map((i) => ps[i]),
+      x: mergedValues(grid.inside, grid.beyond, place, keep),
+      prediction: mergedValues(pin, pout, place, keep),
     });
   }
   if (plan.segmentColumns !== null) score(plan.segmentColumns, plan.segmentColumns[0].length, 'inside');
