@@ -208,8 +208,7 @@ function packDistinct(a: Float64Array, n: number): number {
 function uniqueOfRuns(xs: Float64Array, split: number, length: number): Float64Array {
   if (!ascending(xs, 0, split) || !ascending(xs, split, length)) return unique(xs, length);
   const out = new Float64Array(length);
-  mergeRuns(xs, split, length, out);
-  return out.slice(0, packDistinct(out, length));
+  return out.subarray(0, mergeRuns(xs, split, length, out));
 }
 
 /** True when xs[from..to) holds no NaN and is ascending in the order of the built-in sort. */
@@ -221,14 +220,20 @@ function ascending(xs: Float64Array, from: number, to: number): boolean {
   return true;
 }
 
-/** out[0..length) = the merge of the ascending runs xs[0..split) and xs[split..length) (equal values: the first run's first). */
-function mergeRuns(xs: Float64Array, split: number, length: number, out: Float64Array): void {
+/**
+ * Writes to `out` the distinct values of the merge of the ascending runs xs[0..split) and
+ * xs[split..length) (equal values: the first run's first; of values equal to `===`, -0 and +0,
+ * the first is kept, as {@link packDistinct} keeps it) and returns how many.
+ */
+function mergeRuns(xs: Float64Array, split: number, length: number, out: Float64Array): number {
   let i = 0;
   let j = split;
-  for (let w = 0; w < length; w++) {
-    if (j >= length || (i < split && !sortsBefore(xs[j], xs[i]))) out[w] = xs[i++];
-    else out[w] = xs[j++];
+  let w = 0;
+  for (let k = 0; k < length; k++) {
+    const v = j >= length || (i < split && !sortsBefore(xs[j], xs[i])) ? xs[i++] : xs[j++];
+    if (w === 0 || v !== out[w - 1]) out[w++] = v;
   }
+  return w;
 }
 
 /** a < b in the order of the built-in typed-array sort (-0 before +0). */
@@ -528,15 +533,28 @@ function pointExcursion(v: number, lo: number, hi: number): number {
   return Number.isNaN(v) ? Infinity : Math.max(0, v - hi, lo - v) / (hi - lo);
 }
 
-/** The first index of pred[0..m) with the largest {@link pointExcursion}; 0 when none is larger than -Infinity. */
+/**
+ * The first index of pred[0..m) with the largest {@link pointExcursion}; 0 when none is larger than
+ * -Infinity. The excursion is divided by the band's width only for a point whose distance outside
+ * the band (Infinity for NaN) is above every earlier one's: division by the width never lowers
+ * an order, so no other point can have a larger excursion.
+ */
 function worstExcursionIndex(pred: Float64Array, m: number, lo: number, hi: number): number {
   let value = -Infinity;
   let index = 0;
+  let farthest = -Infinity;
   for (let i = 0; i < m; i++) {
-    const e = pointExcursion(pred[i], lo, hi);
-    if (e > value) {
-      value = e;
-      index = i;
+    const v = pred[i];
+    const above = v - hi;
+    const below = lo - v;
+    const distance = Number.isNaN(v) ? Infinity : Math.max(0, above, below);
+    if (distance > farthest) {
+      farthest = distance;
+      const e = pointExcursion(v, lo, hi);
+      if (e > value) {
+        value = e;
+        index = i;
+      }
     }
   }
   return index;

@@ -155,6 +155,13 @@ describe('swing curve: inside and margin points merged, thinned with the extreme
       expect(curve.x).toEqual(expected.x);
       expect(curve.prediction).toEqual(expected.prediction);
       expect(curve.x.length).toBeLessThanOrEqual(Math.max(c.count, 4));
+      // The worst point inside: the first with the largest excursion max(0, p - 1, 0 - p) / 1 (NaN: Infinity).
+      const pin = predict(grid.inside);
+      const excursions = Array.from(pin, (p) => (Number.isNaN(p) ? Infinity : Math.max(0, p - 1, -p)));
+      const worst = excursions.indexOf(Math.max(...excursions));
+      const swing = scoreSwing(swingPlan, design, c.coefficients);
+      expect(swing.inside).toBe(excursions[worst]);
+      expect(swing.worstInside).toEqual({ inputs: { x1: grid.inside[worst] }, prediction: pin[worst] });
     });
   }
 });
