@@ -140,10 +140,28 @@ describe('swing curve: inside and margin points merged, thinned with the extreme
     { name: 'a rising line', inside: even(0, 1, 900), beyond: [-0.1, -0.05, 1.05, 1.1], coefficients: [0, 1], count: 100 },
     { name: 'a falling line, few points', inside: even(0, 1, 30), beyond: [-0.1, 1.1], coefficients: [1, -2], count: 400 },
     // Margin points equal to the range's ends (a range of a few ulps): inside first.
-    { name: 'margins equal to the ends', inside: [1e8, 1e8 + 1.5e-8, 1e8 + 3e-8], beyond: [1e8, 1e8 + 3e-8], coefficients: [0, 1], count: 3 },
-    { name: 'a flat curve (first of equal extremes)', inside: even(-1, 1, 500), beyond: [-1.2, -1.1, 1.1, 1.2], coefficients: [5, 0], count: 50 },
+    {
+      name: 'margins equal to the ends',
+      inside: [1e8, 1e8 + 1.5e-8, 1e8 + 3e-8],
+      beyond: [1e8, 1e8 + 3e-8],
+      coefficients: [0, 1],
+      count: 3,
+    },
+    {
+      name: 'a flat curve (first of equal extremes)',
+      inside: even(-1, 1, 500),
+      beyond: [-1.2, -1.1, 1.1, 1.2],
+      coefficients: [5, 0],
+      count: 50,
+    },
     { name: 'no predictions (NaN)', inside: even(0, 1, 300), beyond: [-0.1, 1.1], coefficients: [Number.NaN, 1], count: 40 },
-    { name: 'wide margins, extremes in them', inside: even(-1, 1, 700), beyond: even(-1.5, -1.05, 20).concat(even(1.05, 1.5, 20)), coefficients: [0, 1], count: 25 },
+    {
+      name: 'wide margins, extremes in them',
+      inside: even(-1, 1, 700),
+      beyond: even(-1.5, -1.05, 20).concat(even(1.05, 1.5, 20)),
+      coefficients: [0, 1],
+      count: 25,
+    },
   ];
   for (const c of cases) {
     it(`${c.name}: the points and predictions of the definition`, () => {
