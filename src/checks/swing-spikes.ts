@@ -45,7 +45,8 @@ const check: Check = {
       scale !== null && scale.limitsScale === 'original'
         ? { kind: scale.transform, y: scale.originalRows.train.y, weights: scale.originalRows.train.weights }
         : undefined;
-    const spikes = measureSpikes(context.design, context.train, context.fit.coefficients, original);
+    // The swing check (listed before this one) has predicted the same points: taken, not redone.
+    const spikes = measureSpikes(context.design, context.train, context.fit.coefficients, original, context.analyses.swingInsideCurves());
     if (Number.isNaN(spikes.ratio)) {
       return {
         value: null,

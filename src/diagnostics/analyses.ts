@@ -10,7 +10,7 @@ import type { FitResult } from '../fit/index.js';
 import { complementFactors, crossValidate, foldFactors, type CrossValidation, type FoldFactors } from './cross-validation.js';
 import { assignFolds, type Folds } from './folds.js';
 import { findLeakage, type Leakage } from './leakage.js';
-import { measureSwing, type Swing, type SwingOptions } from './swing.js';
+import { measureSwing, type InsideCurve, type Swing, type SwingOptions } from './swing.js';
 import type { TargetTransformKind } from '../data/target-transform.js';
 
 /** What the analyses are computed from. */
@@ -41,6 +41,7 @@ export class ModelAnalyses {
   #foldFactors: FoldFactors | undefined;
   #crossValidation: CrossValidation | undefined;
   #swing: Swing | undefined;
+  readonly #insideCurves: InsideCurve[] = [];
   #leakage: Leakage | undefined;
   readonly #swingOptions: SwingOptions;
 
@@ -94,8 +95,18 @@ export class ModelAnalyses {
       this.#inputs.train,
       this.#inputs.fit.coefficients,
       back ? { ...this.#swingOptions, backTransform: back } : this.#swingOptions,
+      this.#insideCurves,
     );
     return this.#swing;
+  }
+
+  /**
+   * The predictions the swing scan made along inputs at the points the spike figure scans (see
+   * swing.ts {@link InsideCurve}); empty until {@link ModelAnalyses.swing} has run (this does not
+   * run it).
+   */
+  swingInsideCurves(): readonly InsideCurve[] {
+    return this.#insideCurves;
   }
 
   /** Hold-out rows that repeat a training row (see {@link findLeakage}). */

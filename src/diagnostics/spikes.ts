@@ -23,7 +23,7 @@ import type { Design } from '../design/design-matrix.js';
 import { predictRows } from '../design/blocks.js';
 import { columnMedian } from './column-median.js';
 import type { Rows } from './cross-validation.js';
-import { inputGrid } from './swing.js';
+import { inputGrid, type InsideCurve } from './swing.js';
 import { inverseTarget, type TargetTransformKind } from '../data/target-transform.js';
 
 /** One input's figures. */
@@ -56,12 +56,16 @@ export const SPIKE_MAX_ROWS = 20_000;
  * @param original a model fitted on t = g(y) judged on the original scale: the transform (the
  *   curve is back-transformed) and the training targets as written (the data variation is theirs);
  *   default none (the fit's own scale)
+ * @param known curves along inputs that the swing scan already predicted on the same design, rows
+ *   and coefficients (swing.ts {@link InsideCurve}): one whose back transform is that of
+ *   `original` is taken instead of predicting the same points again; default none
  */
 export function measureSpikes(
   design: Design,
   train: Rows & { weights?: Float64Array },
   coefficients: ArrayLike<number>,
   original?: { kind: TargetTransformKind; y: Float64Array; weights?: Float64Array },
+  known: readonly InsideCurve[] = [],
 ): Spikes {
   const n = train.rows;
   const medians = train.inputs.map((col) => columnMedian(col, n));
@@ -71,11 +75,10 @@ export function measureSpikes(
   design.inputs.forEach((name, c) => {
     // Category inputs have no order between their levels: no variation along them to compare.
     if (design.terms.some((t) => t.discreteValues !== undefined && t.inputs.includes(name))) return;
-    const grid = inputGrid(train.inputs[c].subarray(0, n)).inside;
-    if (grid.length < 2) return;
-    const columns = design.inputs.map((_, k) => (k === c ? grid : new Float64Array(grid.length).fill(medians[k])));
-    const curve = predictRows(design, { inputs: columns, rows: grid.length }, coefficients);
-    if (original !== undefined) for (let i = 0; i < curve.length; i++) curve[i] = inverseTarget(original.kind, curve[i]);
+    const curve =
+      known.find((k) => k.input === c && k.backTransform === original?.kind)?.prediction ??
+      curveAlong(design, train, coefficients, c, medians, original);
+    if (curve.length < 2) return;
     const curveVariation = totalVariation(curve, curve.length);
     const dataVariation = targetVariation(train.inputs[c], original?.y ?? train.y, n, original ? original.weights : train.weights);
     const r = dataVariation > 0 ? curveVariation / dataVariation : Number.NaN;
@@ -86,6 +89,23 @@ export function measureSpikes(
     }
   });
   return { ratio, worst, perInput };
+}
+
+/** The predictions at the points of {@link inputGrid} inside input c's range, the other inputs at `medians` (back-transformed under `original`). */
+function curveAlong(
+  design: Design,
+  train: Rows,
+  coefficients: ArrayLike<number>,
+  c: number,
+  medians: readonly number[],
+  original?: { kind: TargetTransformKind },
+): Float64Array {
+  const grid = inputGrid(train.inputs[c].subarray(0, train.rows)).inside;
+  if (grid.length < 2) return new Float64Array(0);
+  const columns = design.inputs.map((_, k) => (k === c ? grid : new Float64Array(grid.length).fill(medians[k])));
+  const curve = predictRows(design, { inputs: columns, rows: grid.length }, coefficients);
+  if (original !== undefined) for (let i = 0; i < curve.length; i++) curve[i] = inverseTarget(original.kind, curve[i]);
+  return curve;
 }
 
 /** sum |v[k+1] - v[k]| over the first m values (one loop; see DEVELOPERS.md, "Writing hot loops"). */

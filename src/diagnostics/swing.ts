@@ -156,7 +156,8 @@ export function excursion(prediction: ArrayLike<number>, lo: number, hi: number)
  */
 export function inputGrid(values: ArrayLike<number>, options: SwingOptions = {}): { inside: Float64Array; beyond: Float64Array } {
   const sorted = Float64Array.from(values).sort();
-  return gridFromSorted(sorted, sorted.length, options);
+  const { inside, beyond } = gridFromSorted(sorted, sorted.length, options);
+  return { inside, beyond };
 }
 
 /**
@@ -168,7 +169,7 @@ function gridFromSorted(
   n: number,
   options: SwingOptions,
   work?: Float64Array,
-): { inside: Float64Array; beyond: Float64Array } {
+): { inside: Float64Array; beyond: Float64Array; gaps: number } {
   const perGap = options.perGap ?? SWING_DEFAULTS.perGap;
   const uniform = options.uniform ?? SWING_DEFAULTS.uniform;
   const margin = options.margin ?? SWING_DEFAULTS.margin;
@@ -176,7 +177,7 @@ function gridFromSorted(
   const maxGaps = options.maxGaps ?? SWING_DEFAULTS.maxGaps;
   const count = packDistinct(sorted, n);
   const distinct = sorted.subarray(0, count);
-  if (count < 2) return { inside: new Float64Array(0), beyond: new Float64Array(0) };
+  if (count < 2) return { inside: new Float64Array(0), beyond: new Float64Array(0), gaps: 0 };
   const lo = distinct[0];
   const hi = distinct[count - 1];
   const width = hi - lo;
@@ -186,7 +187,7 @@ function gridFromSorted(
   fillUniform(inside, uniform, lo, hi);
   const w = fillGaps(inside, uniform, distinct, gaps, per);
   const beyond = marginGrid(lo, hi, margin * width, marginPoints);
-  return { inside: uniqueOfRuns(inside, uniform, w), beyond: unique(beyond, beyond.length) };
+  return { inside: uniqueOfRuns(inside, uniform, w), beyond: unique(beyond, beyond.length), gaps: count - 1 };
 }
 
 // The loops of the grid are functions of their own, each a loop and its return (see
@@ -207,8 +208,7 @@ function packDistinct(a: Float64Array, n: number): number {
 function uniqueOfRuns(xs: Float64Array, split: number, length: number): Float64Array {
   if (!ascending(xs, 0, split) || !ascending(xs, split, length)) return unique(xs, length);
   const out = new Float64Array(length);
-  mergeRuns(xs, split, length, out);
-  return out.slice(0, packDistinct(out, length));
+  return out.subarray(0, mergeRuns(xs, split, length, out));
 }
 
 /** True when xs[from..to) holds no NaN and is ascending in the order of the built-in sort. */
@@ -220,14 +220,20 @@ function ascending(xs: Float64Array, from: number, to: number): boolean {
   return true;
 }
 
-/** out[0..length) = the merge of the ascending runs xs[0..split) and xs[split..length) (equal values: the first run's first). */
-function mergeRuns(xs: Float64Array, split: number, length: number, out: Float64Array): void {
+/**
+ * Writes to `out` the distinct values of the merge of the ascending runs xs[0..split) and
+ * xs[split..length) (equal values: the first run's first; of values equal to `===`, -0 and +0,
+ * the first is kept, as {@link packDistinct} keeps it) and returns how many.
+ */
+function mergeRuns(xs: Float64Array, split: number, length: number, out: Float64Array): number {
   let i = 0;
   let j = split;
-  for (let w = 0; w < length; w++) {
-    if (j >= length || (i < split && !sortsBefore(xs[j], xs[i]))) out[w] = xs[i++];
-    else out[w] = xs[j++];
+  let w = 0;
+  for (let k = 0; k < length; k++) {
+    const v = j >= length || (i < split && !sortsBefore(xs[j], xs[i])) ? xs[i++] : xs[j++];
+    if (w === 0 || v !== out[w - 1]) out[w++] = v;
   }
+  return w;
 }
 
 /** a < b in the order of the built-in typed-array sort (-0 before +0). */
@@ -340,13 +346,38 @@ function stridedSample(column: Float64Array, n: number, count: number, out: Floa
   for (let t = 0; t < count; t++) out[t] = column[Math.floor((t * n) / count)];
 }
 
-/** Indices of at most `count` points (ascending) spread evenly, always keeping `keep`. */
+/**
+ * Indices of at most `count` points (ascending, distinct) spread evenly, always keeping `keep`:
+ * every index when `length <= count`, else the indices in `keep` plus round(t (length - 1) /
+ * (slots - 1)) for t = 0 .. slots - 1, slots = max(2, count - (distinct indices kept)).
+ */
 function thinIndices(length: number, count: number, keep: readonly number[]): number[] {
   if (length <= count) return Array.from({ length }, (_, i) => i);
-  const chosen = new Set<number>(keep.filter((i) => i >= 0 && i < length));
-  const slots = Math.max(2, count - chosen.size);
-  for (let t = 0; t < slots; t++) chosen.add(Math.round((t * (length - 1)) / (slots - 1)));
-  return [...chosen].sort((a, b) => a - b);
+  const kept = [...new Set(keep.filter((i) => i >= 0 && i < length))].sort((a, b) => a - b);
+  const slots = Math.max(2, count - kept.length);
+  // The even indices rise by more than 1 each (length - 1 >= slots), so they are distinct and ascending.
+  const even = evenIndices(length, slots);
+  return withKept(even, kept);
+}
+
+/** round(t (length - 1) / (slots - 1)) for t = 0 .. slots - 1 (one loop; see DEVELOPERS.md, "Writing hot loops"). */
+function evenIndices(length: number, slots: number): number[] {
+  const out = new Array<number>(slots);
+  for (let t = 0; t < slots; t++) out[t] = Math.round((t * (length - 1)) / (slots - 1));
+  return out;
+}
+
+/** The ascending distinct union of the ascending distinct `even` and the few ascending distinct `kept`. */
+function withKept(even: number[], kept: readonly number[]): number[] {
+  const out: number[] = [];
+  let k = 0;
+  for (const i of even) {
+    while (k < kept.length && kept[k] < i) out.push(kept[k++]);
+    if (k < kept.length && kept[k] === i) k++;
+    out.push(i);
+  }
+  while (k < kept.length) out.push(kept[k++]);
+  return out;
 }
 
 /**
@@ -370,7 +401,7 @@ function predictorAlong(
   const name = design.inputs[c];
   const varying = design.terms.map((t) => t.inputs.includes(name));
   const constantColumns = (n: number): Float64Array[] => design.inputs.map((_, k) => new Float64Array(n).fill(fixed[k]));
-  if (varying.every(Boolean)) {
+  if (readByEveryTerm(design, c)) {
     return (xs) => {
       const columns = constantColumns(xs.length);
       columns[c] = xs;
@@ -404,23 +435,92 @@ function predictorAlong(
   };
 }
 
+/** True when every term of the design reads input c (its predictions along c take the whole design). */
+function readByEveryTerm(design: Design, c: number): boolean {
+  const name = design.inputs[c];
+  return design.terms.every((t) => t.inputs.includes(name));
+}
+
 /**
- * Merges two ascending point sets that never share a value (the margins lie outside the range)
- * with their predictions into xs and ps (length of both sets together): the order a stable sort
- * by x gives.
+ * Where the points of `bx` fall when the ascending point sets `ax` and `bx` are merged as a stable
+ * sort by x gives (a point of `ax` before an equal one of `bx`): place[b] is bx[b]'s index in the
+ * merged order, ascending. The merged order is never built: the curve reads its few kept points
+ * through {@link mergedValues}.
  */
-function mergeAscending(ax: Float64Array, ap: Float64Array, bx: Float64Array, bp: Float64Array, xs: Float64Array, ps: Float64Array): void {
-  const na = ax.length;
-  const nb = bx.length;
-  for (let a = 0, b = 0, dst = 0; dst < na + nb; dst++) {
-    if (b >= nb || (a < na && ax[a] <= bx[b])) {
-      xs[dst] = ax[a];
-      ps[dst] = ap[a++];
-    } else {
-      xs[dst] = bx[b];
-      ps[dst] = bp[b++];
+function mergedPlaces(ax: Float64Array, bx: Float64Array): Int32Array {
+  const place = new Int32Array(bx.length);
+  let a = 0;
+  for (let b = 0; b < bx.length; b++) {
+    a = firstAfter(ax, a, bx[b]);
+    place[b] = a + b;
+  }
+  return place;
+}
+
+/** The first index i >= from of xs with !(xs[i] <= v), or xs.length: how far a merge takes xs before v. */
+function firstAfter(xs: Float64Array, from: number, v: number): number {
+  let i = from;
+  while (i < xs.length && xs[i] <= v) i++;
+  return i;
+}
+
+/** The values at the merged indices `indices` (ascending) of `a` and `b` merged with `b` at `place` (see {@link mergedPlaces}). */
+function mergedValues(a: Float64Array, b: Float64Array, place: Int32Array, indices: readonly number[]): number[] {
+  const out = new Array<number>(indices.length);
+  let k = 0;
+  for (let q = 0; q < indices.length; q++) {
+    const i = indices[q];
+    while (k < place.length && place[k] < i) k++;
+    out[q] = k < place.length && place[k] === i ? b[k] : a[i - k];
+  }
+  return out;
+}
+
+/**
+ * [merged index of the smallest, of the largest] value of `a` and `b` merged with `b` at `place`
+ * (first of equals, as a scan of the merged values in order keeps the first; a NaN first value is
+ * kept, since nothing compares below or above it); [0, 0] when both are empty.
+ */
+function mergedExtremes(a: Float64Array, b: Float64Array, place: Int32Array): [number, number] {
+  const total = a.length + b.length;
+  if (total === 0) return [0, 0];
+  const first = place.length > 0 && place[0] === 0 ? b[0] : a[0];
+  const best = { min: first, max: first, imin: 0, imax: 0 };
+  // The merged order: runs of `a` between the points of `b`.
+  let from = 0;
+  for (let k = 0; k <= place.length; k++) {
+    const to = k < place.length ? place[k] - k : a.length;
+    extremesOfRun(a, from, to, k, best);
+    if (k < place.length) extremesOfRun(b, k, k + 1, place[k] - k, best);
+    from = to;
+  }
+  return [best.imin, best.imax];
+}
+
+/** Updates `best` over values[from..to), whose merged index is the index plus `shift` (one loop). */
+function extremesOfRun(
+  values: Float64Array,
+  from: number,
+  to: number,
+  shift: number,
+  best: { min: number; max: number; imin: number; imax: number },
+): void {
+  let { min, max, imin, imax } = best;
+  for (let i = from; i < to; i++) {
+    const v = values[i];
+    if (v < min) {
+      min = v;
+      imin = i + shift;
+    }
+    if (v > max) {
+      max = v;
+      imax = i + shift;
     }
   }
+  best.min = min;
+  best.max = max;
+  best.imin = imin;
+  best.imax = imax;
 }
 
 /** v[i] = g^-1(v[i]) for i < m (one loop; see DEVELOPERS.md, "Writing hot loops"). */
@@ -428,39 +528,33 @@ function backTransformInPlace(v: Float64Array, m: number, kind: TargetTransformK
   for (let i = 0; i < m; i++) v[i] = inverseTarget(kind, v[i]);
 }
 
-/** [index of the smallest, index of the largest] value (first of equals); [0, 0] when empty. */
-function extremeIndices(values: Float64Array): [number, number] {
-  return [indexOfSmallest(values), indexOfLargest(values)];
-}
-
-// One loop per function (see DEVELOPERS.md, "Writing hot loops").
-
-function indexOfSmallest(values: Float64Array): number {
-  let imin = 0;
-  for (let i = 1; i < values.length; i++) if (values[i] < values[imin]) imin = i;
-  return imin;
-}
-
-function indexOfLargest(values: Float64Array): number {
-  let imax = 0;
-  for (let i = 1; i < values.length; i++) if (values[i] > values[imax]) imax = i;
-  return imax;
-}
-
 /** Excursion of one prediction: max(0, v - hi, lo - v) / (hi - lo); Infinity for NaN. */
 function pointExcursion(v: number, lo: number, hi: number): number {
   return Number.isNaN(v) ? Infinity : Math.max(0, v - hi, lo - v) / (hi - lo);
 }
 
-/** The first index of pred[0..m) with the largest {@link pointExcursion}; 0 when none is larger than -Infinity. */
+/**
+ * The first index of pred[0..m) with the largest {@link pointExcursion}; 0 when none is larger than
+ * -Infinity. The excursion is divided by the band's width only for a point whose distance outside
+ * the band (Infinity for NaN) is above every earlier one's: division by the width never lowers
+ * an order, so no other point can have a larger excursion.
+ */
 function worstExcursionIndex(pred: Float64Array, m: number, lo: number, hi: number): number {
   let value = -Infinity;
   let index = 0;
+  let farthest = -Infinity;
   for (let i = 0; i < m; i++) {
-    const e = pointExcursion(pred[i], lo, hi);
-    if (e > value) {
-      value = e;
-      index = i;
+    const v = pred[i];
+    const above = v - hi;
+    const below = lo - v;
+    const distance = Number.isNaN(v) ? Infinity : Math.max(0, above, below);
+    if (distance > farthest) {
+      farthest = distance;
+      const e = pointExcursion(v, lo, hi);
+      if (e > value) {
+        value = e;
+        index = i;
+      }
     }
   }
   return index;
@@ -473,6 +567,12 @@ export interface SwingGrid {
   /** Points inside the range and in the margins, each ascending. */
   inside: Float64Array;
   beyond: Float64Array;
+  /**
+   * True when `inside` is {@link inputGrid} of every training value of the input with the default
+   * sizes (no row sample, no transformed scale): the points the spike figure scans
+   * (diagnostics/spikes.ts), which then takes the predictions there from {@link scoreSwing}.
+   */
+  whole?: boolean;
 }
 
 /**
@@ -571,7 +671,8 @@ export function planSwing(design: Design, train: Rows, options: SwingOptions = {
       grid.inside = grid.inside.map(onScale.inverse);
       grid.beyond = grid.beyond.map(onScale.inverse);
     }
-    if (grid.inside.length > 0) grids.push({ input: c, inside: grid.inside, beyond: admitted(design, c, grid.beyond) });
+    const whole = len === n && onScale === null && defaultInsideGrid(options, gridOptions, grid.gaps);
+    if (grid.inside.length > 0) grids.push({ input: c, inside: grid.inside, beyond: admitted(design, c, grid.beyond), whole });
   }
 
   // Several inputs: segments between sampled rows and their nearest neighbours.
@@ -611,6 +712,20 @@ export function planSwing(design: Design, train: Rows, options: SwingOptions = {
   };
 }
 
+/**
+ * True when a grid of `gaps` gaps built with `gridOptions` (the share of the gaps of one input)
+ * holds the same inside points as {@link inputGrid} with the default sizes: the same points per
+ * gap and uniform points, and either the same number of gaps kept or every gap kept by both.
+ */
+function defaultInsideGrid(options: SwingOptions, gridOptions: SwingOptions, gaps: number): boolean {
+  const maxGaps = gridOptions.maxGaps ?? SWING_DEFAULTS.maxGaps;
+  return (
+    (options.perGap ?? SWING_DEFAULTS.perGap) === SWING_DEFAULTS.perGap &&
+    (options.uniform ?? SWING_DEFAULTS.uniform) === SWING_DEFAULTS.uniform &&
+    (maxGaps === SWING_DEFAULTS.maxGaps || gaps <= Math.min(maxGaps, SWING_DEFAULTS.maxGaps))
+  );
+}
+
 /** The points (rows of `columns`) at which every term is defined: a segment between two levels of a category has no levels between them. */
 function admittedRows(design: Design, columns: Float64Array[]): Float64Array[] {
   const checks = design.terms.filter((t) => t.admits !== undefined);
@@ -640,13 +755,31 @@ function admitted(design: Design, c: number, points: Float64Array): Float64Array
 }
 
 /**
+ * The predictions along one input at the points of its whole grid ({@link SwingGrid.whole}), the
+ * other inputs at their training medians, predicted with the whole design: what the spike figure
+ * computes along that input (diagnostics/spikes.ts), kept so that it is computed once.
+ */
+export interface InsideCurve {
+  /** Index of the input in `design.inputs`. */
+  input: number;
+  /** The grid's inside points, ascending. */
+  grid: Float64Array;
+  /** The predictions at `grid`, back-transformed under `backTransform`. */
+  prediction: Float64Array;
+  /** The plan's {@link SwingPlan.backTransform}, or absent. */
+  backTransform?: TargetTransformKind;
+}
+
+/**
  * Scores a {@link SwingPlan} under the fitted coefficients: the swing figures and curves.
  *
  * @param plan from {@link planSwing} on the same design and rows
  * @param design the fitted design
  * @param coefficients fitted coefficients (length p)
+ * @param insideCurves when given, receives an {@link InsideCurve} for every whole grid predicted
+ *   with the whole design (an input every term reads); default none
  */
-export function scoreSwing(plan: SwingPlan, design: Design, coefficients: ArrayLike<number>): Swing {
+export function scoreSwing(plan: SwingPlan, design: Design, coefficients: ArrayLike<number>, insideCurves?: InsideCurve[]): Swing {
   const [ylo, yhi] = plan.band;
   const { medians, maxCurvePoints } = plan;
   let inside = 0;
@@ -697,13 +830,20 @@ export function scoreSwing(plan: SwingPlan, design: Design, coefficients: ArrayL
     const predict = predictorAlong(design, coefficients, c, medians);
     const pin = score(along(grid.inside), grid.inside.length, 'inside', predict(grid.inside));
     const pout = score(along(grid.beyond), grid.beyond.length, 'beyond', predict(grid.beyond));
+    if (insideCurves !== undefined && grid.whole === true && readByEveryTerm(design, c)) {
+      insideCurves.push({
+        input: c,
+        grid: grid.inside,
+        prediction: pin,
+        ...(plan.backTransform !== undefined ? { backTransform: plan.backTransform } : {}),
+      });
+    }
     if (curves.length >= plan.maxCurves) continue;
-    // Curve for charts: all points ascending, thinned with the extremes kept.
-    const xs = new Float64Array(grid.inside.length + grid.beyond.length);
-    const ps = new Float64Array(xs.length);
-    mergeAscending(grid.inside, pin, grid.beyond, pout, xs, ps);
-    const [imin, imax] = extremeIndices(ps);
-    const keep = thinIndices(xs.length, maxCurvePoints, [imax, imin]);
+    // Curve for charts: all points ascending (inside and margins merged), thinned with the
+    // extremes kept; only the kept points are read out of the merged order.
+    const place = mergedPlaces(grid.inside, grid.beyond);
+    const [imin, imax] = mergedExtremes(pin, pout, place);
+    const keep = thinIndices(grid.inside.length + grid.beyond.length, maxCurvePoints, [imax, imin]);
     const others: Record<string, number> = Object.create(null);
     design.inputs.forEach((name, k) => {
       if (k !== c) others[name] = medians[k];
@@ -712,8 +852,8 @@ export function scoreSwing(plan: SwingPlan, design: Design, coefficients: ArrayL
       input: design.inputs[c],
       others,
       range: [grid.inside[0], grid.inside[grid.inside.length - 1]],
-      x: keep.map((i) => xs[i]),
-      prediction: keep.map((i) => ps[i]),
+      x: mergedValues(grid.inside, grid.beyond, place, keep),
+      prediction: mergedValues(pin, pout, place, keep),
     });
   }
   if (plan.segmentColumns !== null) score(plan.segmentColumns, plan.segmentColumns[0].length, 'inside');
@@ -747,7 +887,14 @@ export function scoreSwing(plan: SwingPlan, design: Design, coefficients: ArrayL
  * @param train training rows (inputs in `design.inputs` order)
  * @param coefficients fitted coefficients (length p)
  * @param options grid sizes (see {@link SwingOptions})
+ * @param insideCurves as in {@link scoreSwing}; default none
  */
-export function measureSwing(design: Design, train: Rows, coefficients: ArrayLike<number>, options: SwingOptions = {}): Swing {
-  return scoreSwing(planSwing(design, train, options), design, coefficients);
+export function measureSwing(
+  design: Design,
+  train: Rows,
+  coefficients: ArrayLike<number>,
+  options: SwingOptions = {},
+  insideCurves?: InsideCurve[],
+): Swing {
+  return scoreSwing(planSwing(design, train, options), design, coefficients, insideCurves);
 }

@@ -2,7 +2,8 @@
  * A {@link RepoReader} over a folder on disk (the working tree). Every path is checked
  * lexically (no absolute paths, no `..` above the root) and then through the file system
  * (the real path, with every symbolic link at any level followed, must stay inside the
- * root's real path) before anything is opened; the real path is what gets opened.
+ * root's real path) before anything is opened; the real path is what gets opened. A path's real
+ * path, once found inside the root, is kept for the reader's life (one run).
  *
  * The file system calls are synchronous behind the asynchronous interface: a run reads its files
  * one after another (models run in parallel on worker threads, each with its own reader), and a
@@ -41,8 +42,15 @@ export function createFsRepository(root: string): RepoReader {
     return rootRealPromise;
   };
 
+  // Real paths already found inside the root, by normalised path: a run names each data file
+  // several times (resolved from its descriptor, sized, read), and the answer is the same within
+  // one run. Only paths found inside are kept; a missing path is looked up again each time.
+  const knownInside = new Map<string, string>();
+
   /** The real path of a normalised repository-relative path, or null when nothing is there. */
   const realInside = async (rel: string, where: ErrorLocation, shown: string): Promise<string | null> => {
+    const known = knownInside.get(rel);
+    if (known !== undefined) return known;
     const base = await rootReal();
     const full = rel === '' ? base : nodePath.join(base, rel);
     let real: string | null = null;
@@ -69,13 +77,14 @@ export function createFsRepository(root: string): RepoReader {
       return null;
     }
     if (!isInside(base, real)) throw outside(shown, where);
+    knownInside.set(rel, real);
     return real;
   };
 
   const check = async (path: string): Promise<string | null> => realInside(normaliseRepoPath(path), { file: path }, path);
 
-  /** What `path` names, and its real path when something is there. */
-  const kindOf = async (path: string): Promise<{ kind: EntryKind; real: string | null }> => {
+  /** What `path` names, and its real path and file information when something is there. */
+  const kindOf = async (path: string): Promise<{ kind: EntryKind; real: string | null; info?: Stats }> => {
     const real = await check(path);
     if (real === null) {
       // Nothing at the end of the links: a link that leads nowhere is not "missing".
@@ -89,15 +98,16 @@ export function createFsRepository(root: string): RepoReader {
       }
     }
     const info = await stat(real, { file: path });
-    return { kind: info.isFile() ? 'file' : info.isDirectory() ? 'folder' : 'special', real };
+    return { kind: info.isFile() ? 'file' : info.isDirectory() ? 'folder' : 'special', real, info };
   };
 
-  const requireFile = async (path: string): Promise<string> => {
-    const { kind, real } = await kindOf(path);
+  /** The real path of a regular file and its information; InputError otherwise. */
+  const requireFile = async (path: string): Promise<{ real: string; info: Stats }> => {
+    const { kind, real, info } = await kindOf(path);
     if (kind === 'missing')
       throw new InputError(FILE_MISSING, `no such file in ${rootAbsolute}; expected an existing file`, { file: path });
-    if (kind !== 'file' || real === null) throw notAFileError(kind === 'file' ? 'special' : kind, { file: path });
-    return real;
+    if (kind !== 'file' || real === null || info === undefined) throw notAFileError(kind === 'file' ? 'special' : kind, { file: path });
+    return { real, info };
   };
 
   return {
@@ -115,10 +125,10 @@ export function createFsRepository(root: string): RepoReader {
       return (await kindOf(path)).kind;
     },
     async size(path) {
-      return (await stat(await requireFile(path), { file: path })).size;
+      return (await requireFile(path)).info.size;
     },
     async read(path) {
-      const real = await requireFile(path);
+      const { real } = await requireFile(path);
       try {
         return readFileSync(real);
       } catch (error) {
@@ -126,7 +136,7 @@ export function createFsRepository(root: string): RepoReader {
       }
     },
     async *stream(path, chunkBytes = 1024 * 1024) {
-      const real = await requireFile(path);
+      const { real } = await requireFile(path);
       let fd: number;
       try {
         fd = openSync(real, 'r');

@@ -63,3 +63,36 @@ describe('swing-spikes (default { warn: 1.5, fail: 2 })', () => {
     expect(outcome.status, outcome.message).toBe('pass');
   });
 });
+
+// The swing scan (run first) keeps its predictions along an input whose grid is the spike grid;
+// swing-spikes then takes them instead of predicting the same points again. Its outcome must be
+// the very one computed alone (a fresh context, no swing run first), bit for bit.
+describe('swing-spikes after the swing scan', () => {
+  const n = 80;
+  const a = Array.from({ length: n }, (_, i) => (i * 37) % 101);
+  const b = Array.from({ length: n }, (_, i) => 5 + ((i * 13) % 29));
+  const target = a.map((v, i) => 3 + 0.2 * v - 0.001 * v * v + 0.5 * b[i] + ((i * 7) % 5) * 0.3);
+  const rows = table(['a', 'b', 'y'], [a, b, target]);
+  const cases = {
+    'one input (polynomial)': [{ kind: 'polynomial', of: 'a', degree: 3, shift: null, scale: null }],
+    'two inputs, one term reading both': [{ kind: 'multi-polynomial', of: ['a', 'b'], degree: 2, shift: [0, 0], scale: [1, 1] }],
+    'two inputs, a term each': [
+      { kind: 'polynomial', of: 'a', degree: 3, shift: null, scale: null },
+      { kind: 'linear', columns: ['b'] },
+    ],
+  } as const;
+  for (const [name, terms] of Object.entries(cases)) {
+    it(`${name}: the same outcome as computed alone`, () => {
+      const d = descriptor({ terms: terms as never, target: 'y', limits: defaultLimits() });
+      const alone = runCheck(swingSpikes, buildContext(d, rows, rows)).outcome;
+      const context = buildContext(d, rows, rows);
+      runCheck(swing, context);
+      const shared = context.analyses.swingInsideCurves();
+      const after = runCheck(swingSpikes, context).outcome;
+      expect(after).toEqual(alone);
+      expect(typeof alone.value).toBe('number');
+      // Only inputs every term reads are shared: both inputs of the one term, input a alone, none with a term each.
+      expect(shared.map((k) => k.input)).toEqual(name.startsWith('one') ? [0] : name.includes('one term') ? [0, 1] : []);
+    });
+  }
+});

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { excursion, inputGrid, measureSwing } from '../../src/diagnostics/swing.js';
+import { excursion, inputGrid, measureSwing, scoreSwing, type SwingPlan } from '../../src/diagnostics/swing.js';
+import { predictRows } from '../../src/design/blocks.js';
 import { fitRows, linearDesign } from './helpers.js';
 
 describe('excursion outside the band of training targets', () => {
@@ -98,4 +99,87 @@ describe('swing of a fitted model', () => {
     for (const c of swing.curves) expect(c.x.length).toBeLessThanOrEqual(400);
     expect(swing.inside).toBeLessThan(1e-9);
   });
+});
+
+describe('swing curve: inside and margin points merged, thinned with the extremes kept', () => {
+  // The curve's definition, built here plainly: every point and its prediction merged ascending
+  // (a stable sort by x: an inside point before an equal margin point), the first smallest and
+  // first largest prediction found by a scan in that order, and the indices round(t (L - 1) /
+  // (slots - 1)) plus those two, slots = count - (distinct indices kept), at least 2.
+  const reference = (inside: Float64Array, beyond: Float64Array, pin: Float64Array, pout: Float64Array, count: number) => {
+    const points = [...Array.from(inside, (x, i) => ({ x, p: pin[i] })), ...Array.from(beyond, (x, i) => ({ x, p: pout[i] }))];
+    const merged = points.map((q, order) => ({ ...q, order })).sort((a, b) => (a.x < b.x ? -1 : a.x > b.x ? 1 : a.order - b.order));
+    let imin = 0;
+    let imax = 0;
+    merged.forEach((q, i) => {
+      if (q.p < merged[imin].p) imin = i;
+      if (q.p > merged[imax].p) imax = i;
+    });
+    let keep = merged.map((_, i) => i);
+    if (merged.length > count) {
+      const chosen = new Set([imax, imin]);
+      const slots = Math.max(2, count - chosen.size);
+      for (let t = 0; t < slots; t++) chosen.add(Math.round((t * (merged.length - 1)) / (slots - 1)));
+      keep = [...chosen].sort((a, b) => a - b);
+    }
+    return { x: keep.map((i) => merged[i].x), prediction: keep.map((i) => merged[i].p) };
+  };
+  const design = linearDesign(1);
+  const plan = (inside: number[], beyond: number[], maxCurvePoints: number): SwingPlan => ({
+    band: [0, 1],
+    medians: [0],
+    grids: [{ input: 0, inside: Float64Array.from(inside), beyond: Float64Array.from(beyond) }],
+    segmentColumns: null,
+    segments: null,
+    margin: 0.1,
+    maxCurvePoints,
+    maxCurves: 12,
+  });
+  const even = (from: number, to: number, m: number): number[] => Array.from({ length: m }, (_, t) => from + ((to - from) * t) / (m - 1));
+  const cases: Array<{ name: string; inside: number[]; beyond: number[]; coefficients: number[]; count: number }> = [
+    { name: 'a rising line', inside: even(0, 1, 900), beyond: [-0.1, -0.05, 1.05, 1.1], coefficients: [0, 1], count: 100 },
+    { name: 'a falling line, few points', inside: even(0, 1, 30), beyond: [-0.1, 1.1], coefficients: [1, -2], count: 400 },
+    // Margin points equal to the range's ends (a range of a few ulps): inside first.
+    {
+      name: 'margins equal to the ends',
+      inside: [1e8, 1e8 + 1.5e-8, 1e8 + 3e-8],
+      beyond: [1e8, 1e8 + 3e-8],
+      coefficients: [0, 1],
+      count: 3,
+    },
+    {
+      name: 'a flat curve (first of equal extremes)',
+      inside: even(-1, 1, 500),
+      beyond: [-1.2, -1.1, 1.1, 1.2],
+      coefficients: [5, 0],
+      count: 50,
+    },
+    { name: 'no predictions (NaN)', inside: even(0, 1, 300), beyond: [-0.1, 1.1], coefficients: [Number.NaN, 1], count: 40 },
+    {
+      name: 'wide margins, extremes in them',
+      inside: even(-1, 1, 700),
+      beyond: even(-1.5, -1.05, 20).concat(even(1.05, 1.5, 20)),
+      coefficients: [0, 1],
+      count: 25,
+    },
+  ];
+  for (const c of cases) {
+    it(`${c.name}: the points and predictions of the definition`, () => {
+      const swingPlan = plan(c.inside, c.beyond, c.count);
+      const grid = swingPlan.grids[0];
+      const predict = (xs: Float64Array): Float64Array => predictRows(design, { inputs: [xs], rows: xs.length }, c.coefficients);
+      const curve = scoreSwing(swingPlan, design, c.coefficients).curves[0];
+      const expected = reference(grid.inside, grid.beyond, predict(grid.inside), predict(grid.beyond), c.count);
+      expect(curve.x).toEqual(expected.x);
+      expect(curve.prediction).toEqual(expected.prediction);
+      expect(curve.x.length).toBeLessThanOrEqual(Math.max(c.count, 4));
+      // The worst point inside: the first with the largest excursion max(0, p - 1, 0 - p) / 1 (NaN: Infinity).
+      const pin = predict(grid.inside);
+      const excursions = Array.from(pin, (p) => (Number.isNaN(p) ? Infinity : Math.max(0, p - 1, -p)));
+      const worst = excursions.indexOf(Math.max(...excursions));
+      const swing = scoreSwing(swingPlan, design, c.coefficients);
+      expect(swing.inside).toBe(excursions[worst]);
+      expect(swing.worstInside).toEqual({ inputs: { x1: grid.inside[worst] }, prediction: pin[worst] });
+    });
+  }
 });

@@ -98,6 +98,24 @@ describe('createFsRepository: reading', () => {
     ).toEqual(['file', 'missing', 'folder', 'broken-link', 'special', 'file']);
   });
 
+  it('keeps only real paths found inside: a missing path is looked up again, a refused one refused again', async () => {
+    const repo = createFsRepository(root);
+    expect(await repo.entryKind('later.csv')).toBe('missing');
+    writeFileSync(join(root, 'later.csv'), 'x,y\n5,6\n');
+    try {
+      expect(await repo.entryKind('later.csv')).toBe('file');
+      expect(await repo.size('later.csv')).toBe(8);
+    } finally {
+      rmSync(join(root, 'later.csv'));
+    }
+    // The same path through a link, resolved twice and read twice: the same file each time.
+    for (let k = 0; k < 2; k++) {
+      expect(await repo.resolve('models/ok.model.yml', 'inside-link.csv', { line: 4 })).toBe('models/inside-link.csv');
+      expect(new TextDecoder().decode(await repo.read('models/inside-link.csv'))).toBe('x,y\n3,4\n');
+      await expectInputError(() => repo.read('models/out-link.csv'), { code: 'path-outside' });
+    }
+  });
+
   it('refuses absolute paths, .. escapes and links that lead outside, for every method', async () => {
     const repo = createFsRepository(root);
     const bad = [
