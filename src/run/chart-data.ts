@@ -37,9 +37,36 @@ import {
 
 export { MAX_CHART_POINTS } from '../result/chart-types.js';
 
-/** Rounds to {@link CHART_DIGITS} significant digits; null for NaN and infinities. */
+/** Exact powers of ten 10^0 .. 10^22 (every one a double without rounding). */
+const EXACT_TENS = Array.from({ length: 23 }, (_, k) => Number(`1e${k}`));
+
+/** Smallest mantissa of {@link CHART_DIGITS} digits, 10^(digits - 1). */
+const LEAST_MANTISSA = 10 ** (CHART_DIGITS - 1);
+
+/**
+ * Rounds to {@link CHART_DIGITS} significant digits; null for NaN and infinities. The value is
+ * exactly `Number(x.toPrecision(CHART_DIGITS))` (and +0 for either zero), computed without strings
+ * when that is safe: with e the decimal exponent of |x|, the mantissa n = round(|x| 10^(digits-1-e))
+ * is taken from the double product when the product is not within 1e-6 of a tie (its rounding
+ * error is below 1e-8 there), and n / 10^k (or n x 10^k) with both factors exact is the correctly
+ * rounded double of the decimal n x 10^(e-digits+1), as the string's parse is. Anything else
+ * (exponents beyond +-22, near-ties, a mantissa that carried into another digit) goes through the string.
+ */
 export function chartNumber(x: number): number | null {
-  return Number.isFinite(x) ? Number(x.toPrecision(CHART_DIGITS)) : null;
+  if (!Number.isFinite(x)) return null;
+  if (x === 0) return 0;
+  const a = Math.abs(x);
+  const e = Math.floor(Math.log10(a));
+  const k = CHART_DIGITS - 1 - e;
+  if (k >= -22 && k <= 22) {
+    const scaled = k >= 0 ? a * EXACT_TENS[k] : a / EXACT_TENS[-k];
+    const n = Math.round(scaled);
+    if (n >= LEAST_MANTISSA && n < 10 * LEAST_MANTISSA && Math.abs(Math.abs(scaled - Math.floor(scaled)) - 0.5) > 1e-6) {
+      const r = k >= 0 ? n / EXACT_TENS[k] : n * EXACT_TENS[-k];
+      return x < 0 ? -r : r;
+    }
+  }
+  return Number(x.toPrecision(CHART_DIGITS));
 }
 
 /**
