@@ -112,6 +112,22 @@ function series(data: ModelData, predictions: Float64Array, max: number, numbers
   };
 }
 
+/** A series that draws none of its rows (the run's chart data went to other models): counts and why. */
+function emptySeries(data: ModelData, why: string): PointSeries {
+  return {
+    rows: data.rows,
+    shown: 0,
+    thinned: data.rows > 0,
+    thinning: data.rows > 0 ? why : '',
+    lines: [],
+    ...(data.parts !== undefined ? { files: data.parts.map((p) => p.file), file_index: [] } : {}),
+    x: data.inputs.map(() => []),
+    actual: [],
+    fitted: [],
+    residual: [],
+  };
+}
+
 /** Grid points of each partial curve of a model with this many curves (see {@link PARTIAL_CURVE_POINTS}). */
 export function partialCurvePoints(curves: number): number {
   return Math.max(101, Math.min(CURVE_POINTS, Math.floor(PARTIAL_CURVE_POINTS / Math.max(1, curves))));
@@ -320,9 +336,23 @@ export function buildChartData(
   maxPoints = MAX_CHART_POINTS,
   share: ChartShare = FULL_CHART_SHARE,
 ): ChartData {
-  const { design, tables, metrics, fit, descriptor } = model;
+  const { design, tables, metrics, descriptor } = model;
   const { train, holdout } = tables;
   const inputs = [...design.inputs];
+  if (share.noPoints !== undefined) {
+    // No points and no curves: only the sweep and the coefficients, a few numbers each.
+    return {
+      target: descriptor.data.target,
+      inputs,
+      train: emptySeries(train, share.noPoints),
+      holdout: emptySeries(holdout, share.noPoints),
+      fit: null,
+      partials: [],
+      sweep: readSweep(checks),
+      coefficients: coefficientData(model, checks),
+      no_points: share.noPoints,
+    };
+  }
   const medians = train.inputs.map((col) => columnMedian(col, train.rows));
   let spread = 0;
   for (let c = 0; c < inputs.length; c++) {
@@ -375,16 +405,6 @@ export function buildChartData(
     }
   }
 
-  // Standardised coefficients of the non-intercept columns.
-  const coefCheck = checks.find((c) => c.id === 'coefficient-size');
-  const columns: string[] = [];
-  const values: (number | null)[] = [];
-  for (let j = 0; j < design.p; j++) {
-    if (!design.penalised[j]) continue;
-    columns.push(design.columnNames[j]);
-    values.push(chartNumber((fit.coefficients[j] * metrics.columnSd[j]) / metrics.targetSd));
-  }
-
   // A transformed target judged on the original scale: its rows as written, predictions back-transformed.
   const scale = originalScale(model);
   return {
@@ -400,6 +420,20 @@ export function buildChartData(
     partials,
     ...(partialsLeftOut > 0 ? { partialsLeftOut } : {}),
     sweep: readSweep(checks),
-    coefficients: { columns, values, limit: coefCheck?.limit ?? null, warn: coefCheck?.warn ?? null },
+    coefficients: coefficientData(model, checks),
   };
+}
+
+/** Standardised coefficients of the non-intercept columns, with the `coefficient-size` limits. */
+function coefficientData(model: FittedModel, checks: readonly CheckResult[]): ChartData['coefficients'] {
+  const { design, fit, metrics } = model;
+  const coefCheck = checks.find((c) => c.id === 'coefficient-size');
+  const columns: string[] = [];
+  const values: (number | null)[] = [];
+  for (let j = 0; j < design.p; j++) {
+    if (!design.penalised[j]) continue;
+    columns.push(design.columnNames[j]);
+    values.push(chartNumber((fit.coefficients[j] * metrics.columnSd[j]) / metrics.targetSd));
+  }
+  return { columns, values, limit: coefCheck?.limit ?? null, warn: coefCheck?.warn ?? null };
 }

@@ -11,7 +11,6 @@ import { kernelNotes } from '../kernels/index.js';
 import { matchBase, type BaseInput } from './base-comparison.js';
 import { errorResult } from './error-result.js';
 import { evaluateModels } from './model-worker.js';
-import { chartShare } from '../result/chart-types.js';
 import type { RepoReader } from '../repo/types.js';
 import { summarise, type ModelResult, type Result } from '../result/result.js';
 import type { Settings } from './settings.js';
@@ -100,7 +99,7 @@ export async function runPipeline(settings: Settings, repo: RepoReader, options:
     root: options.root,
     exactJobs: options.exactJobs,
     base,
-    share: chartShare(paths.length),
+    models: paths.length,
   }))
     models.push(model);
   if (shard) notes.push(`shard ${formatShard(shard)}: ${paths.length} model${paths.length === 1 ? '' : 's'} of this run's share`);

@@ -9,10 +9,13 @@ import {
   MAX_SERIES_NUMBERS,
   MIN_CURVE_POINTS,
   MIN_SERIES_NUMBERS,
+  CHARTED_MODELS,
   MODEL_CHART_NUMBERS,
   RUN_CHART_NUMBERS,
 } from '../../src/result/chart-types.js';
 import { evaluateModel } from '../../src/run/evaluate.js';
+import { htmlReport } from '../../src/report/html.js';
+import { summarise } from '../../src/result/result.js';
 import {
   dataBytes,
   guessColumns,
@@ -41,27 +44,39 @@ const files = {
 };
 
 describe('chartShare: a run-wide bound on chart data', () => {
-  it('gives the full share up to 100 models and scales it down beyond, to the floors', () => {
-    expect(RUN_CHART_NUMBERS / MODEL_CHART_NUMBERS).toBe(100);
+  it('gives the full share up to 50 models and scales it down beyond, to the floors', () => {
+    expect(RUN_CHART_NUMBERS / MODEL_CHART_NUMBERS).toBe(50);
     expect(chartShare(1)).toBe(FULL_CHART_SHARE);
-    expect(chartShare(100)).toBe(FULL_CHART_SHARE);
-    const s200 = chartShare(200);
-    expect(s200.fraction).toBe(0.5);
-    expect(s200.seriesNumbers).toBe(MAX_SERIES_NUMBERS / 2);
-    expect(s200.curvePoints).toBe(Math.floor(CURVE_POINTS / 2));
-    const s1000 = chartShare(1000);
-    expect(s1000.seriesNumbers).toBe(500);
+    expect(chartShare(50)).toBe(FULL_CHART_SHARE);
+    const s100 = chartShare(100);
+    expect(s100.fraction).toBe(0.5);
+    expect(s100.seriesNumbers).toBe(MAX_SERIES_NUMBERS / 2);
+    expect(s100.curvePoints).toBe(Math.floor(CURVE_POINTS / 2));
+    const s500 = chartShare(500);
+    expect(s500.seriesNumbers).toBe(500);
+    expect(s500.curvePoints).toBe(MIN_CURVE_POINTS);
+    const s1000 = chartShare(1000, 999);
+    expect(s1000.seriesNumbers).toBe(MIN_SERIES_NUMBERS);
     expect(s1000.curvePoints).toBe(MIN_CURVE_POINTS);
+    expect(s1000.noPoints).toBeUndefined();
     const huge = chartShare(1_000_000);
     expect(huge.seriesNumbers).toBe(MIN_SERIES_NUMBERS);
     expect(huge.curvePoints).toBe(MIN_CURVE_POINTS);
   });
 
-  it('bounds the whole run: models x a model share stays near the run budget from 100 to 1,000 models', () => {
-    for (const models of [100, 200, 500, 1000]) {
-      const share = chartShare(models);
-      // Two point series and one curve of x and y per model.
-      const numbers = models * (2 * share.seriesNumbers + 2 * share.curvePoints);
+  it('is a fixed total: past CHARTED_MODELS models, the models after the first CHARTED_MODELS draw no points and say why', () => {
+    expect(CHARTED_MODELS).toBe(1000);
+    expect(chartShare(5000, CHARTED_MODELS - 1).noPoints).toBeUndefined();
+    expect(chartShare(5000, CHARTED_MODELS).noPoints).toBe(
+      "no points drawn: the run's chart data (about 750,000 numbers) went to its first 1,000 of 5,000 models",
+    );
+    for (const models of [50, 100, 200, 500, 1000, 2000, 100_000]) {
+      // Two point series with their lines (6 numbers a row of one input), one curve of x and y, per charted model.
+      let numbers = 0;
+      for (let i = 0; i < Math.min(models, CHARTED_MODELS + 1); i++) {
+        const share = chartShare(models, i);
+        if (share.noPoints === undefined) numbers += 2 * Math.floor(share.seriesNumbers / 5) * 6 + 2 * share.curvePoints;
+      }
       expect(numbers, `${models} models`).toBeLessThanOrEqual(RUN_CHART_NUMBERS);
     }
   });
@@ -71,7 +86,7 @@ describe('chartShare: a run-wide bound on chart data', () => {
     const settings = defaultSettingsFile();
     const d = await loadDescriptor(repo, 'm/a.model.yml', settings);
     const full = await evaluateModel(repo, d, settings);
-    const small = await evaluateModel(repo, d, settings, undefined, undefined, chartShare(1000));
+    const small = await evaluateModel(repo, d, settings, undefined, undefined, chartShare(500));
     expect(full.charts?.train.shown).toBe(1000);
     expect(small.charts?.train.shown).toBe(100);
     expect(small.charts?.train.thinning).toBe('100 of 1200 rows, evenly spaced through the file');
@@ -92,6 +107,40 @@ describe('chartShare: a run-wide bound on chart data', () => {
     expect(strip(small)).toBe(strip(full));
     const size = (r: typeof full) => JSON.stringify(r).length;
     expect(size(small)).toBeLessThan(size(full) / 3);
+  });
+});
+
+describe("a model past the run's chart data", () => {
+  it('keeps its counts, sweep and coefficients, draws no points or curves, and its HTML says why', async () => {
+    const repo = createMemoryRepository(files);
+    const settings = defaultSettingsFile();
+    const d = await loadDescriptor(repo, 'm/a.model.yml', settings);
+    const drawn = await evaluateModel(repo, d, settings, undefined, undefined, chartShare(2000, CHARTED_MODELS - 1));
+    const left = await evaluateModel(repo, d, settings, undefined, undefined, chartShare(2000, CHARTED_MODELS));
+    const charts = left.charts;
+    if (charts === undefined || drawn.charts === undefined) throw new Error('no chart data');
+    expect(charts.no_points).toMatch(/^no points drawn: the run's chart data .* first 1,000 of 2,000 models$/);
+    expect(charts.train).toMatchObject({ rows: 1200, shown: 0, thinned: true, thinning: charts.no_points, lines: [], x: [[]], actual: [] });
+    expect(charts.holdout).toMatchObject({ rows: 300, shown: 0, fitted: [], residual: [] });
+    expect(charts.fit).toBeNull();
+    expect(charts.partials).toEqual([]);
+    expect(charts.sweep).toEqual(drawn.charts.sweep);
+    expect(charts.coefficients).toEqual(drawn.charts.coefficients);
+    // Checks and figures are those of a drawn model at the same share.
+    expect(JSON.stringify({ ...left, charts: null })).toBe(JSON.stringify({ ...drawn, charts: null }));
+    const html = [...htmlReport(summarise([drawn, left], '0.0.0', []))].join('');
+    const sections = html.split('<section class="model"').slice(1);
+    expect(sections).toHaveLength(2);
+    expect(sections[0]).not.toContain('data-no-points');
+    expect(sections[0]).toContain('data-chart="fit-curve"');
+    expect(sections[0]).toContain('data-chart="residuals"');
+    expect(sections[1]).toContain('data-no-points');
+    expect(sections[1]).toContain('Rows and curves: no points drawn: the run&#39;s chart data');
+    expect(sections[1]).not.toContain('data-chart="fit-curve"');
+    expect(sections[1]).not.toContain('data-chart="residuals"');
+    expect(sections[1]).not.toContain('data-chart="predicted-actual"');
+    expect(sections[1]).toContain('data-chart="cv-curve"');
+    expect(sections[1]).toContain('data-chart="coefficients"');
   });
 });
 
