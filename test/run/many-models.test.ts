@@ -1,5 +1,6 @@
 import { describe, it, expect } from 'vitest';
 import { loadDescriptor } from '../../src/config/descriptor.js';
+import type { Descriptor } from '../../src/config/types.js';
 import { defaultSettings as defaultSettingsFile } from '../../src/config/settings-file.js';
 import { createMemoryRepository } from '../../src/repo/memory-repository.js';
 import {
@@ -22,7 +23,10 @@ import {
   guessWork,
   largestFirst,
   MODEL_FIXED_OPERATIONS,
+  MODEL_TRANSFER_OPERATIONS,
+  POOL_PAY_RATIO,
   WORKER_OPERATIONS,
+  WORKER_START_OPERATIONS,
   workersThatPay,
 } from '../../src/run/work-guess.js';
 
@@ -158,10 +162,30 @@ describe('the pool sizes itself by guessed work', () => {
 
   it('starts no worker for small work, one per WORKER_OPERATIONS of work, never more than jobs or models', () => {
     expect(workersThatPay([1e6, 1e6, 1e6], 2)).toBe(0);
-    expect(workersThatPay(Array(1000).fill(WORKER_OPERATIONS / 100), 2)).toBe(2);
-    expect(workersThatPay(Array(1000).fill(WORKER_OPERATIONS / 100), 8)).toBe(8);
+    expect(workersThatPay(Array(1000).fill(WORKER_OPERATIONS / 20), 2)).toBe(2);
+    expect(workersThatPay(Array(1000).fill(WORKER_OPERATIONS / 20), 8)).toBe(8);
     expect(workersThatPay([WORKER_OPERATIONS * 10], 4)).toBe(1);
     expect(workersThatPay([WORKER_OPERATIONS * 1.5], 4)).toBe(1);
+  });
+
+  it('starts none when the models are so small that moving them to workers costs more than it saves', () => {
+    const cubic = { fit: { intercept: true }, terms: [{ kind: 'polynomial', degree: 3 }] } as unknown as Descriptor;
+    // 1,000 models of 1,250 rows (MONO1000, 35 kB of CSV each) and 200 of 2,500 rows (MONO200, 66 kB each): the main thread alone.
+    expect(workersThatPay(Array(1000).fill(guessWork(cubic, 35_000)), 2)).toBe(1);
+    expect(workersThatPay(Array(200).fill(guessWork(cubic, 66_000)), 2)).toBe(1);
+    // Two workers pay for 1,000 models of w each when 1,000 (w + transfer) / 2 + start <= 0.8 x 1,000 w.
+    const even = (MODEL_TRANSFER_OPERATIONS / 2 + WORKER_START_OPERATIONS / 1000) / (POOL_PAY_RATIO - 0.5);
+    expect(workersThatPay(Array(1000).fill(even * 1.01), 2)).toBe(2);
+    expect(workersThatPay(Array(1000).fill(even * 0.99), 2)).toBe(1);
+  });
+
+  it('still starts workers for a few large models (workload L: 139 MB, 25 columns, each)', () => {
+    const wide = { fit: { intercept: true }, terms: [{ kind: 'linear', columns: Array(24).fill('x') }] } as unknown as Descriptor;
+    const large = guessWork(wide, 139e6);
+    expect(workersThatPay([large, large], 2)).toBe(2);
+    expect(workersThatPay([large, large, large, large], 4)).toBe(4);
+    // One large model and many small ones: the large one bounds the pool's time.
+    expect(workersThatPay([large, ...Array(10).fill(1e7)], 2)).toBe(1);
   });
 
   it('hands out the largest guessed work first, ties in descriptor order', () => {
