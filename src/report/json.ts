@@ -1,8 +1,8 @@
 /**
  * The JSON report: the Result exactly as the pipeline returned it.
  */
-import { jsonPieces } from '../core/json-pieces.js';
-import type { Result } from '../result/result.js';
+import { jsonPieces, jsonPiecesAt } from '../core/json-pieces.js';
+import type { ModelResult, Result } from '../result/result.js';
 import { neutraliseJson } from './runner-commands.js';
 
 /**
@@ -11,9 +11,38 @@ import { neutraliseJson } from './runner-commands.js';
  * is written without ever being one string. Each piece is neutralised ({@link neutraliseJson});
  * a piece never splits a JSON string, so no `##[` can span two pieces.
  */
-export function* jsonReport(result: Result): Generator<string> {
-  for (const piece of jsonPieces(result)) yield neutraliseJson(piece);
+export function* jsonReport(result: Result, options: JsonReportOptions = {}): Generator<string> {
+  const modelText = options.modelText;
+  const substitute =
+    modelText === undefined
+      ? undefined
+      : (value: unknown): Iterable<string> | undefined => {
+          // Only the models of the Result are looked up (by identity); everything else is walked.
+          if (value === null || typeof value !== 'object' || !models.has(value as ModelResult)) return undefined;
+          return modelText(value as ModelResult);
+        };
+  const models = new Set(result.models);
+  // Text written earlier is neutralised already, and neutralising twice changes nothing.
+  for (const piece of jsonPieces(result, { substitute })) yield neutraliseJson(piece);
   yield '\n';
+}
+
+/** Options of {@link jsonReport}. */
+export interface JsonReportOptions {
+  /**
+   * A model's text written earlier ({@link jsonModelReport} of the full model, while the Result
+   * keeps a smaller copy), or undefined to format the model as it is in the Result. Default none.
+   */
+  modelText?: (model: ModelResult) => Iterable<string> | undefined;
+}
+
+/**
+ * One model's part of the JSON report, as {@link jsonReport} writes it inside `models` (indented
+ * two levels, neutralised, no separators around it): for writing each model's text as soon as its
+ * outcome is final, and handing it back through {@link JsonReportOptions.modelText}.
+ */
+export function* jsonModelReport(model: ModelResult): Generator<string> {
+  for (const piece of jsonPiecesAt(model, 2)) yield neutraliseJson(piece);
 }
 
 /**

@@ -83,6 +83,11 @@ export interface EvaluateModelsOptions {
    * `chartShare(models, index)`, the index in `descriptors`). Default `descriptors.length`.
    */
   models?: number;
+  /**
+   * Called with each outcome as soon as it is final (on this thread alone: after each model; with
+   * workers: after the pool, in descriptor order); the list returned holds what it returns. Default none.
+   */
+  onModel?: (model: ModelResult) => ModelResult;
 }
 
 /**
@@ -104,10 +109,11 @@ export async function evaluateModels(
   const jobs = Math.min(options.jobs ?? 1, descriptors.length);
   const script = workerScript();
   const models = options.models ?? descriptors.length;
+  const keep = options.onModel ?? ((model: ModelResult) => model);
   const serial = async (): Promise<ModelResult[]> => {
     const results: ModelResult[] = [];
     for (let i = 0; i < descriptors.length; i++)
-      results.push(await evaluateModel(repo, descriptors[i], settings, options.base, undefined, chartShare(models, i)));
+      results.push(keep(await evaluateModel(repo, descriptors[i], settings, options.base, undefined, chartShare(models, i))));
     return results;
   };
   if (jobs <= 1 || options.root === undefined || script === null) return serial();
@@ -141,7 +147,7 @@ export async function evaluateModels(
     },
   );
   for (const reply of replies) recordKernelNotes(reply.kernelNotes);
-  return replies.map((reply) => reply.result);
+  return replies.map((reply) => keep(reply.result));
 }
 
 /**
