@@ -6,9 +6,10 @@ import type { ModelResult, Result } from '../result/result.js';
 import { neutraliseJson } from './runner-commands.js';
 
 /**
- * The JSON report in pieces (one branch of the Result each, a model's charts at most), to write
- * one after another: joined, they are {@link formatJson}'s text. A run of any number of models
- * is written without ever being one string. Each piece is neutralised ({@link neutraliseJson});
+ * The JSON report in pieces (the run's fields, then one model at a time: each model is one
+ * native `JSON.stringify`, its size bounded by the run's chart data), to write one after another:
+ * joined, they are {@link formatJson}'s text. A run of any number of models is written without
+ * ever being one string. Each piece is neutralised ({@link neutraliseJson});
  * a piece never splits a JSON string, so no `##[` can span two pieces.
  */
 export function* jsonReport(result: Result, options: JsonReportOptions = {}): Generator<string> {
@@ -23,9 +24,12 @@ export function* jsonReport(result: Result, options: JsonReportOptions = {}): Ge
         };
   const models = new Set(result.models);
   // Text written earlier is neutralised already, and neutralising twice changes nothing.
-  for (const piece of jsonPieces(result, { substitute })) yield neutraliseJson(piece);
+  for (const piece of jsonPieces(result, { depth: MODEL_DEPTH, substitute })) yield neutraliseJson(piece);
   yield '\n';
 }
+
+/** Depth the report's pieces are walked to: the Result, `models`, then each model whole (half the time of walking into each model). */
+const MODEL_DEPTH = 2;
 
 /** Options of {@link jsonReport}. */
 export interface JsonReportOptions {
@@ -42,7 +46,7 @@ export interface JsonReportOptions {
  * outcome is final, and handing it back through {@link JsonReportOptions.modelText}.
  */
 export function* jsonModelReport(model: ModelResult): Generator<string> {
-  for (const piece of jsonPiecesAt(model, 2)) yield neutraliseJson(piece);
+  for (const piece of jsonPiecesAt(model, 2, { depth: MODEL_DEPTH })) yield neutraliseJson(piece);
 }
 
 /**
