@@ -14,17 +14,24 @@ import { neutraliseJson } from './runner-commands.js';
  */
 export function* jsonReport(result: Result, options: JsonReportOptions = {}): Generator<string> {
   const modelText = options.modelText;
+  const models = new Set(result.models);
+  // True while the pieces come from text written earlier, neutralised already.
+  let written = false;
   const substitute =
     modelText === undefined
       ? undefined
       : (value: unknown): Iterable<string> | undefined => {
           // Only the models of the Result are looked up (by identity); everything else is walked.
           if (value === null || typeof value !== 'object' || !models.has(value as ModelResult)) return undefined;
-          return modelText(value as ModelResult);
+          const text = modelText(value as ModelResult);
+          if (text === undefined) return undefined;
+          return (function* () {
+            written = true;
+            yield* text;
+            written = false;
+          })();
         };
-  const models = new Set(result.models);
-  // Text written earlier is neutralised already, and neutralising twice changes nothing.
-  for (const piece of jsonPieces(result, { depth: MODEL_DEPTH, substitute })) yield neutraliseJson(piece);
+  for (const piece of jsonPieces(result, { depth: MODEL_DEPTH, substitute })) yield written ? piece : neutraliseJson(piece);
   yield '\n';
 }
 

@@ -51,6 +51,24 @@ describe('the model spool', () => {
     });
   }
 
+  it('keeps runner commands and raw line separators out of the text written earlier, as the whole report does', async () => {
+    const dir = examples('');
+    const whole = await runPipeline(defaultSettings(dir), createFsRepository(dir), { jobs: 1 });
+    const hostile = { ...whole, models: whole.models.map((m) => ({ ...m, name: `${m.name}\n##[error]x\u2028::warning::y` })) };
+    const spool = openModelSpool();
+    if (spool === null) throw new Error('no temporary folder to spool in');
+    try {
+      const small = { ...hostile, models: hostile.models.map((m) => spool.keep(m)) };
+      const text = [...jsonReport(small, { modelText: spool.text })].join('');
+      expect(text).toBe(formatJson(hostile));
+      expect(text).not.toContain('##[');
+      expect(text).not.toContain('\u2028');
+      expect(JSON.parse(text).models.map((m: ModelResult) => m.name)).toEqual(hostile.models.map((m) => m.name));
+    } finally {
+      spool.close();
+    }
+  });
+
   it('drops only chart data and check detail from the copy, and removes its folder when closed', async () => {
     const dir = examples('');
     const result = await runPipeline(defaultSettings(dir), createFsRepository(dir), { jobs: 1 });
