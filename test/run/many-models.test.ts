@@ -17,6 +17,8 @@ import {
 import { evaluateModel } from '../../src/run/evaluate.js';
 import { htmlReport } from '../../src/report/html.js';
 import { summarise } from '../../src/result/result.js';
+import { mergeReports } from '../../src/result/merge.js';
+import { formatJson } from '../../src/report/json.js';
 import {
   dataBytes,
   guessColumns,
@@ -145,6 +147,12 @@ describe("a model past the run's chart data", () => {
     expect(sections[1]).not.toContain('data-chart="predicted-actual"');
     expect(sections[1]).toContain('data-chart="cv-curve"');
     expect(sections[1]).toContain('data-chart="coefficients"');
+    // The report schema (strict) takes the field, and `merge` gives it back.
+    const merged = mergeReports(
+      [{ file: 'a.json', text: formatJson(summarise([drawn, { ...left, name: 'b', descriptor: 'm/b.model.yml' }], '0.0.0', [])) }],
+      '0.0.0',
+    );
+    expect(merged.models.map((m) => m.charts?.no_points)).toEqual([undefined, charts.no_points]);
   });
 });
 
