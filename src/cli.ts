@@ -12,6 +12,7 @@ import { errorMessage, InputError } from './core/errors.js';
 import type { ReportInput } from './result/merge.js';
 import { isFitgateWorker } from './run/worker-role.js';
 import { runCheck } from './entries/check-run.js';
+import { openModelSpool, type ModelSpool } from './entries/model-spool.js';
 import { writeReportStream } from './entries/report-file.js';
 import { jsonReport } from './report/json.js';
 import { escapeTerminal } from './report/escape.js';
@@ -40,6 +41,7 @@ function errorLine(message: string): string {
 /** Runs one command; the report goes to standard output or `--out`, the file reports where asked. */
 async function main(argv: string[]): Promise<number> {
   let debug = argv.includes('--debug');
+  let spool: ModelSpool | null = null;
   try {
     const parsed = parseArgs(argv, process.cwd());
     if (parsed.kind === 'print') {
@@ -63,7 +65,12 @@ async function main(argv: string[]): Promise<number> {
       result = mergeReports(readReports(parsed.reports), VERSION, { expect: parsed.expect });
       failOn = parsed.failOn;
     } else {
-      result = await runCheck(parsed.settings, { base: parsed.base, entry: 'command', shard: parsed.shard, jobs: parsed.jobs });
+      // Only the JSON report, to a file: each model's text is written as soon as its outcome is
+      // final, and the Result keeps a small copy (entries/model-spool.ts).
+      if (parsed.format === 'json' && parsed.out !== null && parsed.html === null && parsed.sarif === null && parsed.junit === null)
+        spool = openModelSpool();
+      const onModel = spool === null ? undefined : spool.keep;
+      result = await runCheck(parsed.settings, { base: parsed.base, entry: 'command', shard: parsed.shard, jobs: parsed.jobs, onModel });
       failOn = parsed.settings.failOn;
     }
     const toFile = parsed.out !== null;
@@ -73,7 +80,7 @@ async function main(argv: string[]): Promise<number> {
     // model at a time), so that a run of any size is written without being one string.
     const pieces: Iterable<string> =
       parsed.format === 'json'
-        ? jsonReport(result)
+        ? jsonReport(result, spool === null ? {} : { modelText: spool.text })
         : parsed.format === 'markdown'
           ? [neutraliseLog((await import('./report/markdown.js')).formatMarkdown(result))]
           : [formatText(result, { color, verbose: parsed.verbose })];
@@ -112,6 +119,8 @@ async function main(argv: string[]): Promise<number> {
     if (debug && error instanceof Error && error.stack) process.stderr.write(`${neutraliseLog(error.stack)}\n`);
     else if (!(error instanceof InputError)) process.stderr.write('(run with --debug for the stack trace)\n');
     return 2;
+  } finally {
+    spool?.close();
   }
 }
 

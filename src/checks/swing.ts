@@ -72,7 +72,7 @@ const check: Check = {
   pointsPerSegment }\` or null for one input) and \`curves\`: one per input with a spread,
   \`{ input, others: { <input>: median }, range: [min x, max x], x: number[], prediction: number[] }\`,
   x ascending over the range and both margins, at most 400 points (thinned evenly, always keeping the
-  largest and smallest prediction; in a run of over 100 models, 400 x 100 / models, at least 25: see
+  largest and smallest prediction; in a run of over 50 models, 400 x 50 / models, at least 25: see
   reports.md).`,
   advice:
     'Lower the degree, widen or thin the radial centres, or add a ridge penalty so that the curve stops swinging between the samples.',

@@ -13,6 +13,13 @@
 export interface JsonPiecesOptions {
   /** Containers nested less deeply than this are walked; deeper values are stringified whole. Default 4. */
   depth?: number;
+  /**
+   * Text written in place of a value met on the walk: pieces that, joined, are exactly what the
+   * walk would write for that value at its nesting level (e.g. written earlier by
+   * {@link jsonPiecesAt} from a fuller copy of it), or undefined to walk the value itself.
+   * Default none.
+   */
+  substitute?: (value: unknown) => Iterable<string> | undefined;
 }
 
 const INDENT = '  ';
@@ -38,7 +45,19 @@ function isWritten(value: unknown): boolean {
 export function* jsonPieces(value: unknown, options: JsonPiecesOptions = {}): Generator<string> {
   const v = prepared(value, '');
   if (!isWritten(v)) return;
-  yield* piecesOf(v, 0, options.depth ?? 4);
+  yield* piecesOf(v, 0, options.depth ?? 4, options.substitute);
+}
+
+/**
+ * The pieces of `value` as {@link jsonPieces} writes it nested `level` containers deep in a larger
+ * value (lines after the first indented `level` more steps): joined, exactly that part of the text.
+ * @param value a JSON-compatible value
+ * @param level its nesting level (0: the top)
+ * @param options how deep to walk, counted from the top; default 4 levels
+ */
+export function* jsonPiecesAt(value: unknown, level: number, options: JsonPiecesOptions = {}): Generator<string> {
+  const v = prepared(value, '');
+  yield* piecesOf(isWritten(v) ? v : null, level, options.depth ?? 4, options.substitute);
 }
 
 /**
@@ -61,7 +80,12 @@ function indented(value: unknown, level: number): string {
   return text.slice(head, text.length - tail);
 }
 
-function* piecesOf(value: unknown, level: number, depth: number): Generator<string> {
+function* piecesOf(value: unknown, level: number, depth: number, substitute: JsonPiecesOptions['substitute']): Generator<string> {
+  const given = substitute?.(value);
+  if (given !== undefined) {
+    yield* given;
+    return;
+  }
   if (value === null || typeof value !== 'object' || level >= depth) {
     yield indented(value, level);
     return;
@@ -78,7 +102,7 @@ function* piecesOf(value: unknown, level: number, depth: number): Generator<stri
       yield `${i === 0 ? '' : ','}\n${inner}`;
       const element = prepared(value[i], String(i));
       // In an array, what JSON.stringify writes nothing for is written as null.
-      yield* piecesOf(isWritten(element) ? element : null, level + 1, depth);
+      yield* piecesOf(isWritten(element) ? element : null, level + 1, depth, substitute);
     }
     yield `\n${outer}]`;
     return;
@@ -89,7 +113,7 @@ function* piecesOf(value: unknown, level: number, depth: number): Generator<stri
     if (!isWritten(element)) continue;
     yield `${first ? '{' : ','}\n${inner}${JSON.stringify(key)}: `;
     first = false;
-    yield* piecesOf(element, level + 1, depth);
+    yield* piecesOf(element, level + 1, depth, substitute);
   }
   yield first ? '{}' : `\n${outer}}`;
 }

@@ -11,7 +11,7 @@ import { defaultJobs } from '../run/pool.js';
 import type { Settings } from '../run/settings.js';
 import type { Shard } from '../run/shard.js';
 import { createFsRepository } from '../repo/fs-repository.js';
-import type { Result } from '../result/result.js';
+import type { ModelResult, Result } from '../result/result.js';
 
 /** How to run a check besides its settings. */
 export interface CheckRunOptions {
@@ -23,6 +23,8 @@ export interface CheckRunOptions {
   shard: Shard | null;
   /** Worker threads named by the user (`--jobs N`: exactly min(N, models)), or null: up to one per core, as many as the work pays for. */
   jobs: number | null;
+  /** Called with each model's outcome as soon as it is final; the Result keeps what it returns (run/pipeline.ts `onModel`). Default none. */
+  onModel?: (model: ModelResult) => ModelResult;
 }
 
 /**
@@ -46,6 +48,7 @@ export async function runCheck(settings: Settings, options: CheckRunOptions): Pr
     shard: options.shard,
     jobs: options.jobs ?? defaultJobs(),
     exactJobs: options.jobs !== null,
+    onModel: options.onModel,
     root: settings.root,
   });
 }

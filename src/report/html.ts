@@ -142,14 +142,16 @@ function figure(svg: string, caption: string, wide = false): string {
 /** The charts of one model, in reading order. */
 function charts(chart: ChartData, prefix: string): string[] {
   const out: string[] = [];
-  if (chart.fit) {
+  // Left without points by the run's chart data: only the sweep and the coefficients.
+  const points = chart.no_points === undefined;
+  if (points && chart.fit) {
     out.push(
       figure(
         fitCurveChart(chart, chart.fit, { id: `${prefix}-fit` }),
         'The fitted curve over the scanned range (dotted lines: the training range). A curve that leaves the observed band between the samples is chasing noise.',
       ),
     );
-  } else {
+  } else if (points) {
     out.push(
       figure(
         predictedActualChart(chart, { id: `${prefix}-pa` }),
@@ -157,7 +159,7 @@ function charts(chart: ChartData, prefix: string): string[] {
       ),
     );
   }
-  out.push(figure(residualsChart(chart, { id: `${prefix}-res` }), 'Residuals against fitted values.'));
+  if (points) out.push(figure(residualsChart(chart, { id: `${prefix}-res` }), 'Residuals against fitted values.'));
   chart.partials.forEach((curve, k) => {
     out.push(
       figure(
@@ -222,7 +224,9 @@ function modelSection(m: ModelResult, index: number): string {
     const list = charts(m.charts, id);
     const thinned = [m.charts.train, m.charts.holdout].filter((s) => s.thinned);
     parts.push(`<h3>Charts</h3>`);
-    if (thinned.length)
+    if (m.charts.no_points !== undefined)
+      parts.push(`<p class="note" data-no-points>${escapeHtml(`Rows and curves: ${m.charts.no_points}.`)}</p>`);
+    else if (thinned.length)
       parts.push(
         `<p class="note">${thinned.map((s) => escapeHtml(`${s === m.charts?.train ? 'Training' : 'Hold-out'} rows: ${s.thinning}.`)).join(' ')}</p>`,
       );

@@ -1,19 +1,59 @@
 /**
  * The JSON report: the Result exactly as the pipeline returned it.
  */
-import { jsonPieces } from '../core/json-pieces.js';
-import type { Result } from '../result/result.js';
+import { jsonPieces, jsonPiecesAt } from '../core/json-pieces.js';
+import type { ModelResult, Result } from '../result/result.js';
 import { neutraliseJson } from './runner-commands.js';
 
 /**
- * The JSON report in pieces (one branch of the Result each, a model's charts at most), to write
- * one after another: joined, they are {@link formatJson}'s text. A run of any number of models
- * is written without ever being one string. Each piece is neutralised ({@link neutraliseJson});
+ * The JSON report in pieces (the run's fields, then one model at a time: each model is one
+ * native `JSON.stringify`, its size bounded by the run's chart data), to write one after another:
+ * joined, they are {@link formatJson}'s text. A run of any number of models is written without
+ * ever being one string. Each piece is neutralised ({@link neutraliseJson});
  * a piece never splits a JSON string, so no `##[` can span two pieces.
  */
-export function* jsonReport(result: Result): Generator<string> {
-  for (const piece of jsonPieces(result)) yield neutraliseJson(piece);
+export function* jsonReport(result: Result, options: JsonReportOptions = {}): Generator<string> {
+  const modelText = options.modelText;
+  const models = new Set(result.models);
+  // True while the pieces come from text written earlier, neutralised already.
+  let written = false;
+  const substitute =
+    modelText === undefined
+      ? undefined
+      : (value: unknown): Iterable<string> | undefined => {
+          // Only the models of the Result are looked up (by identity); everything else is walked.
+          if (value === null || typeof value !== 'object' || !models.has(value as ModelResult)) return undefined;
+          const text = modelText(value as ModelResult);
+          if (text === undefined) return undefined;
+          return (function* () {
+            written = true;
+            yield* text;
+            written = false;
+          })();
+        };
+  for (const piece of jsonPieces(result, { depth: MODEL_DEPTH, substitute })) yield written ? piece : neutraliseJson(piece);
   yield '\n';
+}
+
+/** Depth the report's pieces are walked to: the Result, `models`, then each model whole (half the time of walking into each model). */
+const MODEL_DEPTH = 2;
+
+/** Options of {@link jsonReport}. */
+export interface JsonReportOptions {
+  /**
+   * A model's text written earlier ({@link jsonModelReport} of the full model, while the Result
+   * keeps a smaller copy), or undefined to format the model as it is in the Result. Default none.
+   */
+  modelText?: (model: ModelResult) => Iterable<string> | undefined;
+}
+
+/**
+ * One model's part of the JSON report, as {@link jsonReport} writes it inside `models` (indented
+ * two levels, neutralised, no separators around it): for writing each model's text as soon as its
+ * outcome is final, and handing it back through {@link JsonReportOptions.modelText}.
+ */
+export function* jsonModelReport(model: ModelResult): Generator<string> {
+  for (const piece of jsonPiecesAt(model, 2, { depth: MODEL_DEPTH })) yield neutraliseJson(piece);
 }
 
 /**

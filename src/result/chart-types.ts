@@ -37,16 +37,18 @@ export const CURVE_MARGIN = 0.1;
 export const CHART_DIGITS = 7;
 
 /**
- * Chart numbers a whole run keeps at most, over all its models, before each model's share
- * shrinks ({@link chartShare}): a run of many models keeps its charts (and its report) near a
- * fixed size instead of growing by a full model's charts per model.
+ * Chart numbers a whole run keeps at most, about, over all its models: a fixed total, so that the
+ * charts of a run (its JSON and HTML reports, and its memory) stop growing with its number of
+ * models ({@link chartShare}). Up to {@link RUN_CHART_NUMBERS} / {@link MODEL_CHART_NUMBERS} = 50
+ * models each keeps its full charts; beyond, each model's share shrinks, down to the floors
+ * ({@link MIN_MODEL_CHART_NUMBERS} a model); past {@link CHARTED_MODELS} models, the models after
+ * the first {@link CHARTED_MODELS} (in report order) draw no points (their chart data says why).
  */
-export const RUN_CHART_NUMBERS = 1_500_000;
+export const RUN_CHART_NUMBERS = 750_000;
 
 /**
  * Chart numbers of one model at its full share, about: two series of {@link MAX_SERIES_NUMBERS},
- * the fitted curve with the swing check's points on it and the swing curve itself. Runs of up to
- * {@link RUN_CHART_NUMBERS} / this = 100 models keep every model's full charts.
+ * the fitted curve with the swing check's points on it and the swing curve itself.
  */
 export const MODEL_CHART_NUMBERS = 15_000;
 
@@ -55,6 +57,16 @@ export const MIN_SERIES_NUMBERS = 250;
 
 /** Fewest grid points a curve keeps under a shrunk share. */
 export const MIN_CURVE_POINTS = 51;
+
+/**
+ * Chart numbers of one model at the floors, about: two series of {@link MIN_SERIES_NUMBERS} with
+ * their file lines (600 for one input), a curve of {@link MIN_CURVE_POINTS} points and the swing
+ * check's points on it.
+ */
+export const MIN_MODEL_CHART_NUMBERS = 750;
+
+/** Most models of a run that draw chart points: {@link RUN_CHART_NUMBERS} / {@link MIN_MODEL_CHART_NUMBERS} = 1,000. */
+export const CHARTED_MODELS = RUN_CHART_NUMBERS / MIN_MODEL_CHART_NUMBERS;
 
 /**
  * One model's share of a run's chart data (plain data: it crosses to worker threads).
@@ -67,26 +79,37 @@ export interface ChartShare {
   seriesNumbers: number;
   /** Most grid points per curve: {@link CURVE_POINTS} x fraction, at least {@link MIN_CURVE_POINTS}. */
   curvePoints: number;
+  /**
+   * Present when the model draws no points or curves (the run's chart data went to the first
+   * {@link CHARTED_MODELS} models): why, in words. Its sweep and coefficients are still kept.
+   */
+  noPoints?: string;
 }
 
-/** The share of a model in a run of up to 100 models: every amount at its maximum. */
+/** The share of a model in a run of up to 50 models: every amount at its maximum. */
 export const FULL_CHART_SHARE: ChartShare = Object.freeze({ fraction: 1, seriesNumbers: MAX_SERIES_NUMBERS, curvePoints: CURVE_POINTS });
 
 /**
- * Each model's share of the chart data of a run of `models` models (see {@link RUN_CHART_NUMBERS}):
- * the full amounts up to 100 models; beyond, scaled by 100 / models down to the floors, so that
- * the charts of 1,000 models take about as much as those of 100 (until the floors, near 2,000
- * models of one input, after which each model adds its floor amounts).
+ * The share of the chart data of the model at `index` (0-based, report order) in a run of `models`
+ * models (see {@link RUN_CHART_NUMBERS}): the full amounts up to 50 models; beyond, scaled by
+ * 50 / models down to the floors (reached at 1,000 models of one input), and past
+ * {@link CHARTED_MODELS} models only the first {@link CHARTED_MODELS} draw points, so that the
+ * charts of any run take at most about {@link RUN_CHART_NUMBERS} numbers. Depends only on
+ * `models` and `index`, so the same run always draws the same points.
  * @param models models in the run (>= 0)
+ * @param index the model's place in the run; default 0
  */
-export function chartShare(models: number): ChartShare {
+export function chartShare(models: number, index = 0): ChartShare {
   const fraction = Math.min(1, RUN_CHART_NUMBERS / (Math.max(1, models) * MODEL_CHART_NUMBERS));
   if (fraction >= 1) return FULL_CHART_SHARE;
-  return {
+  const share: ChartShare = {
     fraction,
     seriesNumbers: Math.max(MIN_SERIES_NUMBERS, Math.floor(MAX_SERIES_NUMBERS * fraction)),
     curvePoints: Math.max(MIN_CURVE_POINTS, Math.floor(CURVE_POINTS * fraction)),
   };
+  if (index >= CHARTED_MODELS)
+    share.noPoints = `no points drawn: the run's chart data (about ${RUN_CHART_NUMBERS.toLocaleString('en-US')} numbers) went to its first ${CHARTED_MODELS.toLocaleString('en-US')} of ${models.toLocaleString('en-US')} models`;
+  return share;
 }
 
 /** The rows of one file as points. Arrays are in file order of the kept rows; non-finite values are null. */
@@ -225,4 +248,9 @@ export interface ChartData {
   /** The complexity sweep, when the complexity check ran. */
   sweep: SweepData | null;
   coefficients: CoefficientData;
+  /**
+   * Present when the run's chart data left this model without points and curves (its series keep
+   * no rows, `fit` is null and `partials` empty): why, in words ({@link ChartShare} `noPoints`).
+   */
+  no_points?: string;
 }

@@ -35,7 +35,7 @@ export function withBaseCurves(
 ): ChartData {
   const base = baseline?.charts;
   if (!base || baseline.verdict === 'error') return charts;
-  // Curves are compared only on grids of the same size: a run of over 100 models shrinks each
+  // Curves are compared only on grids of the same size: a run of over 50 models shrinks each
   // model's curves by the model count (result/chart-types.ts `chartShare`), which a pull request
   // adding models changes; the columns and coefficients are compared whatever the grids.
   const differ = (head: CurveData, other: CurveData): boolean => head.x.length === other.x.length && !same(head.y, other.y);

@@ -37,9 +37,36 @@ import {
 
 export { MAX_CHART_POINTS } from '../result/chart-types.js';
 
-/** Rounds to {@link CHART_DIGITS} significant digits; null for NaN and infinities. */
+/** Exact powers of ten 10^0 .. 10^22 (every one a double without rounding). */
+const EXACT_TENS = Array.from({ length: 23 }, (_, k) => Number(`1e${k}`));
+
+/** Smallest mantissa of {@link CHART_DIGITS} digits, 10^(digits - 1). */
+const LEAST_MANTISSA = 10 ** (CHART_DIGITS - 1);
+
+/**
+ * Rounds to {@link CHART_DIGITS} significant digits; null for NaN and infinities. The value is
+ * exactly `Number(x.toPrecision(CHART_DIGITS))` (and +0 for either zero), computed without strings
+ * when that is safe: with e the decimal exponent of |x|, the mantissa n = round(|x| 10^(digits-1-e))
+ * is taken from the double product when the product is not within 1e-6 of a tie (its rounding
+ * error is below 1e-8 there), and n / 10^k (or n x 10^k) with both factors exact is the correctly
+ * rounded double of the decimal n x 10^(e-digits+1), as the string's parse is. Anything else
+ * (exponents beyond +-22, near-ties, a mantissa that carried into another digit) goes through the string.
+ */
 export function chartNumber(x: number): number | null {
-  return Number.isFinite(x) ? Number(x.toPrecision(CHART_DIGITS)) : null;
+  if (!Number.isFinite(x)) return null;
+  if (x === 0) return 0;
+  const a = Math.abs(x);
+  const e = Math.floor(Math.log10(a));
+  const k = CHART_DIGITS - 1 - e;
+  if (k >= -22 && k <= 22) {
+    const scaled = k >= 0 ? a * EXACT_TENS[k] : a / EXACT_TENS[-k];
+    const n = Math.round(scaled);
+    if (n >= LEAST_MANTISSA && n < 10 * LEAST_MANTISSA && Math.abs(Math.abs(scaled - Math.floor(scaled)) - 0.5) > 1e-6) {
+      const r = k >= 0 ? n / EXACT_TENS[k] : n * EXACT_TENS[-k];
+      return x < 0 ? -r : r;
+    }
+  }
+  return Number(x.toPrecision(CHART_DIGITS));
 }
 
 /**
@@ -82,6 +109,22 @@ function series(data: ModelData, predictions: Float64Array, max: number, numbers
     actual: pick(data.y),
     fitted: pick(predictions),
     residual: Array.from(keep, (i) => chartNumber(data.y[i] - predictions[i])),
+  };
+}
+
+/** A series that draws none of its rows (the run's chart data went to other models): counts and why. */
+function emptySeries(data: ModelData, why: string): PointSeries {
+  return {
+    rows: data.rows,
+    shown: 0,
+    thinned: data.rows > 0,
+    thinning: data.rows > 0 ? why : '',
+    lines: [],
+    ...(data.parts !== undefined ? { files: data.parts.map((p) => p.file), file_index: [] } : {}),
+    x: data.inputs.map(() => []),
+    actual: [],
+    fitted: [],
+    residual: [],
   };
 }
 
@@ -293,9 +336,23 @@ export function buildChartData(
   maxPoints = MAX_CHART_POINTS,
   share: ChartShare = FULL_CHART_SHARE,
 ): ChartData {
-  const { design, tables, metrics, fit, descriptor } = model;
+  const { design, tables, metrics, descriptor } = model;
   const { train, holdout } = tables;
   const inputs = [...design.inputs];
+  if (share.noPoints !== undefined) {
+    // No points and no curves: only the sweep and the coefficients, a few numbers each.
+    return {
+      target: descriptor.data.target,
+      inputs,
+      train: emptySeries(train, share.noPoints),
+      holdout: emptySeries(holdout, share.noPoints),
+      fit: null,
+      partials: [],
+      sweep: readSweep(checks),
+      coefficients: coefficientData(model, checks),
+      no_points: share.noPoints,
+    };
+  }
   const medians = train.inputs.map((col) => columnMedian(col, train.rows));
   let spread = 0;
   for (let c = 0; c < inputs.length; c++) {
@@ -348,16 +405,6 @@ export function buildChartData(
     }
   }
 
-  // Standardised coefficients of the non-intercept columns.
-  const coefCheck = checks.find((c) => c.id === 'coefficient-size');
-  const columns: string[] = [];
-  const values: (number | null)[] = [];
-  for (let j = 0; j < design.p; j++) {
-    if (!design.penalised[j]) continue;
-    columns.push(design.columnNames[j]);
-    values.push(chartNumber((fit.coefficients[j] * metrics.columnSd[j]) / metrics.targetSd));
-  }
-
   // A transformed target judged on the original scale: its rows as written, predictions back-transformed.
   const scale = originalScale(model);
   return {
@@ -373,6 +420,20 @@ export function buildChartData(
     partials,
     ...(partialsLeftOut > 0 ? { partialsLeftOut } : {}),
     sweep: readSweep(checks),
-    coefficients: { columns, values, limit: coefCheck?.limit ?? null, warn: coefCheck?.warn ?? null },
+    coefficients: coefficientData(model, checks),
   };
+}
+
+/** Standardised coefficients of the non-intercept columns, with the `coefficient-size` limits. */
+function coefficientData(model: FittedModel, checks: readonly CheckResult[]): ChartData['coefficients'] {
+  const { design, fit, metrics } = model;
+  const coefCheck = checks.find((c) => c.id === 'coefficient-size');
+  const columns: string[] = [];
+  const values: (number | null)[] = [];
+  for (let j = 0; j < design.p; j++) {
+    if (!design.penalised[j]) continue;
+    columns.push(design.columnNames[j]);
+    values.push(chartNumber((fit.coefficients[j] * metrics.columnSd[j]) / metrics.targetSd));
+  }
+  return { columns, values, limit: coefCheck?.limit ?? null, warn: coefCheck?.warn ?? null };
 }

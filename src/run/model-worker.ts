@@ -19,7 +19,7 @@ import { evaluateModel, type BaseInput } from './evaluate.js';
 import { kernelNotes, recordKernelNotes } from '../kernels/index.js';
 import { createFsRepository } from '../repo/fs-repository.js';
 import type { RepoReader } from '../repo/types.js';
-import { FULL_CHART_SHARE, type ChartShare } from '../result/chart-types.js';
+import { chartShare, type ChartShare } from '../result/chart-types.js';
 import type { ModelResult } from '../result/result.js';
 import { errorResult, timeLimitError } from './error-result.js';
 import { runPool, serveTasks } from './pool.js';
@@ -32,8 +32,6 @@ interface ModelWorkerData {
   /** Absolute repository root the worker reads from. */
   root: string;
   settings: SettingsFile;
-  /** Each model's share of the run's chart data. */
-  share: ChartShare;
 }
 
 /** One model to evaluate. */
@@ -42,6 +40,8 @@ interface ModelTask {
   /** The base model this model is compared with (null: new), or undefined when not comparing. */
   baseline?: BaseMatch | null;
   commit?: string;
+  /** The model's share of the run's chart data. */
+  share: ChartShare;
 }
 
 /** What a worker sends back for a model: its outcome and the thread's kernel notes (kernels/engine.ts). */
@@ -78,8 +78,16 @@ export interface EvaluateModelsOptions {
   exactJobs?: boolean;
   /** The base commit's outcomes to compare with. Default none. */
   base?: BaseInput;
-  /** Each model's share of the run's chart data (result/chart-types.ts `chartShare`). Default the full share. */
-  share?: ChartShare;
+  /**
+   * Models in the run, for each model's share of the run's chart data (result/chart-types.ts
+   * `chartShare(models, index)`, the index in `descriptors`). Default `descriptors.length`.
+   */
+  models?: number;
+  /**
+   * Called with each outcome as soon as it is final (on this thread alone: after each model; with
+   * workers: after the pool, in descriptor order); the list returned holds what it returns. Default none.
+   */
+  onModel?: (model: ModelResult) => ModelResult;
 }
 
 /**
@@ -100,10 +108,12 @@ export async function evaluateModels(
 ): Promise<ModelResult[]> {
   const jobs = Math.min(options.jobs ?? 1, descriptors.length);
   const script = workerScript();
-  const share = options.share ?? FULL_CHART_SHARE;
+  const models = options.models ?? descriptors.length;
+  const keep = options.onModel ?? ((model: ModelResult) => model);
   const serial = async (): Promise<ModelResult[]> => {
     const results: ModelResult[] = [];
-    for (const descriptor of descriptors) results.push(await evaluateModel(repo, descriptor, settings, options.base, undefined, share));
+    for (let i = 0; i < descriptors.length; i++)
+      results.push(keep(await evaluateModel(repo, descriptors[i], settings, options.base, undefined, chartShare(models, i))));
     return results;
   };
   if (jobs <= 1 || options.root === undefined || script === null) return serial();
@@ -112,10 +122,12 @@ export async function evaluateModels(
   const workers = options.exactJobs === true ? jobs : workersThatPay(works, jobs);
   if (workers <= 1) return serial();
   const base = options.base;
-  const tasks: ModelTask[] = descriptors.map((descriptor) =>
-    base ? { descriptor, baseline: base.matches.get(descriptor.file) ?? null, commit: base.commit } : { descriptor },
+  const tasks: ModelTask[] = descriptors.map((descriptor, i) =>
+    base
+      ? { descriptor, baseline: base.matches.get(descriptor.file) ?? null, commit: base.commit, share: chartShare(models, i) }
+      : { descriptor, share: chartShare(models, i) },
   );
-  const data: ModelWorkerData = { [WORKER_FLAG]: true, root: options.root, settings, share };
+  const data: ModelWorkerData = { [WORKER_FLAG]: true, root: options.root, settings };
   // The worker checks the model's time limit itself between stages; a model still running
   // HARD_STOP_GRACE_MS later is stuck in one step, and its thread is ended from here.
   const limitSeconds = settings.caps.maxModelSeconds;
@@ -135,7 +147,7 @@ export async function evaluateModels(
     },
   );
   for (const reply of replies) recordKernelNotes(reply.kernelNotes);
-  return replies.map((reply) => reply.result);
+  return replies.map((reply) => keep(reply.result));
 }
 
 /**
@@ -153,7 +165,7 @@ function startModelWorker(): void {
       task.baseline === undefined
         ? undefined
         : { matches: new Map(task.baseline === null ? [] : [[task.descriptor.file, task.baseline]]), commit: task.commit ?? '' };
-    const result = await evaluateModel(repo, task.descriptor, data.settings, base, undefined, data.share);
+    const result = await evaluateModel(repo, task.descriptor, data.settings, base, undefined, task.share);
     return { result, kernelNotes: kernelNotes() };
   });
 }

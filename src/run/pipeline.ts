@@ -11,7 +11,6 @@ import { kernelNotes } from '../kernels/index.js';
 import { matchBase, type BaseInput } from './base-comparison.js';
 import { errorResult } from './error-result.js';
 import { evaluateModels } from './model-worker.js';
-import { chartShare } from '../result/chart-types.js';
 import type { RepoReader } from '../repo/types.js';
 import { summarise, type ModelResult, type Result } from '../result/result.js';
 import type { Settings } from './settings.js';
@@ -49,6 +48,13 @@ export interface PipelineOptions {
    * Default false: as many as the guessed work pays for, at most `jobs` (run/work-guess.ts).
    */
   exactJobs?: boolean;
+  /**
+   * Called with each model's outcome as soon as it is final (a writer keeps its report text
+   * elsewhere); the Result keeps what it returns instead (a smaller copy: the verdict and what
+   * the summaries read). Called once per model; on the main thread alone in descriptor order
+   * (load errors first), on workers after they finish. Default: the Result keeps every outcome whole.
+   */
+  onModel?: (model: ModelResult) => ModelResult;
 }
 
 /**
@@ -82,7 +88,8 @@ export async function runPipeline(settings: Settings, repo: RepoReader, options:
       loaded.push(await loadDescriptor(repo, path, file));
     } catch (error) {
       if (!(error instanceof InputError)) throw error;
-      models.push(errorResult(path, path, error));
+      const failed = errorResult(path, path, error);
+      models.push(options.onModel ? options.onModel(failed) : failed);
     }
   }
   checkUniqueNames(loaded);
@@ -99,8 +106,9 @@ export async function runPipeline(settings: Settings, repo: RepoReader, options:
     jobs: options.jobs,
     root: options.root,
     exactJobs: options.exactJobs,
+    onModel: options.onModel,
     base,
-    share: chartShare(paths.length),
+    models: paths.length,
   }))
     models.push(model);
   if (shard) notes.push(`shard ${formatShard(shard)}: ${paths.length} model${paths.length === 1 ? '' : 's'} of this run's share`);

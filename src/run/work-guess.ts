@@ -8,8 +8,9 @@
  * The unit is the operation of cost.ts. The constants are rough and were measured on the
  * development machine (2 cores, Node.js 20) with whole runs: the bundled examples (6 models of
  * a few kilobytes) take about 0.35 s on one thread and more with two workers; 1,000 models of
- * 1,000 rows (about 45 kB of CSV each) take about 7 ms a model; the benchmark's workload L (139 MB,
- * 25 columns) about 10 s.
+ * 1,000 rows (about 45 kB of CSV each) take about 6 ms a model, and about 3 ms more each on a
+ * worker ({@link MODEL_TRANSFER_OPERATIONS}), so they run on the main thread; the benchmark's
+ * workload L (139 MB, 25 columns) about 10 s.
  */
 import type { Descriptor } from '../config/types.js';
 import type { RepoReader } from '../repo/types.js';
@@ -25,6 +26,25 @@ export const BYTE_COLUMNS = 25;
 
 /** Operations a model must be guessed at, in total, for each worker thread the run starts (about 0.5 s of work each). */
 export const WORKER_OPERATIONS = 2.5e8;
+
+/**
+ * Operations a model costs on a worker thread beyond its own work, about 3 ms: its task and its
+ * Result cloned across the threads (a Result is bounded by the run's chart data,
+ * result/chart-types.ts) and taken in by the main thread, code warmed up and garbage collected in
+ * one more isolate. Measured with whole runs: two workers took 3.7 s more CPU time than the main
+ * thread alone for 1,000 models of 1,000 rows, 1.7 s more for 200 models of 2,000 rows.
+ */
+export const MODEL_TRANSFER_OPERATIONS = 1.5e6;
+
+/** Operations a worker thread costs to start, about 0.4 s: it loads the bundle and compiles the code again in its own isolate. */
+export const WORKER_START_OPERATIONS = 2e8;
+
+/**
+ * Workers start only when their run is guessed to take at most this fraction of the serial run's
+ * time: a margin for what the guess cannot see (the main thread writing the reports meanwhile,
+ * cores shared with other processes).
+ */
+export const POOL_PAY_RATIO = 0.8;
 
 /**
  * Design columns guessed from the descriptor alone: 1 for the intercept, then per term its
@@ -71,15 +91,26 @@ export async function dataBytes(repo: RepoReader, descriptor: Descriptor): Promi
 }
 
 /**
- * Worker threads that the guessed work pays for: one per {@link WORKER_OPERATIONS} of the total,
- * at most `jobs` and at most one per model; 0 or 1 means the main thread alone.
+ * Worker threads that the guessed work pays for: W = one per {@link WORKER_OPERATIONS} of the
+ * total, at most `jobs` and at most one per model, then fewer while the guessed time of W workers,
+ * max(largest model, (total + models x {@link MODEL_TRANSFER_OPERATIONS}) / W) +
+ * {@link WORKER_START_OPERATIONS}, is more than {@link POOL_PAY_RATIO} of the total (the serial
+ * run); 0 or 1 means the main thread alone.
  * @param works guessed work of each model ({@link guessWork})
  * @param jobs largest number of workers allowed (>= 1)
  */
 export function workersThatPay(works: readonly number[], jobs: number): number {
   let total = 0;
-  for (const w of works) total += w;
-  return Math.max(0, Math.min(Math.floor(jobs), works.length, Math.floor(total / WORKER_OPERATIONS)));
+  let largest = 0;
+  for (const w of works) {
+    total += w;
+    largest = Math.max(largest, w);
+  }
+  const moved = total + works.length * MODEL_TRANSFER_OPERATIONS;
+  let workers = Math.max(0, Math.min(Math.floor(jobs), works.length, Math.floor(total / WORKER_OPERATIONS)));
+  while (workers >= 2 && Math.max(largest + MODEL_TRANSFER_OPERATIONS, moved / workers) + WORKER_START_OPERATIONS > POOL_PAY_RATIO * total)
+    workers--;
+  return workers;
 }
 
 /**

@@ -13,6 +13,37 @@ describe('chartNumber', () => {
     expect(chartNumber(Infinity)).toBeNull();
     expect(chartNumber(-Infinity)).toBeNull();
   });
+
+  it('equals Number(x.toPrecision(7)) everywhere: random magnitudes, decimal ties, neighbours of powers of ten, extremes', () => {
+    const slow = (x: number): number => Number(x.toPrecision(7));
+    // A seeded generator (xorshift32), so that a failure can be replayed.
+    let state = 0x9e3779b9;
+    const next = (): number => {
+      state ^= state << 13;
+      state ^= state >>> 17;
+      state ^= state << 5;
+      return (state >>> 0) / 2 ** 32;
+    };
+    const values: number[] = [0, -0, Number.MIN_VALUE, -Number.MIN_VALUE, Number.MAX_VALUE, -Number.MAX_VALUE, 1, -1];
+    for (let i = 0; i < 200_000; i++) {
+      const x = (next() < 0.5 ? -1 : 1) * next() * 10 ** Math.floor(next() * 80 - 40);
+      values.push(x);
+    }
+    for (let e = -30; e <= 30; e++) {
+      const p = 10 ** e;
+      values.push(p, p * (1 + Number.EPSILON), p * (1 - Number.EPSILON), p * 0.99999995, p * 0.9999999, p * 9.9999995);
+      // Decimal ties at the 8th digit and their double neighbours.
+      for (const m of [1.2345675, 1.0000005, 9.9999995, 5.5555555, 2.5000005]) {
+        const t = m * p;
+        values.push(t, t * (1 + Number.EPSILON), t * (1 - Number.EPSILON));
+      }
+    }
+    // Short decimals as a CSV gives them (already 7 digits or fewer).
+    for (let i = 0; i < 20_000; i++) values.push(Number((next() * 1000 - 500).toFixed(3)), Number((next() * 1e-4).toPrecision(6)));
+    let differing = 0;
+    for (const x of values) if (!Object.is(chartNumber(x), x === 0 ? 0 : slow(x))) differing++;
+    expect(differing).toBe(0);
+  });
 });
 
 describe('thinRows', () => {
