@@ -65,7 +65,7 @@ async function main(argv: string[]): Promise<number> {
       result = mergeReports(readReports(parsed.reports), VERSION, { expect: parsed.expect });
       failOn = parsed.failOn;
     } else {
-      // Only the JSON report, to a file: each model's text is written as soon as its outcome is
+      // Only the JSON report, to a file: each model's text is rendered as soon as its outcome is
       // final, and the Result keeps a small copy (entries/model-spool.ts).
       if (parsed.format === 'json' && parsed.out !== null && parsed.html === null && parsed.sarif === null && parsed.junit === null)
         spool = openModelSpool();
