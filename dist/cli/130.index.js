@@ -1307,13 +1307,16 @@ function html_figure(svg, caption, wide = false) {
 /** The charts of one model, in reading order. */
 function charts(chart, prefix) {
     const out = [];
-    if (chart.fit) {
+    // Left without points by the run's chart data: only the sweep and the coefficients.
+    const points = chart.no_points === undefined;
+    if (points && chart.fit) {
         out.push(html_figure(fitCurveChart(chart, chart.fit, { id: `${prefix}-fit` }), 'The fitted curve over the scanned range (dotted lines: the training range). A curve that leaves the observed band between the samples is chasing noise.'));
     }
-    else {
+    else if (points) {
         out.push(html_figure(predictedActualChart(chart, { id: `${prefix}-pa` }), 'Predicted against actual values; hold-out points far from the dashed line while training points sit on it show overfitting.'));
     }
-    out.push(html_figure(residualsChart(chart, { id: `${prefix}-res` }), 'Residuals against fitted values.'));
+    if (points)
+        out.push(html_figure(residualsChart(chart, { id: `${prefix}-res` }), 'Residuals against fitted values.'));
     chart.partials.forEach((curve, k) => {
         out.push(html_figure(partialCurveChart(chart, curve, { id: `${prefix}-partial-${k + 1}` }), `Partial curve along ${curve.input}, the other inputs at their training medians.`));
     });
@@ -1364,7 +1367,9 @@ function modelSection(m, index) {
         const list = charts(m.charts, id);
         const thinned = [m.charts.train, m.charts.holdout].filter((s) => s.thinned);
         parts.push(`<h3>Charts</h3>`);
-        if (thinned.length)
+        if (m.charts.no_points !== undefined)
+            parts.push(`<p class="note" data-no-points>${(0,report_escape/* escapeHtml */.ZD)(`Rows and curves: ${m.charts.no_points}.`)}</p>`);
+        else if (thinned.length)
             parts.push(`<p class="note">${thinned.map((s) => (0,report_escape/* escapeHtml */.ZD)(`${s === m.charts?.train ? 'Training' : 'Hold-out'} rows: ${s.thinning}.`)).join(' ')}</p>`);
         const leftOut = m.charts.partialsLeftOut ?? 0;
         if (leftOut > 0)
