@@ -9,45 +9,18 @@
 // than 16 MiB between the two (chunks, sample and hold-out rows are the same size for both, and a
 // part is closed before the next is opened; 0 and 5 MiB in the same runs) and stays under 256 MiB.
 import { spawnSync } from 'node:child_process';
-import { createWriteStream, mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
-import { once } from 'node:events';
-import { createGzip } from 'node:zlib';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { writeGzipRows } from './gzip-rows.js';
 import { transpileSources } from './transpile.js';
 
 const INPUTS = 8;
 const PART_ROWS = 50_000;
 
-/** Writes `rows` rows of x1..x8, y (y linear in the inputs plus a wobble) as gzip CSV. */
-async function writeGzip(file: string, rows: number, seed: number): Promise<void> {
-  const gzip = createGzip({ level: 1 });
-  const out = createWriteStream(file);
-  gzip.pipe(out);
-  let s = seed >>> 0;
-  gzip.write(`${Array.from({ length: INPUTS }, (_, j) => `x${j + 1}`).join(',')},y\n`);
-  const batch: string[] = [];
-  for (let i = 0; i < rows; i++) {
-    let y = 0;
-    const cells: string[] = [];
-    for (let j = 0; j < INPUTS; j++) {
-      s = (Math.imul(s, 1664525) + 1013904223) >>> 0;
-      const x = s / 2 ** 32;
-      y += (j + 1) * x;
-      cells.push(x.toFixed(6));
-    }
-    s = (Math.imul(s, 1664525) + 1013904223) >>> 0;
-    cells.push((y + s / 2 ** 32 - 0.5).toFixed(6));
-    batch.push(cells.join(','));
-    if (batch.length === 20000 || i === rows - 1) {
-      if (!gzip.write(`${batch.join('\n')}\n`)) await once(gzip, 'drain');
-      batch.length = 0;
-    }
-  }
-  gzip.end();
-  await once(out, 'finish');
-}
+/** Writes `rows` rows of x1..x8, y as gzip CSV (test/run/gzip-rows.ts). */
+const writeGzip = (file: string, rows: number, seed: number): Promise<void> => writeGzipRows(file, rows, seed, INPUTS);
 
 const SCRIPT = `
 const [dir, root] = process.argv.slice(1);
