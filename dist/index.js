@@ -29436,7 +29436,7 @@ var runner_commands = __nccwpck_require__(673);
 function* jsonReport(result, options = {}) {
     const modelText = options.modelText;
     const models = new Set(result.models);
-    // True while the pieces come from text written earlier, neutralised already.
+    // True while the pieces come from text rendered earlier, neutralised already.
     let written = false;
     const substitute = modelText === undefined
         ? undefined
@@ -29461,7 +29461,7 @@ function* jsonReport(result, options = {}) {
 const MODEL_DEPTH = 2;
 /**
  * One model's part of the JSON report, as {@link jsonReport} writes it inside `models` (indented
- * two levels, neutralised, no separators around it): for writing each model's text as soon as its
+ * two levels, neutralised, no separators around it): for rendering each model's text as soon as its
  * outcome is final, and handing it back through {@link JsonReportOptions.modelText}.
  */
 function* jsonModelReport(model) {

@@ -14586,10 +14586,7 @@ function smallCopy(model) {
         delete check.detail;
     return copy;
 }
-/**
- * Opens a spool for one run.
- * @returns the spool (never null: the signature keeps room for a spool that cannot be had)
- */
+/** Opens a spool for one run. */
 function openModelSpool() {
     let texts = new Map();
     let open = true;
@@ -17915,7 +17912,7 @@ function escapeMermaid(text) {
 function* jsonReport(result, options = {}) {
     const modelText = options.modelText;
     const models = new Set(result.models);
-    // True while the pieces come from text written earlier, neutralised already.
+    // True while the pieces come from text rendered earlier, neutralised already.
     let written = false;
     const substitute = modelText === undefined
         ? undefined
@@ -17940,7 +17937,7 @@ function* jsonReport(result, options = {}) {
 const MODEL_DEPTH = 2;
 /**
  * One model's part of the JSON report, as {@link jsonReport} writes it inside `models` (indented
- * two levels, neutralised, no separators around it): for writing each model's text as soon as its
+ * two levels, neutralised, no separators around it): for rendering each model's text as soon as its
  * outcome is final, and handing it back through {@link JsonReportOptions.modelText}.
  */
 function* jsonModelReport(model) {

@@ -33,11 +33,8 @@ export function smallCopy(model: ModelResult): ModelResult {
   return copy;
 }
 
-/**
- * Opens a spool for one run.
- * @returns the spool (never null: the signature keeps room for a spool that cannot be had)
- */
-export function openModelSpool(): ModelSpool | null {
+/** Opens a spool for one run. */
+export function openModelSpool(): ModelSpool {
   let texts = new Map<ModelResult, string>();
   let open = true;
   return {

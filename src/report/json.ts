@@ -15,7 +15,7 @@ import { neutraliseJson } from './runner-commands.js';
 export function* jsonReport(result: Result, options: JsonReportOptions = {}): Generator<string> {
   const modelText = options.modelText;
   const models = new Set(result.models);
-  // True while the pieces come from text written earlier, neutralised already.
+  // True while the pieces come from text rendered earlier, neutralised already.
   let written = false;
   const substitute =
     modelText === undefined
@@ -41,7 +41,7 @@ const MODEL_DEPTH = 2;
 /** Options of {@link jsonReport}. */
 export interface JsonReportOptions {
   /**
-   * A model's text written earlier ({@link jsonModelReport} of the full model, while the Result
+   * A model's text rendered earlier ({@link jsonModelReport} of the full model, while the Result
    * keeps a smaller copy), or undefined to format the model as it is in the Result. Default none.
    */
   modelText?: (model: ModelResult) => Iterable<string> | undefined;
@@ -49,7 +49,7 @@ export interface JsonReportOptions {
 
 /**
  * One model's part of the JSON report, as {@link jsonReport} writes it inside `models` (indented
- * two levels, neutralised, no separators around it): for writing each model's text as soon as its
+ * two levels, neutralised, no separators around it): for rendering each model's text as soon as its
  * outcome is final, and handing it back through {@link JsonReportOptions.modelText}.
  */
 export function* jsonModelReport(model: ModelResult): Generator<string> {

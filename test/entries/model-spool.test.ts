@@ -18,7 +18,6 @@ describe('the model spool', () => {
       const dir = examples(name);
       const whole = await runPipeline(defaultSettings(dir), createFsRepository(dir), { jobs: 1 });
       const spool = openModelSpool();
-      if (spool === null) throw new Error('no temporary folder to spool in');
       const kept: ModelResult[] = [];
       const small = await runPipeline(defaultSettings(dir), createFsRepository(dir), {
         jobs: 1,
@@ -55,7 +54,6 @@ describe('the model spool', () => {
     const whole = await runPipeline(defaultSettings(dir), createFsRepository(dir), { jobs: 1 });
     const hostile = { ...whole, models: whole.models.map((m) => ({ ...m, name: `${m.name}\n##[error]x\u2028::warning::y` })) };
     const spool = openModelSpool();
-    if (spool === null) throw new Error('no temporary folder to spool in');
     try {
       const small = { ...hostile, models: hostile.models.map((m) => spool.keep(m)) };
       const text = [...jsonReport(small, { modelText: spool.text })].join('');
@@ -78,7 +76,6 @@ describe('the model spool', () => {
     expect(copy).toEqual({ ...rest, checks: model.checks.map(({ detail: _detail, ...c }) => c) });
     expect(model.charts).toBeDefined();
     const spool = openModelSpool();
-    if (spool === null) throw new Error('no temporary folder to spool in');
     const kept = spool.keep(model);
     const written = spool.text(kept);
     expect(written === undefined ? undefined : [...written].join('')).toBe(
