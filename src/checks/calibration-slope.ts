@@ -2,9 +2,7 @@
  * `calibration-slope`: the hold-out calibration slope of a classifier (logistic recalibration).
  */
 import type { Check } from './types.js';
-import { formatNumber } from '../core/format.js';
-import { jsonMetrics } from '../core/json.js';
-import { predictionsCalibration } from './predictions/measures.js';
+import { calibrationMeasurement, predictionsCalibration } from './predictions/measures.js';
 
 const check: Check = {
   id: 'calibration-slope',
@@ -24,22 +22,7 @@ const check: Check = {
   tasks: ['classification'],
   measurePredictions: predictionsCalibration,
   measure: () => ({ value: null, reason: 'not-for-regression', message: 'applies to classifiers only' }),
-  measureClassifier({ calibration, holdout }) {
-    const figures = jsonMetrics({ calibration_slope: calibration.slope, calibration_intercept: calibration.intercept });
-    if (Number.isNaN(calibration.slope)) {
-      return {
-        value: null,
-        reason: 'not-identified',
-        message: `the hold-out rows (${holdout.positives} positive, ${holdout.negatives} negative) hold one class only or constant probabilities`,
-        metrics: figures,
-      };
-    }
-    return {
-      value: calibration.slope,
-      message: `hold-out calibration slope ${formatNumber(calibration.slope)}, intercept ${formatNumber(calibration.intercept)}${calibration.converged ? '' : ' (the recalibration did not converge: the hold-out rows are separated by the model)'}`,
-      metrics: figures,
-    };
-  },
+  measureClassifier: ({ calibration, holdout }) => calibrationMeasurement(calibration, holdout, 'model'),
 };
 
 export default check;

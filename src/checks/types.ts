@@ -10,19 +10,13 @@ import type { Design } from '../design/design-matrix.js';
 import type { FitResult } from '../fit/index.js';
 import type { ModelData } from '../data/model-data.js';
 import type { ModelAnalyses } from '../diagnostics/analyses.js';
+import type { PairedErrorFigures } from '../diagnostics/regression-metrics.js';
 import type { ShippedScore } from '../diagnostics/shipped.js';
 import type { TargetScale } from '../diagnostics/target-scale.js';
 import type { CheckStatus, ModelResult } from '../result/result.js';
 
 /** Figures of the refit that every check may read (plain numbers; non-finite allowed). */
-export interface CoreMetrics {
-  trainRmse: number;
-  holdoutRmse: number;
-  trainMae: number;
-  holdoutMae: number;
-  trainR2: number;
-  holdoutR2: number;
-  gapRatio: number;
+export interface CoreMetrics extends PairedErrorFigures {
   paramsPerSample: number;
   /** max_j |w_j| sd(phi_j) / sd(y) over non-intercept columns; NaN when there are none. */
   maxStdCoefficient: number;

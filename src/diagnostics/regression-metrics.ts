@@ -74,3 +74,34 @@ export function gapRatio(trainRmse: number, holdoutRmse: number): number {
   if (trainRmse === 0) return holdoutRmse === 0 ? 1 : Infinity;
   return holdoutRmse / trainRmse;
 }
+
+/** The error figures of both files side by side, with their {@link gapRatio}. */
+export interface PairedErrorFigures {
+  trainRmse: number;
+  holdoutRmse: number;
+  trainMae: number;
+  holdoutMae: number;
+  trainR2: number;
+  holdoutR2: number;
+  gapRatio: number;
+}
+
+/**
+ * The training and hold-out figures of one scale from each file's {@link errorMeasures}.
+ * @param train the training rows' RMSE, MAE and R^2
+ * @param holdout the hold-out rows' RMSE, MAE and R^2
+ */
+export function pairedErrorFigures(
+  train: { rmse: number; mae: number; r2: number },
+  holdout: { rmse: number; mae: number; r2: number },
+): PairedErrorFigures {
+  return {
+    trainRmse: train.rmse,
+    holdoutRmse: holdout.rmse,
+    trainMae: train.mae,
+    holdoutMae: holdout.mae,
+    trainR2: train.r2,
+    holdoutR2: holdout.r2,
+    gapRatio: gapRatio(train.rmse, holdout.rmse),
+  };
+}

@@ -18,19 +18,11 @@ import type { QrAccumulator } from '../fit/index.js';
 import { checkDeadline } from '../core/deadline.js';
 import { complementCoefficients } from './cross-validation.js';
 import type { Folds } from './folds.js';
-import { addErrors, emptySums, errorMeasures, gapRatio } from './regression-metrics.js';
+import { addErrors, emptySums, errorMeasures, pairedErrorFigures, type PairedErrorFigures } from './regression-metrics.js';
 import { reducedChiSquare, weightedErrorMeasures } from './weighted-metrics.js';
 
 /** The error figures of one scale. NaN where a figure is not defined. */
-export interface ScaleFigures {
-  trainRmse: number;
-  holdoutRmse: number;
-  trainMae: number;
-  holdoutMae: number;
-  trainR2: number;
-  holdoutR2: number;
-  /** holdoutRmse / trainRmse (see {@link gapRatio}). */
-  gapRatio: number;
+export interface ScaleFigures extends PairedErrorFigures {
   /** Pooled k-fold RMSE; NaN when there is no cross-validation (fewer than 2 folds, or not computed). */
   cvRmse: number;
   /** Reduced chi-square of the training rows (n - p degrees of freedom) with `data.sigma`; NaN otherwise. */
@@ -86,13 +78,7 @@ export function scaleFigures(
   const chi = (part: OriginalTarget, pred: Float64Array, n: number, dof: number): number =>
     part.sigma === undefined ? Number.NaN : reducedChiSquare(part.y, pred, part.sigma, n, dof);
   return {
-    trainRmse: tr.rmse,
-    holdoutRmse: ho.rmse,
-    trainMae: tr.mae,
-    holdoutMae: ho.mae,
-    trainR2: tr.r2,
-    holdoutR2: ho.r2,
-    gapRatio: gapRatio(tr.rmse, ho.rmse),
+    ...pairedErrorFigures(tr, ho),
     cvRmse,
     trainChiSquare: chi(train, predictions.train, rows.train, rows.train - rows.p),
     holdoutChiSquare: chi(holdout, predictions.holdout, rows.holdout, rows.holdout),

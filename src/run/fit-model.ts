@@ -10,9 +10,9 @@ import { lineOfFile } from '../data/data-parts.js';
 import type { Design } from '../design/design-matrix.js';
 import { predictRows } from '../design/blocks.js';
 import { range } from '../design/stats.js';
-import type { CrossValidation, FoldFactors } from '../diagnostics/cross-validation.js';
+import type { FoldFactors } from '../diagnostics/cross-validation.js';
 import type { Folds } from '../diagnostics/folds.js';
-import { addErrors, emptySums, errorMeasures, gapRatio } from '../diagnostics/regression-metrics.js';
+import { addErrors, emptySums, errorMeasures, pairedErrorFigures } from '../diagnostics/regression-metrics.js';
 import { refitFigures, type RefitFigures } from '../diagnostics/refit-compare.js';
 import { scoreShipped, type ShippedScore } from '../diagnostics/shipped.js';
 import { weightedErrorMeasures } from '../diagnostics/weighted-metrics.js';
@@ -22,8 +22,7 @@ import { loadModelData } from '../data/load-model-data.js';
 import type { Leakage } from '../diagnostics/leakage.js';
 import { foldPass, refinePass, scoringPass, streamedScoringPass, type FoldPass } from './passes.js';
 import { planModel, type ModelPlan, type ScaleOptions } from './plan.js';
-import type { TargetScale } from '../diagnostics/target-scale.js';
-import { withTargetScale } from './target-scale.js';
+import { withTargetScale, type ScaledModel } from './target-scale.js';
 
 /**
  * Runs `step` and, when the training rows were read from parts, rewrites the `line N of FILE` of
@@ -46,27 +45,13 @@ async function partsNamed<T>(tables: ModelTables, step: () => Promise<T>): Promi
   }
 }
 
-/** A fitted model with everything checks and reporters read. */
-export interface FittedModel {
+/** A fitted model with everything checks and reporters read (the figures of both scales: target-scale.ts's {@link ScaledModel}). */
+export interface FittedModel extends ScaledModel {
   descriptor: Descriptor;
-  design: Design;
-  fit: FitResult;
-  tables: ModelTables;
-  metrics: CoreMetrics;
-  trainPredictions: Float64Array;
-  holdoutPredictions: Float64Array;
-  /** Cross-validation folds of the training rows (from the descriptor's `fit` settings). */
-  folds: Folds;
-  /** Cross-validation figures, computed in the fit's passes over the rows; null when they could not be computed. */
-  crossValidation: CrossValidation | null;
-  /** QR factors of each fold's rows and of each fold's complement (k small p x p factors). */
-  foldFactors: FoldFactors;
   /** The descriptor's shipped coefficients scored on the same rows; null when it ships none. */
   shipped: ShippedScore | null;
   /** Scored as shipped with `fit.refit_compare: true`: the refit's figures (information); absent otherwise. */
   refitCompare?: RefitFigures;
-  /** With `data.target_transform`: figures on both scales (run/target-scale.ts); absent otherwise. */
-  targetScale?: TargetScale;
   /**
    * A streamed model's leakage, found in its scoring pass over every training row (the
    * diagnostics then do not look for it in the sample `tables.train`); absent otherwise.
@@ -264,13 +249,7 @@ function coreMetricsFrom(
     }
   }
   return {
-    trainRmse: tr.rmse,
-    holdoutRmse: ho.rmse,
-    trainMae: tr.mae,
-    holdoutMae: ho.mae,
-    trainR2: tr.r2,
-    holdoutR2: ho.r2,
-    gapRatio: gapRatio(tr.rmse, ho.rmse),
+    ...pairedErrorFigures(tr, ho),
     paramsPerSample: design.p / trainRows,
     maxStdCoefficient: maxStd,
     maxStdCoefficientColumn: maxStdColumn,

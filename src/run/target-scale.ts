@@ -15,7 +15,7 @@ import type { Folds } from '../diagnostics/folds.js';
 import type { FitResult } from '../fit/index.js';
 import type { ModelPlan } from './plan.js';
 
-/** What {@link withTargetScale} reads of a fitted model (fit-model.ts's `FittedModel` has it all). */
+/** What {@link withTargetScale} reads and writes of a fitted model (fit-model.ts's `FittedModel` extends it). */
 export interface ScaledModel {
   design: Design;
   fit: FitResult;
@@ -23,9 +23,13 @@ export interface ScaledModel {
   metrics: CoreMetrics;
   trainPredictions: Float64Array;
   holdoutPredictions: Float64Array;
+  /** Cross-validation folds of the training rows (from the descriptor's `fit` settings). */
   folds: Folds;
+  /** Cross-validation figures, computed in the fit's passes over the rows; null when they could not be computed. */
   crossValidation: CrossValidation | null;
+  /** QR factors of each fold's rows and of each fold's complement (k small p x p factors). */
   foldFactors: FoldFactors;
+  /** With `data.target_transform`: figures on both scales; absent otherwise. */
   targetScale?: TargetScale;
 }
 

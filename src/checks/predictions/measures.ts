@@ -10,6 +10,7 @@ import { gapRatio } from '../../diagnostics/regression-metrics.js';
 import { fromJsonNumber, type JsonNumber } from '../../result/result.js';
 import type { Measurement } from '../types.js';
 import type { PredictionsContext } from './context.js';
+import type { Calibration, ClassificationFigures } from '../../diagnostics/classification-metrics.js';
 
 /** Advice for a model trained elsewhere: the change is made in the tool that trained it. */
 const ELSEWHERE_ADVICE =
@@ -75,10 +76,18 @@ function notStated(descriptor: PredictionsContext['descriptor']): Measurement {
   };
 }
 
-/** `calibration-slope` (classifiers): the logistic recalibration of the hold-out probabilities. */
-export function predictionsCalibration({ classifier }: PredictionsContext): Measurement {
-  if (classifier === null) return { value: null, reason: 'not-for-regression', message: 'applies to classifiers only' };
-  const { calibration, holdout } = classifier;
+/**
+ * The `calibration-slope` measurement of a classifier's hold-out recalibration, for a model of
+ * terms and a model trained elsewhere alike.
+ * @param calibration the logistic recalibration on the hold-out rows (slope NaN when not identified)
+ * @param holdout the hold-out rows' class counts (named when the slope is not identified)
+ * @param separatedBy what separates the hold-out rows when the recalibration does not converge
+ */
+export function calibrationMeasurement(
+  calibration: Calibration,
+  holdout: Pick<ClassificationFigures, 'positives' | 'negatives'>,
+  separatedBy: 'model' | 'predictions',
+): Measurement {
   const figures = jsonMetrics({ calibration_slope: calibration.slope, calibration_intercept: calibration.intercept });
   if (Number.isNaN(calibration.slope)) {
     return {
@@ -90,9 +99,15 @@ export function predictionsCalibration({ classifier }: PredictionsContext): Meas
   }
   return {
     value: calibration.slope,
-    message: `hold-out calibration slope ${formatNumber(calibration.slope)}, intercept ${formatNumber(calibration.intercept)}${calibration.converged ? '' : ' (the recalibration did not converge: the hold-out rows are separated by the predictions)'}`,
+    message: `hold-out calibration slope ${formatNumber(calibration.slope)}, intercept ${formatNumber(calibration.intercept)}${calibration.converged ? '' : ` (the recalibration did not converge: the hold-out rows are separated by the ${separatedBy})`}`,
     metrics: figures,
   };
+}
+
+/** `calibration-slope` (classifiers): the logistic recalibration of the hold-out probabilities. */
+export function predictionsCalibration({ classifier }: PredictionsContext): Measurement {
+  if (classifier === null) return { value: null, reason: 'not-for-regression', message: 'applies to classifiers only' };
+  return calibrationMeasurement(classifier.calibration, classifier.holdout, 'predictions');
 }
 
 /** `base-change`: relative change of the hold-out RMSE (classifiers: log-loss) against the base commit. */
