@@ -283,11 +283,14 @@ function notStated(descriptor) {
         line: descriptor.predictions?.line,
     };
 }
-/** `calibration-slope` (classifiers): the logistic recalibration of the hold-out probabilities. */
-function predictionsCalibration({ classifier }) {
-    if (classifier === null)
-        return { value: null, reason: 'not-for-regression', message: 'applies to classifiers only' };
-    const { calibration, holdout } = classifier;
+/**
+ * The `calibration-slope` measurement of a classifier's hold-out recalibration, for a model of
+ * terms and a model trained elsewhere alike.
+ * @param calibration the logistic recalibration on the hold-out rows (slope NaN when not identified)
+ * @param holdout the hold-out rows' class counts (named when the slope is not identified)
+ * @param separatedBy what separates the hold-out rows when the recalibration does not converge
+ */
+function calibrationMeasurement(calibration, holdout, separatedBy) {
     const figures = (0,json/* jsonMetrics */.Gc)({ calibration_slope: calibration.slope, calibration_intercept: calibration.intercept });
     if (Number.isNaN(calibration.slope)) {
         return {
@@ -299,9 +302,15 @@ function predictionsCalibration({ classifier }) {
     }
     return {
         value: calibration.slope,
-        message: `hold-out calibration slope ${(0,format/* formatNumber */.Z)(calibration.slope)}, intercept ${(0,format/* formatNumber */.Z)(calibration.intercept)}${calibration.converged ? '' : ' (the recalibration did not converge: the hold-out rows are separated by the predictions)'}`,
+        message: `hold-out calibration slope ${(0,format/* formatNumber */.Z)(calibration.slope)}, intercept ${(0,format/* formatNumber */.Z)(calibration.intercept)}${calibration.converged ? '' : ` (the recalibration did not converge: the hold-out rows are separated by the ${separatedBy})`}`,
         metrics: figures,
     };
+}
+/** `calibration-slope` (classifiers): the logistic recalibration of the hold-out probabilities. */
+function predictionsCalibration({ classifier }) {
+    if (classifier === null)
+        return { value: null, reason: 'not-for-regression', message: 'applies to classifiers only' };
+    return calibrationMeasurement(classifier.calibration, classifier.holdout, 'predictions');
 }
 /** `base-change`: relative change of the hold-out RMSE (classifiers: log-loss) against the base commit. */
 function predictionsBaseChange({ regression, classifier, baseline }) {
@@ -1305,8 +1314,6 @@ const swing_beyond_check = {
 
 ;// CONCATENATED MODULE: ./src/checks/calibration-slope.ts
 
-
-
 const calibration_slope_check = {
     id: 'calibration-slope',
     title: 'Calibration slope',
@@ -1325,22 +1332,7 @@ const calibration_slope_check = {
     tasks: ['classification'],
     measurePredictions: predictionsCalibration,
     measure: () => ({ value: null, reason: 'not-for-regression', message: 'applies to classifiers only' }),
-    measureClassifier({ calibration, holdout }) {
-        const figures = (0,json/* jsonMetrics */.Gc)({ calibration_slope: calibration.slope, calibration_intercept: calibration.intercept });
-        if (Number.isNaN(calibration.slope)) {
-            return {
-                value: null,
-                reason: 'not-identified',
-                message: `the hold-out rows (${holdout.positives} positive, ${holdout.negatives} negative) hold one class only or constant probabilities`,
-                metrics: figures,
-            };
-        }
-        return {
-            value: calibration.slope,
-            message: `hold-out calibration slope ${(0,format/* formatNumber */.Z)(calibration.slope)}, intercept ${(0,format/* formatNumber */.Z)(calibration.intercept)}${calibration.converged ? '' : ' (the recalibration did not converge: the hold-out rows are separated by the model)'}`,
-            metrics: figures,
-        };
-    },
+    measureClassifier: ({ calibration, holdout }) => calibrationMeasurement(calibration, holdout, 'model'),
 };
 /* harmony default export */ const calibration_slope = (calibration_slope_check);
 
@@ -12761,6 +12753,7 @@ function shuffle(out, random) {
 
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
 /* harmony export */   _I: () => (/* binding */ errorMeasures),
+/* harmony export */   n2: () => (/* binding */ pairedErrorFigures),
 /* harmony export */   xB: () => (/* binding */ addErrors),
 /* harmony export */   y3: () => (/* binding */ emptySums),
 /* harmony export */   yr: () => (/* binding */ gapRatio)
@@ -12828,6 +12821,22 @@ function gapRatio(trainRmse, holdoutRmse) {
     if (trainRmse === 0)
         return holdoutRmse === 0 ? 1 : Infinity;
     return holdoutRmse / trainRmse;
+}
+/**
+ * The training and hold-out figures of one scale from each file's {@link errorMeasures}.
+ * @param train the training rows' RMSE, MAE and R^2
+ * @param holdout the hold-out rows' RMSE, MAE and R^2
+ */
+function pairedErrorFigures(train, holdout) {
+    return {
+        trainRmse: train.rmse,
+        holdoutRmse: holdout.rmse,
+        trainMae: train.mae,
+        holdoutMae: holdout.mae,
+        trainR2: train.r2,
+        holdoutR2: holdout.r2,
+        gapRatio: gapRatio(train.rmse, holdout.rmse),
+    };
 }
 
 
@@ -23088,6 +23097,8 @@ function leakageOf(train, holdout) {
     };
 }
 
+// EXTERNAL MODULE: ./src/diagnostics/regression-metrics.ts
+var regression_metrics = __nccwpck_require__(155);
 ;// CONCATENATED MODULE: ./src/run/evaluate-classifier.ts
 /**
  * One binary classifier from descriptor to outcome: fit and score it (fit-classifier.ts), run
@@ -23102,6 +23113,30 @@ function leakageOf(train, holdout) {
 
 
 
+
+/**
+ * The report keys of a classifier's figures on both files, shared by models of terms and models
+ * trained elsewhere: log-loss, Brier score, accuracy at the threshold, ROC AUC and class counts.
+ * @param threshold `fit.threshold` (default 0.5)
+ */
+function classificationFigureMetrics(train, holdout, threshold) {
+    const n = (x) => (0,result_result/* jsonNumber */.qj)(x);
+    return {
+        train_log_loss: n(train.logLoss),
+        holdout_log_loss: n(holdout.logLoss),
+        train_brier: n(train.brier),
+        holdout_brier: n(holdout.brier),
+        train_accuracy: n(train.accuracy),
+        holdout_accuracy: n(holdout.accuracy),
+        train_auc: n(train.auc),
+        holdout_auc: n(holdout.auc),
+        threshold,
+        train_positives: train.positives,
+        train_negatives: train.negatives,
+        holdout_positives: holdout.positives,
+        holdout_negatives: holdout.negatives,
+    };
+}
 /**
  * The report's metrics of a classifier: the training and hold-out figures, calibration, class
  * counts and the fit's convergence; the checks add theirs (gap ratio, CV log-loss...). The
@@ -23118,26 +23153,14 @@ function classifierMetrics(model) {
         holdout_mae: null,
         train_r2: null,
         holdout_r2: null,
-        gap_ratio: n(train.logLoss === 0 ? (holdout.logLoss === 0 ? 1 : Infinity) : holdout.logLoss / train.logLoss),
+        gap_ratio: n((0,regression_metrics/* gapRatio */.yr)(train.logLoss, holdout.logLoss)),
         params_per_sample: n(design.p / train.rows),
         max_std_coefficient: null,
         max_std_coefficient_column: null,
         max_abs_coefficient: n((0,extremes/* maxOf */._)(Array.from(fit.coefficients, Math.abs), 0)),
         rank: weighted.rank,
         condition_number: n(weighted.conditionNumberScaled),
-        train_log_loss: n(train.logLoss),
-        holdout_log_loss: n(holdout.logLoss),
-        train_brier: n(train.brier),
-        holdout_brier: n(holdout.brier),
-        train_accuracy: n(train.accuracy),
-        holdout_accuracy: n(holdout.accuracy),
-        train_auc: n(train.auc),
-        holdout_auc: n(holdout.auc),
-        threshold: model.context.descriptor.fit.threshold ?? 0.5,
-        train_positives: train.positives,
-        train_negatives: train.negatives,
-        holdout_positives: holdout.positives,
-        holdout_negatives: holdout.negatives,
+        ...classificationFigureMetrics(train, holdout, model.context.descriptor.fit.threshold ?? 0.5),
         positive_label: model.labels.positive,
         negative_label: model.labels.negative,
         fit_iterations: fit.iterations,
@@ -23467,8 +23490,6 @@ function observedSpread(y, trainRows, files) {
     return { band: [lo, hi], predicted: [pLo, pHi], value: width > 0 ? worstOut / width : Number.NaN, rows, worst };
 }
 
-// EXTERNAL MODULE: ./src/diagnostics/regression-metrics.ts
-var regression_metrics = __nccwpck_require__(155);
 ;// CONCATENATED MODULE: ./src/run/evaluate-predictions.ts
 /**
  * One model trained elsewhere (`predictions`) from descriptor to outcome: its rows and
@@ -23476,6 +23497,7 @@ var regression_metrics = __nccwpck_require__(155);
  * the registry through its `measurePredictions` (the others skipped with `<id>/needs-refit`),
  * and its part of the Result (`kind: 'predictions'`). Nothing is fitted.
  */
+
 
 
 
@@ -23637,19 +23659,7 @@ function evaluate_predictions_classifierMetrics(c, parameters, rows, descriptor,
         task: 'classification',
         gap_ratio: n((0,regression_metrics/* gapRatio */.yr)(train.logLoss, holdout.logLoss)),
         ...(parameters === null ? {} : { params_per_sample: n(parameters / rows) }),
-        train_log_loss: n(train.logLoss),
-        holdout_log_loss: n(holdout.logLoss),
-        train_brier: n(train.brier),
-        holdout_brier: n(holdout.brier),
-        train_accuracy: n(train.accuracy),
-        holdout_accuracy: n(holdout.accuracy),
-        train_auc: n(train.auc),
-        holdout_auc: n(holdout.auc),
-        threshold: descriptor.fit.threshold ?? 0.5,
-        train_positives: train.positives,
-        train_negatives: train.negatives,
-        holdout_positives: holdout.positives,
-        holdout_negatives: holdout.negatives,
+        ...classificationFigureMetrics(train, holdout, descriptor.fit.threshold ?? 0.5),
         positive_label: labels?.positive ?? null,
         negative_label: labels?.negative ?? null,
     };
@@ -23924,13 +23934,7 @@ function scaleFigures(train, holdout, predictions, rows, cvRmse) {
     const ho = scaleMeasures(holdout.y, predictions.holdout, rows.holdout, holdout.weights);
     const chi = (part, pred, n, dof) => part.sigma === undefined ? Number.NaN : (0,weighted_metrics/* reducedChiSquare */.G)(part.y, pred, part.sigma, n, dof);
     return {
-        trainRmse: tr.rmse,
-        holdoutRmse: ho.rmse,
-        trainMae: tr.mae,
-        holdoutMae: ho.mae,
-        trainR2: tr.r2,
-        holdoutR2: ho.r2,
-        gapRatio: (0,regression_metrics/* gapRatio */.yr)(tr.rmse, ho.rmse),
+        ...(0,regression_metrics/* pairedErrorFigures */.n2)(tr, ho),
         cvRmse,
         trainChiSquare: chi(train, predictions.train, rows.train, rows.train - rows.p),
         holdoutChiSquare: chi(holdout, predictions.holdout, rows.holdout, rows.holdout),
@@ -24242,13 +24246,7 @@ function coreMetricsFrom(targetSd, columnSd, fit, design, trainRows, tr, ho, tar
         }
     }
     return {
-        trainRmse: tr.rmse,
-        holdoutRmse: ho.rmse,
-        trainMae: tr.mae,
-        holdoutMae: ho.mae,
-        trainR2: tr.r2,
-        holdoutR2: ho.r2,
-        gapRatio: (0,regression_metrics/* gapRatio */.yr)(tr.rmse, ho.rmse),
+        ...(0,regression_metrics/* pairedErrorFigures */.n2)(tr, ho),
         paramsPerSample: design.p / trainRows,
         maxStdCoefficient: maxStd,
         maxStdCoefficientColumn: maxStdColumn,

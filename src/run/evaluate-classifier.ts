@@ -6,13 +6,43 @@
 import { CHECKS, runClassifierCheck, type ClassifierContext } from '../checks/index.js';
 import type { Descriptor, SettingsFile } from '../config/types.js';
 import { dataFilesField } from '../config/data-paths.js';
-import { jsonNumber, type ModelMetrics, type ModelResult } from '../result/result.js';
+import type { ClassificationFigures } from '../diagnostics/classification-metrics.js';
+import { jsonNumber, type JsonNumber, type ModelMetrics, type ModelResult } from '../result/result.js';
 import type { RepoReader } from '../repo/types.js';
 import { compareWithBase, type BaseInput } from './base-comparison.js';
 import { runChecks } from './run-checks.js';
 import { buildClassifierChartData } from './classifier-chart-data.js';
 import { fitClassifier, type FittedClassifier } from './fit-classifier.js';
 import { maxOf } from '../core/extremes.js';
+import { gapRatio } from '../diagnostics/regression-metrics.js';
+
+/**
+ * The report keys of a classifier's figures on both files, shared by models of terms and models
+ * trained elsewhere: log-loss, Brier score, accuracy at the threshold, ROC AUC and class counts.
+ * @param threshold `fit.threshold` (default 0.5)
+ */
+export function classificationFigureMetrics(
+  train: ClassificationFigures,
+  holdout: ClassificationFigures,
+  threshold: number,
+): Record<string, JsonNumber | number> {
+  const n = (x: number) => jsonNumber(x);
+  return {
+    train_log_loss: n(train.logLoss),
+    holdout_log_loss: n(holdout.logLoss),
+    train_brier: n(train.brier),
+    holdout_brier: n(holdout.brier),
+    train_accuracy: n(train.accuracy),
+    holdout_accuracy: n(holdout.accuracy),
+    train_auc: n(train.auc),
+    holdout_auc: n(holdout.auc),
+    threshold,
+    train_positives: train.positives,
+    train_negatives: train.negatives,
+    holdout_positives: holdout.positives,
+    holdout_negatives: holdout.negatives,
+  };
+}
 
 /**
  * The report's metrics of a classifier: the training and hold-out figures, calibration, class
@@ -30,26 +60,14 @@ function classifierMetrics(model: FittedClassifier): ModelMetrics {
     holdout_mae: null,
     train_r2: null,
     holdout_r2: null,
-    gap_ratio: n(train.logLoss === 0 ? (holdout.logLoss === 0 ? 1 : Infinity) : holdout.logLoss / train.logLoss),
+    gap_ratio: n(gapRatio(train.logLoss, holdout.logLoss)),
     params_per_sample: n(design.p / train.rows),
     max_std_coefficient: null,
     max_std_coefficient_column: null,
     max_abs_coefficient: n(maxOf(Array.from(fit.coefficients, Math.abs), 0)),
     rank: weighted.rank,
     condition_number: n(weighted.conditionNumberScaled),
-    train_log_loss: n(train.logLoss),
-    holdout_log_loss: n(holdout.logLoss),
-    train_brier: n(train.brier),
-    holdout_brier: n(holdout.brier),
-    train_accuracy: n(train.accuracy),
-    holdout_accuracy: n(holdout.accuracy),
-    train_auc: n(train.auc),
-    holdout_auc: n(holdout.auc),
-    threshold: model.context.descriptor.fit.threshold ?? 0.5,
-    train_positives: train.positives,
-    train_negatives: train.negatives,
-    holdout_positives: holdout.positives,
-    holdout_negatives: holdout.negatives,
+    ...classificationFigureMetrics(train, holdout, model.context.descriptor.fit.threshold ?? 0.5),
     positive_label: model.labels.positive,
     negative_label: model.labels.negative,
     fit_iterations: fit.iterations,

@@ -22,6 +22,7 @@ import type { RepoReader } from '../repo/types.js';
 import { jsonNumber, type ModelMetrics, type ModelResult } from '../result/result.js';
 import { compareWithBase, type BaseInput } from './base-comparison.js';
 import { runChecks } from './run-checks.js';
+import { classificationFigureMetrics } from './evaluate-classifier.js';
 
 /**
  * Probabilities are kept inside [EPS, 1 - EPS] where a logit is taken (log-loss, calibration), so
@@ -190,19 +191,7 @@ function classifierMetrics(
     task: 'classification',
     gap_ratio: n(gapRatio(train.logLoss, holdout.logLoss)),
     ...(parameters === null ? {} : { params_per_sample: n(parameters / rows) }),
-    train_log_loss: n(train.logLoss),
-    holdout_log_loss: n(holdout.logLoss),
-    train_brier: n(train.brier),
-    holdout_brier: n(holdout.brier),
-    train_accuracy: n(train.accuracy),
-    holdout_accuracy: n(holdout.accuracy),
-    train_auc: n(train.auc),
-    holdout_auc: n(holdout.auc),
-    threshold: descriptor.fit.threshold ?? 0.5,
-    train_positives: train.positives,
-    train_negatives: train.negatives,
-    holdout_positives: holdout.positives,
-    holdout_negatives: holdout.negatives,
+    ...classificationFigureMetrics(train, holdout, descriptor.fit.threshold ?? 0.5),
     positive_label: labels?.positive ?? null,
     negative_label: labels?.negative ?? null,
   } as unknown as ModelMetrics;
