@@ -6,6 +6,7 @@ import { describe, expect, it } from 'vitest';
 import { createDesign } from '../../src/design/design-matrix.js';
 import { createTerm } from '../../src/design/terms/index.js';
 import { measureSpikes, SPIKE_MAX_ROWS } from '../../src/diagnostics/spikes.js';
+import { measureSwing, type InsideCurve } from '../../src/diagnostics/swing.js';
 
 /** TV_y the plain way: rows grouped by value (-0 and +0 one value) in row order, means in ascending value order. */
 function plainDataVariation(x: Float64Array, y: Float64Array, n: number, weights?: Float64Array): number {
@@ -59,8 +60,14 @@ function figures(n: number, seed: number, options: { weights?: boolean; levels?:
     [createTerm({ kind: 'polynomial', of: 'x', degree: 3, shift: null, scale: null, line: 1 }, new Map([['x', x]]), 'm.yml')],
     true,
   );
-  const spikes = measureSpikes(design, { inputs: [x], y, rows: n, ...(weights ? { weights } : {}) }, [0.1, 1, -0.2, 0.01]);
-  return { got: spikes.perInput[0]?.dataVariation, want: plainDataVariation(x, y, n, weights) };
+  const train = { inputs: [x], y, rows: n, ...(weights ? { weights } : {}) };
+  const coefficients = [0.1, 1, -0.2, 0.01];
+  const spikes = measureSpikes(design, train, coefficients);
+  // The same with the swing scan's curves and distinct values (as a model's checks run it).
+  const known: InsideCurve[] = [];
+  measureSwing(design, train, coefficients, {}, known);
+  const shared = measureSpikes(design, train, coefficients, undefined, known);
+  return { got: spikes.perInput[0]?.dataVariation, want: plainDataVariation(x, y, n, weights), shared, spikes, known };
 }
 
 describe('spike data variation', () => {
@@ -73,6 +80,16 @@ describe('spike data variation', () => {
     for (const weights of [false, true]) {
       const { got, want } = figures(3000, 11, { weights, levels: 40 });
       expect(got).toBe(want);
+    }
+  });
+
+  it("is the same when it takes the swing scan's distinct values instead of sorting again", () => {
+    for (const weights of [false, true]) {
+      const { want, shared, spikes, known } = figures(2000, 13, { weights, levels: 60 });
+      expect(known.length).toBe(1);
+      expect(known[0].distinct?.length).toBeGreaterThan(50);
+      expect(shared.perInput[0]?.dataVariation).toBe(want);
+      expect(shared).toEqual(spikes);
     }
   });
 
