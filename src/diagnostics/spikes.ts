@@ -132,7 +132,7 @@ function totalVariation(v: Float64Array, m: number): number {
 /** Total variation of the (weighted) mean target over the input's distinct values in ascending order. */
 function targetVariation(x: Float64Array, y: Float64Array, n: number, weights?: Float64Array, distinct?: Float64Array): number {
   const { means } = meanTargets(x, y, n, weights, distinct);
-  return totalVariation(means, means.length);
+  return totalVariation(Float64Array.from(means), means.length);
 }
 
 /** One interval between neighbouring distinct training values where the curve spikes (see {@link spikeIntervals}). */
@@ -223,122 +223,51 @@ function meanTargets(
   n: number,
   weights?: Float64Array,
   distinct?: Float64Array,
-): { values: Float64Array; means: Float64Array } {
+): { values: number[]; means: number[] } {
   const m = Math.min(n, SPIKE_MAX_ROWS);
-  const rows = strideRows(n, m);
+  const rows = new Int32Array(m);
+  for (let t = 0; t < m; t++) rows[t] = m === n ? t : Math.floor((t * n) / m);
   let sorted: Float64Array;
-  let count: number;
+  let count = 0;
   if (distinct !== undefined && m === n) {
     sorted = distinct;
     count = distinct.length;
   } else {
-    sorted = valuesAt(x, rows);
+    sorted = new Float64Array(m);
+    for (let t = 0; t < m; t++) sorted[t] = x[rows[t]];
     sorted.sort();
     // Distinct values to the front (-0 and +0 are one value, as to `===`).
-    count = packDistinctValues(sorted, m);
+    for (let i = 0; i < m; i++) if (count === 0 || sorted[i] !== sorted[count - 1]) sorted[count++] = sorted[i];
   }
   const sums = new Float64Array(count);
   const totals = new Float64Array(count);
-  if (weights === undefined) sumBySlot(x, y, rows, sorted, count, sums, totals);
-  else weightedSumBySlot(x, y, weights, rows, sorted, count, sums, totals);
-  return slotMeans(sorted, count, sums, totals);
-}
-
-// The loops of meanTargets are functions of their own, each a loop nest and its return (see
-// DEVELOPERS.md, "Writing hot loops"): a run of many small models calls it once per model.
-
-/** The rows of the even-stride sample: floor(t n / m) for t < m (every row when m = n). */
-function strideRows(n: number, m: number): Int32Array {
-  const rows = new Int32Array(m);
-  for (let t = 0; t < m; t++) rows[t] = m === n ? t : Math.floor((t * n) / m);
-  return rows;
-}
-
-/** x at the given rows. */
-function valuesAt(x: Float64Array, rows: Int32Array): Float64Array {
-  const out = new Float64Array(rows.length);
-  for (let t = 0; t < rows.length; t++) out[t] = x[rows[t]];
-  return out;
-}
-
-/** Packs the distinct values of the ascending a[0..m) to its front (the first of `===` equals kept); returns how many. */
-function packDistinctValues(a: Float64Array, m: number): number {
-  let count = 0;
-  for (let i = 0; i < m; i++) if (count === 0 || a[i] !== a[count - 1]) a[count++] = a[i];
-  return count;
-}
-
-/** The slot of v among the ascending distinct sorted[0..count): the first index whose value is not below v. */
-function slotOf(sorted: Float64Array, count: number, v: number): number {
-  let lo = 0;
-  let hi = count - 1;
-  while (lo < hi) {
-    const mid = (lo + hi) >> 1;
-    if (sorted[mid] < v) lo = mid + 1;
-    else hi = mid;
-  }
-  return lo;
-}
-
-/** sums[slot] += y, totals[slot] += 1 for each sampled row, in row order. */
-function sumBySlot(
-  x: Float64Array,
-  y: Float64Array,
-  rows: Int32Array,
-  sorted: Float64Array,
-  count: number,
-  sums: Float64Array,
-  totals: Float64Array,
-): void {
-  for (let t = 0; t < rows.length; t++) {
+  for (let t = 0; t < m; t++) {
     const r = rows[t];
-    const slot = slotOf(sorted, count, x[r]);
-    sums[slot] += y[r];
-    totals[slot] += 1;
+    const v = x[r];
+    let lo = 0;
+    let hi = count - 1;
+    while (lo < hi) {
+      const mid = (lo + hi) >> 1;
+      if (sorted[mid] < v) lo = mid + 1;
+      else hi = mid;
+    }
+    const w = weights === undefined ? 1 : weights[r];
+    sums[lo] += weights === undefined ? y[r] : w * y[r];
+    totals[lo] += w;
   }
-}
-
-/** sums[slot] += w y, totals[slot] += w for each sampled row, in row order. */
-function weightedSumBySlot(
-  x: Float64Array,
-  y: Float64Array,
-  weights: Float64Array,
-  rows: Int32Array,
-  sorted: Float64Array,
-  count: number,
-  sums: Float64Array,
-  totals: Float64Array,
-): void {
-  for (let t = 0; t < rows.length; t++) {
-    const r = rows[t];
-    const slot = slotOf(sorted, count, x[r]);
-    const w = weights[r];
-    sums[slot] += w * y[r];
-    totals[slot] += w;
-  }
-}
-
-/** The finite values with a positive total and their means sums / totals, in slot order. */
-function slotMeans(
-  sorted: Float64Array,
-  count: number,
-  sums: Float64Array,
-  totals: Float64Array,
-): { values: Float64Array; means: Float64Array } {
-  const values = new Float64Array(count);
-  const means = new Float64Array(count);
-  let k = 0;
+  const values: number[] = [];
+  const means: number[] = [];
   for (let j = 0; j < count; j++) {
     if (Number.isFinite(sorted[j]) && totals[j] > 0) {
-      values[k] = sorted[j];
-      means[k++] = sums[j] / totals[j];
+      values.push(sorted[j]);
+      means.push(sums[j] / totals[j]);
     }
   }
-  return { values: values.subarray(0, k), means: means.subarray(0, k) };
+  return { values, means };
 }
 
 /** Indices j of the at most `max` widest gaps values[j]..values[j+1], ascending. */
-function widestGapIndices(values: Float64Array, max: number): number[] {
+function widestGapIndices(values: readonly number[], max: number): number[] {
   const all = Array.from({ length: values.length - 1 }, (_, j) => j);
   if (all.length <= max) return all;
   return all
