@@ -155,7 +155,7 @@ export function excursion(prediction: ArrayLike<number>, lo: number, hi: number)
  * @returns inside and beyond points, ascending; empty when the input has no spread
  */
 export function inputGrid(values: ArrayLike<number>, options: SwingOptions = {}): { inside: Float64Array; beyond: Float64Array } {
-  const sorted = Float64Array.from(values).sort();
+  const sorted = sortFloat64(Float64Array.from(values));
   const { inside, beyond } = gridFromSorted(sorted, sorted.length, options);
   return { inside, beyond };
 }
