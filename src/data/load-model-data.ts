@@ -7,7 +7,6 @@ import type { ModelData } from './model-data.js';
 import { readTable, type Table } from './table.js';
 import { partsLabel, placeOfLine, type DataPart } from './data-parts.js';
 import { levelCodes, trainingLevels } from './levels.js';
-import { readTextColumns } from './text-columns.js';
 import type { RepoReader } from '../repo/types.js';
 import {
   fileRowSource,
@@ -358,6 +357,8 @@ async function readCategoryText(
   const out = new Map<string, string[]>(names.map((n) => [n, []]));
   let row = 0;
   let left = maxBytes;
+  // csv-parse comes with the text columns: loaded only when a model has text columns.
+  const { readTextColumns } = await import('./text-columns.js');
   for (const part of files) {
     const text = await readTextColumns(repo, part.file, names, Math.min(left, maxBytes));
     left -= await repo.size(part.file);

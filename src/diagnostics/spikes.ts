@@ -68,7 +68,12 @@ export function measureSpikes(
   known: readonly InsideCurve[] = [],
 ): Spikes {
   const n = train.rows;
-  const medians = train.inputs.map((col) => columnMedian(col, n));
+  // The medians are needed only for a curve the swing scan did not predict already.
+  let medians: number[] | null = null;
+  const mediansOnce = (): number[] => {
+    if (medians === null) medians = train.inputs.map((col) => columnMedian(col, n));
+    return medians;
+  };
   const perInput: SpikeFigures[] = [];
   let ratio = Number.NaN;
   let worst: string | null = null;
@@ -77,10 +82,19 @@ export function measureSpikes(
     if (design.terms.some((t) => t.discreteValues !== undefined && t.inputs.includes(name))) return;
     const curve =
       known.find((k) => k.input === c && k.backTransform === original?.kind)?.prediction ??
-      curveAlong(design, train, coefficients, c, medians, original);
+      curveAlong(design, train, coefficients, c, mediansOnce(), original);
     if (curve.length < 2) return;
     const curveVariation = totalVariation(curve, curve.length);
-    const dataVariation = targetVariation(train.inputs[c], original?.y ?? train.y, n, original ? original.weights : train.weights);
+    // The swing scan sorted every row's value of this input already: its distinct values serve
+    // when the data variation reads every row too (at most SPIKE_MAX_ROWS).
+    const distinct = n <= SPIKE_MAX_ROWS ? known.find((k) => k.input === c && k.distinct !== undefined)?.distinct : undefined;
+    const dataVariation = targetVariation(
+      train.inputs[c],
+      original?.y ?? train.y,
+      n,
+      original ? original.weights : train.weights,
+      distinct,
+    );
     const r = dataVariation > 0 ? curveVariation / dataVariation : Number.NaN;
     perInput.push({ input: name, curveVariation, dataVariation, ratio: r });
     if (!Number.isNaN(r) && (Number.isNaN(ratio) || r > ratio)) {
@@ -116,8 +130,8 @@ function totalVariation(v: Float64Array, m: number): number {
 }
 
 /** Total variation of the (weighted) mean target over the input's distinct values in ascending order. */
-function targetVariation(x: Float64Array, y: Float64Array, n: number, weights?: Float64Array): number {
-  const { means } = meanTargets(x, y, n, weights);
+function targetVariation(x: Float64Array, y: Float64Array, n: number, weights?: Float64Array, distinct?: Float64Array): number {
+  const { means } = meanTargets(x, y, n, weights, distinct);
   return totalVariation(Float64Array.from(means), means.length);
 }
 
@@ -200,17 +214,31 @@ export function spikeIntervals(
  * value whose rows all weigh 0 is left out: it takes no part in the fit). Each value's targets are
  * summed in row order (as a stable sort of the rows by value visits them): the sampled values are
  * sorted once (a native typed-array sort), and each row finds its value's slot by binary search.
+ * `distinct`, when given, must be those distinct values of every row (n <= SPIKE_MAX_ROWS), as
+ * the sort and packing here make them: they are taken instead of sorting again.
  */
-function meanTargets(x: Float64Array, y: Float64Array, n: number, weights?: Float64Array): { values: number[]; means: number[] } {
+function meanTargets(
+  x: Float64Array,
+  y: Float64Array,
+  n: number,
+  weights?: Float64Array,
+  distinct?: Float64Array,
+): { values: number[]; means: number[] } {
   const m = Math.min(n, SPIKE_MAX_ROWS);
   const rows = new Int32Array(m);
   for (let t = 0; t < m; t++) rows[t] = m === n ? t : Math.floor((t * n) / m);
-  const sorted = new Float64Array(m);
-  for (let t = 0; t < m; t++) sorted[t] = x[rows[t]];
-  sorted.sort();
-  // Distinct values to the front (-0 and +0 are one value, as to `===`).
+  let sorted: Float64Array;
   let count = 0;
-  for (let i = 0; i < m; i++) if (count === 0 || sorted[i] !== sorted[count - 1]) sorted[count++] = sorted[i];
+  if (distinct !== undefined && m === n) {
+    sorted = distinct;
+    count = distinct.length;
+  } else {
+    sorted = new Float64Array(m);
+    for (let t = 0; t < m; t++) sorted[t] = x[rows[t]];
+    sorted.sort();
+    // Distinct values to the front (-0 and +0 are one value, as to `===`).
+    for (let i = 0; i < m; i++) if (count === 0 || sorted[i] !== sorted[count - 1]) sorted[count++] = sorted[i];
+  }
   const sums = new Float64Array(count);
   const totals = new Float64Array(count);
   for (let t = 0; t < m; t++) {

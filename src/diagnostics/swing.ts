@@ -155,7 +155,7 @@ export function excursion(prediction: ArrayLike<number>, lo: number, hi: number)
  * @returns inside and beyond points, ascending; empty when the input has no spread
  */
 export function inputGrid(values: ArrayLike<number>, options: SwingOptions = {}): { inside: Float64Array; beyond: Float64Array } {
-  const sorted = Float64Array.from(values).sort();
+  const sorted = sortFloat64(Float64Array.from(values));
   const { inside, beyond } = gridFromSorted(sorted, sorted.length, options);
   return { inside, beyond };
 }
@@ -573,6 +573,11 @@ export interface SwingGrid {
    * (diagnostics/spikes.ts), which then takes the predictions there from {@link scoreSwing}.
    */
   whole?: boolean;
+  /**
+   * With `whole`: the input's distinct training values, ascending (of `===` equals the first in
+   * the order of the built-in sort, -0 before +0), from which the grid was built.
+   */
+  distinct?: Float64Array;
 }
 
 /**
@@ -672,7 +677,15 @@ export function planSwing(design: Design, train: Rows, options: SwingOptions = {
       grid.beyond = grid.beyond.map(onScale.inverse);
     }
     const whole = len === n && onScale === null && defaultInsideGrid(options, gridOptions, grid.gaps);
-    if (grid.inside.length > 0) grids.push({ input: c, inside: grid.inside, beyond: admitted(design, c, grid.beyond), whole });
+    if (grid.inside.length > 0) {
+      const beyond = admitted(design, c, grid.beyond);
+      // The grid packed the distinct values to the front of the sorted sample (every row here).
+      grids.push(
+        whole
+          ? { input: c, inside: grid.inside, beyond, whole, distinct: sample.slice(0, grid.gaps + 1) }
+          : { input: c, inside: grid.inside, beyond, whole },
+      );
+    }
   }
 
   // Several inputs: segments between sampled rows and their nearest neighbours.
@@ -768,6 +781,8 @@ export interface InsideCurve {
   prediction: Float64Array;
   /** The plan's {@link SwingPlan.backTransform}, or absent. */
   backTransform?: TargetTransformKind;
+  /** The input's distinct training values, ascending ({@link SwingGrid.distinct}), or absent. */
+  distinct?: Float64Array;
 }
 
 /**
@@ -836,6 +851,7 @@ export function scoreSwing(plan: SwingPlan, design: Design, coefficients: ArrayL
         grid: grid.inside,
         prediction: pin,
         ...(plan.backTransform !== undefined ? { backTransform: plan.backTransform } : {}),
+        ...(grid.distinct !== undefined ? { distinct: grid.distinct } : {}),
       });
     }
     if (curves.length >= plan.maxCurves) continue;

@@ -17,8 +17,6 @@ import { withBaseCurves } from './base-curves.js';
 import { buildChartData } from './chart-data.js';
 import { runChecks } from './run-checks.js';
 import { errorResult, INTERNAL_ERROR, timeLimitError } from './error-result.js';
-import { evaluateClassifier } from './evaluate-classifier.js';
-import { evaluatePredictions } from './evaluate-predictions.js';
 import { fitModel, type FittedModel } from './fit-model.js';
 import { targetScaleResult } from './target-scale.js';
 import type { ScaleOptions } from './plan.js';
@@ -121,8 +119,16 @@ async function evaluateWithin(
 ): Promise<ModelResult> {
   let model: FittedModel;
   try {
-    if (descriptor.predictions) return await evaluatePredictions(repo, descriptor, settings, base);
-    if (descriptor.task === 'classification') return await evaluateClassifier(repo, descriptor, settings, base);
+    // Classifiers and models judged on their predictions load their modules when a run has one,
+    // so that a run of regression models starts without them (a smaller bundle to compile).
+    if (descriptor.predictions) {
+      const { evaluatePredictions } = await import('./evaluate-predictions.js');
+      return await evaluatePredictions(repo, descriptor, settings, base);
+    }
+    if (descriptor.task === 'classification') {
+      const { evaluateClassifier } = await import('./evaluate-classifier.js');
+      return await evaluateClassifier(repo, descriptor, settings, base);
+    }
     model = await fitModel(repo, descriptor, settings, scale);
   } catch (error) {
     if (error instanceof TimeLimitExceeded) throw error;
