@@ -2,10 +2,10 @@
  * Each model's part of the JSON report set aside while the run goes on: a run that writes only
  * the JSON report to a file (`fitgate check --format json --out FILE`) renders each model's text
  * (report/json.ts `jsonModelReport`) as soon as its outcome is final and keeps a small copy of the
- * outcome (no chart data, no check detail: what the verdict, the counts and the exit status read);
- * the report is then written from the copies with each model's text ({@link ModelSpool.text}). The
- * run keeps neither each outcome's object graph (typed arrays, chart objects, check details) nor
- * its text until the end.
+ * outcome ({@link smallCopy}: what the verdict, the counts and the exit status read); the report is
+ * then written from the copies with each model's text ({@link ModelSpool.text}). The run keeps
+ * neither each outcome's object graph (typed arrays, chart objects, figures, checks) nor its text
+ * until the end.
  *
  * Where the text goes: given the `--out` file ({@link SpoolTarget}), into one temporary file in the
  * real folder that file is written to, opened as safe-write.ts opens its own temporary files
@@ -52,15 +52,28 @@ export const SPOOL_READ_BYTES = 1 << 16;
 export const SPOOL_SUFFIX = 'spool';
 
 /**
- * The outcome without what only the report's text needs: no chart data, no check detail.
+ * What the Result keeps of a model whose text is set aside: what the run's summary and exit
+ * status read (name, descriptor path, verdict; result.ts `summarise`), with the row counts, the
+ * parameter count and the error, and nothing else: no figures, no checks, no chart data, no extra
+ * data (empty lists, nulls). The report's text of the model comes from the spool, never from this
+ * copy; a copy is a few hundred bytes where the whole outcome's object graph is tens of kilobytes.
  * @param model a model's outcome
  */
 export function smallCopy(model: ModelResult): ModelResult {
-  const copy: ModelResult = { ...model, checks: model.checks.map((check) => ({ ...check })) };
-  delete copy.charts;
-  delete copy.classifier_charts;
-  for (const check of copy.checks) delete check.detail;
-  return copy;
+  return {
+    name: model.name,
+    descriptor: model.descriptor,
+    ...(model.kind === undefined ? {} : { kind: model.kind }),
+    verdict: model.verdict,
+    rows: { train: model.rows.train, holdout: model.rows.holdout },
+    parameters: model.parameters,
+    columns: [],
+    metrics: null,
+    coefficients: [],
+    shipped: null,
+    checks: [],
+    error: model.error === null ? null : { ...model.error },
+  };
 }
 
 /** Where one model's text lies in the spool file. */

@@ -47,12 +47,16 @@ describe('the model spool', () => {
       });
       try {
         expect(kept).toHaveLength(whole.models.length);
-        // The copies keep no chart data and no check detail; the verdicts and counts are the same.
+        // The copies keep no chart data, figures or checks; the verdicts and counts are the same.
         for (const m of small.models) {
           expect(m.charts).toBeUndefined();
           expect(m.classifier_charts).toBeUndefined();
-          expect(m.checks.every((c) => c.detail === undefined)).toBe(true);
+          expect(m.checks).toEqual([]);
+          expect(m.metrics).toBeNull();
         }
+        expect(small.models.map((m) => [m.name, m.descriptor, m.verdict])).toEqual(
+          whole.models.map((m) => [m.name, m.descriptor, m.verdict]),
+        );
         expect(small.counts).toEqual(whole.counts);
         expect(small.verdict).toBe(whole.verdict);
         expect(whole.models.some((m) => m.charts !== undefined || m.classifier_charts !== undefined)).toBe(true);
@@ -84,14 +88,30 @@ describe('the model spool', () => {
     }
   });
 
-  it('drops only chart data and check detail from the copy, and drops its texts when closed', async () => {
+  it('keeps in the copy what the summary reads (name, descriptor, verdict) with rows, parameters and error, and drops its texts when closed', async () => {
     const dir = examples('');
     const result = await runPipeline(defaultSettings(dir), createFsRepository(dir), { jobs: 1 });
     const model = result.models.find((m) => m.charts !== undefined);
     if (model === undefined) throw new Error('no model with charts in examples/');
     const copy = smallCopy(model);
-    const { charts: _charts, ...rest } = model;
-    expect(copy).toEqual({ ...rest, checks: model.checks.map(({ detail: _detail, ...c }) => c) });
+    expect(copy).toEqual({
+      name: model.name,
+      descriptor: model.descriptor,
+      verdict: model.verdict,
+      rows: model.rows,
+      parameters: model.parameters,
+      columns: [],
+      metrics: null,
+      coefficients: [],
+      shipped: null,
+      checks: [],
+      error: null,
+    });
+    // Its size: a few hundred bytes of JSON where the whole outcome has kilobytes.
+    expect(JSON.stringify(copy).length).toBeLessThan(400);
+    expect(JSON.stringify(model).length).toBeGreaterThan(4000);
+    const failed = result.models.find((m) => m.error !== null);
+    if (failed !== undefined) expect(smallCopy(failed).error).toEqual(failed.error);
     expect(model.charts).toBeDefined();
     const spool = openModelSpool();
     const kept = spool.keep(model);
