@@ -240,8 +240,12 @@ export interface Chunk {
   lines: Int32Array;
 }
 
-/** First buffer size of a chunk; buffers double from here up to the chunk size. */
-const FIRST_CAPACITY = 4096;
+/**
+ * First buffer size of a chunk; buffers double from here up to the chunk size. Small, so that the
+ * many files of a few hundred or thousand rows of a monorepo make small buffers (a larger file pays
+ * a few more doublings, each a copy of what it read so far).
+ */
+const FIRST_CAPACITY = 1024;
 
 /**
  * Gathers rows into column buffers and hands out chunks of `chunkRows` rows.
