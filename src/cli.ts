@@ -66,9 +66,10 @@ async function main(argv: string[]): Promise<number> {
       failOn = parsed.failOn;
     } else {
       // Only the JSON report, to a file: each model's text is rendered as soon as its outcome is
-      // final, and the Result keeps a small copy (entries/model-spool.ts).
+      // final and set aside in a spool file beside the report (checked as the report's own write
+      // checks it, never through a link), and the Result keeps a small copy (entries/model-spool.ts).
       if (parsed.format === 'json' && parsed.out !== null && parsed.html === null && parsed.sarif === null && parsed.junit === null)
-        spool = openModelSpool();
+        spool = openModelSpool({ file: parsed.out, place: { option: '--out', within: [parsed.settings.root, process.cwd()] } });
       const onModel = spool === null ? undefined : spool.keep;
       result = await runCheck(parsed.settings, { base: parsed.base, entry: 'command', shard: parsed.shard, jobs: parsed.jobs, onModel });
       failOn = parsed.settings.failOn;

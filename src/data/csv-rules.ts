@@ -240,8 +240,12 @@ export interface Chunk {
   lines: Int32Array;
 }
 
-/** First buffer size of a chunk; buffers double from here up to the chunk size. */
-const FIRST_CAPACITY = 4096;
+/**
+ * First buffer size of a chunk; buffers double from here up to the chunk size. Small, so that the
+ * many files of a few hundred or thousand rows of a monorepo make small buffers (a larger file pays
+ * a few more doublings, each a copy of what it read so far).
+ */
+const FIRST_CAPACITY = 1024;
 
 /**
  * Gathers rows into column buffers and hands out chunks of `chunkRows` rows.
@@ -298,15 +302,28 @@ export class ChunkBuilder {
 
   /** Hands out the rows gathered so far as a chunk (nothing when there are none). */
   flush(): void {
+    if (this.handOut()) this.fresh();
+  }
+
+  /**
+   * Hands out the last rows as a chunk (nothing when there are none) at the end of the file: as
+   * {@link flush}, without making buffers for rows that will not come. No row may be added after.
+   */
+  finish(): void {
+    this.handOut();
+  }
+
+  /** Moves the rows gathered so far into a ready chunk; false when there were none. */
+  private handOut(): boolean {
     const rows = this.row;
-    if (rows === 0) return;
+    if (rows === 0) return false;
     const exact = rows === this.capacity;
     const slots = exact ? this.slots : this.slots.map((s) => s.slice(0, rows));
     const lines = exact ? this.lines : this.lines.slice(0, rows);
     const chunk: Chunk = { rows, columns: this.request.slotOfColumn.map((slot) => slots[slot]), lines };
     if (exact) this.#buffersOf.set(chunk, { slots, lines });
     this.ready.push(chunk);
-    this.fresh();
+    return true;
   }
 
   /**

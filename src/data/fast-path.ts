@@ -86,7 +86,7 @@ export async function* fastChunks(pieces: AsyncIterable<Uint8Array>, target: Sca
     }
   }
   if (reader.plan === null) throw emptyError(target.file);
-  reader.builder.flush();
+  reader.builder.finish();
   for (const chunk of reader.builder.take()) {
     yield chunk;
     if (target.recycle === true) reader.builder.recycle(chunk);

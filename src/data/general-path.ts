@@ -166,7 +166,7 @@ export async function* generalChunks(pieces: AsyncIterable<Uint8Array>, target: 
     if (settle(bad)) return;
     if (bad !== null) throw encodingError(file, 1 + lineFeeds, bad.utf16);
     if (plan === null) throw emptyError(file);
-    builder.flush();
+    builder.finish();
     for (const chunk of builder.take()) {
       yield chunk;
       if (target.recycle === true) builder.recycle(chunk);

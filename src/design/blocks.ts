@@ -5,6 +5,7 @@
 import type { ModelData } from '../data/model-data.js';
 import type { Design } from './design-matrix.js';
 import { addProducts } from '../kernels/index.js';
+import { borrowDoubles, returnDoubles } from '../core/scratch.js';
 
 /**
  * Rows per block for a design of p columns: about 64 K doubles (512 KiB), at least 64 rows. Small
@@ -18,7 +19,8 @@ export function blockRows(p: number): number {
 
 /**
  * Calls `visit(X, start, m)` for consecutive blocks of rows; `X` is column-major m x p and is
- * reused between calls (copy it to keep it).
+ * reused between calls and, once the walk is over, by later walks (core/scratch.ts lends it):
+ * copy it to keep it.
  */
 export function forEachBlock(
   design: Design,
@@ -26,11 +28,15 @@ export function forEachBlock(
   visit: (X: Float64Array, start: number, m: number) => void,
 ): void {
   const size = blockRows(design.p);
-  const buffer = new Float64Array(Math.min(size, Math.max(1, data.rows)) * design.p);
-  for (let start = 0; start < data.rows; start += size) {
-    const m = Math.min(size, data.rows - start);
-    design.fill(data.inputs, start, m, buffer);
-    visit(buffer, start, m);
+  const buffer = borrowDoubles(Math.min(size, Math.max(1, data.rows)) * design.p);
+  try {
+    for (let start = 0; start < data.rows; start += size) {
+      const m = Math.min(size, data.rows - start);
+      design.fill(data.inputs, start, m, buffer);
+      visit(buffer, start, m);
+    }
+  } finally {
+    returnDoubles(buffer);
   }
 }
 

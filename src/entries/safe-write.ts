@@ -35,11 +35,31 @@ import {
 import path from 'node:path';
 import { InputError, quoteValue } from '../core/errors.js';
 import { isInsideFolder } from '../repo/real-folder.js';
-import { batches } from './report-file.js';
+import { WRITE_BUFFER_BYTES } from './report-file.js';
 
-/** The UTF-8 bytes of `pieces`, in batches of about 1 MiB. */
+/**
+ * The UTF-8 bytes of `pieces`, in batches of up to {@link WRITE_BUFFER_BYTES}, each encoded into
+ * one buffer that is used again for the next batch (the caller writes each batch before asking
+ * for the next): a report of any size is written through one buffer, with no string or buffer
+ * per batch left for the garbage collector. A piece that could need more than the whole buffer
+ * (3 bytes per UTF-16 unit at most) is its own batch.
+ */
 function* encodedBatches(pieces: Iterable<string>): Generator<Uint8Array> {
-  for (const text of batches(pieces)) yield Buffer.from(text, 'utf8');
+  const buffer = Buffer.allocUnsafe(WRITE_BUFFER_BYTES);
+  let used = 0;
+  for (const piece of pieces) {
+    const most = piece.length * 3;
+    if (most > buffer.length - used) {
+      if (used > 0) yield buffer.subarray(0, used);
+      used = 0;
+      if (most > buffer.length) {
+        yield Buffer.from(piece, 'utf8');
+        continue;
+      }
+    }
+    used += buffer.write(piece, used, 'utf8');
+  }
+  if (used > 0) yield buffer.subarray(0, used);
 }
 
 /** Error code of a target refused before writing (a link, not a file, a folder leading outside). */
@@ -97,56 +117,15 @@ export function writeFileSafely(
   place: WritePlace,
   hooks: WriteHooks = {},
 ): string {
-  const where = { key: place.option };
-  const refuse = (message: string): InputError => new InputError(OUTPUT_REFUSED, message, where);
-  if (file === '' || file.includes('\0')) throw refuse(`expected a file path, got ${quoteValue(file)}`);
-  const named = path.resolve(file);
-  const name = path.basename(named);
-  const folder = path.dirname(named);
-  if (name === '' || folder === named) throw refuse(`${named} names no file; expected a file path`);
-  const failed = (error: unknown): InputError =>
-    error instanceof InputError
-      ? error
-      : new InputError(
-          OUTPUT_FAILED,
-          `could not write ${named} (${codeOf(error) ?? (error instanceof Error ? error.message : String(error))}); the previous file, if any, is unchanged`,
-          where,
-        );
-
-  // 1. The boundary that holds the path as written, and the real folder.
-  const bases = place.within.filter((b) => isInsideFolder(b, folder)).sort((a, b) => b.length - a.length);
-  const base = bases[0] ?? null;
-  if (base === null && place.insideOnly) throw refuse(`${named} is outside ${place.within.join(' and ')}; expected a path inside`);
-  let realDir: string;
-  let target: string;
-  try {
-    realDir = makeFolder(folder, base, refuse);
-    // 2. The target itself.
-    target = path.join(realDir, name);
-    checkTarget(target, named, refuse);
-  } catch (error) {
-    throw failed(error);
-  }
+  const { named, realDir, target, refuse, failed } = prepareTarget(file, place);
 
   // 3. A temporary file in the same folder, then rename.
-  // A report in pieces is written in batches of about 1 MiB: never held as one string.
+  // A report in pieces is written in batches of up to 1 MiB through one buffer: never held as one string.
   const chunks: Iterable<Uint8Array> =
     typeof data === 'string' ? [Buffer.from(data, 'utf8')] : data instanceof Uint8Array ? [data] : encodedBatches(data);
   const write = hooks.write ?? ((fd: number, b: Uint8Array, offset: number, length: number) => writeSync(fd, b, offset, length));
-  const flags = constants.O_WRONLY | constants.O_CREAT | constants.O_EXCL | (constants.O_NOFOLLOW ?? 0);
-  let temp = '';
-  let fd = -1;
-  for (let attempt = 0; fd < 0; attempt++) {
-    temp = path.join(
-      realDir,
-      `.${name.slice(0, 100)}.${process.pid}.${Date.now().toString(36)}${Math.random().toString(36).slice(2, 8)}.tmp`,
-    );
-    try {
-      fd = openSync(temp, flags, 0o666);
-    } catch (error) {
-      if (codeOf(error) !== 'EEXIST' || attempt + 1 >= MAX_TEMP_TRIES) throw failed(error);
-    }
-  }
+  const { fd: opened, temp } = openTemp(realDir, path.basename(target), 'tmp', constants.O_WRONLY, failed);
+  let fd = opened;
   try {
     for (const bytes of chunks) {
       // Each round writes at least one byte, so this ends after at most bytes.length rounds.
@@ -180,6 +159,102 @@ export function writeFileSafely(
   }
   syncFolder(realDir);
   return target;
+}
+
+/** A new temporary file that {@link openTempBeside} opened. */
+export interface TempFile {
+  /** Its descriptor, open for reading and writing. */
+  fd: number;
+  /** Its path (in the real folder of the target). */
+  path: string;
+}
+
+/**
+ * Opens a new temporary file in the folder `file` would be written to, checked as
+ * {@link writeFileSafely} checks it (steps 1 and 2 of the module comment: the folder made when
+ * missing, its real path inside the boundary; the target not a link and not a special file),
+ * created with `O_CREAT | O_EXCL | O_NOFOLLOW` (never an existing file, never a link) and open
+ * for reading and writing. For data a writer gathers on disk before it writes `file` itself (the
+ * model spool, entries/model-spool.ts); the caller closes and removes it.
+ * @param file the target the data is for, absolute or relative to the process's folder
+ * @param place the option that named it and the boundary folders; see {@link WritePlace}
+ * @param suffix the end of the temporary file's name (after a dot), e.g. `spool`
+ * @throws InputError `output-refused` or `output-failed`, as {@link writeFileSafely} would for `file`
+ */
+export function openTempBeside(file: string, place: WritePlace, suffix: string): TempFile {
+  const { realDir, target, failed } = prepareTarget(file, place);
+  const { fd, temp } = openTemp(realDir, path.basename(target), suffix, constants.O_RDWR, failed);
+  return { fd, path: temp };
+}
+
+/** A target checked by steps 1 and 2 of the module comment, with its error makers. */
+interface PreparedTarget {
+  /** The path as named, resolved. */
+  named: string;
+  /** The real folder it is written in. */
+  realDir: string;
+  /** The file in the real folder. */
+  target: string;
+  refuse: (message: string) => InputError;
+  failed: (error: unknown) => InputError;
+}
+
+/** Steps 1 and 2 of the module comment for `file`; throws the InputError writeFileSafely would. */
+function prepareTarget(file: string, place: WritePlace): PreparedTarget {
+  const where = { key: place.option };
+  const refuse = (message: string): InputError => new InputError(OUTPUT_REFUSED, message, where);
+  if (file === '' || file.includes('\0')) throw refuse(`expected a file path, got ${quoteValue(file)}`);
+  const named = path.resolve(file);
+  const name = path.basename(named);
+  const folder = path.dirname(named);
+  if (name === '' || folder === named) throw refuse(`${named} names no file; expected a file path`);
+  const failed = (error: unknown): InputError =>
+    error instanceof InputError
+      ? error
+      : new InputError(
+          OUTPUT_FAILED,
+          `could not write ${named} (${codeOf(error) ?? (error instanceof Error ? error.message : String(error))}); the previous file, if any, is unchanged`,
+          where,
+        );
+
+  // 1. The boundary that holds the path as written, and the real folder.
+  const bases = place.within.filter((b) => isInsideFolder(b, folder)).sort((a, b) => b.length - a.length);
+  const base = bases[0] ?? null;
+  if (base === null && place.insideOnly) throw refuse(`${named} is outside ${place.within.join(' and ')}; expected a path inside`);
+  try {
+    const realDir = makeFolder(folder, base, refuse);
+    // 2. The target itself.
+    const target = path.join(realDir, name);
+    checkTarget(target, named, refuse);
+    return { named, realDir, target, refuse, failed };
+  } catch (error) {
+    throw failed(error);
+  }
+}
+
+/**
+ * A new file `.NAME.PID.RANDOM.SUFFIX` in `realDir`, opened with `access | O_CREAT | O_EXCL |
+ * O_NOFOLLOW` (a fresh name is tried when one exists, at most {@link MAX_TEMP_TRIES} times).
+ */
+function openTemp(
+  realDir: string,
+  name: string,
+  suffix: string,
+  access: number,
+  failed: (error: unknown) => InputError,
+): { fd: number; temp: string } {
+  const flags = access | constants.O_CREAT | constants.O_EXCL | (constants.O_NOFOLLOW ?? 0);
+  for (let attempt = 0; ; attempt++) {
+    const temp = path.join(
+      realDir,
+      `.${name.slice(0, 100)}.${process.pid}.${Date.now().toString(36)}${Math.random().toString(36).slice(2, 8)}.${suffix}`,
+    );
+    try {
+      return { fd: openSync(temp, flags, 0o666), temp };
+    } catch (error) {
+      if (codeOf(error) !== 'EEXIST' || attempt + 1 >= MAX_TEMP_TRIES) throw failed(error);
+    }
+  }
 }
 
 /**

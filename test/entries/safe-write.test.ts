@@ -17,9 +17,10 @@ import {
 } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
+import { closeSync, fstatSync } from 'node:fs';
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import { InputError } from '../../src/core/errors.js';
-import { OUTPUT_FAILED, OUTPUT_REFUSED, writeFileSafely, type WritePlace } from '../../src/entries/safe-write.js';
+import { OUTPUT_FAILED, OUTPUT_REFUSED, openTempBeside, writeFileSafely, type WritePlace } from '../../src/entries/safe-write.js';
 import { transpileSources } from '../run/transpile.js';
 
 const top = realpathSync(mkdtempSync(path.join(tmpdir(), 'fitgate-safe-write-')));
@@ -85,6 +86,24 @@ describe('writeFileSafely writes', () => {
     expect(readFileSync(path.join(c.ws, 'real', 'r.txt'), 'utf8')).toBe('x');
   });
 
+  it('pieces through one reused buffer: the same bytes as the joined text, multi-byte and lone surrogates, small and large pieces', () => {
+    const file = path.join(c.ws, 'pieces.txt');
+    // Pieces that fill the 1 MiB buffer unevenly, a piece that needs a buffer of its own, characters
+    // of 2, 3 and 4 UTF-8 bytes and a lone surrogate (written as U+FFFD, as Buffer.from writes it).
+    const pieces = ['a', 'é'.repeat(200_000), '€'.repeat(349_525), '😀x', 'b'.repeat(400_000), '\ud800', '€'.repeat(350_000), 'end'];
+    const writes: number[] = [];
+    writeFileSafely(file, pieces, inside, {
+      write: (fd, bytes, offset, length) => {
+        writes.push(length);
+        return writeSync(fd, bytes, offset, length);
+      },
+    });
+    expect(readFileSync(file).equals(Buffer.from(pieces.join(''), 'utf8'))).toBe(true);
+    expect(writes.length).toBeGreaterThan(2);
+    expect(Math.max(...writes)).toBeGreaterThan(1 << 20);
+    expect(temps(c.ws)).toEqual([]);
+  });
+
   it('a path named outside every boundary as named (the CLI user named it), through links too', () => {
     symlinkSync(c.outside, path.join(top, `out-link-${n}`));
     const written = writeFileSafely(path.join(top, `out-link-${n}`, 'r.txt'), 'x', inside);
@@ -142,6 +161,33 @@ describe('writeFileSafely refuses, naming the option, and writes nothing', () =>
     expect(thrown(() => writeFileSafely(path.join(c.ws, 'dir'), 'x', inside)).message).toContain('is not a regular file');
     expect(thrown(() => writeFileSafely('', 'x', inside)).code).toBe(OUTPUT_REFUSED);
     expect(thrown(() => writeFileSafely('a\0b', 'x', inside)).code).toBe(OUTPUT_REFUSED);
+  });
+});
+
+describe('openTempBeside', () => {
+  it('creates a new file in the real folder of the target, open for reading and writing', () => {
+    mkdirSync(path.join(c.ws, 'real'));
+    symlinkSync('real', path.join(c.ws, 'alias'));
+    const temp = openTempBeside(path.join(c.ws, 'alias', 'deep', 'report.json'), inside, 'spool');
+    try {
+      expect(path.dirname(temp.path)).toBe(path.join(c.ws, 'real', 'deep'));
+      expect(path.basename(temp.path)).toMatch(/^\.report\.json\.\d+\.[0-9a-z]+\.spool$/);
+      expect(lstatSync(temp.path).isFile()).toBe(true);
+      expect(fstatSync(temp.fd).size).toBe(0);
+      expect(writeSync(temp.fd, 'abc', 0)).toBe(3);
+    } finally {
+      closeSync(temp.fd);
+      rmSync(temp.path);
+    }
+  });
+
+  it('refuses what writeFileSafely refuses: a target that is a link, a folder leading out of the boundary', () => {
+    symlinkSync(c.secret, path.join(c.ws, 'report.json'));
+    expect(thrown(() => openTempBeside(path.join(c.ws, 'report.json'), inside, 'spool')).code).toBe(OUTPUT_REFUSED);
+    symlinkSync(c.outside, path.join(c.ws, 'site'));
+    expect(thrown(() => openTempBeside(path.join(c.ws, 'site', 'report.json'), inside, 'spool')).message).toContain('leads out of');
+    expect(readdirSync(c.outside)).toEqual(['secret.txt']);
+    expect(readdirSync(c.ws).sort()).toEqual(['report.json', 'site']);
   });
 });
 

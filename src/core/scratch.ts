@@ -1,0 +1,58 @@
+/**
+ * Scratch arrays of doubles lent for the length of one call and given back: a run of many small
+ * models asks for the same few working buffers (a design block per pass) over and over, and
+ * lending them from a small pool keeps that memory from being made and dropped per model (memory
+ * outside the JavaScript heap that is freed only when the garbage collector gets to it, and that
+ * the process's allocator does not always give back to the system).
+ *
+ * The pool belongs to the thread (each worker thread has its own copy of this module) and holds at
+ * most {@link SCRATCH_KEPT} buffers of at most {@link SCRATCH_MAX_BYTES} each; a larger request is
+ * made and dropped as before. A lent array is all zeros, as a new one is. Whoever borrows must give
+ * it back only when nothing reads or writes it any more (in a `finally`), and must not keep it.
+ */
+
+/** Buffers the pool keeps at most. */
+export const SCRATCH_KEPT = 4;
+
+/** Largest buffer the pool keeps (1 MiB: a design block is about 512 KiB, design/blocks.ts). */
+export const SCRATCH_MAX_BYTES = 1 << 20;
+
+/** Smallest buffer made for the pool (sizes are rounded up to a power of two from here). */
+const SCRATCH_MIN_BYTES = 1 << 12;
+
+const spare: ArrayBuffer[] = [];
+
+/**
+ * A zero-filled array of `length` doubles, from the pool when a kept buffer is large enough (the
+ * smallest such), else new. Its `buffer` may be larger than `length` doubles.
+ * @param length doubles wanted (a non-negative integer)
+ */
+export function borrowDoubles(length: number): Float64Array {
+  const bytes = length * Float64Array.BYTES_PER_ELEMENT;
+  let best = -1;
+  for (let i = 0; i < spare.length; i++) {
+    if (spare[i].byteLength >= bytes && (best < 0 || spare[i].byteLength < spare[best].byteLength)) best = i;
+  }
+  if (best >= 0) {
+    const [buffer] = spare.splice(best, 1);
+    const array = new Float64Array(buffer, 0, length);
+    array.fill(0);
+    return array;
+  }
+  if (bytes > SCRATCH_MAX_BYTES) return new Float64Array(length);
+  let size = SCRATCH_MIN_BYTES;
+  while (size < bytes) size *= 2;
+  return new Float64Array(new ArrayBuffer(size), 0, length);
+}
+
+/**
+ * Gives an array from {@link borrowDoubles} back to the pool (kept when there is room and it is not
+ * too large; given twice, it is kept once). The caller must not use it afterwards.
+ * @param array the borrowed array
+ */
+export function returnDoubles(array: Float64Array): void {
+  const buffer = array.buffer;
+  if (!(buffer instanceof ArrayBuffer) || buffer.byteLength > SCRATCH_MAX_BYTES || buffer.byteLength < SCRATCH_MIN_BYTES) return;
+  if (spare.length >= SCRATCH_KEPT || spare.includes(buffer)) return;
+  spare.push(buffer);
+}
