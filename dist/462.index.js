@@ -8,7 +8,7 @@ export const modules = {
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
 /* harmony export */   generalChunks: () => (/* binding */ generalChunks)
 /* harmony export */ });
-/* harmony import */ var csv_parse__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(3046);
+/* harmony import */ var csv_parse__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(8075);
 /* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(4296);
 /* harmony import */ var _line_blocks_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(5383);
 /* harmony import */ var _csv_rules_js__WEBPACK_IMPORTED_MODULE_3__ = __webpack_require__(8706);
@@ -169,7 +169,7 @@ async function* generalChunks(pieces, target, skipRows = 0) {
             throw (0,_line_blocks_js__WEBPACK_IMPORTED_MODULE_2__/* .encodingError */ .Sj)(file, 1 + lineFeeds, bad.utf16);
         if (plan === null)
             throw (0,_csv_rules_js__WEBPACK_IMPORTED_MODULE_3__/* .emptyError */ .CA)(file);
-        builder.flush();
+        builder.finish();
         for (const chunk of builder.take()) {
             yield chunk;
             if (target.recycle === true)
@@ -222,6 +222,166 @@ function syntaxError(failure, file, line) {
     }
     return new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz('csv-syntax', what, { file, line });
 }
+
+
+/***/ }),
+
+/***/ 8075:
+/***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __webpack_require__) => {
+
+/* harmony export */ __webpack_require__.d(__webpack_exports__, {
+/* harmony export */   qg: () => (/* binding */ parse)
+/* harmony export */ });
+/* unused harmony export Parser */
+/* harmony import */ var stream__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(2203);
+/* harmony import */ var _utils_is_object_js__WEBPACK_IMPORTED_MODULE_4__ = __webpack_require__(8467);
+/* harmony import */ var _api_index_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(7084);
+/* harmony import */ var _api_CsvError_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(6892);
+/* harmony import */ var _api_normalize_options_js__WEBPACK_IMPORTED_MODULE_3__ = __webpack_require__(6845);
+/*
+CSV Parse
+
+Please look at the [project documentation](https://csv.js.org/parse/) for
+additional information.
+*/
+
+
+
+
+
+
+
+class Parser extends stream__WEBPACK_IMPORTED_MODULE_0__.Transform {
+  constructor(opts = {}) {
+    super({ ...{ readableObjectMode: true }, ...opts, encoding: null });
+    this.api = (0,_api_index_js__WEBPACK_IMPORTED_MODULE_1__/* .transform */ .p)({
+      on_skip: (err, chunk) => {
+        this.emit("skip", err, chunk);
+      },
+      ...opts,
+    });
+    // Backward compatibility
+    this.state = this.api.state;
+    this.options = this.api.options;
+    this.info = this.api.info;
+  }
+  // Implementation of `Transform._transform`
+  _transform(buf, _, callback) {
+    if (this.state.stop === true) {
+      return;
+    }
+    const err = this.api.parse(
+      buf,
+      false,
+      (record) => {
+        this.push(record);
+      },
+      () => {
+        this.push(null);
+        this.end();
+        // Fix #333 and break #410
+        //   ko: api.stream.iterator.coffee
+        //   ko with v21.4.0, ok with node v20.5.1: api.stream.finished # aborted (with generate())
+        //   ko: api.stream.finished # aborted (with Readable)
+        // this.destroy()
+        // Fix #410 and partially break #333
+        //   ok: api.stream.iterator.coffee
+        //   ok: api.stream.finished # aborted (with generate())
+        //   broken: api.stream.finished # aborted (with Readable)
+        this.on("end", this.destroy);
+      },
+    );
+    if (err !== undefined) {
+      this.state.stop = true;
+    }
+    callback(err);
+  }
+  // Implementation of `Transform._flush`
+  _flush(callback) {
+    if (this.state.stop === true) {
+      return;
+    }
+    const err = this.api.parse(
+      undefined,
+      true,
+      (record) => {
+        this.push(record);
+      },
+      () => {
+        this.push(null);
+        this.on("end", this.destroy);
+      },
+    );
+    callback(err);
+  }
+}
+
+const parse = function () {
+  let data, options, callback;
+  for (const i in arguments) {
+    const argument = arguments[i];
+    const type = typeof argument;
+    if (
+      data === undefined &&
+      (typeof argument === "string" || Buffer.isBuffer(argument))
+    ) {
+      data = argument;
+    } else if (options === undefined && (0,_utils_is_object_js__WEBPACK_IMPORTED_MODULE_4__/* .is_object */ .v)(argument)) {
+      options = argument;
+    } else if (callback === undefined && type === "function") {
+      callback = argument;
+    } else {
+      throw new _api_CsvError_js__WEBPACK_IMPORTED_MODULE_2__/* .CsvError */ .J(
+        "CSV_INVALID_ARGUMENT",
+        ["Invalid argument:", `got ${JSON.stringify(argument)} at index ${i}`],
+        options || {},
+      );
+    }
+  }
+  const parser = new Parser(options);
+  if (callback) {
+    const records =
+      options === undefined || options.objname === undefined
+        ? []
+        : Object.create(null);
+    parser.on("readable", function () {
+      let record;
+      while ((record = this.read()) !== null) {
+        if (options === undefined || options.objname === undefined) {
+          records.push(record);
+        } else {
+          Object.assign(records, {
+            [record[0]]: record[1],
+            // writable: true,
+            // enumerable: true,
+            // configurable: true
+          });
+        }
+      }
+    });
+    parser.on("error", function (err) {
+      callback(err, undefined, parser.api.__infoDataSet());
+    });
+    parser.on("end", function () {
+      callback(undefined, records, parser.api.__infoDataSet());
+    });
+  }
+  if (data !== undefined) {
+    const writer = function () {
+      parser.write(data);
+      parser.end();
+    };
+    // Support Deno, Rollup doesn't provide a shim for setImmediate
+    if (typeof setImmediate === "function") {
+      setImmediate(writer);
+    } else {
+      setTimeout(writer, 0);
+    }
+  }
+  return parser;
+};
+
+
 
 
 /***/ })

@@ -160,8 +160,8 @@ var fs_repository = __webpack_require__(4526);
 var repo_write = __webpack_require__(9056);
 // EXTERNAL MODULE: ./src/result/result.ts
 var result_result = __webpack_require__(1628);
-// EXTERNAL MODULE: ./src/run/pipeline.ts + 41 modules
-var pipeline = __webpack_require__(1605);
+// EXTERNAL MODULE: ./src/run/pipeline.ts + 15 modules
+var pipeline = __webpack_require__(324);
 // EXTERNAL MODULE: ./src/report/escape.ts
 var report_escape = __webpack_require__(4031);
 ;// CONCATENATED MODULE: ./src/entries/refit-command.ts

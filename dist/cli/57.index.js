@@ -22,8 +22,8 @@ var external_node_path_default = /*#__PURE__*/__webpack_require__.n(external_nod
 var errors = __webpack_require__(4296);
 // EXTERNAL MODULE: ./src/run/base-comparison.ts
 var base_comparison = __webpack_require__(5148);
-// EXTERNAL MODULE: ./src/run/pipeline.ts + 41 modules
-var pipeline = __webpack_require__(1605);
+// EXTERNAL MODULE: ./src/run/pipeline.ts + 15 modules
+var pipeline = __webpack_require__(324);
 // EXTERNAL MODULE: external "node:child_process"
 var external_node_child_process_ = __webpack_require__(1421);
 // EXTERNAL MODULE: external "node:fs"

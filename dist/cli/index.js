@@ -1720,7 +1720,7 @@ __nccwpck_require__.a(module, async (__webpack_handle_async_dependencies__, __we
 /* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(4296);
 /* harmony import */ var _run_worker_role_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(5280);
 /* harmony import */ var _entries_check_run_js__WEBPACK_IMPORTED_MODULE_5__ = __nccwpck_require__(9752);
-/* harmony import */ var _entries_model_spool_js__WEBPACK_IMPORTED_MODULE_6__ = __nccwpck_require__(3783);
+/* harmony import */ var _entries_model_spool_js__WEBPACK_IMPORTED_MODULE_6__ = __nccwpck_require__(9656);
 /* harmony import */ var _entries_report_file_js__WEBPACK_IMPORTED_MODULE_14__ = __nccwpck_require__(7435);
 /* harmony import */ var _report_json_js__WEBPACK_IMPORTED_MODULE_7__ = __nccwpck_require__(2794);
 /* harmony import */ var _report_escape_js__WEBPACK_IMPORTED_MODULE_12__ = __nccwpck_require__(4031);
@@ -1795,9 +1795,10 @@ async function main(argv) {
         }
         else {
             // Only the JSON report, to a file: each model's text is rendered as soon as its outcome is
-            // final, and the Result keeps a small copy (entries/model-spool.ts).
+            // final and set aside in a spool file beside the report (checked as the report's own write
+            // checks it, never through a link), and the Result keeps a small copy (entries/model-spool.ts).
             if (parsed.format === 'json' && parsed.out !== null && parsed.html === null && parsed.sarif === null && parsed.junit === null)
-                spool = (0,_entries_model_spool_js__WEBPACK_IMPORTED_MODULE_6__/* .openModelSpool */ .h)();
+                spool = (0,_entries_model_spool_js__WEBPACK_IMPORTED_MODULE_6__/* .openModelSpool */ .hy)({ file: parsed.out, place: { option: '--out', within: [parsed.settings.root, process.cwd()] } });
             const onModel = spool === null ? undefined : spool.keep;
             result = await (0,_entries_check_run_js__WEBPACK_IMPORTED_MODULE_5__/* .runCheck */ .k)(parsed.settings, { base: parsed.base, entry: 'command', shard: parsed.shard, jobs: parsed.jobs, onModel });
             failOn = parsed.settings.failOn;
@@ -8939,8 +8940,12 @@ function emptyError(file) {
         file,
     });
 }
-/** First buffer size of a chunk; buffers double from here up to the chunk size. */
-const FIRST_CAPACITY = 4096;
+/**
+ * First buffer size of a chunk; buffers double from here up to the chunk size. Small, so that the
+ * many files of a few hundred or thousand rows of a monorepo make small buffers (a larger file pays
+ * a few more doublings, each a copy of what it read so far).
+ */
+const FIRST_CAPACITY = 1024;
 /**
  * Gathers rows into column buffers and hands out chunks of `chunkRows` rows.
  * Parsers write `slots[s][row]` and `lines[row]` directly, then advance `row`; when `row`
@@ -8994,9 +8999,21 @@ class ChunkBuilder {
     }
     /** Hands out the rows gathered so far as a chunk (nothing when there are none). */
     flush() {
+        if (this.handOut())
+            this.fresh();
+    }
+    /**
+     * Hands out the last rows as a chunk (nothing when there are none) at the end of the file: as
+     * {@link flush}, without making buffers for rows that will not come. No row may be added after.
+     */
+    finish() {
+        this.handOut();
+    }
+    /** Moves the rows gathered so far into a ready chunk; false when there were none. */
+    handOut() {
         const rows = this.row;
         if (rows === 0)
-            return;
+            return false;
         const exact = rows === this.capacity;
         const slots = exact ? this.slots : this.slots.map((s) => s.slice(0, rows));
         const lines = exact ? this.lines : this.lines.slice(0, rows);
@@ -9004,7 +9021,7 @@ class ChunkBuilder {
         if (exact)
             this.#buffersOf.set(chunk, { slots, lines });
         this.ready.push(chunk);
-        this.fresh();
+        return true;
     }
     /**
      * Takes back a chunk handed out by this builder whose reader is done with it: its buffers are
@@ -9461,6 +9478,374 @@ function encodingError(file, line, utf16) {
 
 /***/ }),
 
+/***/ 5240:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+
+// EXPORTS
+__nccwpck_require__.d(__webpack_exports__, {
+  u: () => (/* binding */ loadModelData)
+});
+
+// UNUSED EXPORTS: rowWeights
+
+// EXTERNAL MODULE: ./src/core/errors.ts
+var errors = __nccwpck_require__(4296);
+// EXTERNAL MODULE: ./src/data/table.ts + 1 modules
+var data_table = __nccwpck_require__(8785);
+// EXTERNAL MODULE: ./src/data/data-parts.ts
+var data_parts = __nccwpck_require__(6837);
+;// CONCATENATED MODULE: ./src/data/levels.ts
+/**
+ * Category levels as numeric codes, so that the design can read a category input like any other
+ * column: the training levels, sorted by text order (JavaScript's default string order: UTF-16
+ * code units), are coded 0, 1, ...; a hold-out level never seen in training is an error naming the
+ * level, file and line, or with `unseen: zero` the code -1 (every indicator 0: the reference level's
+ * prediction).
+ */
+
+
+/** The training levels of a category column, in text order. */
+function trainingLevels(values) {
+    return [...new Set(values)].sort();
+}
+/**
+ * Codes of the cells: index of the level in `levels`, or -1 for an unseen level when allowed.
+ * @param where file (and parts, when read from parts), lines and the descriptor line of the term, for the error
+ * @throws InputError `unseen-level` at the first unseen level when `unseen` is `error`
+ */
+function levelCodes(values, levels, unseen, where) {
+    const index = new Map(levels.map((l, k) => [l, k]));
+    const out = new Float64Array(values.length);
+    for (let i = 0; i < values.length; i++) {
+        const k = index.get(values[i]);
+        if (k === undefined) {
+            if (unseen === 'zero') {
+                out[i] = -1;
+                continue;
+            }
+            const place = (0,data_parts/* placeOfLine */.xX)(where, where.lines[i]);
+            throw new errors/* InputError */.dz('unseen-level', `column \`${where.column}\` has the level ${JSON.stringify(values[i].slice(0, 80))} on line ${place.line} of ${place.file}, which no training row has; the category term on line ${where.termLine} of ${where.descriptor} has no column for it (add \`unseen: zero\` to predict it as the reference level)`, { file: place.file, line: place.line, key: where.column });
+        }
+        out[i] = k;
+    }
+    return out;
+}
+
+// EXTERNAL MODULE: ./src/data/row-source.ts
+var row_source = __nccwpck_require__(7172);
+;// CONCATENATED MODULE: ./src/data/load-model-data.ts
+
+
+
+
+
+/** The category columns of a descriptor with the first category term that reads each. */
+function categoryColumns(descriptor) {
+    const out = new Map();
+    for (const t of descriptor.terms)
+        if (t.kind === 'category' && !out.has(t.of))
+            out.set(t.of, { line: t.line, unseen: t.unseen });
+    return out;
+}
+/**
+ * Reads the input columns (in `inputs` order) and the target of both files.
+ * @throws InputError `target-as-input` when a term reads the target column,
+ *   `no-rows` when either file has no data rows
+ */
+async function loadModelData(repo, descriptor, inputs, settings, options = {}) {
+    const { data } = descriptor;
+    if (inputs.includes(data.target)) {
+        throw new errors/* InputError */.dz('target-as-input', `the target column \`${(0,errors/* clip */.$Q)(data.target)}\` is also used as an input by a term; a model may not read its own target`, { file: descriptor.file, line: data.lines.target, key: 'data.target' });
+    }
+    const weighting = data.weighting ?? null;
+    if (weighting !== null && weighting.column === data.target) {
+        throw new errors/* InputError */.dz('weight-is-target', `\`data.${weighting.kind}\` names the target column \`${data.target}\`; expected a column of its own`, {
+            file: descriptor.file,
+            line: weighting.line,
+            key: `data.${weighting.kind}`,
+        });
+    }
+    // Category inputs are text: read apart (text-columns.ts) and coded (levels.ts), never as numbers.
+    const categories = categoryColumns(descriptor);
+    const numeric = inputs.filter((c) => !categories.has(c));
+    const columns = [...numeric, data.target, ...(weighting !== null && !inputs.includes(weighting.column) ? [weighting.column] : [])];
+    const levels = new Map();
+    const maxBytes = settings.caps.maxFileBytes;
+    const format = data.format;
+    const split = data.split ?? null;
+    const load = async (path, partPaths, line, key) => {
+        let table;
+        // With a split column both sides read the one file, each keeping its own label's rows.
+        const side = split === null
+            ? undefined
+            : key === 'data.train'
+                ? { column: split.column, keep: split.train, other: split.holdout }
+                : { column: split.column, keep: split.holdout, other: split.train };
+        try {
+            table = await (0,data_table/* readTable */.xz)(repo, partPaths ?? path, {
+                columns,
+                maxBytes,
+                ...(format ? { format } : {}),
+                ...(side ? { split: side } : {}),
+            });
+        }
+        catch (error) {
+            throw withAsker(error, descriptor);
+        }
+        if (table.rows === 0) {
+            const why = side
+                ? ` labelled ${(0,errors/* quoteValue */.cl)(side.keep)} in column ${(0,errors/* quoteValue */.cl)(side.column)}`
+                : table.dropped > 0
+                    ? ` left after dropping ${table.dropped} with missing cells`
+                    : '';
+            const named = partPaths === undefined ? `\`${(0,errors/* clip */.$Q)(path)}\`` : `the ${partPaths.length} parts of \`${key}\` (${(0,errors/* clip */.$Q)(table.file)})`;
+            throw new errors/* InputError */.dz('no-rows', `${named} ${partPaths === undefined ? 'has' : 'have'} no data rows${why}; expected at least one row`, {
+                file: descriptor.file,
+                line,
+                key,
+            });
+        }
+        if (categories.size > 0) {
+            const text = await readCategoryText(repo, table, [...categories.keys()], maxBytes);
+            for (const [name, term] of categories) {
+                const values = text.get(name);
+                if (!levels.has(name))
+                    levels.set(name, trainingLevels(values));
+                const where = {
+                    file: table.file,
+                    ...(table.parts ? { parts: table.parts } : {}),
+                    lines: table.lines,
+                    column: name,
+                    termLine: term.line,
+                    descriptor: descriptor.file,
+                };
+                table.columns.set(name, levelCodes(values, levels.get(name), term.unseen, where));
+            }
+        }
+        const rows = {
+            inputs: inputs.map((c) => table.columns.get(c)),
+            y: table.columns.get(data.target),
+            lines: table.lines,
+            rows: table.rows,
+            file: table.file,
+            ...(table.parts ? { parts: table.parts } : {}),
+            ...(format?.missing === 'drop' ? { dropped: table.dropped } : {}),
+            byName: table.columns,
+        };
+        return weighting === null
+            ? rows
+            : {
+                ...rows,
+                ...rowWeights(weighting, table.columns.get(weighting.column), rows.lines, rows.rows, rows.file, rows.parts),
+            };
+    };
+    // Training data streams when its files together (one, or the parts) are estimated too large to hold.
+    const trainParts = data.trainParts;
+    if ((0,row_source/* streamsTrainingData */.yK)(await (0,row_source/* trainingFileSizes */.RC)(repo, data.train, trainParts), options.streamAboveBytes)) {
+        const trainLabel = trainParts === undefined ? data.train : (0,data_parts/* partsLabel */.xq)(trainParts);
+        const why = categories.size > 0
+            ? 'a category term'
+            : weighting !== null
+                ? `\`data.${weighting.kind}\``
+                : (data.targetTransform ?? null) !== null
+                    ? '`data.target_transform`'
+                    : null;
+        if (why !== null) {
+            throw new errors/* InputError */.dz('too-large-to-hold', `${trainParts === undefined ? 'the training file' : `the ${trainParts.length} training parts`} ${(0,errors/* clip */.$Q)(trainLabel)} ${trainParts === undefined ? 'is' : 'are'} too large to hold in memory and ${trainParts === undefined ? 'is' : 'are'} read as a stream, which a model with ${why} does not support yet; expected ${trainParts === undefined ? 'a smaller file' : 'smaller parts'}, or a model without it`, { file: descriptor.file, line: data.lines.train, key: 'data.train' });
+        }
+        const split = data.split ?? null;
+        const counts = { dropped: 0 };
+        const source = (0,row_source/* fileRowSource */.iw)(repo, trainParts ?? data.train, {
+            inputs,
+            target: data.target,
+            maxBytes,
+            ...(options.chunkRows ? { chunkRows: options.chunkRows } : {}),
+            ...(format ? { format } : {}),
+            ...(split ? { split: { column: split.column, keep: split.train, other: split.holdout } } : {}),
+            counts,
+        });
+        const reservoir = new row_source/* RowReservoir */.QH(inputs.length, options.sampleRows ?? row_source/* SAMPLE_ROWS */.l6, descriptor.fit.seed);
+        const target = { n: 0, mean: 0, m2: 0, min: Infinity, max: -Infinity };
+        const inputFigures = inputs.map(() => ({ n: 0, mean: 0, m2: 0, min: Infinity, max: -Infinity }));
+        // Read from parts: the parts with their line offsets, complete once the read has reached the last.
+        let parts;
+        try {
+            await source.forEachChunk((chunk) => {
+                parts = chunk.parts;
+                options.onTrainChunk?.(chunk);
+                reservoir.add(chunk);
+                addTargetFigures(target, chunk.y, chunk.rows);
+                for (let c = 0; c < inputs.length; c++)
+                    addTargetFigures(inputFigures[c], chunk.inputs[c], chunk.rows);
+            });
+        }
+        catch (error) {
+            throw withAsker(error, descriptor);
+        }
+        if (reservoir.seen === 0) {
+            // The words of the in-memory path (`load` above), which also names the parts and why none are left.
+            const why = split
+                ? ` labelled ${(0,errors/* quoteValue */.cl)(split.train)} in column ${(0,errors/* quoteValue */.cl)(split.column)}`
+                : counts.dropped > 0
+                    ? ` left after dropping ${counts.dropped} with missing cells`
+                    : '';
+            const named = trainParts === undefined
+                ? `\`${(0,errors/* clip */.$Q)(data.train)}\` has`
+                : `the ${trainParts.length} parts of \`data.train\` (${(0,errors/* clip */.$Q)(trainLabel)}) have`;
+            throw new errors/* InputError */.dz('no-rows', `${named} no data rows${why}; expected at least one row`, {
+                file: descriptor.file,
+                line: data.lines.train,
+                key: 'data.train',
+            });
+        }
+        const sample = {
+            ...reservoir.rows(trainLabel),
+            ...(parts !== undefined ? { parts } : {}),
+            sampleOf: reservoir.seen,
+            ...(format?.missing === 'drop' ? { dropped: counts.dropped } : {}),
+        };
+        const holdout = await load(data.holdout, data.holdoutParts, data.lines.holdout, 'data.holdout');
+        const { byName: _unused, ...holdoutData } = holdout;
+        const trainColumns = new Map(inputs.map((name, c) => [name, sample.inputs[c]]));
+        return {
+            train: sample,
+            holdout: holdoutData,
+            trainColumns,
+            levels,
+            streamed: {
+                source,
+                rows: reservoir.seen,
+                targetMean: target.mean,
+                targetSd: Math.sqrt(target.m2 / target.n),
+                targetMin: target.min,
+                targetMax: target.max,
+                inputStats: new Map(inputs.map((name, c) => [name, { mean: inputFigures[c].mean, sd: Math.sqrt(inputFigures[c].m2 / inputFigures[c].n) }])),
+            },
+        };
+    }
+    const train = await load(data.train, data.trainParts, data.lines.train, 'data.train');
+    const holdout = await load(data.holdout, data.holdoutParts, data.lines.holdout, 'data.holdout');
+    const { byName, ...trainData } = train;
+    if (trainData.weights !== undefined && !trainData.weights.some((w) => w > 0)) {
+        throw new errors/* InputError */.dz('bad-weight', `every training row of ${trainData.file} has weight 0; expected at least one positive weight`, {
+            file: descriptor.file,
+            line: data.weighting?.line,
+            key: `data.${data.weighting?.kind}`,
+        });
+    }
+    const { byName: _unused, ...holdoutData } = holdout;
+    return { train: trainData, holdout: holdoutData, trainColumns: byName, levels };
+}
+/**
+ * Adds a chunk's values of one column (the target, or an input) to running figures: mean and sum of squared deviations merged by the
+ * pairwise formula of Chan, Golub & LeVeque ("Algorithms for computing the sample variance",
+ * The American Statistician 37(3), 1983, eq. 2.1), the chunk's own from two passes.
+ */
+function addTargetFigures(t, y, m) {
+    if (m === 0)
+        return;
+    let sum = 0;
+    for (let i = 0; i < m; i++)
+        sum += y[i];
+    const mean = sum / m;
+    let m2 = 0;
+    for (let i = 0; i < m; i++)
+        m2 += (y[i] - mean) * (y[i] - mean);
+    const n = t.n + m;
+    const delta = mean - t.mean;
+    t.mean = t.n === 0 ? mean : t.mean + (delta * m) / n;
+    t.m2 = t.n === 0 ? m2 : t.m2 + m2 + (delta * delta * t.n * m) / n;
+    t.n = n;
+    for (let i = 0; i < m; i++) {
+        if (y[i] < t.min)
+            t.min = y[i];
+        if (y[i] > t.max)
+            t.max = y[i];
+    }
+}
+/**
+ * The row weights of a `data.weight` or `data.sigma` column: w as written (finite, >= 0), or
+ * w = 1 / sigma^2 with sigma finite and > 0.
+ * @param parts the parts the rows were read from (lines table-wide), absent for one file
+ * @throws InputError `bad-weight` naming the file (the part), line, column and value of the first bad row
+ */
+function rowWeights(weighting, values, lines, rows, file, parts) {
+    const weights = new Float64Array(rows);
+    const sigma = weighting.kind === 'sigma';
+    for (let i = 0; i < rows; i++) {
+        const v = values[i];
+        const ok = sigma ? Number.isFinite(v) && v > 0 : Number.isFinite(v) && v >= 0;
+        if (!ok) {
+            const place = (0,data_parts/* placeOfLine */.xX)({ file, parts }, lines[i]);
+            throw new errors/* InputError */.dz('bad-weight', `column \`${weighting.column}\` (\`data.${weighting.kind}\`) is ${v} on line ${place.line} of ${place.file}; expected ${sigma ? 'a finite standard uncertainty above 0' : 'a finite weight of 0 or more'}`, { file: place.file, line: place.line, key: weighting.column });
+        }
+        weights[i] = sigma ? 1 / (v * v) : v;
+    }
+    return sigma ? { weights, sigma: values.subarray(0, rows) } : { weights };
+}
+/**
+ * The text of the category columns of a table, file by file (each part apart, its lines made
+ * table-wide as the numeric read made them), checked to give the same rows as the numbers.
+ * @throws InputError `csv-rows` when a file gives other rows of text than of numbers
+ */
+async function readCategoryText(repo, table, names, maxBytes) {
+    const files = table.parts ?? [{ file: table.file, lineOffset: 0 }];
+    const out = new Map(names.map((n) => [n, []]));
+    let row = 0;
+    let left = maxBytes;
+    // csv-parse comes with the text columns: loaded only when a model has text columns.
+    const { readTextColumns } = await Promise.all(/* import() */[__nccwpck_require__.e(84), __nccwpck_require__.e(167)]).then(__nccwpck_require__.bind(__nccwpck_require__, 3167));
+    for (const part of files) {
+        const text = await readTextColumns(repo, part.file, names, Math.min(left, maxBytes));
+        left -= await repo.size(part.file);
+        const n = text.lines.length;
+        let same = row + n <= table.rows;
+        for (let i = 0; same && i < n; i++)
+            same = text.lines[i] + part.lineOffset === table.lines[row + i];
+        if (!same) {
+            // One file: the message as it always was; a part: its own count (the numbers' rows are the whole table's).
+            const numbers = table.parts === undefined ? `${table.rows} rows of numbers` : 'other rows of numbers';
+            throw new errors/* InputError */.dz('csv-rows', `${table.parts === undefined ? part.file : (0,errors/* clip */.$Q)(part.file)} gives ${n} rows of text for its category columns but ${numbers}; expected one record per line (no line breaks inside quoted category cells)`, { file: part.file });
+        }
+        for (const name of names) {
+            const values = out.get(name);
+            for (const v of text.columns.get(name))
+                values.push(v);
+        }
+        row += n;
+    }
+    if (row !== table.rows) {
+        throw new errors/* InputError */.dz('csv-rows', `${table.parts === undefined ? table.file : (0,errors/* clip */.$Q)(table.file)} gives ${row} rows of text for its category columns but ${table.rows} rows of numbers; expected one record per line (no line breaks inside quoted category cells)`, { file: table.parts?.[0]?.file ?? table.file });
+    }
+    return out;
+}
+/**
+ * A missing column names the descriptor line that asked for it: `data.target`, or the first term
+ * that reads the column. Other errors pass unchanged.
+ */
+function withAsker(error, descriptor) {
+    if (!(error instanceof errors/* InputError */.dz) || error.code !== 'csv-missing-column' || error.location.key === undefined)
+        return error;
+    const column = error.location.key;
+    if (descriptor.data.weighting?.column === column) {
+        const w = descriptor.data.weighting;
+        return new errors/* InputError */.dz(error.code, `${error.message} (asked for by \`data.${w.kind}\` on line ${w.line} of ${descriptor.file})`, error.location);
+    }
+    const term = descriptor.terms.find((t) => t.kind === 'linear' ? t.columns.includes(column) : Array.isArray(t.of) ? t.of.includes(column) : t.of === column);
+    const asker = column === descriptor.data.target
+        ? `\`data.target\` on line ${descriptor.data.lines.target}`
+        : term
+            ? `the ${term.kind} term on line ${term.line}`
+            : null;
+    if (asker === null)
+        return error;
+    return new errors/* InputError */.dz(error.code, `${error.message} (asked for by ${asker} of ${(0,errors/* clip */.$Q)(descriptor.file)})`, error.location);
+}
+
+
+/***/ }),
+
 /***/ 9642:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
@@ -9473,6 +9858,277 @@ function encodingError(file, line, utf16) {
 /** The number of training rows a figure should count: the file's rows, also for a sample of them. */
 function trainingRows(data) {
     return data.sampleOf ?? data.rows;
+}
+
+
+/***/ }),
+
+/***/ 7172:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   QH: () => (/* binding */ RowReservoir),
+/* harmony export */   RC: () => (/* binding */ trainingFileSizes),
+/* harmony export */   dN: () => (/* binding */ memoryRowSource),
+/* harmony export */   iw: () => (/* binding */ fileRowSource),
+/* harmony export */   l6: () => (/* binding */ SAMPLE_ROWS),
+/* harmony export */   yK: () => (/* binding */ streamsTrainingData)
+/* harmony export */ });
+/* unused harmony exports STREAM_ABOVE_BYTES, GZIP_RATIO, estimatedTextBytes, streamsTrainingFile */
+/* harmony import */ var _core_mix32_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(6736);
+/* harmony import */ var _gzip_stream_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(4355);
+/* harmony import */ var _table_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(8785);
+/* harmony import */ var _csv_rules_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(8706);
+/* harmony import */ var _data_parts_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(6837);
+/**
+ * Where the passes over a model's training rows get them: from columns held in memory (today's
+ * path, {@link memoryRowSource}), or streamed again from the file, or from its parts in order, on
+ * every pass ({@link fileRowSource}) for training data too large to hold, so that memory does not
+ * grow with the rows. Both hand out the rows in file order, in chunks of consecutive rows.
+ *
+ * Which one a model takes: {@link streamsTrainingData} (one file: {@link streamsTrainingFile}). A streamed model keeps a bounded sample
+ * of its training rows in memory ({@link RowReservoir}) for the diagnostics that need rows at
+ * hand (swing, spikes, the complexity sweep, charts); docs/scale.md describes what each uses.
+ */
+
+
+
+
+
+/**
+ * The rows of in-memory data as one chunk: the passes then work exactly as over the columns
+ * themselves (same blocks, same additions in the same order).
+ */
+function memoryRowSource(data) {
+    return {
+        file: data.file,
+        streamed: false,
+        async forEachChunk(visit) {
+            visit(data, 0);
+        },
+    };
+}
+/**
+ * The training rows streamed from their file, or from its parts in the order given, through
+ * readTable's chunk interface ({@link readTableChunks}: fast numeric path, general path, gzip, one
+ * header check across parts) on every pass. Memory: one chunk of `chunkRows` x (inputs + 1)
+ * doubles at a time (two read from parts), independent of the rows in the file.
+ *
+ * Read from parts, the chunks are cut again across the parts' ends ({@link PartsRechunker}): every
+ * chunk but the last holds `chunkRows` rows, as from one file, so that the design's blocks, and
+ * with them every sum of the passes, are those of the same rows held in memory.
+ *
+ * @param path the file, or its parts in reading order (at least one)
+ */
+function fileRowSource(repo, path, options) {
+    const columns = [...options.inputs, options.target];
+    const d = options.inputs.length;
+    const file = typeof path === 'string' ? path : (0,_data_parts_js__WEBPACK_IMPORTED_MODULE_3__/* .partsLabel */ .xq)(path);
+    return {
+        file,
+        streamed: true,
+        async forEachChunk(visit, chunkRows = options.chunkRows ?? _csv_rules_js__WEBPACK_IMPORTED_MODULE_2__/* .DEFAULT_CHUNK_ROWS */ ._I) {
+            let start = 0;
+            if (options.counts)
+                options.counts.dropped = 0;
+            const parts = typeof path === 'string' ? undefined : [];
+            const read = (0,_table_js__WEBPACK_IMPORTED_MODULE_1__/* .readTableChunks */ .he)(repo, path, {
+                columns,
+                maxBytes: options.maxBytes,
+                chunkRows,
+                ...(options.format ? { format: options.format } : {}),
+                ...(options.split ? { split: options.split } : {}),
+                ...(options.counts ? { counts: options.counts } : {}),
+                ...(parts ? { parts } : {}),
+                // Every consumer copies what it keeps (the reservoir, the factors, the sums), so the reader
+                // refills the same arrays: no garbage of a chunk's size per chunk.
+                recycle: true,
+            });
+            if (parts === undefined) {
+                for await (const chunk of read) {
+                    visit({ inputs: chunk.columns.slice(0, d), y: chunk.columns[d], lines: chunk.lines, rows: chunk.rows, file }, start);
+                    start += chunk.rows;
+                }
+                return;
+            }
+            const whole = new PartsRechunker(d + 1, chunkRows);
+            const hand = (rows) => {
+                const cut = whole.columns.map((c) => c.subarray(0, rows));
+                visit({ inputs: cut.slice(0, d), y: cut[d], lines: whole.lines.subarray(0, rows), rows, file, parts }, start);
+                start += rows;
+            };
+            for await (const chunk of read)
+                whole.add(chunk.columns, chunk.lines, chunk.rows, hand);
+            if (whole.rows > 0)
+                hand(whole.rows);
+        },
+    };
+}
+/**
+ * Cuts chunks of rows again into chunks of exactly `chunkRows` rows (the last may be short),
+ * copying them into arrays of its own: the chunks of a table read from parts, which end at every
+ * part's end, become those of one file. Memory: `chunkRows` x (columns + 1/2) doubles.
+ */
+class PartsRechunker {
+    /** The rows gathered so far, column by column. */
+    columns;
+    lines;
+    /** Rows gathered and not yet handed out. */
+    rows = 0;
+    #size;
+    /**
+     * @param columns columns of each row
+     * @param size rows of each chunk handed out (>= 1)
+     */
+    constructor(columns, size) {
+        this.#size = size;
+        this.columns = Array.from({ length: columns }, () => new Float64Array(size));
+        this.lines = new Int32Array(size);
+    }
+    /** Adds `rows` rows; calls `full(size)` each time `size` rows are gathered (then starts again at 0). */
+    add(columns, lines, rows, full) {
+        let from = 0;
+        while (from < rows) {
+            const take = Math.min(rows - from, this.#size - this.rows);
+            for (let c = 0; c < this.columns.length; c++)
+                this.columns[c].set(columns[c].subarray(from, from + take), this.rows);
+            this.lines.set(lines.subarray(from, from + take), this.rows);
+            this.rows += take;
+            from += take;
+            if (this.rows === this.#size) {
+                full(this.rows);
+                this.rows = 0;
+            }
+        }
+    }
+}
+/**
+ * Default threshold of {@link streamsTrainingFile}: 128 MiB of CSV text. About 1.2 million rows of
+ * 8 inputs and a target at the benchmark's 111 bytes a row; held in memory such a file takes about
+ * 100 MiB of columns plus the run's own (the L workload of docs/benchmarks.md, 1 million rows,
+ * 111 MB, peaks near 200 MiB), so files below it keep today's in-memory path and those above
+ * stream, and a model of 8 inputs stays under about 256 MiB either way.
+ */
+const STREAM_ABOVE_BYTES = 128 * 1024 * 1024;
+/**
+ * Assumed ratio of CSV text to gzip bytes when judging a `.gz` file by its stored size (the
+ * decompressed size is not known before reading it; numeric CSV compresses about 2 to 4 times,
+ * the benchmark's random `%.10g` numbers 1.9 times at `gzip -1`): 4, the upper end, so that a
+ * large compressed file streams rather than risks being held.
+ */
+const GZIP_RATIO = 4;
+/**
+ * Estimated CSV text of a data file in bytes: its stored size, times {@link GZIP_RATIO} for `.gz`.
+ * @param size stored size in bytes
+ */
+function estimatedTextBytes(path, size) {
+    return (0,_gzip_stream_js__WEBPACK_IMPORTED_MODULE_0__/* .isGzipPath */ .ip)(path) ? size * GZIP_RATIO : size;
+}
+/**
+ * Whether a training file streams: when its estimated CSV text ({@link estimatedTextBytes}) is
+ * above `aboveBytes` (default {@link STREAM_ABOVE_BYTES}).
+ * @param size stored size in bytes
+ */
+function streamsTrainingFile(path, size, aboveBytes = STREAM_ABOVE_BYTES) {
+    return estimatedTextBytes(path, size) > aboveBytes;
+}
+/**
+ * Whether training data streams, read from one file or from parts: when the estimated CSV text of
+ * all its files together (each as {@link estimatedTextBytes}, so gzip parts at {@link GZIP_RATIO}
+ * times their size) is above `aboveBytes` (default {@link STREAM_ABOVE_BYTES}).
+ * @param files each file's path and stored size in bytes (one entry for one file)
+ */
+function streamsTrainingData(files, aboveBytes = STREAM_ABOVE_BYTES) {
+    let text = 0;
+    for (const f of files)
+        text += estimatedTextBytes(f.path, f.size);
+    return text > aboveBytes;
+}
+/**
+ * The stored sizes of training data's files, for {@link streamsTrainingData}.
+ * @param file the training file (`data.train`)
+ * @param parts its parts in reading order, when read from parts
+ * @returns each file's path and stored size in bytes: the parts when given, else the one file
+ */
+async function trainingFileSizes(repo, file, parts) {
+    const out = [];
+    for (const path of parts ?? [file])
+        out.push({ path, size: await repo.size(path) });
+    return out;
+}
+/** Rows a streamed model keeps for its sampled diagnostics: 100,000 (about 8 MB at 8 inputs). */
+const SAMPLE_ROWS = 100_000;
+/**
+ * A seeded uniform sample of at most `capacity` rows of a stream of rows (reservoir sampling,
+ * Vitter's algorithm R: Vitter, "Random sampling with a reservoir", ACM TOMS 11(1), 1985), kept in
+ * file order. While the rows seen fit, the sample is every row, so a small file's sample is the
+ * file itself. Memory: capacity x (inputs + 2) numbers.
+ */
+class RowReservoir {
+    #capacity;
+    #inputs;
+    #y;
+    #lines;
+    #index;
+    #seen = 0;
+    #state;
+    /**
+     * @param inputs input columns
+     * @param capacity rows kept at most (>= 1)
+     * @param seed seed of the choice (a 32-bit integer)
+     */
+    constructor(inputs, capacity, seed) {
+        this.#capacity = capacity;
+        this.#inputs = Array.from({ length: inputs }, () => new Float64Array(capacity));
+        this.#y = new Float64Array(capacity);
+        this.#lines = new Int32Array(capacity);
+        this.#index = new Float64Array(capacity);
+        this.#state = seed >>> 0;
+    }
+    /** Rows seen so far. */
+    get seen() {
+        return this.#seen;
+    }
+    /** Offers the rows of one chunk, in order. */
+    add(chunk) {
+        for (let i = 0; i < chunk.rows; i++) {
+            const t = this.#seen++;
+            let slot = t;
+            if (t >= this.#capacity) {
+                slot = Math.floor(this.#next() * (t + 1));
+                if (slot >= this.#capacity)
+                    continue;
+            }
+            for (let c = 0; c < this.#inputs.length; c++)
+                this.#inputs[c][slot] = chunk.inputs[c][i];
+            this.#y[slot] = chunk.y[i];
+            this.#lines[slot] = chunk.lines[i];
+            this.#index[slot] = t;
+        }
+    }
+    /** The sample in file order, as model data of `file` (rows = min(seen, capacity)). */
+    rows(file) {
+        const m = Math.min(this.#seen, this.#capacity);
+        const order = Array.from({ length: m }, (_, i) => i).sort((a, b) => this.#index[a] - this.#index[b]);
+        const pick = (from) => Float64Array.from(order, (i) => from[i]);
+        return {
+            inputs: this.#inputs.map(pick),
+            y: pick(this.#y),
+            lines: Int32Array.from(order, (i) => this.#lines[i]),
+            rows: m,
+            file,
+        };
+    }
+    /** Uniform in [0, 1): 53 bits from two steps of a Weyl sequence through a 32-bit mixer. */
+    #next() {
+        const hi = this.#mix() >>> 5;
+        const lo = this.#mix() >>> 6;
+        return (hi * 67108864 + lo) / 9007199254740992;
+    }
+    #mix() {
+        this.#state = (this.#state + 0x9e3779b9) >>> 0;
+        return (0,_core_mix32_js__WEBPACK_IMPORTED_MODULE_4__/* .mix32 */ .Q)(this.#state);
+    }
 }
 
 
@@ -9587,7 +10243,7 @@ async function* fastChunks(pieces, target) {
     }
     if (reader.plan === null)
         throw (0,csv_rules/* emptyError */.CA)(target.file);
-    reader.builder.flush();
+    reader.builder.finish();
     for (const chunk of reader.builder.take()) {
         yield chunk;
         if (target.recycle === true)
@@ -10206,7 +10862,7 @@ async function* scan(open, path, settings, onHeader, headerOnly, recycle, counts
         }
     }
     // csv-parse is loaded only when a file needs it (most data files take the fast path).
-    const { generalChunks } = await __nccwpck_require__.e(/* import() */ 462).then(__nccwpck_require__.bind(__nccwpck_require__, 6462));
+    const { generalChunks } = await Promise.all(/* import() */[__nccwpck_require__.e(84), __nccwpck_require__.e(462)]).then(__nccwpck_require__.bind(__nccwpck_require__, 6462));
     yield* generalChunks(first ?? open(), target, handedOut);
 }
 
@@ -10318,15 +10974,80 @@ function transformTables(tables, kind, target) {
 
 /***/ }),
 
-/***/ 7254:
+/***/ 1619:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
-/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   aN: () => (/* binding */ forEachBlock),
-/* harmony export */   h1: () => (/* binding */ blockRows),
-/* harmony export */   tp: () => (/* binding */ predictRows)
-/* harmony export */ });
-/* harmony import */ var _kernels_index_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(7114);
+
+// EXPORTS
+__nccwpck_require__.d(__webpack_exports__, {
+  h1: () => (/* binding */ blockRows),
+  aN: () => (/* binding */ forEachBlock),
+  tp: () => (/* binding */ predictRows)
+});
+
+// EXTERNAL MODULE: ./src/kernels/index.ts + 11 modules
+var kernels = __nccwpck_require__(7114);
+;// CONCATENATED MODULE: ./src/core/scratch.ts
+/**
+ * Scratch arrays of doubles lent for the length of one call and given back: a run of many small
+ * models asks for the same few working buffers (a design block per pass) over and over, and
+ * lending them from a small pool keeps that memory from being made and dropped per model (memory
+ * outside the JavaScript heap that is freed only when the garbage collector gets to it, and that
+ * the process's allocator does not always give back to the system).
+ *
+ * The pool belongs to the thread (each worker thread has its own copy of this module) and holds at
+ * most {@link SCRATCH_KEPT} buffers of at most {@link SCRATCH_MAX_BYTES} each; a larger request is
+ * made and dropped as before. A lent array is all zeros, as a new one is. Whoever borrows must give
+ * it back only when nothing reads or writes it any more (in a `finally`), and must not keep it.
+ */
+/** Buffers the pool keeps at most. */
+const SCRATCH_KEPT = 4;
+/** Largest buffer the pool keeps (1 MiB: a design block is about 512 KiB, design/blocks.ts). */
+const SCRATCH_MAX_BYTES = 1 << 20;
+/** Smallest buffer made for the pool (sizes are rounded up to a power of two from here). */
+const SCRATCH_MIN_BYTES = 1 << 12;
+const spare = [];
+/**
+ * A zero-filled array of `length` doubles, from the pool when a kept buffer is large enough (the
+ * smallest such), else new. Its `buffer` may be larger than `length` doubles.
+ * @param length doubles wanted (a non-negative integer)
+ */
+function borrowDoubles(length) {
+    const bytes = length * Float64Array.BYTES_PER_ELEMENT;
+    let best = -1;
+    for (let i = 0; i < spare.length; i++) {
+        if (spare[i].byteLength >= bytes && (best < 0 || spare[i].byteLength < spare[best].byteLength))
+            best = i;
+    }
+    if (best >= 0) {
+        const [buffer] = spare.splice(best, 1);
+        const array = new Float64Array(buffer, 0, length);
+        array.fill(0);
+        return array;
+    }
+    if (bytes > SCRATCH_MAX_BYTES)
+        return new Float64Array(length);
+    let size = SCRATCH_MIN_BYTES;
+    while (size < bytes)
+        size *= 2;
+    return new Float64Array(new ArrayBuffer(size), 0, length);
+}
+/**
+ * Gives an array from {@link borrowDoubles} back to the pool (kept when there is room and it is not
+ * too large; given twice, it is kept once). The caller must not use it afterwards.
+ * @param array the borrowed array
+ */
+function returnDoubles(array) {
+    const buffer = array.buffer;
+    if (!(buffer instanceof ArrayBuffer) || buffer.byteLength > SCRATCH_MAX_BYTES || buffer.byteLength < SCRATCH_MIN_BYTES)
+        return;
+    if (spare.length >= SCRATCH_KEPT || spare.includes(buffer))
+        return;
+    spare.push(buffer);
+}
+
+;// CONCATENATED MODULE: ./src/design/blocks.ts
+
 
 /**
  * Rows per block for a design of p columns: about 64 K doubles (512 KiB), at least 64 rows. Small
@@ -10339,22 +11060,84 @@ function blockRows(p) {
 }
 /**
  * Calls `visit(X, start, m)` for consecutive blocks of rows; `X` is column-major m x p and is
- * reused between calls (copy it to keep it).
+ * reused between calls and, once the walk is over, by later walks (core/scratch.ts lends it):
+ * copy it to keep it.
  */
 function forEachBlock(design, data, visit) {
     const size = blockRows(design.p);
-    const buffer = new Float64Array(Math.min(size, Math.max(1, data.rows)) * design.p);
-    for (let start = 0; start < data.rows; start += size) {
-        const m = Math.min(size, data.rows - start);
-        design.fill(data.inputs, start, m, buffer);
-        visit(buffer, start, m);
+    const buffer = borrowDoubles(Math.min(size, Math.max(1, data.rows)) * design.p);
+    try {
+        for (let start = 0; start < data.rows; start += size) {
+            const m = Math.min(size, data.rows - start);
+            design.fill(data.inputs, start, m, buffer);
+            visit(buffer, start, m);
+        }
+    }
+    finally {
+        returnDoubles(buffer);
     }
 }
 /** Predictions Phi w for every row of `data`, block by block (length `data.rows`). */
 function predictRows(design, data, w) {
     const out = new Float64Array(data.rows);
-    forEachBlock(design, data, (X, start, m) => (0,_kernels_index_js__WEBPACK_IMPORTED_MODULE_0__/* .addProducts */ .kD)(out, start, X, m, w, design.p));
+    forEachBlock(design, data, (X, start, m) => (0,kernels/* addProducts */.kD)(out, start, X, m, w, design.p));
     return out;
+}
+
+
+/***/ }),
+
+/***/ 1552:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   W: () => (/* binding */ ColumnSpread)
+/* harmony export */ });
+/* harmony import */ var _stats_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(6801);
+/**
+ * Population standard deviations of the design columns, gathered block by block in the same
+ * pass that folds rows into the factor. Sums are taken about each column's first value, which
+ * keeps the subtraction well conditioned for columns with a large offset.
+ */
+
+/** Running sums per column. */
+class ColumnSpread {
+    p;
+    shift;
+    s1;
+    s2;
+    n = 0;
+    /** @param p number of columns */
+    constructor(p) {
+        this.p = p;
+        this.shift = new Float64Array(p);
+        this.s1 = new Float64Array(p);
+        this.s2 = new Float64Array(p);
+    }
+    /** Adds a column-major block of `m` rows. */
+    add(X, m) {
+        if (m === 0)
+            return;
+        for (let j = 0; j < this.p; j++) {
+            const base = j * m;
+            if (this.n === 0)
+                this.shift[j] = X[base];
+            const column = X.subarray(base, base + m);
+            // One pass per sum (one loop per function; see DEVELOPERS.md, "Writing hot loops").
+            this.s1[j] += (0,_stats_js__WEBPACK_IMPORTED_MODULE_0__/* .sumOfDeviations */ .jZ)(column, m, this.shift[j]);
+            this.s2[j] += (0,_stats_js__WEBPACK_IMPORTED_MODULE_0__/* .sumOfSquaredDeviations */ .Mq)(column, m, this.shift[j]);
+        }
+        this.n += m;
+    }
+    /** Population standard deviation sqrt(mean((x - mean)^2)) of each column (NaN with no rows). */
+    sd() {
+        const out = new Float64Array(this.p);
+        for (let j = 0; j < this.p; j++) {
+            const mean = this.s1[j] / this.n;
+            out[j] = Math.sqrt(Math.max(0, this.s2[j] / this.n - mean * mean));
+        }
+        return out;
+    }
 }
 
 
@@ -11930,7 +12713,7 @@ function sweepComplexity(descriptor, design, train, fit, options = {}) {
 /* harmony export */ });
 /* unused harmony export LEVERAGE_ONE_TOLERANCE */
 /* harmony import */ var _fit_index_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(2450);
-/* harmony import */ var _design_blocks_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(7254);
+/* harmony import */ var _design_blocks_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(1619);
 /* harmony import */ var _kernels_index_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(7114);
 /* harmony import */ var _folds_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(9236);
 /* harmony import */ var _core_deadline_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(2091);
@@ -12512,6 +13295,195 @@ function feistelIndex(x, n, half, mask, key) {
 
 /***/ }),
 
+/***/ 2918:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   Gw: () => (/* binding */ findLeakage),
+/* harmony export */   ik: () => (/* binding */ LeakageScan)
+/* harmony export */ });
+/* unused harmony export LEAKAGE_EXAMPLE_LINES */
+/* harmony import */ var _random_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(6736);
+
+/** How many line numbers of each file to report. */
+const LEAKAGE_EXAMPLE_LINES = 5;
+const f64 = new Float64Array(1);
+const u32 = new Uint32Array(f64.buffer);
+/**
+ * 32-bit hash of the bit patterns of row i's values (-0 counts as 0): each 32-bit half is folded
+ * in with one multiply (golden-ratio and MurmurHash3 constants, Appleby 2011), then the lowbias32
+ * finaliser (Wellons 2018) spreads the bits once per row. Matches are always confirmed by exact
+ * comparison, so the hash only has to spread rows over the table.
+ */
+function rowHash(columns, i) {
+    let h = 0x811c9dc5;
+    for (let c = 0; c < columns.length; c++) {
+        f64[0] = columns[c][i] + 0; // -0 + 0 === +0: equal values hash equal
+        h = Math.imul(h ^ u32[0], 0x9e3779b1);
+        h = Math.imul(h ^ (h >>> 15) ^ u32[1], 0x85ebca6b);
+        h ^= h >>> 13;
+    }
+    return (0,_random_js__WEBPACK_IMPORTED_MODULE_0__/* .mix32 */ .Q)(h);
+}
+function sameInputs(a, i, b, j) {
+    for (let c = 0; c < a.length; c++)
+        if (a[c][i] !== b[c][j])
+            return false;
+    return true;
+}
+/** Hash of row i's inputs and target (the target folded into {@link rowHash} of the inputs). */
+function rowTargetHash(inputHash, y, i) {
+    f64[0] = y[i] + 0;
+    return (0,_random_js__WEBPACK_IMPORTED_MODULE_0__/* .mix32 */ .Q)(Math.imul(Math.imul(inputHash ^ u32[0], 0x9e3779b1) ^ u32[1], 0x85ebca6b));
+}
+function newTable(rows) {
+    let size = 1024;
+    while (size < 2 * rows)
+        size *= 2;
+    return {
+        mask: size - 1,
+        slotHash: new Uint32Array(size),
+        slotHead: new Int32Array(size).fill(-1),
+        next: new Int32Array(rows).fill(-1),
+        repOf: new Int32Array(rows),
+    };
+}
+/** The slot of `hash`: where it is, or the empty slot where it goes. */
+function findSlot(table, hash) {
+    const { slotHead, slotHash, mask } = table;
+    let s = (Math.imul(hash, 0x9e3779b1) >>> 0) & mask;
+    while (slotHead[s] >= 0 && slotHash[s] !== hash)
+        s = (s + 1) & mask;
+    return s;
+}
+// The passes are functions of their own, one loop each (see DEVELOPERS.md, "Writing hot loops").
+/**
+ * Puts the hold-out rows in the tables in file order: `inputs` by their inputs, `full` by their
+ * inputs and target; a row equal to an earlier one only records that row in `repOf`.
+ */
+function indexRows(inputs, full, holdout) {
+    for (let r = 0; r < holdout.rows; r++) {
+        const hash = rowHash(holdout.inputs, r);
+        let s = findSlot(inputs, hash);
+        let q = inputs.slotHead[s];
+        while (q >= 0 && !sameInputs(holdout.inputs, q, holdout.inputs, r))
+            q = inputs.next[q];
+        if (q >= 0)
+            inputs.repOf[r] = q;
+        else {
+            inputs.repOf[r] = r;
+            inputs.next[r] = inputs.slotHead[s];
+            inputs.slotHash[s] = hash;
+            inputs.slotHead[s] = r;
+        }
+        const hashY = rowTargetHash(hash, holdout.y, r);
+        s = findSlot(full, hashY);
+        q = full.slotHead[s];
+        while (q >= 0 && !(holdout.y[q] === holdout.y[r] && sameInputs(holdout.inputs, q, holdout.inputs, r)))
+            q = full.next[q];
+        if (q >= 0)
+            full.repOf[r] = q;
+        else {
+            full.repOf[r] = r;
+            full.next[r] = full.slotHead[s];
+            full.slotHash[s] = hashY;
+            full.slotHead[s] = r;
+        }
+    }
+}
+/**
+ * Streams the training rows past the tables of distinct hold-out rows in file order:
+ * firstMatch[q] receives the file line of the first training row whose inputs equal those of distinct row q,
+ * targetToo[q] = 1 when some training row has its inputs and its target.
+ */
+function matchRows(inputs, full, holdout, train, firstMatch, targetToo) {
+    for (let i = 0; i < train.rows; i++) {
+        const hash = rowHash(train.inputs, i);
+        let q = inputs.slotHead[findSlot(inputs, hash)];
+        while (q >= 0 && !sameInputs(holdout.inputs, q, train.inputs, i))
+            q = inputs.next[q];
+        if (q < 0)
+            continue;
+        if (firstMatch[q] < 0)
+            firstMatch[q] = train.lines[i];
+        q = full.slotHead[findSlot(full, rowTargetHash(hash, train.y, i))];
+        while (q >= 0 && !(holdout.y[q] === train.y[i] && sameInputs(holdout.inputs, q, train.inputs, i)))
+            q = full.next[q];
+        if (q >= 0)
+            targetToo[q] = 1;
+    }
+}
+/**
+ * Finds hold-out rows equal to a training row in every input column of the model (values compared
+ * exactly, as parsed doubles; -0 equals 0), and among them those whose target is equal too.
+ * Cost: one pass over each file plus exact comparisons on hash hits, against distinct hold-out
+ * rows only (so repeated rows in both files stay linear); memory two hash tables of the hold-out
+ * rows (typed arrays, about 40 bytes per row).
+ *
+ * @param train training rows (inputs in the model's order, targets, lines)
+ * @param holdout hold-out rows (same input order)
+ */
+function findLeakage(train, holdout) {
+    const scan = new LeakageScan(holdout);
+    scan.add(train);
+    return scan.finish();
+}
+/**
+ * {@link findLeakage} over training rows that arrive in chunks (a streamed model,
+ * data/row-source.ts): the tables of the hold-out rows are built once, each chunk streams past
+ * them in file order ({@link add}), and {@link finish} gives the figures. Memory: the hold-out
+ * tables only, whatever the training rows.
+ */
+class LeakageScan {
+    #holdout;
+    #byInputs;
+    #byRow;
+    #firstMatch;
+    #targetToo;
+    /** @param holdout hold-out rows (inputs in the model's order) */
+    constructor(holdout) {
+        // Tables of the distinct hold-out rows (the smaller file, usually); the training rows then
+        // stream past them in file order, so each hold-out row's first match is the earliest training row.
+        const h = holdout.rows;
+        this.#holdout = holdout;
+        this.#byInputs = newTable(h);
+        this.#byRow = newTable(h);
+        indexRows(this.#byInputs, this.#byRow, holdout);
+        this.#firstMatch = new Int32Array(h).fill(-1);
+        this.#targetToo = new Uint8Array(h);
+    }
+    /** Streams the next training rows (in file order) past the hold-out rows. */
+    add(train) {
+        if (this.#holdout.rows > 0)
+            matchRows(this.#byInputs, this.#byRow, this.#holdout, train, this.#firstMatch, this.#targetToo);
+    }
+    /** The figures over every training row added. */
+    finish() {
+        const holdout = this.#holdout;
+        const h = holdout.rows;
+        let inputMatches = 0;
+        let fullMatches = 0;
+        const holdoutLines = [];
+        const trainLines = [];
+        for (let r = 0; r < h; r++) {
+            const first = this.#firstMatch[this.#byInputs.repOf[r]];
+            if (first < 0)
+                continue;
+            inputMatches++;
+            if (this.#targetToo[this.#byRow.repOf[r]] === 1)
+                fullMatches++;
+            if (holdoutLines.length < LEAKAGE_EXAMPLE_LINES) {
+                holdoutLines.push(holdout.lines[r]);
+                trainLines.push(first);
+            }
+        }
+        return { inputMatches, fullMatches, holdoutLines, trainLines, holdoutRows: holdout.rows, columns: holdout.inputs.length };
+    }
+}
+
+
+/***/ }),
+
 /***/ 8459:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
@@ -12850,7 +13822,7 @@ function pairedErrorFigures(train, holdout) {
 /* harmony export */   jN: () => (/* binding */ spikeIntervals)
 /* harmony export */ });
 /* unused harmony exports SPIKE_MAX_ROWS, SPIKE_MAX_GAPS, SPIKE_POINTS_PER_GAP */
-/* harmony import */ var _design_blocks_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(7254);
+/* harmony import */ var _design_blocks_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(1619);
 /* harmony import */ var _column_median_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(8455);
 /* harmony import */ var _swing_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(309);
 /* harmony import */ var _data_target_transform_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(1938);
@@ -12875,7 +13847,13 @@ const SPIKE_MAX_ROWS = 20_000;
  */
 function measureSpikes(design, train, coefficients, original, known = []) {
     const n = train.rows;
-    const medians = train.inputs.map((col) => (0,_column_median_js__WEBPACK_IMPORTED_MODULE_1__/* .columnMedian */ .z)(col, n));
+    // The medians are needed only for a curve the swing scan did not predict already.
+    let medians = null;
+    const mediansOnce = () => {
+        if (medians === null)
+            medians = train.inputs.map((col) => (0,_column_median_js__WEBPACK_IMPORTED_MODULE_1__/* .columnMedian */ .z)(col, n));
+        return medians;
+    };
     const perInput = [];
     let ratio = Number.NaN;
     let worst = null;
@@ -12884,11 +13862,14 @@ function measureSpikes(design, train, coefficients, original, known = []) {
         if (design.terms.some((t) => t.discreteValues !== undefined && t.inputs.includes(name)))
             return;
         const curve = known.find((k) => k.input === c && k.backTransform === original?.kind)?.prediction ??
-            curveAlong(design, train, coefficients, c, medians, original);
+            curveAlong(design, train, coefficients, c, mediansOnce(), original);
         if (curve.length < 2)
             return;
         const curveVariation = totalVariation(curve, curve.length);
-        const dataVariation = targetVariation(train.inputs[c], original?.y ?? train.y, n, original ? original.weights : train.weights);
+        // The swing scan sorted every row's value of this input already: its distinct values serve
+        // when the data variation reads every row too (at most SPIKE_MAX_ROWS).
+        const distinct = n <= SPIKE_MAX_ROWS ? known.find((k) => k.input === c && k.distinct !== undefined)?.distinct : undefined;
+        const dataVariation = targetVariation(train.inputs[c], original?.y ?? train.y, n, original ? original.weights : train.weights, distinct);
         const r = dataVariation > 0 ? curveVariation / dataVariation : Number.NaN;
         perInput.push({ input: name, curveVariation, dataVariation, ratio: r });
         if (!Number.isNaN(r) && (Number.isNaN(ratio) || r > ratio)) {
@@ -12918,8 +13899,8 @@ function totalVariation(v, m) {
     return s;
 }
 /** Total variation of the (weighted) mean target over the input's distinct values in ascending order. */
-function targetVariation(x, y, n, weights) {
-    const { means } = meanTargets(x, y, n, weights);
+function targetVariation(x, y, n, weights, distinct) {
+    const { means } = meanTargets(x, y, n, weights, distinct);
     return totalVariation(Float64Array.from(means), means.length);
 }
 /** Most intervals {@link spikeIntervals} examines (the widest, when an input has more gaps). */
@@ -12987,21 +13968,30 @@ function spikeIntervals(design, train, coefficients, c, limit, original) {
  * value whose rows all weigh 0 is left out: it takes no part in the fit). Each value's targets are
  * summed in row order (as a stable sort of the rows by value visits them): the sampled values are
  * sorted once (a native typed-array sort), and each row finds its value's slot by binary search.
+ * `distinct`, when given, must be those distinct values of every row (n <= SPIKE_MAX_ROWS), as
+ * the sort and packing here make them: they are taken instead of sorting again.
  */
-function meanTargets(x, y, n, weights) {
+function meanTargets(x, y, n, weights, distinct) {
     const m = Math.min(n, SPIKE_MAX_ROWS);
     const rows = new Int32Array(m);
     for (let t = 0; t < m; t++)
         rows[t] = m === n ? t : Math.floor((t * n) / m);
-    const sorted = new Float64Array(m);
-    for (let t = 0; t < m; t++)
-        sorted[t] = x[rows[t]];
-    sorted.sort();
-    // Distinct values to the front (-0 and +0 are one value, as to `===`).
+    let sorted;
     let count = 0;
-    for (let i = 0; i < m; i++)
-        if (count === 0 || sorted[i] !== sorted[count - 1])
-            sorted[count++] = sorted[i];
+    if (distinct !== undefined && m === n) {
+        sorted = distinct;
+        count = distinct.length;
+    }
+    else {
+        sorted = new Float64Array(m);
+        for (let t = 0; t < m; t++)
+            sorted[t] = x[rows[t]];
+        sorted.sort();
+        // Distinct values to the front (-0 and +0 are one value, as to `===`).
+        for (let i = 0; i < m; i++)
+            if (count === 0 || sorted[i] !== sorted[count - 1])
+                sorted[count++] = sorted[i];
+    }
     const sums = new Float64Array(count);
     const totals = new Float64Array(count);
     for (let t = 0; t < m; t++) {
@@ -13059,8 +14049,8 @@ __nccwpck_require__.d(__webpack_exports__, {
 
 // EXTERNAL MODULE: ./src/design/design-matrix.ts
 var design_matrix = __nccwpck_require__(6566);
-// EXTERNAL MODULE: ./src/design/blocks.ts
-var blocks = __nccwpck_require__(7254);
+// EXTERNAL MODULE: ./src/design/blocks.ts + 1 modules
+var blocks = __nccwpck_require__(1619);
 // EXTERNAL MODULE: ./src/diagnostics/column-median.ts
 var column_median = __nccwpck_require__(8455);
 // EXTERNAL MODULE: ./src/design/stats.ts
@@ -13316,7 +14306,7 @@ function excursion(prediction, lo, hi) {
  * @returns inside and beyond points, ascending; empty when the input has no spread
  */
 function inputGrid(values, options = {}) {
-    const sorted = Float64Array.from(values).sort();
+    const sorted = (0,radix_sort/* sortFloat64 */.f)(Float64Array.from(values));
     const { inside, beyond } = gridFromSorted(sorted, sorted.length, options);
     return { inside, beyond };
 }
@@ -13778,8 +14768,13 @@ function planSwing(design, train, options = {}) {
             grid.beyond = grid.beyond.map(onScale.inverse);
         }
         const whole = len === n && onScale === null && defaultInsideGrid(options, gridOptions, grid.gaps);
-        if (grid.inside.length > 0)
-            grids.push({ input: c, inside: grid.inside, beyond: admitted(design, c, grid.beyond), whole });
+        if (grid.inside.length > 0) {
+            const beyond = admitted(design, c, grid.beyond);
+            // The grid packed the distinct values to the front of the sorted sample (every row here).
+            grids.push(whole
+                ? { input: c, inside: grid.inside, beyond, whole, distinct: sample.slice(0, grid.gaps + 1) }
+                : { input: c, inside: grid.inside, beyond, whole });
+        }
     }
     // Several inputs: segments between sampled rows and their nearest neighbours.
     let segments = null;
@@ -13924,6 +14919,7 @@ function scoreSwing(plan, design, coefficients, insideCurves) {
                 grid: grid.inside,
                 prediction: pin,
                 ...(plan.backTransform !== undefined ? { backTransform: plan.backTransform } : {}),
+                ...(grid.distinct !== undefined ? { distinct: grid.distinct } : {}),
             });
         }
         if (curves.length >= plan.maxCurves)
@@ -14529,7 +15525,7 @@ function toRepoPath(roots, absolute, given, key) {
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
 /* harmony export */   k: () => (/* binding */ runCheck)
 /* harmony export */ });
-/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(1605);
+/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(324);
 /* harmony import */ var _run_pool_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(4236);
 /* harmony import */ var _repo_fs_repository_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(4526);
 
@@ -14564,56 +15560,197 @@ async function runCheck(settings, options) {
 
 /***/ }),
 
-/***/ 3783:
+/***/ 9656:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
-/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   h: () => (/* binding */ openModelSpool)
-/* harmony export */ });
-/* unused harmony export smallCopy */
-/* harmony import */ var _report_json_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(2794);
+
+// EXPORTS
+__nccwpck_require__.d(__webpack_exports__, {
+  hy: () => (/* binding */ openModelSpool)
+});
+
+// UNUSED EXPORTS: SPOOL_READ_BYTES, SPOOL_SUFFIX, smallCopy
+
+// EXTERNAL MODULE: external "node:fs"
+var external_node_fs_ = __nccwpck_require__(3024);
+;// CONCATENATED MODULE: external "node:string_decoder"
+const external_node_string_decoder_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:string_decoder");
+// EXTERNAL MODULE: ./src/report/json.ts
+var json = __nccwpck_require__(2794);
+// EXTERNAL MODULE: ./src/entries/safe-write.ts
+var safe_write = __nccwpck_require__(9725);
+;// CONCATENATED MODULE: ./src/entries/model-spool.ts
 /**
- * Each model's part of the JSON report kept as text while the run goes on: a run that writes only
+ * Each model's part of the JSON report set aside while the run goes on: a run that writes only
  * the JSON report to a file (`fitgate check --format json --out FILE`) renders each model's text
  * (report/json.ts `jsonModelReport`) as soon as its outcome is final and keeps a small copy of the
- * outcome (no chart data, no check detail: what the verdict, the counts and the exit status read)
- * beside that one string; the report is then written from the copies with each model's text
- * ({@link ModelSpool.text}). The run no longer keeps each outcome's object graph (typed arrays,
- * chart objects, check details) until the end, only its finished text. Nothing is written to or read
- * from disk: the spool lives in this process's memory.
+ * outcome ({@link smallCopy}: what the verdict, the counts and the exit status read); the report is
+ * then written from the copies with each model's text ({@link ModelSpool.text}). The run keeps
+ * neither each outcome's object graph (typed arrays, chart objects, figures, checks) nor its text
+ * until the end.
+ *
+ * Where the text goes: given the `--out` file ({@link SpoolTarget}), into one temporary file in the
+ * real folder that file is written to, opened as safe-write.ts opens its own temporary files
+ * (`openTempBeside`: the folder checked and made as for the report, `O_CREAT | O_EXCL |
+ * O_NOFOLLOW`, never an existing file, never through a link). Its name is removed as soon as it is
+ * open, so that nothing is left behind however the run ends (where the platform cannot remove an
+ * open file's name, {@link ModelSpool.close} removes it); the text is read back through the open
+ * descriptor alone, in chunks of {@link SPOOL_READ_BYTES}, while the report is written. The file is
+ * created with the first model's text. When it cannot be opened or written (a folder that is
+ * refused, a full disk), the text is kept in memory instead and the report's own write reports the
+ * problem, as without a spool. Without a target, the text is kept in memory.
  */
 
+
+
+
+/** Bytes read from the spool file at a time while the report is written. */
+const SPOOL_READ_BYTES = 1 << 16;
+/** Suffix of the spool file's name (`.NAME.PID.RANDOM.spool`). */
+const SPOOL_SUFFIX = 'spool';
 /**
- * The outcome without what only the report's text needs: no chart data, no check detail.
+ * What the Result keeps of a model whose text is set aside: what the run's summary and exit
+ * status read (name, descriptor path, verdict; result.ts `summarise`), with the row counts, the
+ * parameter count and the error, and nothing else: no figures, no checks, no chart data, no extra
+ * data (empty lists, nulls). The report's text of the model comes from the spool, never from this
+ * copy; a copy is a few hundred bytes where the whole outcome's object graph is tens of kilobytes.
  * @param model a model's outcome
  */
 function smallCopy(model) {
-    const copy = { ...model, checks: model.checks.map((check) => ({ ...check })) };
-    delete copy.charts;
-    delete copy.classifier_charts;
-    for (const check of copy.checks)
-        delete check.detail;
-    return copy;
+    return {
+        name: model.name,
+        descriptor: model.descriptor,
+        ...(model.kind === undefined ? {} : { kind: model.kind }),
+        verdict: model.verdict,
+        rows: { train: model.rows.train, holdout: model.rows.holdout },
+        parameters: model.parameters,
+        columns: [],
+        metrics: null,
+        coefficients: [],
+        shipped: null,
+        checks: [],
+        error: model.error === null ? null : { ...model.error },
+    };
 }
-/** Opens a spool for one run. */
-function openModelSpool() {
+/**
+ * Opens a spool for one run.
+ * @param target the report file the text is for (the spool file goes beside it), or undefined to keep the text in memory
+ * @param hooks replaced file operations, for tests; default none
+ */
+function openModelSpool(target, hooks = {}) {
+    const write = hooks.write ?? external_node_fs_.writeSync;
+    const read = hooks.read ?? external_node_fs_.readSync;
     let texts = new Map();
+    let extents = new Map();
+    // The spool file: undefined until the first model, null when there is none (no target, or it failed).
+    let file = target === undefined ? null : undefined;
+    let named = false;
+    let end = 0;
     let open = true;
+    const openFile = () => {
+        if (target === undefined)
+            return null;
+        let opened;
+        try {
+            opened = (0,safe_write/* openTempBeside */.rB)(target.file, target.place, SPOOL_SUFFIX);
+        }
+        catch {
+            // The report's own write meets the same problem and reports it.
+            return null;
+        }
+        named = true;
+        try {
+            (0,external_node_fs_.unlinkSync)(opened.path);
+            named = false;
+        }
+        catch {
+            // Removed by close() instead.
+        }
+        return opened;
+    };
+    /** Appends `text` to the spool file; false (nothing kept there) when the write fails. */
+    const append = (spool, copy, text) => {
+        const bytes = Buffer.from(text, 'utf8');
+        try {
+            // Each round writes at least one byte, so this ends after at most bytes.length rounds.
+            for (let offset = 0; offset < bytes.length;) {
+                const n = write(spool.fd, bytes, offset, bytes.length - offset, end + offset);
+                if (!(n > 0))
+                    return false;
+                offset += n;
+            }
+        }
+        catch {
+            return false;
+        }
+        extents.set(copy, { start: end, bytes: bytes.length });
+        end += bytes.length;
+        return true;
+    };
+    // One buffer for every read of the run (a piece is a string made from it, so it is not kept).
+    let buffer = null;
+    const fileText = function* (spool, extent) {
+        const decoder = new external_node_string_decoder_namespaceObject.StringDecoder('utf8');
+        buffer ??= Buffer.allocUnsafe(SPOOL_READ_BYTES);
+        const chunk = buffer;
+        // Each round reads at least one byte, so this ends after at most extent.bytes rounds.
+        for (let done = 0; done < extent.bytes;) {
+            const n = read(spool.fd, chunk, 0, Math.min(chunk.length, extent.bytes - done), extent.start + done);
+            if (!(n > 0))
+                throw new Error('the model spool file ended early');
+            done += n;
+            yield decoder.write(chunk.subarray(0, n));
+        }
+        const rest = decoder.end();
+        if (rest !== '')
+            yield rest;
+    };
     return {
         keep(model) {
             if (!open)
                 return model;
             const copy = smallCopy(model);
-            texts.set(copy, [...(0,_report_json_js__WEBPACK_IMPORTED_MODULE_0__/* .jsonModelReport */ .ml)(model)].join(''));
+            const text = [...(0,json/* jsonModelReport */.ml)(model)].join('');
+            if (file === undefined)
+                file = openFile();
+            if (file === null || !append(file, copy, text))
+                texts.set(copy, text);
             return copy;
         },
         text(model) {
-            const text = open ? texts.get(model) : undefined;
-            return text === undefined ? undefined : [text];
+            if (!open)
+                return undefined;
+            const kept = texts.get(model);
+            if (kept !== undefined)
+                return [kept];
+            const extent = extents.get(model);
+            if (extent === undefined || file === null || file === undefined)
+                return undefined;
+            return fileText(file, extent);
         },
         close() {
+            if (!open)
+                return;
             open = false;
             texts = new Map();
+            extents = new Map();
+            if (file !== null && file !== undefined) {
+                try {
+                    (0,external_node_fs_.closeSync)(file.fd);
+                }
+                catch {
+                    // closed already; nothing more to free
+                }
+                if (named) {
+                    try {
+                        (0,external_node_fs_.unlinkSync)(file.path);
+                    }
+                    catch {
+                        // gone already
+                    }
+                }
+            }
+            file = null;
         },
     };
 }
@@ -14626,9 +15763,9 @@ function openModelSpool() {
 
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
 /* harmony export */   Ol: () => (/* binding */ writeReportStream),
-/* harmony export */   Xy: () => (/* binding */ batches)
+/* harmony export */   nM: () => (/* binding */ WRITE_BUFFER_BYTES)
 /* harmony export */ });
-/* unused harmony export WRITE_BUFFER_BYTES */
+/* unused harmony export batches */
 /** Bytes gathered before each write. */
 const WRITE_BUFFER_BYTES = 1 << 20;
 /** Groups pieces into strings of about {@link WRITE_BUFFER_BYTES} UTF-16 units (one buffer each). */
@@ -14685,7 +15822,8 @@ function drained(stream) {
 
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
 /* harmony export */   LC: () => (/* binding */ OUTPUT_REFUSED),
-/* harmony export */   kv: () => (/* binding */ writeFileSafely)
+/* harmony export */   kv: () => (/* binding */ writeFileSafely),
+/* harmony export */   rB: () => (/* binding */ openTempBeside)
 /* harmony export */ });
 /* unused harmony export OUTPUT_FAILED */
 /* harmony import */ var node_fs__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(3024);
@@ -14721,10 +15859,31 @@ function drained(stream) {
 
 
 
-/** The UTF-8 bytes of `pieces`, in batches of about 1 MiB. */
+/**
+ * The UTF-8 bytes of `pieces`, in batches of up to {@link WRITE_BUFFER_BYTES}, each encoded into
+ * one buffer that is used again for the next batch (the caller writes each batch before asking
+ * for the next): a report of any size is written through one buffer, with no string or buffer
+ * per batch left for the garbage collector. A piece that could need more than the whole buffer
+ * (3 bytes per UTF-16 unit at most) is its own batch.
+ */
 function* encodedBatches(pieces) {
-    for (const text of (0,_report_file_js__WEBPACK_IMPORTED_MODULE_4__/* .batches */ .Xy)(pieces))
-        yield Buffer.from(text, 'utf8');
+    const buffer = Buffer.allocUnsafe(_report_file_js__WEBPACK_IMPORTED_MODULE_4__/* .WRITE_BUFFER_BYTES */ .nM);
+    let used = 0;
+    for (const piece of pieces) {
+        const most = piece.length * 3;
+        if (most > buffer.length - used) {
+            if (used > 0)
+                yield buffer.subarray(0, used);
+            used = 0;
+            if (most > buffer.length) {
+                yield Buffer.from(piece, 'utf8');
+                continue;
+            }
+        }
+        used += buffer.write(piece, used, 'utf8');
+    }
+    if (used > 0)
+        yield buffer.subarray(0, used);
 }
 /** Error code of a target refused before writing (a link, not a file, a folder leading outside). */
 const OUTPUT_REFUSED = 'output-refused';
@@ -14748,51 +15907,13 @@ function codeOf(error) {
  *   `output-failed` (the write failed; the previous file is unchanged, the temporary file removed)
  */
 function writeFileSafely(file, data, place, hooks = {}) {
-    const where = { key: place.option };
-    const refuse = (message) => new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(OUTPUT_REFUSED, message, where);
-    if (file === '' || file.includes('\0'))
-        throw refuse(`expected a file path, got ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .quoteValue */ .cl)(file)}`);
-    const named = node_path__WEBPACK_IMPORTED_MODULE_1___default().resolve(file);
-    const name = node_path__WEBPACK_IMPORTED_MODULE_1___default().basename(named);
-    const folder = node_path__WEBPACK_IMPORTED_MODULE_1___default().dirname(named);
-    if (name === '' || folder === named)
-        throw refuse(`${named} names no file; expected a file path`);
-    const failed = (error) => error instanceof _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz
-        ? error
-        : new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(OUTPUT_FAILED, `could not write ${named} (${codeOf(error) ?? (error instanceof Error ? error.message : String(error))}); the previous file, if any, is unchanged`, where);
-    // 1. The boundary that holds the path as written, and the real folder.
-    const bases = place.within.filter((b) => (0,_repo_real_folder_js__WEBPACK_IMPORTED_MODULE_3__/* .isInsideFolder */ .zz)(b, folder)).sort((a, b) => b.length - a.length);
-    const base = bases[0] ?? null;
-    if (base === null && place.insideOnly)
-        throw refuse(`${named} is outside ${place.within.join(' and ')}; expected a path inside`);
-    let realDir;
-    let target;
-    try {
-        realDir = makeFolder(folder, base, refuse);
-        // 2. The target itself.
-        target = node_path__WEBPACK_IMPORTED_MODULE_1___default().join(realDir, name);
-        checkTarget(target, named, refuse);
-    }
-    catch (error) {
-        throw failed(error);
-    }
+    const { named, realDir, target, refuse, failed } = prepareTarget(file, place);
     // 3. A temporary file in the same folder, then rename.
-    // A report in pieces is written in batches of about 1 MiB: never held as one string.
+    // A report in pieces is written in batches of up to 1 MiB through one buffer: never held as one string.
     const chunks = typeof data === 'string' ? [Buffer.from(data, 'utf8')] : data instanceof Uint8Array ? [data] : encodedBatches(data);
     const write = hooks.write ?? ((fd, b, offset, length) => (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.writeSync)(fd, b, offset, length));
-    const flags = node_fs__WEBPACK_IMPORTED_MODULE_0__.constants.O_WRONLY | node_fs__WEBPACK_IMPORTED_MODULE_0__.constants.O_CREAT | node_fs__WEBPACK_IMPORTED_MODULE_0__.constants.O_EXCL | (node_fs__WEBPACK_IMPORTED_MODULE_0__.constants.O_NOFOLLOW ?? 0);
-    let temp = '';
-    let fd = -1;
-    for (let attempt = 0; fd < 0; attempt++) {
-        temp = node_path__WEBPACK_IMPORTED_MODULE_1___default().join(realDir, `.${name.slice(0, 100)}.${process.pid}.${Date.now().toString(36)}${Math.random().toString(36).slice(2, 8)}.tmp`);
-        try {
-            fd = (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.openSync)(temp, flags, 0o666);
-        }
-        catch (error) {
-            if (codeOf(error) !== 'EEXIST' || attempt + 1 >= MAX_TEMP_TRIES)
-                throw failed(error);
-        }
-    }
+    const { fd: opened, temp } = openTemp(realDir, node_path__WEBPACK_IMPORTED_MODULE_1___default().basename(target), 'tmp', node_fs__WEBPACK_IMPORTED_MODULE_0__.constants.O_WRONLY, failed);
+    let fd = opened;
     try {
         for (const bytes of chunks) {
             // Each round writes at least one byte, so this ends after at most bytes.length rounds.
@@ -14831,6 +15952,70 @@ function writeFileSafely(file, data, place, hooks = {}) {
     }
     syncFolder(realDir);
     return target;
+}
+/**
+ * Opens a new temporary file in the folder `file` would be written to, checked as
+ * {@link writeFileSafely} checks it (steps 1 and 2 of the module comment: the folder made when
+ * missing, its real path inside the boundary; the target not a link and not a special file),
+ * created with `O_CREAT | O_EXCL | O_NOFOLLOW` (never an existing file, never a link) and open
+ * for reading and writing. For data a writer gathers on disk before it writes `file` itself (the
+ * model spool, entries/model-spool.ts); the caller closes and removes it.
+ * @param file the target the data is for, absolute or relative to the process's folder
+ * @param place the option that named it and the boundary folders; see {@link WritePlace}
+ * @param suffix the end of the temporary file's name (after a dot), e.g. `spool`
+ * @throws InputError `output-refused` or `output-failed`, as {@link writeFileSafely} would for `file`
+ */
+function openTempBeside(file, place, suffix) {
+    const { realDir, target, failed } = prepareTarget(file, place);
+    const { fd, temp } = openTemp(realDir, node_path__WEBPACK_IMPORTED_MODULE_1___default().basename(target), suffix, node_fs__WEBPACK_IMPORTED_MODULE_0__.constants.O_RDWR, failed);
+    return { fd, path: temp };
+}
+/** Steps 1 and 2 of the module comment for `file`; throws the InputError writeFileSafely would. */
+function prepareTarget(file, place) {
+    const where = { key: place.option };
+    const refuse = (message) => new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(OUTPUT_REFUSED, message, where);
+    if (file === '' || file.includes('\0'))
+        throw refuse(`expected a file path, got ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .quoteValue */ .cl)(file)}`);
+    const named = node_path__WEBPACK_IMPORTED_MODULE_1___default().resolve(file);
+    const name = node_path__WEBPACK_IMPORTED_MODULE_1___default().basename(named);
+    const folder = node_path__WEBPACK_IMPORTED_MODULE_1___default().dirname(named);
+    if (name === '' || folder === named)
+        throw refuse(`${named} names no file; expected a file path`);
+    const failed = (error) => error instanceof _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz
+        ? error
+        : new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(OUTPUT_FAILED, `could not write ${named} (${codeOf(error) ?? (error instanceof Error ? error.message : String(error))}); the previous file, if any, is unchanged`, where);
+    // 1. The boundary that holds the path as written, and the real folder.
+    const bases = place.within.filter((b) => (0,_repo_real_folder_js__WEBPACK_IMPORTED_MODULE_3__/* .isInsideFolder */ .zz)(b, folder)).sort((a, b) => b.length - a.length);
+    const base = bases[0] ?? null;
+    if (base === null && place.insideOnly)
+        throw refuse(`${named} is outside ${place.within.join(' and ')}; expected a path inside`);
+    try {
+        const realDir = makeFolder(folder, base, refuse);
+        // 2. The target itself.
+        const target = node_path__WEBPACK_IMPORTED_MODULE_1___default().join(realDir, name);
+        checkTarget(target, named, refuse);
+        return { named, realDir, target, refuse, failed };
+    }
+    catch (error) {
+        throw failed(error);
+    }
+}
+/**
+ * A new file `.NAME.PID.RANDOM.SUFFIX` in `realDir`, opened with `access | O_CREAT | O_EXCL |
+ * O_NOFOLLOW` (a fresh name is tried when one exists, at most {@link MAX_TEMP_TRIES} times).
+ */
+function openTemp(realDir, name, suffix, access, failed) {
+    const flags = access | node_fs__WEBPACK_IMPORTED_MODULE_0__.constants.O_CREAT | node_fs__WEBPACK_IMPORTED_MODULE_0__.constants.O_EXCL | (node_fs__WEBPACK_IMPORTED_MODULE_0__.constants.O_NOFOLLOW ?? 0);
+    for (let attempt = 0;; attempt++) {
+        const temp = node_path__WEBPACK_IMPORTED_MODULE_1___default().join(realDir, `.${name.slice(0, 100)}.${process.pid}.${Date.now().toString(36)}${Math.random().toString(36).slice(2, 8)}.${suffix}`);
+        try {
+            return { fd: (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.openSync)(temp, flags, 0o666), temp };
+        }
+        catch (error) {
+            if (codeOf(error) !== 'EEXIST' || attempt + 1 >= MAX_TEMP_TRIES)
+                throw failed(error);
+        }
+    }
 }
 /**
  * The real path of `folder`, made when missing. The deepest existing part is resolved and, when
@@ -18359,6 +19544,109 @@ function formatText(result, options = {}) {
 
 /***/ }),
 
+/***/ 3473:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   L0: () => (/* binding */ CURVE_MARGIN),
+/* harmony export */   Lc: () => (/* binding */ FULL_CHART_SHARE),
+/* harmony export */   M0: () => (/* binding */ CURVE_POINTS),
+/* harmony export */   Q5: () => (/* binding */ MAX_CHART_POINTS),
+/* harmony export */   QS: () => (/* binding */ CHART_DIGITS),
+/* harmony export */   Ql: () => (/* binding */ MAX_PARTIAL_CURVES),
+/* harmony export */   Rs: () => (/* binding */ MAX_SPIKE_MARKS),
+/* harmony export */   WK: () => (/* binding */ PARTIAL_CURVE_POINTS),
+/* harmony export */   c_: () => (/* binding */ chartShare),
+/* harmony export */   ib: () => (/* binding */ MAX_SERIES_NUMBERS)
+/* harmony export */ });
+/* unused harmony exports RUN_CHART_NUMBERS, MODEL_CHART_NUMBERS, MIN_SERIES_NUMBERS, MIN_CURVE_POINTS, MIN_MODEL_CHART_NUMBERS, CHARTED_MODELS */
+/**
+ * The chart data of a model in the Result: plain series the reporters draw, built by run/chart-data.ts.
+ */
+/**
+ * Most points drawn per series (training or hold-out); larger files are thinned evenly. A model
+ * of several inputs keeps fewer ({@link MAX_SERIES_NUMBERS}).
+ */
+const MAX_CHART_POINTS = 1000;
+/**
+ * Most numbers one series holds: each kept row carries its line, every input, the target, the
+ * prediction and the residual (inputs + 4 numbers), so a series keeps at most
+ * floor(5,000 / (inputs + 4)) rows, and never more than {@link MAX_CHART_POINTS} (a model of one
+ * input keeps 1,000, of five 555). With at most {@link MAX_PARTIAL_CURVES} curves this bounds a
+ * model's chart data whatever its rows and inputs: a report of 1,000 models of 5 inputs stays
+ * near 300 MB of JSON.
+ */
+const MAX_SERIES_NUMBERS = 5000;
+/** Most partial curves of a model of several inputs: those of its first inputs (with a spread). */
+const MAX_PARTIAL_CURVES = 12;
+/**
+ * Grid points of all partial curves of a model together: up to 3 curves get {@link CURVE_POINTS}
+ * each, more share this many (at least 101 each).
+ */
+const PARTIAL_CURVE_POINTS = 1203;
+/** Points of the evenly spaced grid along a curve. */
+const CURVE_POINTS = 401;
+/** Margin on each side of an input's training range for curves, as a fraction of the range (as the swing check's default). */
+const CURVE_MARGIN = 0.1;
+/** Significant digits kept in chart numbers (plenty for a picture, a third of the JSON size). */
+const CHART_DIGITS = 7;
+/**
+ * Chart numbers a whole run keeps at most, about, over all its models: a fixed total, so that the
+ * charts of a run (its JSON and HTML reports, and its memory) stop growing with its number of
+ * models ({@link chartShare}). Up to {@link RUN_CHART_NUMBERS} / {@link MODEL_CHART_NUMBERS} = 50
+ * models each keeps its full charts; beyond, each model's share shrinks, down to the floors
+ * ({@link MIN_MODEL_CHART_NUMBERS} a model); past {@link CHARTED_MODELS} models, the models after
+ * the first {@link CHARTED_MODELS} (in report order) draw no points (their chart data says why).
+ */
+const RUN_CHART_NUMBERS = 750_000;
+/**
+ * Chart numbers of one model at its full share, about: two series of {@link MAX_SERIES_NUMBERS},
+ * the fitted curve with the swing check's points on it and the swing curve itself.
+ */
+const MODEL_CHART_NUMBERS = 15_000;
+/** Fewest numbers a point series keeps under a shrunk share (50 rows of a model of one input). */
+const MIN_SERIES_NUMBERS = 250;
+/** Fewest grid points a curve keeps under a shrunk share. */
+const MIN_CURVE_POINTS = 51;
+/**
+ * Chart numbers of one model at the floors, about: two series of {@link MIN_SERIES_NUMBERS} with
+ * their file lines (600 for one input), a curve of {@link MIN_CURVE_POINTS} points and the swing
+ * check's points on it.
+ */
+const MIN_MODEL_CHART_NUMBERS = 750;
+/** Most models of a run that draw chart points: {@link RUN_CHART_NUMBERS} / {@link MIN_MODEL_CHART_NUMBERS} = 1,000. */
+const CHARTED_MODELS = RUN_CHART_NUMBERS / MIN_MODEL_CHART_NUMBERS;
+/** The share of a model in a run of up to 50 models: every amount at its maximum. */
+const FULL_CHART_SHARE = Object.freeze({ fraction: 1, seriesNumbers: MAX_SERIES_NUMBERS, curvePoints: CURVE_POINTS });
+/**
+ * The share of the chart data of the model at `index` (0-based, report order) in a run of `models`
+ * models (see {@link RUN_CHART_NUMBERS}): the full amounts up to 50 models; beyond, scaled by
+ * 50 / models down to the floors (reached at 1,000 models of one input), and past
+ * {@link CHARTED_MODELS} models only the first {@link CHARTED_MODELS} draw points, so that the
+ * charts of any run take at most about {@link RUN_CHART_NUMBERS} numbers. Depends only on
+ * `models` and `index`, so the same run always draws the same points.
+ * @param models models in the run (>= 0)
+ * @param index the model's place in the run; default 0
+ */
+function chartShare(models, index = 0) {
+    const fraction = Math.min(1, RUN_CHART_NUMBERS / (Math.max(1, models) * MODEL_CHART_NUMBERS));
+    if (fraction >= 1)
+        return FULL_CHART_SHARE;
+    const share = {
+        fraction,
+        seriesNumbers: Math.max(MIN_SERIES_NUMBERS, Math.floor(MAX_SERIES_NUMBERS * fraction)),
+        curvePoints: Math.max(MIN_CURVE_POINTS, Math.floor(CURVE_POINTS * fraction)),
+    };
+    if (index >= CHARTED_MODELS)
+        share.noPoints = `no points drawn: the run's chart data (about ${RUN_CHART_NUMBERS.toLocaleString('en-US')} numbers) went to its first ${CHARTED_MODELS.toLocaleString('en-US')} of ${models.toLocaleString('en-US')} models`;
+    return share;
+}
+/** Most spike intervals a curve's chart data keeps (the largest variations over what is allowed). */
+const MAX_SPIKE_MARKS = 200;
+
+
+/***/ }),
+
 /***/ 1628:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
@@ -18549,7 +19837,422 @@ function logLossComparison(metrics, base) {
 
 /***/ }),
 
-/***/ 1605:
+/***/ 2834:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   L: () => (/* binding */ thinRows),
+/* harmony export */   LJ: () => (/* binding */ buildChartData),
+/* harmony export */   Y0: () => (/* binding */ partialCurvePoints),
+/* harmony export */   s6: () => (/* binding */ chartNumber),
+/* harmony export */   t3: () => (/* binding */ seriesPoints)
+/* harmony export */ });
+/* unused harmony export bandRegions */
+/* harmony import */ var _data_data_parts_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(6837);
+/* harmony import */ var _design_blocks_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(1619);
+/* harmony import */ var _result_result_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(1628);
+/* harmony import */ var _diagnostics_column_median_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(8455);
+/* harmony import */ var _design_stats_js__WEBPACK_IMPORTED_MODULE_7__ = __nccwpck_require__(6801);
+/* harmony import */ var _data_target_transform_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(1938);
+/* harmony import */ var _diagnostics_spikes_js__WEBPACK_IMPORTED_MODULE_5__ = __nccwpck_require__(6873);
+/* harmony import */ var _result_chart_types_js__WEBPACK_IMPORTED_MODULE_6__ = __nccwpck_require__(3473);
+
+
+
+
+
+
+
+
+
+/** Exact powers of ten 10^0 .. 10^22 (every one a double without rounding). */
+const EXACT_TENS = Array.from({ length: 23 }, (_, k) => Number(`1e${k}`));
+/** Smallest mantissa of {@link CHART_DIGITS} digits, 10^(digits - 1). */
+const LEAST_MANTISSA = 10 ** (_result_chart_types_js__WEBPACK_IMPORTED_MODULE_6__/* .CHART_DIGITS */ .QS - 1);
+/**
+ * Rounds to {@link CHART_DIGITS} significant digits; null for NaN and infinities. The value is
+ * exactly `Number(x.toPrecision(CHART_DIGITS))` (and +0 for either zero), computed without strings
+ * when that is safe: with e the decimal exponent of |x|, the mantissa n = round(|x| 10^(digits-1-e))
+ * is taken from the double product when the product is not within 1e-6 of a tie (its rounding
+ * error is below 1e-8 there), and n / 10^k (or n x 10^k) with both factors exact is the correctly
+ * rounded double of the decimal n x 10^(e-digits+1), as the string's parse is. Anything else
+ * (exponents beyond +-22, near-ties, a mantissa that carried into another digit) goes through the string.
+ */
+function chartNumber(x) {
+    if (!Number.isFinite(x))
+        return null;
+    if (x === 0)
+        return 0;
+    const a = Math.abs(x);
+    const e = Math.floor(Math.log10(a));
+    const k = _result_chart_types_js__WEBPACK_IMPORTED_MODULE_6__/* .CHART_DIGITS */ .QS - 1 - e;
+    if (k >= -22 && k <= 22) {
+        const scaled = k >= 0 ? a * EXACT_TENS[k] : a / EXACT_TENS[-k];
+        const n = Math.round(scaled);
+        if (n >= LEAST_MANTISSA && n < 10 * LEAST_MANTISSA && Math.abs(Math.abs(scaled - Math.floor(scaled)) - 0.5) > 1e-6) {
+            const r = k >= 0 ? n / EXACT_TENS[k] : n * EXACT_TENS[-k];
+            return x < 0 ? -r : r;
+        }
+    }
+    return Number(x.toPrecision(_result_chart_types_js__WEBPACK_IMPORTED_MODULE_6__/* .CHART_DIGITS */ .QS));
+}
+/**
+ * Rows to keep when a file has more than `max` rows: `max` evenly spaced indices
+ * floor(t n / max), t = 0 .. max-1 (deterministic: the same file always gives the same points).
+ */
+function thinRows(n, max = _result_chart_types_js__WEBPACK_IMPORTED_MODULE_6__/* .MAX_CHART_POINTS */ .Q5) {
+    if (n <= max)
+        return Int32Array.from({ length: n }, (_, i) => i);
+    return Int32Array.from({ length: max }, (_, t) => Math.floor((t * n) / max));
+}
+/**
+ * Rows a series of a model with this many inputs keeps at most: `numbers` / (inputs + 4), at most `max`.
+ * @param numbers most numbers of the series; default {@link MAX_SERIES_NUMBERS} (less under a shrunk {@link ChartShare})
+ */
+function seriesPoints(inputs, max = _result_chart_types_js__WEBPACK_IMPORTED_MODULE_6__/* .MAX_CHART_POINTS */ .Q5, numbers = _result_chart_types_js__WEBPACK_IMPORTED_MODULE_6__/* .MAX_SERIES_NUMBERS */ .ib) {
+    return Math.max(1, Math.min(max, Math.floor(numbers / (inputs + 4))));
+}
+/** Read from parts: the parts and each kept row's part (`files`, `file_index`); nothing for one file. */
+function partIndex(data, keep) {
+    const parts = data.parts;
+    if (parts === undefined)
+        return {};
+    const index = new Map(parts.map((p, k) => [p.file, k]));
+    return { files: parts.map((p) => p.file), file_index: Array.from(keep, (i) => index.get((0,_data_data_parts_js__WEBPACK_IMPORTED_MODULE_0__/* .placeOfLine */ .xX)(data, data.lines[i]).file) ?? 0) };
+}
+function series(data, predictions, max, numbers) {
+    const keep = thinRows(data.rows, seriesPoints(data.inputs.length, max, numbers));
+    const thinned = keep.length < data.rows;
+    const pick = (col) => Array.from(keep, (i) => chartNumber(col[i]));
+    return {
+        rows: data.rows,
+        shown: keep.length,
+        thinned,
+        thinning: thinned ? `${keep.length} of ${data.rows} rows, evenly spaced through the file` : '',
+        lines: Array.from(keep, (i) => (0,_data_data_parts_js__WEBPACK_IMPORTED_MODULE_0__/* .placeOfLine */ .xX)(data, data.lines[i]).line),
+        ...partIndex(data, keep),
+        x: data.inputs.map(pick),
+        actual: pick(data.y),
+        fitted: pick(predictions),
+        residual: Array.from(keep, (i) => chartNumber(data.y[i] - predictions[i])),
+    };
+}
+/** A series that draws none of its rows (the run's chart data went to other models): counts and why. */
+function emptySeries(data, why) {
+    return {
+        rows: data.rows,
+        shown: 0,
+        thinned: data.rows > 0,
+        thinning: data.rows > 0 ? why : '',
+        lines: [],
+        ...(data.parts !== undefined ? { files: data.parts.map((p) => p.file), file_index: [] } : {}),
+        x: data.inputs.map(() => []),
+        actual: [],
+        fitted: [],
+        residual: [],
+    };
+}
+/** Grid points of each partial curve of a model with this many curves (see {@link PARTIAL_CURVE_POINTS}). */
+function partialCurvePoints(curves) {
+    return Math.max(101, Math.min(_result_chart_types_js__WEBPACK_IMPORTED_MODULE_6__/* .CURVE_POINTS */ .M0, Math.floor(_result_chart_types_js__WEBPACK_IMPORTED_MODULE_6__/* .PARTIAL_CURVE_POINTS */ .WK / Math.max(1, curves))));
+}
+/** Predictions along input c over [lo, hi] at `points` grid points (plus `extra` x values), the others at `medians`. */
+function curveAlong(model, c, lo, hi, medians, extra, points) {
+    const xs = [];
+    for (let t = 0; t < points; t++)
+        xs.push(t === points - 1 ? hi : lo + ((hi - lo) * t) / (points - 1));
+    for (const v of extra)
+        if (v >= lo && v <= hi)
+            xs.push(v);
+    const grid = Float64Array.from(xs).sort();
+    const columns = model.design.inputs.map((_, k) => (k === c ? grid : new Float64Array(grid.length).fill(medians[k])));
+    const pred = (0,_design_blocks_js__WEBPACK_IMPORTED_MODULE_1__/* .predictRows */ .tp)(model.design, { inputs: columns, rows: grid.length }, model.fit.coefficients);
+    // A transformed target judged on the original scale is drawn on it (as the swing check scans it).
+    const scale = originalScale(model);
+    if (scale !== null)
+        for (let i = 0; i < pred.length; i++)
+            pred[i] = (0,_data_target_transform_js__WEBPACK_IMPORTED_MODULE_4__/* .inverseTarget */ .I)(scale.transform, pred[i]);
+    const x = [];
+    const y = [];
+    for (let i = 0; i < grid.length; i++) {
+        const xi = chartNumber(grid[i]);
+        if (xi === null || (x.length > 0 && xi === x[x.length - 1]))
+            continue;
+        x.push(xi);
+        y.push(chartNumber(pred[i]));
+    }
+    return { x, y };
+}
+/** The target scale of a model fitted on a transformed target whose limits judge the original scale, else null. */
+function originalScale(model) {
+    const scale = model.targetScale ?? null;
+    return scale !== null && scale.limitsScale === 'original' ? scale : null;
+}
+/**
+ * The intervals along input c where the curve spikes (diagnostics/spikes.ts, {@link spikeIntervals}),
+ * judged with the `swing-spikes` outcome's warning limit, else its fail limit; only when that check
+ * warns or fails (the marks show where its figure comes from), null otherwise, when none is marked
+ * or the input is a category. The largest {@link MAX_SPIKE_MARKS} are kept.
+ */
+function spikeMarks(model, checks, c) {
+    const check = checks.find((k) => k.id === 'swing-spikes');
+    const limit = check?.warn ?? check?.limit ?? null;
+    // Marks explain a finding: only when the figure is over its warning or fail limit.
+    if (check === undefined || (check.status !== 'warn' && check.status !== 'fail') || limit === null || !(limit > 0))
+        return null;
+    const name = model.design.inputs[c];
+    if (model.design.terms.some((t) => t.discreteValues !== undefined && t.inputs.includes(name)))
+        return null;
+    const scale = originalScale(model);
+    const original = scale !== null ? { kind: scale.transform, y: scale.originalRows.train.y, weights: scale.originalRows.train.weights } : undefined;
+    const found = (0,_diagnostics_spikes_js__WEBPACK_IMPORTED_MODULE_5__/* .spikeIntervals */ .jN)(model.design, model.tables.train, model.fit.coefficients, c, limit, original);
+    if (found.length === 0)
+        return null;
+    const kept = found.length <= _result_chart_types_js__WEBPACK_IMPORTED_MODULE_6__/* .MAX_SPIKE_MARKS */ .Rs
+        ? found
+        : found
+            .map((s, i) => ({ s, i }))
+            .sort((a, b) => b.s.curveVariation / b.s.allowed - a.s.curveVariation / a.s.allowed || a.i - b.i)
+            .slice(0, _result_chart_types_js__WEBPACK_IMPORTED_MODULE_6__/* .MAX_SPIKE_MARKS */ .Rs)
+            .sort((a, b) => a.i - b.i)
+            .map((e) => e.s);
+    return {
+        limit,
+        intervals: kept.map((s) => ({
+            from: chartNumber(s.from) ?? s.from,
+            to: chartNumber(s.to) ?? s.to,
+            variation: chartNumber(s.curveVariation),
+            allowed: chartNumber(s.allowed),
+        })),
+        ...(found.length > kept.length ? { left_out: found.length - kept.length } : {}),
+    };
+}
+/**
+ * Stretches of the curve outside [lo, hi]; edges are placed where the straight line between two
+ * neighbouring grid points crosses the band edge. A null prediction counts as outside (above).
+ */
+function bandRegions(x, y, lo, hi) {
+    const regions = [];
+    const sideOf = (v) => (v === null || v > hi ? 'above' : v < lo ? 'below' : null);
+    const cross = (i, edge) => {
+        const a = y[i - 1];
+        const b = y[i];
+        if (a === null || b === null || a === b)
+            return x[i];
+        const f = (edge - a) / (b - a);
+        return x[i - 1] + Math.min(1, Math.max(0, f)) * (x[i] - x[i - 1]);
+    };
+    let open = null;
+    for (let i = 0; i < x.length; i++) {
+        const s = sideOf(y[i]);
+        if (open && s !== open.side) {
+            open.to = cross(i, open.side === 'above' ? hi : lo);
+            regions.push(open);
+            open = null;
+        }
+        if (s && !open)
+            open = { from: i === 0 ? x[0] : cross(i, s === 'above' ? hi : lo), to: x[i], side: s };
+    }
+    if (open) {
+        open.to = x[x.length - 1];
+        regions.push(open);
+    }
+    return regions.map((r) => ({ from: chartNumber(r.from) ?? r.from, to: chartNumber(r.to) ?? r.to, side: r.side }));
+}
+function numberPair(v) {
+    const xs = numbers(v);
+    return xs && xs.length === 2 && Number.isFinite(xs[0]) && Number.isFinite(xs[1]) ? [xs[0], xs[1]] : null;
+}
+/** An array of JSON numbers (finite numbers or `"Infinity"` style strings) as numbers, or null. */
+function numbers(v) {
+    if (!Array.isArray(v) || !v.every((e) => typeof e === 'number' || e === 'Infinity' || e === '-Infinity' || e === 'NaN'))
+        return null;
+    return v.map((e) => (0,_result_result_js__WEBPACK_IMPORTED_MODULE_2__/* .fromJsonNumber */ .M)(e));
+}
+function readSwing(checks, input) {
+    const check = checks.find((c) => c.id === 'swing');
+    if (!check?.detail)
+        return null;
+    const d = check.detail;
+    const band = numberPair(d.band);
+    let curve = null;
+    const curves = Array.isArray(d.curves) ? d.curves : [];
+    const mine = curves.find((c) => c && c.input === input);
+    if (mine) {
+        const x = numbers(mine.x);
+        const prediction = numbers(mine.prediction);
+        if (x && prediction && x.length === prediction.length && x.length > 0)
+            curve = { x, prediction, range: numberPair(mine.range) };
+    }
+    let regions = null;
+    if (Array.isArray(d.regions)) {
+        regions = [];
+        for (const r of d.regions) {
+            if (r && (r.input === undefined || r.input === input) && typeof r.from === 'number' && typeof r.to === 'number') {
+                regions.push({ from: r.from, to: r.to, side: r.side === 'below' ? 'below' : 'above' });
+            }
+        }
+    }
+    return { band, curve, regions };
+}
+function finiteOrNull(v) {
+    const x = typeof v === 'number' || typeof v === 'string' ? (0,_result_result_js__WEBPACK_IMPORTED_MODULE_2__/* .fromJsonNumber */ .M)(v) : Number.NaN;
+    return Number.isFinite(x) ? x : null;
+}
+/**
+ * Reads the complexity check's sweep from its detail: `{ setting: 'degree' | 'width' | 'ridge',
+ * current, chosen (the suggested index), curve: [{ setting, cv_rmse }] }`.
+ */
+function readSweep(checks) {
+    const check = checks.find((c) => c.id === 'complexity');
+    if (!check?.detail || !Array.isArray(check.detail.curve))
+        return null;
+    const d = check.detail;
+    const curve = d.curve;
+    const at = (index) => {
+        const i = typeof index === 'number' && Number.isInteger(index) ? index : -1;
+        return i >= 0 && i < curve.length ? finiteOrNull(curve[i]?.setting) : null;
+    };
+    const rows = [];
+    for (const p of curve) {
+        const s = p && typeof p === 'object' ? finiteOrNull(p.setting) : null;
+        if (s !== null)
+            rows.push({ s, cv: finiteOrNull(p.cv_rmse) });
+    }
+    if (rows.length === 0)
+        return null;
+    rows.sort((a, b) => a.s - b.s);
+    const parameter = typeof d.setting === 'string' ? d.setting : 'setting';
+    // rows are sorted by setting, so the positive settings run from the first to the last.
+    const positive = rows.filter((r) => r.s > 0).map((r) => r.s);
+    return {
+        parameter,
+        log: parameter !== 'degree' && positive.length >= 2 && rows.every((r) => r.s >= 0) && positive[positive.length - 1] / positive[0] >= 10,
+        settings: rows.map((r) => chartNumber(r.s) ?? r.s),
+        cv: rows.map((r) => (r.cv === null ? null : chartNumber(r.cv))),
+        train: null,
+        chosen: at(d.current),
+        suggested: at(d.chosen),
+    };
+}
+/**
+ * Builds the chart data of one fitted model from its rows, predictions and check outcomes.
+ * Cost: one pass over each file's kept rows, the medians (shared with swing: {@link columnMedian}), and
+ * {@link CURVE_POINTS} predictions per curve.
+ * @param model the fitted model (design, coefficients, data, predictions)
+ * @param checks the model's check outcomes (swing and complexity details are read when present)
+ * @param maxPoints most points per series; default {@link MAX_CHART_POINTS}
+ * @param share the model's share of the run's chart data (series numbers, curve points); default the full share
+ */
+function buildChartData(model, checks, maxPoints = _result_chart_types_js__WEBPACK_IMPORTED_MODULE_6__/* .MAX_CHART_POINTS */ .Q5, share = _result_chart_types_js__WEBPACK_IMPORTED_MODULE_6__/* .FULL_CHART_SHARE */ .Lc) {
+    const { design, tables, metrics, descriptor } = model;
+    const { train, holdout } = tables;
+    const inputs = [...design.inputs];
+    if (share.noPoints !== undefined) {
+        // No points and no curves: only the sweep and the coefficients, a few numbers each.
+        return {
+            target: descriptor.data.target,
+            inputs,
+            train: emptySeries(train, share.noPoints),
+            holdout: emptySeries(holdout, share.noPoints),
+            fit: null,
+            partials: [],
+            sweep: readSweep(checks),
+            coefficients: coefficientData(model, checks),
+            no_points: share.noPoints,
+        };
+    }
+    const medians = train.inputs.map((col) => (0,_diagnostics_column_median_js__WEBPACK_IMPORTED_MODULE_3__/* .columnMedian */ .z)(col, train.rows));
+    let spread = 0;
+    for (let c = 0; c < inputs.length; c++) {
+        const [lo, hi] = (0,_design_stats_js__WEBPACK_IMPORTED_MODULE_7__/* .range */ .y1)(train.inputs[c], train.rows);
+        if (hi > lo)
+            spread++;
+    }
+    const points = Math.min(share.curvePoints, inputs.length === 1 ? _result_chart_types_js__WEBPACK_IMPORTED_MODULE_6__/* .CURVE_POINTS */ .M0 : partialCurvePoints(Math.min(spread, _result_chart_types_js__WEBPACK_IMPORTED_MODULE_6__/* .MAX_PARTIAL_CURVES */ .Ql)));
+    // One input: the curve over the scanned range with the band; several: partial curves.
+    let fitCurve = null;
+    const partials = [];
+    let partialsLeftOut = 0;
+    for (let c = 0; c < inputs.length; c++) {
+        const [tlo, thi] = (0,_design_stats_js__WEBPACK_IMPORTED_MODULE_7__/* .range */ .y1)(train.inputs[c], train.rows);
+        if (!(thi > tlo))
+            continue;
+        if (inputs.length > 1 && partials.length >= _result_chart_types_js__WEBPACK_IMPORTED_MODULE_6__/* .MAX_PARTIAL_CURVES */ .Ql) {
+            partialsLeftOut += 1;
+            continue;
+        }
+        const swing = inputs.length === 1 ? readSwing(checks, inputs[c]) : null;
+        const swingCurve = swing?.curve ?? null;
+        const lo = swingCurve ? Math.min(swingCurve.x[0], tlo) : tlo - _result_chart_types_js__WEBPACK_IMPORTED_MODULE_6__/* .CURVE_MARGIN */ .L0 * (thi - tlo);
+        const hi = swingCurve ? Math.max(swingCurve.x[swingCurve.x.length - 1], thi) : thi + _result_chart_types_js__WEBPACK_IMPORTED_MODULE_6__/* .CURVE_MARGIN */ .L0 * (thi - tlo);
+        const { x, y } = curveAlong(model, c, lo, hi, medians, swingCurve ? swingCurve.x : [], points);
+        // Keyed by column names (user text): no prototype, so `__proto__` is a name like any other.
+        const others = Object.create(null);
+        inputs.forEach((name, k) => {
+            if (k !== c)
+                others[name] = chartNumber(medians[k]) ?? 0;
+        });
+        const spikes = spikeMarks(model, checks, c);
+        const curve = {
+            input: inputs[c],
+            others,
+            range: [chartNumber(tlo) ?? tlo, chartNumber(thi) ?? thi],
+            x,
+            y,
+            ...(spikes !== null ? { spikes } : {}),
+        };
+        if (inputs.length === 1) {
+            const onOriginal = originalScale(model);
+            const band = swing?.band ?? (onOriginal ? (0,_design_stats_js__WEBPACK_IMPORTED_MODULE_7__/* .range */ .y1)(onOriginal.originalRows.train.y, train.rows) : metrics.targetRange);
+            fitCurve = {
+                ...curve,
+                band: [chartNumber(band[0]) ?? band[0], chartNumber(band[1]) ?? band[1]],
+                regions: swing?.regions ?? bandRegions(x, y, band[0], band[1]),
+                source: swing && (swing.band || swing.curve) ? 'swing' : 'data',
+            };
+        }
+        else {
+            partials.push(curve);
+        }
+    }
+    // A transformed target judged on the original scale: its rows as written, predictions back-transformed.
+    const scale = originalScale(model);
+    return {
+        target: descriptor.data.target,
+        inputs,
+        train: scale
+            ? series({ ...train, y: scale.originalRows.train.y }, scale.predictions.train, maxPoints, share.seriesNumbers)
+            : series(train, model.trainPredictions, maxPoints, share.seriesNumbers),
+        holdout: scale
+            ? series({ ...holdout, y: scale.originalRows.holdout.y }, scale.predictions.holdout, maxPoints, share.seriesNumbers)
+            : series(holdout, model.holdoutPredictions, maxPoints, share.seriesNumbers),
+        fit: fitCurve,
+        partials,
+        ...(partialsLeftOut > 0 ? { partialsLeftOut } : {}),
+        sweep: readSweep(checks),
+        coefficients: coefficientData(model, checks),
+    };
+}
+/** Standardised coefficients of the non-intercept columns, with the `coefficient-size` limits. */
+function coefficientData(model, checks) {
+    const { design, fit, metrics } = model;
+    const coefCheck = checks.find((c) => c.id === 'coefficient-size');
+    const columns = [];
+    const values = [];
+    for (let j = 0; j < design.p; j++) {
+        if (!design.penalised[j])
+            continue;
+        columns.push(design.columnNames[j]);
+        values.push(chartNumber((fit.coefficients[j] * metrics.columnSd[j]) / metrics.targetSd));
+    }
+    return { columns, values, limit: coefCheck?.limit ?? null, warn: coefCheck?.warn ?? null };
+}
+
+
+/***/ }),
+
+/***/ 324:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -19158,186 +20861,8 @@ var core_deadline = __nccwpck_require__(2091);
 var cross_validation = __nccwpck_require__(4733);
 // EXTERNAL MODULE: ./src/diagnostics/folds.ts
 var diagnostics_folds = __nccwpck_require__(9236);
-// EXTERNAL MODULE: ./src/core/mix32.ts
-var mix32 = __nccwpck_require__(6736);
-;// CONCATENATED MODULE: ./src/diagnostics/leakage.ts
-
-/** How many line numbers of each file to report. */
-const LEAKAGE_EXAMPLE_LINES = 5;
-const f64 = new Float64Array(1);
-const u32 = new Uint32Array(f64.buffer);
-/**
- * 32-bit hash of the bit patterns of row i's values (-0 counts as 0): each 32-bit half is folded
- * in with one multiply (golden-ratio and MurmurHash3 constants, Appleby 2011), then the lowbias32
- * finaliser (Wellons 2018) spreads the bits once per row. Matches are always confirmed by exact
- * comparison, so the hash only has to spread rows over the table.
- */
-function rowHash(columns, i) {
-    let h = 0x811c9dc5;
-    for (let c = 0; c < columns.length; c++) {
-        f64[0] = columns[c][i] + 0; // -0 + 0 === +0: equal values hash equal
-        h = Math.imul(h ^ u32[0], 0x9e3779b1);
-        h = Math.imul(h ^ (h >>> 15) ^ u32[1], 0x85ebca6b);
-        h ^= h >>> 13;
-    }
-    return (0,mix32/* mix32 */.Q)(h);
-}
-function sameInputs(a, i, b, j) {
-    for (let c = 0; c < a.length; c++)
-        if (a[c][i] !== b[c][j])
-            return false;
-    return true;
-}
-/** Hash of row i's inputs and target (the target folded into {@link rowHash} of the inputs). */
-function rowTargetHash(inputHash, y, i) {
-    f64[0] = y[i] + 0;
-    return (0,mix32/* mix32 */.Q)(Math.imul(Math.imul(inputHash ^ u32[0], 0x9e3779b1) ^ u32[1], 0x85ebca6b));
-}
-function newTable(rows) {
-    let size = 1024;
-    while (size < 2 * rows)
-        size *= 2;
-    return {
-        mask: size - 1,
-        slotHash: new Uint32Array(size),
-        slotHead: new Int32Array(size).fill(-1),
-        next: new Int32Array(rows).fill(-1),
-        repOf: new Int32Array(rows),
-    };
-}
-/** The slot of `hash`: where it is, or the empty slot where it goes. */
-function findSlot(table, hash) {
-    const { slotHead, slotHash, mask } = table;
-    let s = (Math.imul(hash, 0x9e3779b1) >>> 0) & mask;
-    while (slotHead[s] >= 0 && slotHash[s] !== hash)
-        s = (s + 1) & mask;
-    return s;
-}
-// The passes are functions of their own, one loop each (see DEVELOPERS.md, "Writing hot loops").
-/**
- * Puts the hold-out rows in the tables in file order: `inputs` by their inputs, `full` by their
- * inputs and target; a row equal to an earlier one only records that row in `repOf`.
- */
-function indexRows(inputs, full, holdout) {
-    for (let r = 0; r < holdout.rows; r++) {
-        const hash = rowHash(holdout.inputs, r);
-        let s = findSlot(inputs, hash);
-        let q = inputs.slotHead[s];
-        while (q >= 0 && !sameInputs(holdout.inputs, q, holdout.inputs, r))
-            q = inputs.next[q];
-        if (q >= 0)
-            inputs.repOf[r] = q;
-        else {
-            inputs.repOf[r] = r;
-            inputs.next[r] = inputs.slotHead[s];
-            inputs.slotHash[s] = hash;
-            inputs.slotHead[s] = r;
-        }
-        const hashY = rowTargetHash(hash, holdout.y, r);
-        s = findSlot(full, hashY);
-        q = full.slotHead[s];
-        while (q >= 0 && !(holdout.y[q] === holdout.y[r] && sameInputs(holdout.inputs, q, holdout.inputs, r)))
-            q = full.next[q];
-        if (q >= 0)
-            full.repOf[r] = q;
-        else {
-            full.repOf[r] = r;
-            full.next[r] = full.slotHead[s];
-            full.slotHash[s] = hashY;
-            full.slotHead[s] = r;
-        }
-    }
-}
-/**
- * Streams the training rows past the tables of distinct hold-out rows in file order:
- * firstMatch[q] receives the file line of the first training row whose inputs equal those of distinct row q,
- * targetToo[q] = 1 when some training row has its inputs and its target.
- */
-function matchRows(inputs, full, holdout, train, firstMatch, targetToo) {
-    for (let i = 0; i < train.rows; i++) {
-        const hash = rowHash(train.inputs, i);
-        let q = inputs.slotHead[findSlot(inputs, hash)];
-        while (q >= 0 && !sameInputs(holdout.inputs, q, train.inputs, i))
-            q = inputs.next[q];
-        if (q < 0)
-            continue;
-        if (firstMatch[q] < 0)
-            firstMatch[q] = train.lines[i];
-        q = full.slotHead[findSlot(full, rowTargetHash(hash, train.y, i))];
-        while (q >= 0 && !(holdout.y[q] === train.y[i] && sameInputs(holdout.inputs, q, train.inputs, i)))
-            q = full.next[q];
-        if (q >= 0)
-            targetToo[q] = 1;
-    }
-}
-/**
- * Finds hold-out rows equal to a training row in every input column of the model (values compared
- * exactly, as parsed doubles; -0 equals 0), and among them those whose target is equal too.
- * Cost: one pass over each file plus exact comparisons on hash hits, against distinct hold-out
- * rows only (so repeated rows in both files stay linear); memory two hash tables of the hold-out
- * rows (typed arrays, about 40 bytes per row).
- *
- * @param train training rows (inputs in the model's order, targets, lines)
- * @param holdout hold-out rows (same input order)
- */
-function findLeakage(train, holdout) {
-    const scan = new LeakageScan(holdout);
-    scan.add(train);
-    return scan.finish();
-}
-/**
- * {@link findLeakage} over training rows that arrive in chunks (a streamed model,
- * data/row-source.ts): the tables of the hold-out rows are built once, each chunk streams past
- * them in file order ({@link add}), and {@link finish} gives the figures. Memory: the hold-out
- * tables only, whatever the training rows.
- */
-class LeakageScan {
-    #holdout;
-    #byInputs;
-    #byRow;
-    #firstMatch;
-    #targetToo;
-    /** @param holdout hold-out rows (inputs in the model's order) */
-    constructor(holdout) {
-        // Tables of the distinct hold-out rows (the smaller file, usually); the training rows then
-        // stream past them in file order, so each hold-out row's first match is the earliest training row.
-        const h = holdout.rows;
-        this.#holdout = holdout;
-        this.#byInputs = newTable(h);
-        this.#byRow = newTable(h);
-        indexRows(this.#byInputs, this.#byRow, holdout);
-        this.#firstMatch = new Int32Array(h).fill(-1);
-        this.#targetToo = new Uint8Array(h);
-    }
-    /** Streams the next training rows (in file order) past the hold-out rows. */
-    add(train) {
-        if (this.#holdout.rows > 0)
-            matchRows(this.#byInputs, this.#byRow, this.#holdout, train, this.#firstMatch, this.#targetToo);
-    }
-    /** The figures over every training row added. */
-    finish() {
-        const holdout = this.#holdout;
-        const h = holdout.rows;
-        let inputMatches = 0;
-        let fullMatches = 0;
-        const holdoutLines = [];
-        const trainLines = [];
-        for (let r = 0; r < h; r++) {
-            const first = this.#firstMatch[this.#byInputs.repOf[r]];
-            if (first < 0)
-                continue;
-            inputMatches++;
-            if (this.#targetToo[this.#byRow.repOf[r]] === 1)
-                fullMatches++;
-            if (holdoutLines.length < LEAKAGE_EXAMPLE_LINES) {
-                holdoutLines.push(holdout.lines[r]);
-                trainLines.push(first);
-            }
-        }
-        return { inputMatches, fullMatches, holdoutLines, trainLines, holdoutRows: holdout.rows, columns: holdout.inputs.length };
-    }
-}
-
+// EXTERNAL MODULE: ./src/diagnostics/leakage.ts
+var diagnostics_leakage = __nccwpck_require__(2918);
 // EXTERNAL MODULE: ./src/diagnostics/swing.ts + 1 modules
 var swing = __nccwpck_require__(309);
 ;// CONCATENATED MODULE: ./src/diagnostics/analyses.ts
@@ -19409,96 +20934,13 @@ class ModelAnalyses {
     }
     /** Hold-out rows that repeat a training row (see {@link findLeakage}). */
     leakage() {
-        this.#leakage ??= findLeakage(this.#inputs.train, this.#inputs.holdout);
+        this.#leakage ??= (0,diagnostics_leakage/* findLeakage */.Gw)(this.#inputs.train, this.#inputs.holdout);
         return this.#leakage;
     }
 }
 
-;// CONCATENATED MODULE: ./src/result/chart-types.ts
-/**
- * The chart data of a model in the Result: plain series the reporters draw, built by run/chart-data.ts.
- */
-/**
- * Most points drawn per series (training or hold-out); larger files are thinned evenly. A model
- * of several inputs keeps fewer ({@link MAX_SERIES_NUMBERS}).
- */
-const MAX_CHART_POINTS = 1000;
-/**
- * Most numbers one series holds: each kept row carries its line, every input, the target, the
- * prediction and the residual (inputs + 4 numbers), so a series keeps at most
- * floor(5,000 / (inputs + 4)) rows, and never more than {@link MAX_CHART_POINTS} (a model of one
- * input keeps 1,000, of five 555). With at most {@link MAX_PARTIAL_CURVES} curves this bounds a
- * model's chart data whatever its rows and inputs: a report of 1,000 models of 5 inputs stays
- * near 300 MB of JSON.
- */
-const MAX_SERIES_NUMBERS = 5000;
-/** Most partial curves of a model of several inputs: those of its first inputs (with a spread). */
-const MAX_PARTIAL_CURVES = 12;
-/**
- * Grid points of all partial curves of a model together: up to 3 curves get {@link CURVE_POINTS}
- * each, more share this many (at least 101 each).
- */
-const PARTIAL_CURVE_POINTS = 1203;
-/** Points of the evenly spaced grid along a curve. */
-const CURVE_POINTS = 401;
-/** Margin on each side of an input's training range for curves, as a fraction of the range (as the swing check's default). */
-const CURVE_MARGIN = 0.1;
-/** Significant digits kept in chart numbers (plenty for a picture, a third of the JSON size). */
-const CHART_DIGITS = 7;
-/**
- * Chart numbers a whole run keeps at most, about, over all its models: a fixed total, so that the
- * charts of a run (its JSON and HTML reports, and its memory) stop growing with its number of
- * models ({@link chartShare}). Up to {@link RUN_CHART_NUMBERS} / {@link MODEL_CHART_NUMBERS} = 50
- * models each keeps its full charts; beyond, each model's share shrinks, down to the floors
- * ({@link MIN_MODEL_CHART_NUMBERS} a model); past {@link CHARTED_MODELS} models, the models after
- * the first {@link CHARTED_MODELS} (in report order) draw no points (their chart data says why).
- */
-const RUN_CHART_NUMBERS = 750_000;
-/**
- * Chart numbers of one model at its full share, about: two series of {@link MAX_SERIES_NUMBERS},
- * the fitted curve with the swing check's points on it and the swing curve itself.
- */
-const MODEL_CHART_NUMBERS = 15_000;
-/** Fewest numbers a point series keeps under a shrunk share (50 rows of a model of one input). */
-const MIN_SERIES_NUMBERS = 250;
-/** Fewest grid points a curve keeps under a shrunk share. */
-const MIN_CURVE_POINTS = 51;
-/**
- * Chart numbers of one model at the floors, about: two series of {@link MIN_SERIES_NUMBERS} with
- * their file lines (600 for one input), a curve of {@link MIN_CURVE_POINTS} points and the swing
- * check's points on it.
- */
-const MIN_MODEL_CHART_NUMBERS = 750;
-/** Most models of a run that draw chart points: {@link RUN_CHART_NUMBERS} / {@link MIN_MODEL_CHART_NUMBERS} = 1,000. */
-const CHARTED_MODELS = RUN_CHART_NUMBERS / MIN_MODEL_CHART_NUMBERS;
-/** The share of a model in a run of up to 50 models: every amount at its maximum. */
-const FULL_CHART_SHARE = Object.freeze({ fraction: 1, seriesNumbers: MAX_SERIES_NUMBERS, curvePoints: CURVE_POINTS });
-/**
- * The share of the chart data of the model at `index` (0-based, report order) in a run of `models`
- * models (see {@link RUN_CHART_NUMBERS}): the full amounts up to 50 models; beyond, scaled by
- * 50 / models down to the floors (reached at 1,000 models of one input), and past
- * {@link CHARTED_MODELS} models only the first {@link CHARTED_MODELS} draw points, so that the
- * charts of any run take at most about {@link RUN_CHART_NUMBERS} numbers. Depends only on
- * `models` and `index`, so the same run always draws the same points.
- * @param models models in the run (>= 0)
- * @param index the model's place in the run; default 0
- */
-function chartShare(models, index = 0) {
-    const fraction = Math.min(1, RUN_CHART_NUMBERS / (Math.max(1, models) * MODEL_CHART_NUMBERS));
-    if (fraction >= 1)
-        return FULL_CHART_SHARE;
-    const share = {
-        fraction,
-        seriesNumbers: Math.max(MIN_SERIES_NUMBERS, Math.floor(MAX_SERIES_NUMBERS * fraction)),
-        curvePoints: Math.max(MIN_CURVE_POINTS, Math.floor(CURVE_POINTS * fraction)),
-    };
-    if (index >= CHARTED_MODELS)
-        share.noPoints = `no points drawn: the run's chart data (about ${RUN_CHART_NUMBERS.toLocaleString('en-US')} numbers) went to its first ${CHARTED_MODELS.toLocaleString('en-US')} of ${models.toLocaleString('en-US')} models`;
-    return share;
-}
-/** Most spike intervals a curve's chart data keeps (the largest variations over what is allowed). */
-const MAX_SPIKE_MARKS = 200;
-
+// EXTERNAL MODULE: ./src/result/chart-types.ts
+var chart_types = __nccwpck_require__(3473);
 // EXTERNAL MODULE: ./src/result/result.ts
 var result_result = __nccwpck_require__(1628);
 ;// CONCATENATED MODULE: ./src/run/base-curves.ts
@@ -19549,4122 +20991,18 @@ function withBaseCurves(charts, head, baseline, commit) {
     };
 }
 
+// EXTERNAL MODULE: ./src/run/chart-data.ts
+var chart_data = __nccwpck_require__(2834);
+// EXTERNAL MODULE: ./src/run/run-checks.ts
+var run_checks = __nccwpck_require__(6580);
 // EXTERNAL MODULE: ./src/data/data-parts.ts
 var data_parts = __nccwpck_require__(6837);
-// EXTERNAL MODULE: ./src/design/blocks.ts
-var blocks = __nccwpck_require__(7254);
-// EXTERNAL MODULE: ./src/diagnostics/column-median.ts
-var column_median = __nccwpck_require__(8455);
+// EXTERNAL MODULE: ./src/design/blocks.ts + 1 modules
+var blocks = __nccwpck_require__(1619);
 // EXTERNAL MODULE: ./src/design/stats.ts
 var stats = __nccwpck_require__(6801);
-// EXTERNAL MODULE: ./src/data/target-transform.ts
-var target_transform = __nccwpck_require__(1938);
-// EXTERNAL MODULE: ./src/diagnostics/spikes.ts
-var spikes = __nccwpck_require__(6873);
-;// CONCATENATED MODULE: ./src/run/chart-data.ts
-
-
-
-
-
-
-
-
-
-/** Exact powers of ten 10^0 .. 10^22 (every one a double without rounding). */
-const EXACT_TENS = Array.from({ length: 23 }, (_, k) => Number(`1e${k}`));
-/** Smallest mantissa of {@link CHART_DIGITS} digits, 10^(digits - 1). */
-const LEAST_MANTISSA = 10 ** (CHART_DIGITS - 1);
-/**
- * Rounds to {@link CHART_DIGITS} significant digits; null for NaN and infinities. The value is
- * exactly `Number(x.toPrecision(CHART_DIGITS))` (and +0 for either zero), computed without strings
- * when that is safe: with e the decimal exponent of |x|, the mantissa n = round(|x| 10^(digits-1-e))
- * is taken from the double product when the product is not within 1e-6 of a tie (its rounding
- * error is below 1e-8 there), and n / 10^k (or n x 10^k) with both factors exact is the correctly
- * rounded double of the decimal n x 10^(e-digits+1), as the string's parse is. Anything else
- * (exponents beyond +-22, near-ties, a mantissa that carried into another digit) goes through the string.
- */
-function chartNumber(x) {
-    if (!Number.isFinite(x))
-        return null;
-    if (x === 0)
-        return 0;
-    const a = Math.abs(x);
-    const e = Math.floor(Math.log10(a));
-    const k = CHART_DIGITS - 1 - e;
-    if (k >= -22 && k <= 22) {
-        const scaled = k >= 0 ? a * EXACT_TENS[k] : a / EXACT_TENS[-k];
-        const n = Math.round(scaled);
-        if (n >= LEAST_MANTISSA && n < 10 * LEAST_MANTISSA && Math.abs(Math.abs(scaled - Math.floor(scaled)) - 0.5) > 1e-6) {
-            const r = k >= 0 ? n / EXACT_TENS[k] : n * EXACT_TENS[-k];
-            return x < 0 ? -r : r;
-        }
-    }
-    return Number(x.toPrecision(CHART_DIGITS));
-}
-/**
- * Rows to keep when a file has more than `max` rows: `max` evenly spaced indices
- * floor(t n / max), t = 0 .. max-1 (deterministic: the same file always gives the same points).
- */
-function thinRows(n, max = MAX_CHART_POINTS) {
-    if (n <= max)
-        return Int32Array.from({ length: n }, (_, i) => i);
-    return Int32Array.from({ length: max }, (_, t) => Math.floor((t * n) / max));
-}
-/**
- * Rows a series of a model with this many inputs keeps at most: `numbers` / (inputs + 4), at most `max`.
- * @param numbers most numbers of the series; default {@link MAX_SERIES_NUMBERS} (less under a shrunk {@link ChartShare})
- */
-function seriesPoints(inputs, max = MAX_CHART_POINTS, numbers = MAX_SERIES_NUMBERS) {
-    return Math.max(1, Math.min(max, Math.floor(numbers / (inputs + 4))));
-}
-/** Read from parts: the parts and each kept row's part (`files`, `file_index`); nothing for one file. */
-function partIndex(data, keep) {
-    const parts = data.parts;
-    if (parts === undefined)
-        return {};
-    const index = new Map(parts.map((p, k) => [p.file, k]));
-    return { files: parts.map((p) => p.file), file_index: Array.from(keep, (i) => index.get((0,data_parts/* placeOfLine */.xX)(data, data.lines[i]).file) ?? 0) };
-}
-function series(data, predictions, max, numbers) {
-    const keep = thinRows(data.rows, seriesPoints(data.inputs.length, max, numbers));
-    const thinned = keep.length < data.rows;
-    const pick = (col) => Array.from(keep, (i) => chartNumber(col[i]));
-    return {
-        rows: data.rows,
-        shown: keep.length,
-        thinned,
-        thinning: thinned ? `${keep.length} of ${data.rows} rows, evenly spaced through the file` : '',
-        lines: Array.from(keep, (i) => (0,data_parts/* placeOfLine */.xX)(data, data.lines[i]).line),
-        ...partIndex(data, keep),
-        x: data.inputs.map(pick),
-        actual: pick(data.y),
-        fitted: pick(predictions),
-        residual: Array.from(keep, (i) => chartNumber(data.y[i] - predictions[i])),
-    };
-}
-/** A series that draws none of its rows (the run's chart data went to other models): counts and why. */
-function emptySeries(data, why) {
-    return {
-        rows: data.rows,
-        shown: 0,
-        thinned: data.rows > 0,
-        thinning: data.rows > 0 ? why : '',
-        lines: [],
-        ...(data.parts !== undefined ? { files: data.parts.map((p) => p.file), file_index: [] } : {}),
-        x: data.inputs.map(() => []),
-        actual: [],
-        fitted: [],
-        residual: [],
-    };
-}
-/** Grid points of each partial curve of a model with this many curves (see {@link PARTIAL_CURVE_POINTS}). */
-function partialCurvePoints(curves) {
-    return Math.max(101, Math.min(CURVE_POINTS, Math.floor(PARTIAL_CURVE_POINTS / Math.max(1, curves))));
-}
-/** Predictions along input c over [lo, hi] at `points` grid points (plus `extra` x values), the others at `medians`. */
-function curveAlong(model, c, lo, hi, medians, extra, points) {
-    const xs = [];
-    for (let t = 0; t < points; t++)
-        xs.push(t === points - 1 ? hi : lo + ((hi - lo) * t) / (points - 1));
-    for (const v of extra)
-        if (v >= lo && v <= hi)
-            xs.push(v);
-    const grid = Float64Array.from(xs).sort();
-    const columns = model.design.inputs.map((_, k) => (k === c ? grid : new Float64Array(grid.length).fill(medians[k])));
-    const pred = (0,blocks/* predictRows */.tp)(model.design, { inputs: columns, rows: grid.length }, model.fit.coefficients);
-    // A transformed target judged on the original scale is drawn on it (as the swing check scans it).
-    const scale = originalScale(model);
-    if (scale !== null)
-        for (let i = 0; i < pred.length; i++)
-            pred[i] = (0,target_transform/* inverseTarget */.I)(scale.transform, pred[i]);
-    const x = [];
-    const y = [];
-    for (let i = 0; i < grid.length; i++) {
-        const xi = chartNumber(grid[i]);
-        if (xi === null || (x.length > 0 && xi === x[x.length - 1]))
-            continue;
-        x.push(xi);
-        y.push(chartNumber(pred[i]));
-    }
-    return { x, y };
-}
-/** The target scale of a model fitted on a transformed target whose limits judge the original scale, else null. */
-function originalScale(model) {
-    const scale = model.targetScale ?? null;
-    return scale !== null && scale.limitsScale === 'original' ? scale : null;
-}
-/**
- * The intervals along input c where the curve spikes (diagnostics/spikes.ts, {@link spikeIntervals}),
- * judged with the `swing-spikes` outcome's warning limit, else its fail limit; only when that check
- * warns or fails (the marks show where its figure comes from), null otherwise, when none is marked
- * or the input is a category. The largest {@link MAX_SPIKE_MARKS} are kept.
- */
-function spikeMarks(model, checks, c) {
-    const check = checks.find((k) => k.id === 'swing-spikes');
-    const limit = check?.warn ?? check?.limit ?? null;
-    // Marks explain a finding: only when the figure is over its warning or fail limit.
-    if (check === undefined || (check.status !== 'warn' && check.status !== 'fail') || limit === null || !(limit > 0))
-        return null;
-    const name = model.design.inputs[c];
-    if (model.design.terms.some((t) => t.discreteValues !== undefined && t.inputs.includes(name)))
-        return null;
-    const scale = originalScale(model);
-    const original = scale !== null ? { kind: scale.transform, y: scale.originalRows.train.y, weights: scale.originalRows.train.weights } : undefined;
-    const found = (0,spikes/* spikeIntervals */.jN)(model.design, model.tables.train, model.fit.coefficients, c, limit, original);
-    if (found.length === 0)
-        return null;
-    const kept = found.length <= MAX_SPIKE_MARKS
-        ? found
-        : found
-            .map((s, i) => ({ s, i }))
-            .sort((a, b) => b.s.curveVariation / b.s.allowed - a.s.curveVariation / a.s.allowed || a.i - b.i)
-            .slice(0, MAX_SPIKE_MARKS)
-            .sort((a, b) => a.i - b.i)
-            .map((e) => e.s);
-    return {
-        limit,
-        intervals: kept.map((s) => ({
-            from: chartNumber(s.from) ?? s.from,
-            to: chartNumber(s.to) ?? s.to,
-            variation: chartNumber(s.curveVariation),
-            allowed: chartNumber(s.allowed),
-        })),
-        ...(found.length > kept.length ? { left_out: found.length - kept.length } : {}),
-    };
-}
-/**
- * Stretches of the curve outside [lo, hi]; edges are placed where the straight line between two
- * neighbouring grid points crosses the band edge. A null prediction counts as outside (above).
- */
-function bandRegions(x, y, lo, hi) {
-    const regions = [];
-    const sideOf = (v) => (v === null || v > hi ? 'above' : v < lo ? 'below' : null);
-    const cross = (i, edge) => {
-        const a = y[i - 1];
-        const b = y[i];
-        if (a === null || b === null || a === b)
-            return x[i];
-        const f = (edge - a) / (b - a);
-        return x[i - 1] + Math.min(1, Math.max(0, f)) * (x[i] - x[i - 1]);
-    };
-    let open = null;
-    for (let i = 0; i < x.length; i++) {
-        const s = sideOf(y[i]);
-        if (open && s !== open.side) {
-            open.to = cross(i, open.side === 'above' ? hi : lo);
-            regions.push(open);
-            open = null;
-        }
-        if (s && !open)
-            open = { from: i === 0 ? x[0] : cross(i, s === 'above' ? hi : lo), to: x[i], side: s };
-    }
-    if (open) {
-        open.to = x[x.length - 1];
-        regions.push(open);
-    }
-    return regions.map((r) => ({ from: chartNumber(r.from) ?? r.from, to: chartNumber(r.to) ?? r.to, side: r.side }));
-}
-function numberPair(v) {
-    const xs = numbers(v);
-    return xs && xs.length === 2 && Number.isFinite(xs[0]) && Number.isFinite(xs[1]) ? [xs[0], xs[1]] : null;
-}
-/** An array of JSON numbers (finite numbers or `"Infinity"` style strings) as numbers, or null. */
-function numbers(v) {
-    if (!Array.isArray(v) || !v.every((e) => typeof e === 'number' || e === 'Infinity' || e === '-Infinity' || e === 'NaN'))
-        return null;
-    return v.map((e) => (0,result_result/* fromJsonNumber */.M)(e));
-}
-function readSwing(checks, input) {
-    const check = checks.find((c) => c.id === 'swing');
-    if (!check?.detail)
-        return null;
-    const d = check.detail;
-    const band = numberPair(d.band);
-    let curve = null;
-    const curves = Array.isArray(d.curves) ? d.curves : [];
-    const mine = curves.find((c) => c && c.input === input);
-    if (mine) {
-        const x = numbers(mine.x);
-        const prediction = numbers(mine.prediction);
-        if (x && prediction && x.length === prediction.length && x.length > 0)
-            curve = { x, prediction, range: numberPair(mine.range) };
-    }
-    let regions = null;
-    if (Array.isArray(d.regions)) {
-        regions = [];
-        for (const r of d.regions) {
-            if (r && (r.input === undefined || r.input === input) && typeof r.from === 'number' && typeof r.to === 'number') {
-                regions.push({ from: r.from, to: r.to, side: r.side === 'below' ? 'below' : 'above' });
-            }
-        }
-    }
-    return { band, curve, regions };
-}
-function finiteOrNull(v) {
-    const x = typeof v === 'number' || typeof v === 'string' ? (0,result_result/* fromJsonNumber */.M)(v) : Number.NaN;
-    return Number.isFinite(x) ? x : null;
-}
-/**
- * Reads the complexity check's sweep from its detail: `{ setting: 'degree' | 'width' | 'ridge',
- * current, chosen (the suggested index), curve: [{ setting, cv_rmse }] }`.
- */
-function readSweep(checks) {
-    const check = checks.find((c) => c.id === 'complexity');
-    if (!check?.detail || !Array.isArray(check.detail.curve))
-        return null;
-    const d = check.detail;
-    const curve = d.curve;
-    const at = (index) => {
-        const i = typeof index === 'number' && Number.isInteger(index) ? index : -1;
-        return i >= 0 && i < curve.length ? finiteOrNull(curve[i]?.setting) : null;
-    };
-    const rows = [];
-    for (const p of curve) {
-        const s = p && typeof p === 'object' ? finiteOrNull(p.setting) : null;
-        if (s !== null)
-            rows.push({ s, cv: finiteOrNull(p.cv_rmse) });
-    }
-    if (rows.length === 0)
-        return null;
-    rows.sort((a, b) => a.s - b.s);
-    const parameter = typeof d.setting === 'string' ? d.setting : 'setting';
-    // rows are sorted by setting, so the positive settings run from the first to the last.
-    const positive = rows.filter((r) => r.s > 0).map((r) => r.s);
-    return {
-        parameter,
-        log: parameter !== 'degree' && positive.length >= 2 && rows.every((r) => r.s >= 0) && positive[positive.length - 1] / positive[0] >= 10,
-        settings: rows.map((r) => chartNumber(r.s) ?? r.s),
-        cv: rows.map((r) => (r.cv === null ? null : chartNumber(r.cv))),
-        train: null,
-        chosen: at(d.current),
-        suggested: at(d.chosen),
-    };
-}
-/**
- * Builds the chart data of one fitted model from its rows, predictions and check outcomes.
- * Cost: one pass over each file's kept rows, the medians (shared with swing: {@link columnMedian}), and
- * {@link CURVE_POINTS} predictions per curve.
- * @param model the fitted model (design, coefficients, data, predictions)
- * @param checks the model's check outcomes (swing and complexity details are read when present)
- * @param maxPoints most points per series; default {@link MAX_CHART_POINTS}
- * @param share the model's share of the run's chart data (series numbers, curve points); default the full share
- */
-function buildChartData(model, checks, maxPoints = MAX_CHART_POINTS, share = FULL_CHART_SHARE) {
-    const { design, tables, metrics, descriptor } = model;
-    const { train, holdout } = tables;
-    const inputs = [...design.inputs];
-    if (share.noPoints !== undefined) {
-        // No points and no curves: only the sweep and the coefficients, a few numbers each.
-        return {
-            target: descriptor.data.target,
-            inputs,
-            train: emptySeries(train, share.noPoints),
-            holdout: emptySeries(holdout, share.noPoints),
-            fit: null,
-            partials: [],
-            sweep: readSweep(checks),
-            coefficients: coefficientData(model, checks),
-            no_points: share.noPoints,
-        };
-    }
-    const medians = train.inputs.map((col) => (0,column_median/* columnMedian */.z)(col, train.rows));
-    let spread = 0;
-    for (let c = 0; c < inputs.length; c++) {
-        const [lo, hi] = (0,stats/* range */.y1)(train.inputs[c], train.rows);
-        if (hi > lo)
-            spread++;
-    }
-    const points = Math.min(share.curvePoints, inputs.length === 1 ? CURVE_POINTS : partialCurvePoints(Math.min(spread, MAX_PARTIAL_CURVES)));
-    // One input: the curve over the scanned range with the band; several: partial curves.
-    let fitCurve = null;
-    const partials = [];
-    let partialsLeftOut = 0;
-    for (let c = 0; c < inputs.length; c++) {
-        const [tlo, thi] = (0,stats/* range */.y1)(train.inputs[c], train.rows);
-        if (!(thi > tlo))
-            continue;
-        if (inputs.length > 1 && partials.length >= MAX_PARTIAL_CURVES) {
-            partialsLeftOut += 1;
-            continue;
-        }
-        const swing = inputs.length === 1 ? readSwing(checks, inputs[c]) : null;
-        const swingCurve = swing?.curve ?? null;
-        const lo = swingCurve ? Math.min(swingCurve.x[0], tlo) : tlo - CURVE_MARGIN * (thi - tlo);
-        const hi = swingCurve ? Math.max(swingCurve.x[swingCurve.x.length - 1], thi) : thi + CURVE_MARGIN * (thi - tlo);
-        const { x, y } = curveAlong(model, c, lo, hi, medians, swingCurve ? swingCurve.x : [], points);
-        // Keyed by column names (user text): no prototype, so `__proto__` is a name like any other.
-        const others = Object.create(null);
-        inputs.forEach((name, k) => {
-            if (k !== c)
-                others[name] = chartNumber(medians[k]) ?? 0;
-        });
-        const spikes = spikeMarks(model, checks, c);
-        const curve = {
-            input: inputs[c],
-            others,
-            range: [chartNumber(tlo) ?? tlo, chartNumber(thi) ?? thi],
-            x,
-            y,
-            ...(spikes !== null ? { spikes } : {}),
-        };
-        if (inputs.length === 1) {
-            const onOriginal = originalScale(model);
-            const band = swing?.band ?? (onOriginal ? (0,stats/* range */.y1)(onOriginal.originalRows.train.y, train.rows) : metrics.targetRange);
-            fitCurve = {
-                ...curve,
-                band: [chartNumber(band[0]) ?? band[0], chartNumber(band[1]) ?? band[1]],
-                regions: swing?.regions ?? bandRegions(x, y, band[0], band[1]),
-                source: swing && (swing.band || swing.curve) ? 'swing' : 'data',
-            };
-        }
-        else {
-            partials.push(curve);
-        }
-    }
-    // A transformed target judged on the original scale: its rows as written, predictions back-transformed.
-    const scale = originalScale(model);
-    return {
-        target: descriptor.data.target,
-        inputs,
-        train: scale
-            ? series({ ...train, y: scale.originalRows.train.y }, scale.predictions.train, maxPoints, share.seriesNumbers)
-            : series(train, model.trainPredictions, maxPoints, share.seriesNumbers),
-        holdout: scale
-            ? series({ ...holdout, y: scale.originalRows.holdout.y }, scale.predictions.holdout, maxPoints, share.seriesNumbers)
-            : series(holdout, model.holdoutPredictions, maxPoints, share.seriesNumbers),
-        fit: fitCurve,
-        partials,
-        ...(partialsLeftOut > 0 ? { partialsLeftOut } : {}),
-        sweep: readSweep(checks),
-        coefficients: coefficientData(model, checks),
-    };
-}
-/** Standardised coefficients of the non-intercept columns, with the `coefficient-size` limits. */
-function coefficientData(model, checks) {
-    const { design, fit, metrics } = model;
-    const coefCheck = checks.find((c) => c.id === 'coefficient-size');
-    const columns = [];
-    const values = [];
-    for (let j = 0; j < design.p; j++) {
-        if (!design.penalised[j])
-            continue;
-        columns.push(design.columnNames[j]);
-        values.push(chartNumber((fit.coefficients[j] * metrics.columnSd[j]) / metrics.targetSd));
-    }
-    return { columns, values, limit: coefCheck?.limit ?? null, warn: coefCheck?.warn ?? null };
-}
-
-;// CONCATENATED MODULE: ./src/run/run-checks.ts
-
-
-/**
- * Runs `checks` in order with `run` (the task's runner: `runCheck` or `runClassifierCheck` bound
- * to the model's context), adding each check's figures to `metrics` in place.
- * @returns the outcomes in order and the model's verdict (`pass` when nothing warns or fails)
- */
-function runChecks(checks, run, metrics) {
-    const outcomes = [];
-    let verdict = 'pass';
-    for (const check of checks) {
-        const stage = `${check.id} check`;
-        (0,core_deadline/* checkDeadline */.Ft)(stage);
-        const { outcome, figures } = run(check);
-        // A check stopped by the deadline is caught as a check error: the model stops here instead.
-        (0,core_deadline/* checkDeadline */.Ft)(stage);
-        outcomes.push(outcome);
-        if (figures)
-            Object.assign(metrics, figures);
-        if (outcome.status === 'fail' || outcome.status === 'warn')
-            verdict = (0,result_result/* worse */.JJ)(verdict, outcome.status);
-    }
-    return { checks: outcomes, verdict };
-}
-
-// EXTERNAL MODULE: ./src/diagnostics/radix-sort.ts
-var radix_sort = __nccwpck_require__(8459);
-;// CONCATENATED MODULE: ./src/diagnostics/roc-curve.ts
-/**
- * The exact ROC curve of a classifier's scores and its thinning for drawing. The curve (Fawcett,
- * "An introduction to ROC analysis", Pattern Recognition Letters 27, 2006, algorithm 1) steps
- * through the distinct scores from the highest down: at each, every row with that score turns
- * positive, so tied rows move the point diagonally, the same ties the AUC's Mann-Whitney count
- * halves. Thinning keeps the vertices of the curve's upper convex hull (the ROC convex hull,
- * Provost & Fawcett 2001, Machine Learning 42) so that the drawn curve's hull is the exact one.
- */
-
-/**
- * The exact ROC curve of `n` rows: labels `y` in {0, 1}, `score` higher for the positive class
- * (rows whose score is NaN are left out). Both classes present: from (0, 0) to (1, 1), one point
- * per distinct score. One class missing: the diagonal (0, 0), (1, 1). Cost: two sorts of the
- * scores (radix, linear) and one merge.
- */
-function rocCurve(y, score, n) {
-    let np = 0;
-    let nn = 0;
-    for (let i = 0; i < n; i++) {
-        if (Number.isNaN(score[i]))
-            continue;
-        if (y[i] === 1)
-            np++;
-        else
-            nn++;
-    }
-    if (np === 0 || nn === 0) {
-        return {
-            fpr: Float64Array.of(0, 1),
-            tpr: Float64Array.of(0, 1),
-            score: Float64Array.of(Number.NaN, Number.NaN),
-            positives: np,
-            negatives: nn,
-        };
-    }
-    const pos = new Float64Array(np);
-    const neg = new Float64Array(nn);
-    let a = 0;
-    let b = 0;
-    for (let i = 0; i < n; i++) {
-        if (Number.isNaN(score[i]))
-            continue;
-        if (y[i] === 1)
-            pos[a++] = score[i];
-        else
-            neg[b++] = score[i];
-    }
-    sortFloat64(pos);
-    sortFloat64(neg);
-    return mergeDescending(pos, neg);
-}
-/** The curve from both classes' scores, each sorted ascending. */
-function mergeDescending(pos, neg) {
-    const np = pos.length;
-    const nn = neg.length;
-    const size = np + nn + 1;
-    const fpr = new Float64Array(size);
-    const tpr = new Float64Array(size);
-    const score = new Float64Array(size);
-    score[0] = Number.NaN;
-    let i = np - 1;
-    let j = nn - 1;
-    let tp = 0;
-    let fp = 0;
-    let k = 1;
-    while (i >= 0 || j >= 0) {
-        // The highest score left; every row of either class with it turns positive together.
-        const v = j < 0 || (i >= 0 && pos[i] >= neg[j]) ? pos[i] : neg[j];
-        while (i >= 0 && pos[i] === v) {
-            tp++;
-            i--;
-        }
-        while (j >= 0 && neg[j] === v) {
-            fp++;
-            j--;
-        }
-        fpr[k] = fp / nn;
-        tpr[k] = tp / np;
-        score[k] = v;
-        k++;
-    }
-    return { fpr: fpr.slice(0, k), tpr: tpr.slice(0, k), score: score.slice(0, k), positives: np, negatives: nn };
-}
-/**
- * Indices of the vertices of the upper convex hull of the curve's points (x = fpr ascending,
- * y = tpr), first and last point included (Andrew's monotone chain, upper half; collinear points
- * left out).
- */
-function upperHull(fpr, tpr) {
-    const hull = [];
-    for (let k = 0; k < fpr.length; k++) {
-        while (hull.length >= 2) {
-            const a = hull[hull.length - 2];
-            const b = hull[hull.length - 1];
-            // Cross product of (b - a) and (k - a): >= 0 means b is not above the chord a..k.
-            const cross = (fpr[b] - fpr[a]) * (tpr[k] - tpr[a]) - (tpr[b] - tpr[a]) * (fpr[k] - fpr[a]);
-            if (cross >= 0)
-                hull.pop();
-            else
-                break;
-        }
-        hull.push(k);
-    }
-    return hull;
-}
-/** `count` evenly spaced entries of a sorted list of indices, its first and last kept. */
-function evenlyOf(list, count) {
-    if (list.length <= count)
-        return [...list];
-    if (count <= 1)
-        return [list[0]];
-    const out = [];
-    for (let t = 0; t < count; t++)
-        out.push(list[Math.round((t * (list.length - 1)) / (count - 1))]);
-    return out;
-}
-/**
- * The ROC curve of {@link rocCurve} thinned as {@link thinCurve} thins it (the same points), without
- * holding the whole curve: one walk through the sorted scores counts the points and finds the
- * upper hull, a second emits the kept points. Memory: the sorted scores and the hull, not three
- * arrays of n + 1 points (a file of a million rows saves 24 MB).
- * @param max most points kept (at least 2)
- */
-function thinnedRocCurve(y, score, n, max) {
-    let np = 0;
-    let nn = 0;
-    for (let i = 0; i < n; i++) {
-        if (Number.isNaN(score[i]))
-            continue;
-        if (y[i] === 1)
-            np++;
-        else
-            nn++;
-    }
-    if (np === 0 || nn === 0) {
-        return { points: 2, kept: [0, 1], fpr: [0, 1], tpr: [0, 1], score: [Number.NaN, Number.NaN], positives: np, negatives: nn };
-    }
-    const pos = new Float64Array(np);
-    const neg = new Float64Array(nn);
-    let a = 0;
-    let b = 0;
-    for (let i = 0; i < n; i++) {
-        if (Number.isNaN(score[i]))
-            continue;
-        if (y[i] === 1)
-            pos[a++] = score[i];
-        else
-            neg[b++] = score[i];
-    }
-    const scratch = new Uint32Array(2 * Math.max(np, nn));
-    (0,radix_sort/* sortFloat64 */.f)(pos, scratch);
-    (0,radix_sort/* sortFloat64 */.f)(neg, scratch);
-    // First walk: the number of points and the upper hull (Andrew's monotone chain, as upperHull).
-    const hull = [0];
-    const hx = [0];
-    const hy = [0];
-    let points = 1;
-    walk(pos, neg, (fpr, tpr) => {
-        while (hull.length >= 2) {
-            const k = hull.length - 1;
-            const cross = (hx[k] - hx[k - 1]) * (tpr - hy[k - 1]) - (hy[k] - hy[k - 1]) * (fpr - hx[k - 1]);
-            if (cross >= 0) {
-                hull.pop();
-                hx.pop();
-                hy.pop();
-            }
-            else
-                break;
-        }
-        hull.push(points);
-        hx.push(fpr);
-        hy.push(tpr);
-        points++;
-    });
-    const kept = chooseKept(points, hull, max);
-    // Second walk: the kept points.
-    const out = { points, kept, fpr: [0], tpr: [0], score: [Number.NaN], positives: np, negatives: nn };
-    let index = 1;
-    let next = 1;
-    walk(pos, neg, (fpr, tpr, v) => {
-        if (next < kept.length && kept[next] === index) {
-            out.fpr.push(fpr);
-            out.tpr.push(tpr);
-            out.score.push(v);
-            next++;
-        }
-        index++;
-    });
-    return out;
-}
-/** Calls `visit(fpr, tpr, score)` for each point after (0, 0), from the highest score down (both lists sorted ascending). */
-function walk(pos, neg, visit) {
-    const np = pos.length;
-    const nn = neg.length;
-    let i = np - 1;
-    let j = nn - 1;
-    let tp = 0;
-    let fp = 0;
-    while (i >= 0 || j >= 0) {
-        const v = j < 0 || (i >= 0 && pos[i] >= neg[j]) ? pos[i] : neg[j];
-        while (i >= 0 && pos[i] === v) {
-            tp++;
-            i--;
-        }
-        while (j >= 0 && neg[j] === v) {
-            fp++;
-            j--;
-        }
-        visit(fp / nn, tp / np, v);
-    }
-}
-/**
- * The points of a curve to draw: all of them when at most `max`; otherwise the hull vertices
- * (at most max / 2 of them, thinned evenly beyond) and points evenly spaced along the curve
- * (by index) to fill `max`, in curve order, first and last always kept.
- * @param max at least 2
- * @returns ascending indices into the curve, at most `max`
- */
-function thinCurve(fpr, tpr, max) {
-    return chooseKept(fpr.length, fpr.length <= max ? [] : upperHull(fpr, tpr), max);
-}
-/** {@link thinCurve} from the number of points and the hull's vertices. */
-function chooseKept(n, hull, max) {
-    if (n <= max)
-        return Array.from({ length: n }, (_, i) => i);
-    const keep = new Set(evenlyOf(hull, Math.max(2, Math.floor(max / 2))));
-    keep.add(0);
-    keep.add(n - 1);
-    const room = max - keep.size;
-    // Evenly spaced points along the curve; some may coincide with hull vertices, so take a few
-    // more rounds with a finer step while room is left (bounded: at most 4 rounds).
-    for (let round = 0, want = room; round < 4 && keep.size < max; round++, want *= 2) {
-        for (let t = 1; t <= want && keep.size < max; t++)
-            keep.add(Math.round((t * (n - 1)) / (want + 1)));
-    }
-    return [...keep].sort((u, v) => u - v);
-}
-
-;// CONCATENATED MODULE: ./src/result/classifier-chart-types.ts
-/**
- * The chart data of a binary classifier in the Result (`ModelResult.classifier_charts`): plain
- * series the HTML report draws, built by run/classifier-chart-data.ts. Every number is finite or
- * null, and every list is bounded whatever the rows: a ROC curve keeps at most
- * {@link ROC_MAX_POINTS} points, a calibration diagram has {@link CALIBRATION_BINS} bins, the
- * points of a file at most MAX_CHART_POINTS (chart-types.ts) and the probability curves at most
- * MAX_PARTIAL_CURVES, as for regression models.
- */
-/** Most points kept of a ROC curve (training or hold-out); a longer curve is thinned keeping its convex hull. */
-const ROC_MAX_POINTS = 300;
-/** Bins of a calibration diagram: equal-width bins of the predicted probability, [0, 0.1), [0.1, 0.2), ... [0.9, 1]. */
-const CALIBRATION_BINS = 10;
-
-;// CONCATENATED MODULE: ./src/run/classifier-chart-data.ts
-
-
-
-
-
-
-
-/** The ROC curve of one file's rows for drawing (scores: the logits, whose order is the probabilities'). */
-function rocCurveData(y, eta, rows, max = ROC_MAX_POINTS) {
-    const curve = thinnedRocCurve(y, eta, rows, Math.max(2, max));
-    return {
-        rows,
-        positives: curve.positives,
-        negatives: curve.negatives,
-        points: curve.points,
-        thinned: curve.kept.length < curve.points,
-        fpr: curve.fpr.map((v) => chartNumber(v) ?? 0),
-        tpr: curve.tpr.map((v) => chartNumber(v) ?? 0),
-        threshold: curve.score.map((v) => (Number.isNaN(v) ? null : chartNumber(1 / (1 + Math.exp(-v))))),
-        hull: hullOfKept(curve.fpr, curve.tpr),
-    };
-}
-/** Indices of the kept points on the upper hull of the kept points (the whole curve's hull when it was kept whole). */
-function hullOfKept(fpr, tpr) {
-    return upperHull(Float64Array.from(fpr), Float64Array.from(tpr));
-}
-/**
- * The calibration diagram of one file ({@link CALIBRATION_BINS} equal-width bins of p = 1 / (1 +
- * exp(-eta)), as diagnostics/classification-metrics.ts calibrationBins bins them), from the
- * logits without a second array of probabilities.
- */
-function calibrationData(y, eta, rows) {
-    const bins = CALIBRATION_BINS;
-    const count = new Float64Array(bins);
-    const sumP = new Float64Array(bins);
-    const sumY = new Float64Array(bins);
-    for (let i = 0; i < rows; i++) {
-        const p = 1 / (1 + Math.exp(-eta[i]));
-        const b = Math.min(bins - 1, Math.floor(p * bins));
-        count[b] += 1;
-        sumP[b] += p;
-        sumY[b] += y[i];
-    }
-    return Array.from(count, (c, b) => ({
-        from: b / bins,
-        to: (b + 1) / bins,
-        count: c,
-        predicted: c > 0 ? chartNumber(sumP[b] / c) : null,
-        observed: c > 0 ? chartNumber(sumY[b] / c) : null,
-    }));
-}
-/** The rows of one file as points, thinned evenly (seriesPoints of chart-data.ts). */
-function points(data, eta, max) {
-    const keep = thinRows(data.rows, seriesPoints(data.inputs.length, max));
-    const thinned = keep.length < data.rows;
-    return {
-        rows: data.rows,
-        shown: keep.length,
-        thinned,
-        thinning: thinned ? `${keep.length} of ${data.rows} rows, evenly spaced through the file` : '',
-        lines: Array.from(keep, (i) => data.lines[i]),
-        x: data.inputs.map((col) => Array.from(keep, (i) => chartNumber(col[i]))),
-        label: Array.from(keep, (i) => (data.y[i] === 1 ? 1 : 0)),
-        probability: Array.from(keep, (i) => chartNumber(1 / (1 + Math.exp(-eta[i])))),
-    };
-}
-/**
- * Builds the chart data of one fitted classifier.
- * Cost: two sorts of each file's logits (ROC), one pass over each file for the calibration bins,
- * the training medians of the inputs, and at most {@link CURVE_POINTS} predictions per curve.
- * @param model the fitted classifier (design, coefficients, rows, logits, labels)
- * @param maxPoints most points per file; default MAX_CHART_POINTS (fewer for many inputs)
- */
-function buildClassifierChartData(model, maxPoints = MAX_CHART_POINTS) {
-    const { design, fit, descriptor } = model.context;
-    const { train, holdout, trainEta, holdoutEta } = model;
-    const inputs = [...design.inputs];
-    const medians = train.inputs.map((col) => (0,column_median/* columnMedian */.z)(col, train.rows));
-    const spread = [];
-    for (let c = 0; c < inputs.length; c++) {
-        const [lo, hi] = (0,stats/* range */.y1)(train.inputs[c], train.rows);
-        if (hi > lo)
-            spread.push(c);
-    }
-    const shown = spread.slice(0, MAX_PARTIAL_CURVES);
-    const gridPoints = inputs.length === 1 ? CURVE_POINTS : partialCurvePoints(shown.length);
-    const curves = [];
-    for (const c of shown) {
-        const [tlo, thi] = (0,stats/* range */.y1)(train.inputs[c], train.rows);
-        const lo = tlo - CURVE_MARGIN * (thi - tlo);
-        const hi = thi + CURVE_MARGIN * (thi - tlo);
-        const grid = new Float64Array(gridPoints);
-        for (let t = 0; t < gridPoints; t++)
-            grid[t] = t === gridPoints - 1 ? hi : lo + ((hi - lo) * t) / (gridPoints - 1);
-        const columns = inputs.map((_, k) => (k === c ? grid : new Float64Array(gridPoints).fill(medians[k])));
-        const eta = (0,blocks/* predictRows */.tp)(design, { inputs: columns, rows: gridPoints }, fit.coefficients);
-        const x = [];
-        const p = [];
-        for (let t = 0; t < gridPoints; t++) {
-            const xt = chartNumber(grid[t]);
-            if (xt === null || (x.length > 0 && xt === x[x.length - 1]))
-                continue;
-            x.push(xt);
-            p.push(chartNumber(1 / (1 + Math.exp(-eta[t]))));
-        }
-        // Keyed by column names (user text): no prototype, so `__proto__` is a name like any other.
-        const others = Object.create(null);
-        inputs.forEach((name, k) => {
-            if (k !== c)
-                others[name] = chartNumber(medians[k]) ?? 0;
-        });
-        curves.push({ input: inputs[c], others, range: [chartNumber(tlo) ?? tlo, chartNumber(thi) ?? thi], x, p });
-    }
-    return {
-        target: descriptor.data.target,
-        positive: model.labels.positive,
-        negative: model.labels.negative,
-        threshold: descriptor.fit.threshold ?? 0.5,
-        inputs,
-        roc: { train: rocCurveData(train.y, trainEta, train.rows), holdout: rocCurveData(holdout.y, holdoutEta, holdout.rows) },
-        calibration: {
-            train: calibrationData(train.y, trainEta, train.rows),
-            holdout: calibrationData(holdout.y, holdoutEta, holdout.rows),
-        },
-        train: points(train, trainEta, maxPoints),
-        holdout: points(holdout, holdoutEta, maxPoints),
-        curves,
-        ...(spread.length > shown.length ? { curvesLeftOut: spread.length - shown.length } : {}),
-    };
-}
-
-// EXTERNAL MODULE: ./src/data/gzip-stream.ts + 2 modules
-var gzip_stream = __nccwpck_require__(4355);
-// EXTERNAL MODULE: ./src/data/table.ts + 1 modules
-var data_table = __nccwpck_require__(8785);
-// EXTERNAL MODULE: ./src/data/csv-rules.ts
-var csv_rules = __nccwpck_require__(8706);
-;// CONCATENATED MODULE: ./src/data/row-source.ts
-/**
- * Where the passes over a model's training rows get them: from columns held in memory (today's
- * path, {@link memoryRowSource}), or streamed again from the file, or from its parts in order, on
- * every pass ({@link fileRowSource}) for training data too large to hold, so that memory does not
- * grow with the rows. Both hand out the rows in file order, in chunks of consecutive rows.
- *
- * Which one a model takes: {@link streamsTrainingData} (one file: {@link streamsTrainingFile}). A streamed model keeps a bounded sample
- * of its training rows in memory ({@link RowReservoir}) for the diagnostics that need rows at
- * hand (swing, spikes, the complexity sweep, charts); docs/scale.md describes what each uses.
- */
-
-
-
-
-
-/**
- * The rows of in-memory data as one chunk: the passes then work exactly as over the columns
- * themselves (same blocks, same additions in the same order).
- */
-function memoryRowSource(data) {
-    return {
-        file: data.file,
-        streamed: false,
-        async forEachChunk(visit) {
-            visit(data, 0);
-        },
-    };
-}
-/**
- * The training rows streamed from their file, or from its parts in the order given, through
- * readTable's chunk interface ({@link readTableChunks}: fast numeric path, general path, gzip, one
- * header check across parts) on every pass. Memory: one chunk of `chunkRows` x (inputs + 1)
- * doubles at a time (two read from parts), independent of the rows in the file.
- *
- * Read from parts, the chunks are cut again across the parts' ends ({@link PartsRechunker}): every
- * chunk but the last holds `chunkRows` rows, as from one file, so that the design's blocks, and
- * with them every sum of the passes, are those of the same rows held in memory.
- *
- * @param path the file, or its parts in reading order (at least one)
- */
-function fileRowSource(repo, path, options) {
-    const columns = [...options.inputs, options.target];
-    const d = options.inputs.length;
-    const file = typeof path === 'string' ? path : (0,data_parts/* partsLabel */.xq)(path);
-    return {
-        file,
-        streamed: true,
-        async forEachChunk(visit, chunkRows = options.chunkRows ?? csv_rules/* DEFAULT_CHUNK_ROWS */._I) {
-            let start = 0;
-            if (options.counts)
-                options.counts.dropped = 0;
-            const parts = typeof path === 'string' ? undefined : [];
-            const read = (0,data_table/* readTableChunks */.he)(repo, path, {
-                columns,
-                maxBytes: options.maxBytes,
-                chunkRows,
-                ...(options.format ? { format: options.format } : {}),
-                ...(options.split ? { split: options.split } : {}),
-                ...(options.counts ? { counts: options.counts } : {}),
-                ...(parts ? { parts } : {}),
-                // Every consumer copies what it keeps (the reservoir, the factors, the sums), so the reader
-                // refills the same arrays: no garbage of a chunk's size per chunk.
-                recycle: true,
-            });
-            if (parts === undefined) {
-                for await (const chunk of read) {
-                    visit({ inputs: chunk.columns.slice(0, d), y: chunk.columns[d], lines: chunk.lines, rows: chunk.rows, file }, start);
-                    start += chunk.rows;
-                }
-                return;
-            }
-            const whole = new PartsRechunker(d + 1, chunkRows);
-            const hand = (rows) => {
-                const cut = whole.columns.map((c) => c.subarray(0, rows));
-                visit({ inputs: cut.slice(0, d), y: cut[d], lines: whole.lines.subarray(0, rows), rows, file, parts }, start);
-                start += rows;
-            };
-            for await (const chunk of read)
-                whole.add(chunk.columns, chunk.lines, chunk.rows, hand);
-            if (whole.rows > 0)
-                hand(whole.rows);
-        },
-    };
-}
-/**
- * Cuts chunks of rows again into chunks of exactly `chunkRows` rows (the last may be short),
- * copying them into arrays of its own: the chunks of a table read from parts, which end at every
- * part's end, become those of one file. Memory: `chunkRows` x (columns + 1/2) doubles.
- */
-class PartsRechunker {
-    /** The rows gathered so far, column by column. */
-    columns;
-    lines;
-    /** Rows gathered and not yet handed out. */
-    rows = 0;
-    #size;
-    /**
-     * @param columns columns of each row
-     * @param size rows of each chunk handed out (>= 1)
-     */
-    constructor(columns, size) {
-        this.#size = size;
-        this.columns = Array.from({ length: columns }, () => new Float64Array(size));
-        this.lines = new Int32Array(size);
-    }
-    /** Adds `rows` rows; calls `full(size)` each time `size` rows are gathered (then starts again at 0). */
-    add(columns, lines, rows, full) {
-        let from = 0;
-        while (from < rows) {
-            const take = Math.min(rows - from, this.#size - this.rows);
-            for (let c = 0; c < this.columns.length; c++)
-                this.columns[c].set(columns[c].subarray(from, from + take), this.rows);
-            this.lines.set(lines.subarray(from, from + take), this.rows);
-            this.rows += take;
-            from += take;
-            if (this.rows === this.#size) {
-                full(this.rows);
-                this.rows = 0;
-            }
-        }
-    }
-}
-/**
- * Default threshold of {@link streamsTrainingFile}: 128 MiB of CSV text. About 1.2 million rows of
- * 8 inputs and a target at the benchmark's 111 bytes a row; held in memory such a file takes about
- * 100 MiB of columns plus the run's own (the L workload of docs/benchmarks.md, 1 million rows,
- * 111 MB, peaks near 200 MiB), so files below it keep today's in-memory path and those above
- * stream, and a model of 8 inputs stays under about 256 MiB either way.
- */
-const STREAM_ABOVE_BYTES = 128 * 1024 * 1024;
-/**
- * Assumed ratio of CSV text to gzip bytes when judging a `.gz` file by its stored size (the
- * decompressed size is not known before reading it; numeric CSV compresses about 2 to 4 times,
- * the benchmark's random `%.10g` numbers 1.9 times at `gzip -1`): 4, the upper end, so that a
- * large compressed file streams rather than risks being held.
- */
-const GZIP_RATIO = 4;
-/**
- * Estimated CSV text of a data file in bytes: its stored size, times {@link GZIP_RATIO} for `.gz`.
- * @param size stored size in bytes
- */
-function estimatedTextBytes(path, size) {
-    return (0,gzip_stream/* isGzipPath */.ip)(path) ? size * GZIP_RATIO : size;
-}
-/**
- * Whether a training file streams: when its estimated CSV text ({@link estimatedTextBytes}) is
- * above `aboveBytes` (default {@link STREAM_ABOVE_BYTES}).
- * @param size stored size in bytes
- */
-function streamsTrainingFile(path, size, aboveBytes = STREAM_ABOVE_BYTES) {
-    return estimatedTextBytes(path, size) > aboveBytes;
-}
-/**
- * Whether training data streams, read from one file or from parts: when the estimated CSV text of
- * all its files together (each as {@link estimatedTextBytes}, so gzip parts at {@link GZIP_RATIO}
- * times their size) is above `aboveBytes` (default {@link STREAM_ABOVE_BYTES}).
- * @param files each file's path and stored size in bytes (one entry for one file)
- */
-function streamsTrainingData(files, aboveBytes = STREAM_ABOVE_BYTES) {
-    let text = 0;
-    for (const f of files)
-        text += estimatedTextBytes(f.path, f.size);
-    return text > aboveBytes;
-}
-/**
- * The stored sizes of training data's files, for {@link streamsTrainingData}.
- * @param file the training file (`data.train`)
- * @param parts its parts in reading order, when read from parts
- * @returns each file's path and stored size in bytes: the parts when given, else the one file
- */
-async function trainingFileSizes(repo, file, parts) {
-    const out = [];
-    for (const path of parts ?? [file])
-        out.push({ path, size: await repo.size(path) });
-    return out;
-}
-/** Rows a streamed model keeps for its sampled diagnostics: 100,000 (about 8 MB at 8 inputs). */
-const SAMPLE_ROWS = 100_000;
-/**
- * A seeded uniform sample of at most `capacity` rows of a stream of rows (reservoir sampling,
- * Vitter's algorithm R: Vitter, "Random sampling with a reservoir", ACM TOMS 11(1), 1985), kept in
- * file order. While the rows seen fit, the sample is every row, so a small file's sample is the
- * file itself. Memory: capacity x (inputs + 2) numbers.
- */
-class RowReservoir {
-    #capacity;
-    #inputs;
-    #y;
-    #lines;
-    #index;
-    #seen = 0;
-    #state;
-    /**
-     * @param inputs input columns
-     * @param capacity rows kept at most (>= 1)
-     * @param seed seed of the choice (a 32-bit integer)
-     */
-    constructor(inputs, capacity, seed) {
-        this.#capacity = capacity;
-        this.#inputs = Array.from({ length: inputs }, () => new Float64Array(capacity));
-        this.#y = new Float64Array(capacity);
-        this.#lines = new Int32Array(capacity);
-        this.#index = new Float64Array(capacity);
-        this.#state = seed >>> 0;
-    }
-    /** Rows seen so far. */
-    get seen() {
-        return this.#seen;
-    }
-    /** Offers the rows of one chunk, in order. */
-    add(chunk) {
-        for (let i = 0; i < chunk.rows; i++) {
-            const t = this.#seen++;
-            let slot = t;
-            if (t >= this.#capacity) {
-                slot = Math.floor(this.#next() * (t + 1));
-                if (slot >= this.#capacity)
-                    continue;
-            }
-            for (let c = 0; c < this.#inputs.length; c++)
-                this.#inputs[c][slot] = chunk.inputs[c][i];
-            this.#y[slot] = chunk.y[i];
-            this.#lines[slot] = chunk.lines[i];
-            this.#index[slot] = t;
-        }
-    }
-    /** The sample in file order, as model data of `file` (rows = min(seen, capacity)). */
-    rows(file) {
-        const m = Math.min(this.#seen, this.#capacity);
-        const order = Array.from({ length: m }, (_, i) => i).sort((a, b) => this.#index[a] - this.#index[b]);
-        const pick = (from) => Float64Array.from(order, (i) => from[i]);
-        return {
-            inputs: this.#inputs.map(pick),
-            y: pick(this.#y),
-            lines: Int32Array.from(order, (i) => this.#lines[i]),
-            rows: m,
-            file,
-        };
-    }
-    /** Uniform in [0, 1): 53 bits from two steps of a Weyl sequence through a 32-bit mixer. */
-    #next() {
-        const hi = this.#mix() >>> 5;
-        const lo = this.#mix() >>> 6;
-        return (hi * 67108864 + lo) / 9007199254740992;
-    }
-    #mix() {
-        this.#state = (this.#state + 0x9e3779b9) >>> 0;
-        return (0,mix32/* mix32 */.Q)(this.#state);
-    }
-}
-
-// EXTERNAL MODULE: ./node_modules/csv-parse/lib/index.js + 1 modules
-var lib = __nccwpck_require__(3046);
-;// CONCATENATED MODULE: ./src/data/levels.ts
-/**
- * Category levels as numeric codes, so that the design can read a category input like any other
- * column: the training levels, sorted by text order (JavaScript's default string order: UTF-16
- * code units), are coded 0, 1, ...; a hold-out level never seen in training is an error naming the
- * level, file and line, or with `unseen: zero` the code -1 (every indicator 0: the reference level's
- * prediction).
- */
-
-
-/** The training levels of a category column, in text order. */
-function trainingLevels(values) {
-    return [...new Set(values)].sort();
-}
-/**
- * Codes of the cells: index of the level in `levels`, or -1 for an unseen level when allowed.
- * @param where file (and parts, when read from parts), lines and the descriptor line of the term, for the error
- * @throws InputError `unseen-level` at the first unseen level when `unseen` is `error`
- */
-function levelCodes(values, levels, unseen, where) {
-    const index = new Map(levels.map((l, k) => [l, k]));
-    const out = new Float64Array(values.length);
-    for (let i = 0; i < values.length; i++) {
-        const k = index.get(values[i]);
-        if (k === undefined) {
-            if (unseen === 'zero') {
-                out[i] = -1;
-                continue;
-            }
-            const place = (0,data_parts/* placeOfLine */.xX)(where, where.lines[i]);
-            throw new errors/* InputError */.dz('unseen-level', `column \`${where.column}\` has the level ${JSON.stringify(values[i].slice(0, 80))} on line ${place.line} of ${place.file}, which no training row has; the category term on line ${where.termLine} of ${where.descriptor} has no column for it (add \`unseen: zero\` to predict it as the reference level)`, { file: place.file, line: place.line, key: where.column });
-        }
-        out[i] = k;
-    }
-    return out;
-}
-
-// EXTERNAL MODULE: ./node_modules/csv-parse/lib/api/index.js + 3 modules
-var api = __nccwpck_require__(7084);
-// EXTERNAL MODULE: ./node_modules/csv-parse/lib/api/normalize_options.js + 1 modules
-var normalize_options = __nccwpck_require__(6845);
-;// CONCATENATED MODULE: ./node_modules/csv-parse/lib/sync.js
-
-
-
-const parse = function (data, opts = {}) {
-  if (typeof data === "string") {
-    data = Buffer.from(data);
-  }
-  const records = opts && opts.objname ? Object.create(null) : [];
-  const parser = (0,api/* transform */.p)(opts);
-  const push = (record) => {
-    if (parser.options.objname === undefined) records.push(record);
-    else {
-      records[record[0]] = record[1];
-    }
-  };
-  const close = () => {};
-  const error = parser.parse(data, true, push, close);
-  if (error !== undefined) throw error;
-  return records;
-};
-
-
-
-;// CONCATENATED MODULE: ./src/data/text-columns.ts
-/**
- * Text columns of a CSV file (category levels), read apart from the numeric columns: the numeric
- * readers (table.ts) refuse text, so a model's category inputs are left out of their request and
- * read here, with the same rules for records (comma separator, `"` quotes, a byte-order mark
- * dropped, white space around a field trimmed, lines holding only white space skipped). A level is
- * the cell's text as written (trimmed): `07` and `7` are two levels, never numbers.
- */
-
-
-
-/**
- * Reads the named columns as text.
- * @param maxBytes size cap of the file and of its decompressed bytes (the caller's; the numeric read of the same file checks it first)
- * @throws InputError `csv-missing-column` (naming the columns that exist), `csv-syntax`, `file-too-large`
- */
-async function readTextColumns(repo, path, names, maxBytes) {
-    const size = await repo.size(path);
-    if (size > maxBytes)
-        throw new errors/* InputError */.dz('file-too-large', `${path} is ${size} bytes; the cap is ${maxBytes}`, { file: path });
-    // Through the same door as the numeric read: decompressed when `.gz`, the decompressed bytes held to the cap.
-    const pieces = [];
-    for await (const piece of (0,gzip_stream/* openDataFile */.fu)(repo, path, maxBytes))
-        pieces.push(piece);
-    const text = new TextDecoder('utf-8').decode(Buffer.concat(pieces));
-    let records;
-    try {
-        records = parse(text, { bom: true, trim: true, info: true, relax_column_count: true, skip_empty_lines: true });
-    }
-    catch (error) {
-        throw new errors/* InputError */.dz('csv-syntax', `${path} could not be read as CSV: ${error instanceof Error ? error.message.slice(0, 200) : String(error)}`, { file: path });
-    }
-    const kept = records.filter((r) => r.record.some((cell) => cell !== ''));
-    if (kept.length === 0)
-        throw new errors/* InputError */.dz('csv-empty', `${path} has no header row`, { file: path });
-    const header = kept[0].record;
-    const index = names.map((name) => {
-        const k = header.indexOf(name);
-        if (k < 0)
-            throw new errors/* InputError */.dz('csv-missing-column', `${path} has no column \`${name}\`; its columns are ${header.slice(0, 20).join(', ')}`, {
-                file: path,
-                line: kept[0].info.lines,
-                key: name,
-            });
-        return k;
-    });
-    const rows = kept.slice(1);
-    const columns = new Map(names.map((name, j) => [name, rows.map((r) => r.record[index[j]] ?? '')]));
-    return { columns, lines: Int32Array.from(rows, (r) => r.info.lines) };
-}
-
-;// CONCATENATED MODULE: ./src/data/load-model-data.ts
-
-
-
-
-
-
-/** The category columns of a descriptor with the first category term that reads each. */
-function categoryColumns(descriptor) {
-    const out = new Map();
-    for (const t of descriptor.terms)
-        if (t.kind === 'category' && !out.has(t.of))
-            out.set(t.of, { line: t.line, unseen: t.unseen });
-    return out;
-}
-/**
- * Reads the input columns (in `inputs` order) and the target of both files.
- * @throws InputError `target-as-input` when a term reads the target column,
- *   `no-rows` when either file has no data rows
- */
-async function loadModelData(repo, descriptor, inputs, settings, options = {}) {
-    const { data } = descriptor;
-    if (inputs.includes(data.target)) {
-        throw new errors/* InputError */.dz('target-as-input', `the target column \`${(0,errors/* clip */.$Q)(data.target)}\` is also used as an input by a term; a model may not read its own target`, { file: descriptor.file, line: data.lines.target, key: 'data.target' });
-    }
-    const weighting = data.weighting ?? null;
-    if (weighting !== null && weighting.column === data.target) {
-        throw new errors/* InputError */.dz('weight-is-target', `\`data.${weighting.kind}\` names the target column \`${data.target}\`; expected a column of its own`, {
-            file: descriptor.file,
-            line: weighting.line,
-            key: `data.${weighting.kind}`,
-        });
-    }
-    // Category inputs are text: read apart (text-columns.ts) and coded (levels.ts), never as numbers.
-    const categories = categoryColumns(descriptor);
-    const numeric = inputs.filter((c) => !categories.has(c));
-    const columns = [...numeric, data.target, ...(weighting !== null && !inputs.includes(weighting.column) ? [weighting.column] : [])];
-    const levels = new Map();
-    const maxBytes = settings.caps.maxFileBytes;
-    const format = data.format;
-    const split = data.split ?? null;
-    const load = async (path, partPaths, line, key) => {
-        let table;
-        // With a split column both sides read the one file, each keeping its own label's rows.
-        const side = split === null
-            ? undefined
-            : key === 'data.train'
-                ? { column: split.column, keep: split.train, other: split.holdout }
-                : { column: split.column, keep: split.holdout, other: split.train };
-        try {
-            table = await (0,data_table/* readTable */.xz)(repo, partPaths ?? path, {
-                columns,
-                maxBytes,
-                ...(format ? { format } : {}),
-                ...(side ? { split: side } : {}),
-            });
-        }
-        catch (error) {
-            throw withAsker(error, descriptor);
-        }
-        if (table.rows === 0) {
-            const why = side
-                ? ` labelled ${(0,errors/* quoteValue */.cl)(side.keep)} in column ${(0,errors/* quoteValue */.cl)(side.column)}`
-                : table.dropped > 0
-                    ? ` left after dropping ${table.dropped} with missing cells`
-                    : '';
-            const named = partPaths === undefined ? `\`${(0,errors/* clip */.$Q)(path)}\`` : `the ${partPaths.length} parts of \`${key}\` (${(0,errors/* clip */.$Q)(table.file)})`;
-            throw new errors/* InputError */.dz('no-rows', `${named} ${partPaths === undefined ? 'has' : 'have'} no data rows${why}; expected at least one row`, {
-                file: descriptor.file,
-                line,
-                key,
-            });
-        }
-        if (categories.size > 0) {
-            const text = await readCategoryText(repo, table, [...categories.keys()], maxBytes);
-            for (const [name, term] of categories) {
-                const values = text.get(name);
-                if (!levels.has(name))
-                    levels.set(name, trainingLevels(values));
-                const where = {
-                    file: table.file,
-                    ...(table.parts ? { parts: table.parts } : {}),
-                    lines: table.lines,
-                    column: name,
-                    termLine: term.line,
-                    descriptor: descriptor.file,
-                };
-                table.columns.set(name, levelCodes(values, levels.get(name), term.unseen, where));
-            }
-        }
-        const rows = {
-            inputs: inputs.map((c) => table.columns.get(c)),
-            y: table.columns.get(data.target),
-            lines: table.lines,
-            rows: table.rows,
-            file: table.file,
-            ...(table.parts ? { parts: table.parts } : {}),
-            ...(format?.missing === 'drop' ? { dropped: table.dropped } : {}),
-            byName: table.columns,
-        };
-        return weighting === null
-            ? rows
-            : {
-                ...rows,
-                ...rowWeights(weighting, table.columns.get(weighting.column), rows.lines, rows.rows, rows.file, rows.parts),
-            };
-    };
-    // Training data streams when its files together (one, or the parts) are estimated too large to hold.
-    const trainParts = data.trainParts;
-    if (streamsTrainingData(await trainingFileSizes(repo, data.train, trainParts), options.streamAboveBytes)) {
-        const trainLabel = trainParts === undefined ? data.train : (0,data_parts/* partsLabel */.xq)(trainParts);
-        const why = categories.size > 0
-            ? 'a category term'
-            : weighting !== null
-                ? `\`data.${weighting.kind}\``
-                : (data.targetTransform ?? null) !== null
-                    ? '`data.target_transform`'
-                    : null;
-        if (why !== null) {
-            throw new errors/* InputError */.dz('too-large-to-hold', `${trainParts === undefined ? 'the training file' : `the ${trainParts.length} training parts`} ${(0,errors/* clip */.$Q)(trainLabel)} ${trainParts === undefined ? 'is' : 'are'} too large to hold in memory and ${trainParts === undefined ? 'is' : 'are'} read as a stream, which a model with ${why} does not support yet; expected ${trainParts === undefined ? 'a smaller file' : 'smaller parts'}, or a model without it`, { file: descriptor.file, line: data.lines.train, key: 'data.train' });
-        }
-        const split = data.split ?? null;
-        const counts = { dropped: 0 };
-        const source = fileRowSource(repo, trainParts ?? data.train, {
-            inputs,
-            target: data.target,
-            maxBytes,
-            ...(options.chunkRows ? { chunkRows: options.chunkRows } : {}),
-            ...(format ? { format } : {}),
-            ...(split ? { split: { column: split.column, keep: split.train, other: split.holdout } } : {}),
-            counts,
-        });
-        const reservoir = new RowReservoir(inputs.length, options.sampleRows ?? SAMPLE_ROWS, descriptor.fit.seed);
-        const target = { n: 0, mean: 0, m2: 0, min: Infinity, max: -Infinity };
-        const inputFigures = inputs.map(() => ({ n: 0, mean: 0, m2: 0, min: Infinity, max: -Infinity }));
-        // Read from parts: the parts with their line offsets, complete once the read has reached the last.
-        let parts;
-        try {
-            await source.forEachChunk((chunk) => {
-                parts = chunk.parts;
-                options.onTrainChunk?.(chunk);
-                reservoir.add(chunk);
-                addTargetFigures(target, chunk.y, chunk.rows);
-                for (let c = 0; c < inputs.length; c++)
-                    addTargetFigures(inputFigures[c], chunk.inputs[c], chunk.rows);
-            });
-        }
-        catch (error) {
-            throw withAsker(error, descriptor);
-        }
-        if (reservoir.seen === 0) {
-            // The words of the in-memory path (`load` above), which also names the parts and why none are left.
-            const why = split
-                ? ` labelled ${(0,errors/* quoteValue */.cl)(split.train)} in column ${(0,errors/* quoteValue */.cl)(split.column)}`
-                : counts.dropped > 0
-                    ? ` left after dropping ${counts.dropped} with missing cells`
-                    : '';
-            const named = trainParts === undefined
-                ? `\`${(0,errors/* clip */.$Q)(data.train)}\` has`
-                : `the ${trainParts.length} parts of \`data.train\` (${(0,errors/* clip */.$Q)(trainLabel)}) have`;
-            throw new errors/* InputError */.dz('no-rows', `${named} no data rows${why}; expected at least one row`, {
-                file: descriptor.file,
-                line: data.lines.train,
-                key: 'data.train',
-            });
-        }
-        const sample = {
-            ...reservoir.rows(trainLabel),
-            ...(parts !== undefined ? { parts } : {}),
-            sampleOf: reservoir.seen,
-            ...(format?.missing === 'drop' ? { dropped: counts.dropped } : {}),
-        };
-        const holdout = await load(data.holdout, data.holdoutParts, data.lines.holdout, 'data.holdout');
-        const { byName: _unused, ...holdoutData } = holdout;
-        const trainColumns = new Map(inputs.map((name, c) => [name, sample.inputs[c]]));
-        return {
-            train: sample,
-            holdout: holdoutData,
-            trainColumns,
-            levels,
-            streamed: {
-                source,
-                rows: reservoir.seen,
-                targetMean: target.mean,
-                targetSd: Math.sqrt(target.m2 / target.n),
-                targetMin: target.min,
-                targetMax: target.max,
-                inputStats: new Map(inputs.map((name, c) => [name, { mean: inputFigures[c].mean, sd: Math.sqrt(inputFigures[c].m2 / inputFigures[c].n) }])),
-            },
-        };
-    }
-    const train = await load(data.train, data.trainParts, data.lines.train, 'data.train');
-    const holdout = await load(data.holdout, data.holdoutParts, data.lines.holdout, 'data.holdout');
-    const { byName, ...trainData } = train;
-    if (trainData.weights !== undefined && !trainData.weights.some((w) => w > 0)) {
-        throw new errors/* InputError */.dz('bad-weight', `every training row of ${trainData.file} has weight 0; expected at least one positive weight`, {
-            file: descriptor.file,
-            line: data.weighting?.line,
-            key: `data.${data.weighting?.kind}`,
-        });
-    }
-    const { byName: _unused, ...holdoutData } = holdout;
-    return { train: trainData, holdout: holdoutData, trainColumns: byName, levels };
-}
-/**
- * Adds a chunk's values of one column (the target, or an input) to running figures: mean and sum of squared deviations merged by the
- * pairwise formula of Chan, Golub & LeVeque ("Algorithms for computing the sample variance",
- * The American Statistician 37(3), 1983, eq. 2.1), the chunk's own from two passes.
- */
-function addTargetFigures(t, y, m) {
-    if (m === 0)
-        return;
-    let sum = 0;
-    for (let i = 0; i < m; i++)
-        sum += y[i];
-    const mean = sum / m;
-    let m2 = 0;
-    for (let i = 0; i < m; i++)
-        m2 += (y[i] - mean) * (y[i] - mean);
-    const n = t.n + m;
-    const delta = mean - t.mean;
-    t.mean = t.n === 0 ? mean : t.mean + (delta * m) / n;
-    t.m2 = t.n === 0 ? m2 : t.m2 + m2 + (delta * delta * t.n * m) / n;
-    t.n = n;
-    for (let i = 0; i < m; i++) {
-        if (y[i] < t.min)
-            t.min = y[i];
-        if (y[i] > t.max)
-            t.max = y[i];
-    }
-}
-/**
- * The row weights of a `data.weight` or `data.sigma` column: w as written (finite, >= 0), or
- * w = 1 / sigma^2 with sigma finite and > 0.
- * @param parts the parts the rows were read from (lines table-wide), absent for one file
- * @throws InputError `bad-weight` naming the file (the part), line, column and value of the first bad row
- */
-function rowWeights(weighting, values, lines, rows, file, parts) {
-    const weights = new Float64Array(rows);
-    const sigma = weighting.kind === 'sigma';
-    for (let i = 0; i < rows; i++) {
-        const v = values[i];
-        const ok = sigma ? Number.isFinite(v) && v > 0 : Number.isFinite(v) && v >= 0;
-        if (!ok) {
-            const place = (0,data_parts/* placeOfLine */.xX)({ file, parts }, lines[i]);
-            throw new errors/* InputError */.dz('bad-weight', `column \`${weighting.column}\` (\`data.${weighting.kind}\`) is ${v} on line ${place.line} of ${place.file}; expected ${sigma ? 'a finite standard uncertainty above 0' : 'a finite weight of 0 or more'}`, { file: place.file, line: place.line, key: weighting.column });
-        }
-        weights[i] = sigma ? 1 / (v * v) : v;
-    }
-    return sigma ? { weights, sigma: values.subarray(0, rows) } : { weights };
-}
-/**
- * The text of the category columns of a table, file by file (each part apart, its lines made
- * table-wide as the numeric read made them), checked to give the same rows as the numbers.
- * @throws InputError `csv-rows` when a file gives other rows of text than of numbers
- */
-async function readCategoryText(repo, table, names, maxBytes) {
-    const files = table.parts ?? [{ file: table.file, lineOffset: 0 }];
-    const out = new Map(names.map((n) => [n, []]));
-    let row = 0;
-    let left = maxBytes;
-    for (const part of files) {
-        const text = await readTextColumns(repo, part.file, names, Math.min(left, maxBytes));
-        left -= await repo.size(part.file);
-        const n = text.lines.length;
-        let same = row + n <= table.rows;
-        for (let i = 0; same && i < n; i++)
-            same = text.lines[i] + part.lineOffset === table.lines[row + i];
-        if (!same) {
-            // One file: the message as it always was; a part: its own count (the numbers' rows are the whole table's).
-            const numbers = table.parts === undefined ? `${table.rows} rows of numbers` : 'other rows of numbers';
-            throw new errors/* InputError */.dz('csv-rows', `${table.parts === undefined ? part.file : (0,errors/* clip */.$Q)(part.file)} gives ${n} rows of text for its category columns but ${numbers}; expected one record per line (no line breaks inside quoted category cells)`, { file: part.file });
-        }
-        for (const name of names) {
-            const values = out.get(name);
-            for (const v of text.columns.get(name))
-                values.push(v);
-        }
-        row += n;
-    }
-    if (row !== table.rows) {
-        throw new errors/* InputError */.dz('csv-rows', `${table.parts === undefined ? table.file : (0,errors/* clip */.$Q)(table.file)} gives ${row} rows of text for its category columns but ${table.rows} rows of numbers; expected one record per line (no line breaks inside quoted category cells)`, { file: table.parts?.[0]?.file ?? table.file });
-    }
-    return out;
-}
-/**
- * A missing column names the descriptor line that asked for it: `data.target`, or the first term
- * that reads the column. Other errors pass unchanged.
- */
-function withAsker(error, descriptor) {
-    if (!(error instanceof errors/* InputError */.dz) || error.code !== 'csv-missing-column' || error.location.key === undefined)
-        return error;
-    const column = error.location.key;
-    if (descriptor.data.weighting?.column === column) {
-        const w = descriptor.data.weighting;
-        return new errors/* InputError */.dz(error.code, `${error.message} (asked for by \`data.${w.kind}\` on line ${w.line} of ${descriptor.file})`, error.location);
-    }
-    const term = descriptor.terms.find((t) => t.kind === 'linear' ? t.columns.includes(column) : Array.isArray(t.of) ? t.of.includes(column) : t.of === column);
-    const asker = column === descriptor.data.target
-        ? `\`data.target\` on line ${descriptor.data.lines.target}`
-        : term
-            ? `the ${term.kind} term on line ${term.line}`
-            : null;
-    if (asker === null)
-        return error;
-    return new errors/* InputError */.dz(error.code, `${error.message} (asked for by ${asker} of ${(0,errors/* clip */.$Q)(descriptor.file)})`, error.location);
-}
-
-;// CONCATENATED MODULE: ./src/data/labels.ts
-/**
- * The target of a binary classifier as 0/1: the two classes of the training rows, whichever way
- * the file writes them (0/1, true/false, or two text labels with `data.positive` naming the
- * positive one), checked and mapped to 1 (positive) and 0 (negative).
- */
-
-
-
-
-
-
-/** Largest number of distinct labels collected before a target is judged not binary. */
-const MAX_LABELS = 20;
-/**
- * Reads a classifier's columns: the inputs as numbers, the target as two classes mapped to 1
- * (positive) and 0 (negative). Numbers: the two values 0 and 1 (1 positive), or two other
- * numbers with `data.positive` naming one. Text: `true`/`false` (any case; true positive), or
- * two labels with `data.positive` naming one. The hold-out rows may hold only labels the
- * training rows hold.
- * @throws InputError `target-classes` when the training rows hold fewer or more than two
- *   classes (naming those found), `positive-label` when `data.positive` is needed and missing or
- *   names no class found, and the errors of {@link loadModelData}
- */
-async function loadClassifierData(repo, descriptor, inputs, settings) {
-    let tables;
-    try {
-        tables = await loadModelData(repo, descriptor, inputs, settings);
-    }
-    catch (error) {
-        if (error instanceof errors/* InputError */.dz && error.code === 'csv-cell' && error.location.key === descriptor.data.target) {
-            return loadTextLabels(repo, descriptor, inputs, settings);
-        }
-        throw error;
-    }
-    const found = distinctNumbers(tables.train.y, tables.train.rows);
-    const shown = found.map((v) => String(v));
-    const labels = chooseClasses(descriptor, shown, 'numeric');
-    const positive = Number(labels.positive);
-    const negative = Number(labels.negative);
-    for (const data of [tables.train, tables.holdout]) {
-        const y = data.y;
-        for (let i = 0; i < data.rows; i++) {
-            const v = y[i];
-            if (v === positive)
-                y[i] = 1;
-            else if (v === negative)
-                y[i] = 0;
-            else
-                throw unknownLabel(descriptor, (0,data_parts/* placeOfLine */.xX)(data, data.lines[i]), String(v), labels);
-        }
-    }
-    return { ...tables, labels };
-}
-/** The inputs as numbers and the target as text labels (a second read of each file for the target). */
-async function loadTextLabels(repo, descriptor, inputs, settings) {
-    const { data } = descriptor;
-    const maxBytes = settings.caps.maxFileBytes;
-    const read = async (path, parts) => {
-        const table = await (0,data_table/* readTable */.xz)(repo, parts ?? path, { columns: [...inputs], maxBytes });
-        const codes = await partsLabelCodes(repo, parts ?? [path], data.target, descriptor, maxBytes);
-        if (codes.rows !== table.rows)
-            throw new Error(`label rows ${codes.rows} differ from data rows ${table.rows} in ${table.file}`);
-        return { table, codes };
-    };
-    const train = await read(data.train, data.trainParts);
-    const holdout = await read(data.holdout, data.holdoutParts);
-    const labels = chooseClasses(descriptor, train.codes.labels, 'text');
-    const toY = (part) => {
-        const y = new Float64Array(part.table.rows);
-        const meaning = part.codes.labels.map((label) => (label === labels.positive ? 1 : label === labels.negative ? 0 : -1));
-        for (let i = 0; i < y.length; i++) {
-            const m = meaning[part.codes.codes[i]];
-            if (m < 0)
-                throw unknownLabel(descriptor, (0,data_parts/* placeOfLine */.xX)(part.table, part.table.lines[i]), part.codes.labels[part.codes.codes[i]], labels);
-            y[i] = m;
-        }
-        return y;
-    };
-    const model = (part) => ({
-        inputs: inputs.map((c) => part.table.columns.get(c)),
-        y: toY(part),
-        lines: part.table.lines,
-        rows: part.table.rows,
-        file: part.table.file,
-        ...(part.table.parts ? { parts: part.table.parts } : {}),
-    });
-    return { train: model(train), holdout: model(holdout), trainColumns: train.table.columns, labels };
-}
-/**
- * Picks the positive and negative class among the labels found in the training rows.
- * @throws InputError `target-classes` or `positive-label`
- */
-function chooseClasses(descriptor, found, kind) {
-    const where = { file: descriptor.file, line: descriptor.data.lines.target, key: 'data.target' };
-    const list = found
-        .slice(0, 6)
-        .map((l) => (0,errors/* quoteValue */.cl)(l, 30))
-        .join(', ') + (found.length > 6 ? ', …' : '');
-    if (found.length !== 2) {
-        const count = found.length >= MAX_LABELS ? `at least ${MAX_LABELS}` : String(found.length);
-        throw new errors/* InputError */.dz('target-classes', `a binary classifier needs exactly two classes in the target \`${descriptor.data.target}\`; the training rows hold ${count} (${list})`, where);
-    }
-    const positive = descriptor.data.positive ?? null;
-    if (positive !== null) {
-        const at = found.indexOf(positive);
-        if (at < 0) {
-            throw new errors/* InputError */.dz('positive-label', `\`data.positive\` is ${(0,errors/* quoteValue */.cl)(positive, 30)} but the training rows' classes are ${list}; expected one of them`, {
-                ...where,
-                key: 'data.positive',
-            });
-        }
-        return { positive, negative: found[1 - at], kind };
-    }
-    if (kind === 'numeric' && found.includes('0') && found.includes('1'))
-        return { positive: '1', negative: '0', kind };
-    const lower = found.map((l) => l.toLowerCase());
-    if (lower.includes('true') && lower.includes('false')) {
-        const at = lower.indexOf('true');
-        return { positive: found[at], negative: found[1 - at], kind };
-    }
-    throw new errors/* InputError */.dz('positive-label', `the target \`${descriptor.data.target}\` holds the classes ${list}; set \`data.positive\` to the one that is the positive class (0/1 and true/false need no setting)`, where);
-}
-function unknownLabel(descriptor, place, label, labels) {
-    return new errors/* InputError */.dz('target-classes', `the target \`${descriptor.data.target}\` is ${(0,errors/* quoteValue */.cl)(label, 30)} on line ${place.line} of ${place.file}; the training rows' classes are ${(0,errors/* quoteValue */.cl)(labels.positive, 30)} and ${(0,errors/* quoteValue */.cl)(labels.negative, 30)}`, { file: descriptor.file, line: descriptor.data.lines.target, key: 'data.target' });
-}
-/** Distinct values of y[0..n), in order of first appearance (at most {@link MAX_LABELS}). */
-function distinctNumbers(y, n) {
-    const out = [];
-    for (let i = 0; i < n && out.length < MAX_LABELS; i++)
-        if (!out.includes(y[i]))
-            out.push(y[i]);
-    return out;
-}
-/**
- * Reads one column of a CSV file as text labels (trimmed), coded by first appearance. The same
- * CSV rules as the numeric reader (comma, `"` quotes, blank lines skipped), so rows line up.
- * @throws InputError `target-classes` when more than {@link MAX_LABELS} distinct labels appear
- */
-async function partsLabelCodes(repo, paths, column, descriptor, maxBytes) {
-    if (paths.length === 1)
-        return readLabelCodes(repo, paths[0], column, descriptor, maxBytes);
-    // Parts one after the other: each part's codes renumbered into the labels of all parts, by first appearance.
-    const labels = [];
-    const chunks = [];
-    let rows = 0;
-    for (const path of paths) {
-        const part = await readLabelCodes(repo, path, column, descriptor, maxBytes);
-        const map = part.labels.map((label) => {
-            const k = labels.indexOf(label);
-            if (k >= 0)
-                return k;
-            labels.push(label);
-            return labels.length - 1;
-        });
-        if (labels.length > MAX_LABELS) {
-            throw new errors/* InputError */.dz('target-classes', `a binary classifier needs exactly two classes in the target \`${column}\`; its parts hold more than ${MAX_LABELS}`, { file: descriptor.file, line: descriptor.data.lines.target, key: 'data.target' });
-        }
-        chunks.push(Int32Array.from(part.codes, (c) => map[c]));
-        rows += part.rows;
-    }
-    const codes = new Int32Array(rows);
-    let at = 0;
-    for (const chunk of chunks) {
-        codes.set(chunk, at);
-        at += chunk.length;
-    }
-    return { labels, codes, rows };
-}
-/**
- * One file's labels and codes (see {@link partsLabelCodes}); its bytes are read as the numeric
- * reader reads them (decompressed when `.gz`, held to the same byte cap).
- */
-async function readLabelCodes(repo, path, column, descriptor, maxBytes) {
-    const labels = [];
-    const index = new Map();
-    let codes = new Int32Array(1024);
-    let rows = 0;
-    let field = -1;
-    let tooMany = false;
-    const parser = (0,lib/* parse */.qg)({
-        bom: true,
-        delimiter: ',',
-        quote: '"',
-        escape: '"',
-        record_delimiter: ['\r\n', '\n'],
-        trim: true,
-        skip_empty_lines: true,
-        relax_column_count: true,
-    });
-    const consume = () => {
-        for (let record = parser.read(); record !== null; record = parser.read()) {
-            if (field < 0) {
-                field = record.indexOf(column);
-                continue;
-            }
-            const label = record[field] ?? '';
-            let code = index.get(label);
-            if (code === undefined) {
-                if (labels.length >= MAX_LABELS) {
-                    tooMany = true;
-                    continue;
-                }
-                code = labels.length;
-                labels.push(label);
-                index.set(label, code);
-            }
-            if (rows === codes.length) {
-                const next = new Int32Array(codes.length * 2);
-                next.set(codes);
-                codes = next;
-            }
-            codes[rows++] = code;
-        }
-    };
-    parser.on('readable', consume);
-    const done = new Promise((resolve, reject) => {
-        parser.on('end', resolve);
-        parser.on('error', reject);
-    });
-    for await (const piece of (0,gzip_stream/* openDataFile */.fu)(repo, path, maxBytes))
-        parser.write(Buffer.from(piece.buffer, piece.byteOffset, piece.byteLength));
-    parser.end();
-    await done;
-    consume();
-    if (tooMany) {
-        throw new errors/* InputError */.dz('target-classes', `a binary classifier needs exactly two classes in the target \`${column}\`; ${path} holds more than ${MAX_LABELS}`, {
-            file: descriptor.file,
-            line: descriptor.data.lines.target,
-            key: 'data.target',
-        });
-    }
-    return { labels, codes: codes.subarray(0, rows), rows };
-}
-
-;// CONCATENATED MODULE: ./src/design/column-spread.ts
-/**
- * Population standard deviations of the design columns, gathered block by block in the same
- * pass that folds rows into the factor. Sums are taken about each column's first value, which
- * keeps the subtraction well conditioned for columns with a large offset.
- */
-
-/** Running sums per column. */
-class ColumnSpread {
-    p;
-    shift;
-    s1;
-    s2;
-    n = 0;
-    /** @param p number of columns */
-    constructor(p) {
-        this.p = p;
-        this.shift = new Float64Array(p);
-        this.s1 = new Float64Array(p);
-        this.s2 = new Float64Array(p);
-    }
-    /** Adds a column-major block of `m` rows. */
-    add(X, m) {
-        if (m === 0)
-            return;
-        for (let j = 0; j < this.p; j++) {
-            const base = j * m;
-            if (this.n === 0)
-                this.shift[j] = X[base];
-            const column = X.subarray(base, base + m);
-            // One pass per sum (one loop per function; see DEVELOPERS.md, "Writing hot loops").
-            this.s1[j] += (0,stats/* sumOfDeviations */.jZ)(column, m, this.shift[j]);
-            this.s2[j] += (0,stats/* sumOfSquaredDeviations */.Mq)(column, m, this.shift[j]);
-        }
-        this.n += m;
-    }
-    /** Population standard deviation sqrt(mean((x - mean)^2)) of each column (NaN with no rows). */
-    sd() {
-        const out = new Float64Array(this.p);
-        for (let j = 0; j < this.p; j++) {
-            const mean = this.s1[j] / this.n;
-            out[j] = Math.sqrt(Math.max(0, this.s2[j] / this.n - mean * mean));
-        }
-        return out;
-    }
-}
-
-// EXTERNAL MODULE: ./src/design/design-matrix.ts
-var design_matrix = __nccwpck_require__(6566);
-// EXTERNAL MODULE: ./src/design/terms/index.ts + 8 modules
-var design_terms = __nccwpck_require__(6872);
-;// CONCATENATED MODULE: ./src/fit/gram-step.ts
-/**
- * Newton steps of a logistic fit from the weighted Gram matrix (normal equations) instead of a
- * QR factor, for well-conditioned problems.
- *
- * A pass accumulates the upper triangle of the Gram matrix of the extended block [sqrt(W) X | u]
- * with u_i = (y_i - p_i) / sqrt(W_i): its leading p x p part is X^T W X and its last column the
- * gradient X^T (y - p) of the log-likelihood. A symmetric rank-k update costs about p^2 / 2
- * multiply-adds per row, a Householder fold of the same row about 2 p^2 (Golub & Van Loan,
- * Matrix Computations, 4th ed., sec. 5.3.2 and 5.2.1). Gram matrices of disjoint sets of rows
- * at the same coefficients add exactly as matrices (no down-dating), so the Gram of the rows
- * without one cross-validation fold is the sum of the other folds' Grams.
- *
- * The step d solves (X^T W X + ridge E) d = X^T (y - p) - ridge E w by Cholesky on the
- * symmetrically scaled matrix S = D H D, D = diag(H)^-1/2 (Golub & Van Loan, sec. 4.2). The
- * normal equations square the condition number, so the Gram route is taken only when an upper
- * bound of the 2-norm condition number of S, p trace(S^-1) (lambda_max(S) <= trace(S) = p and
- * 1 / lambda_min(S) <= trace(S^-1)), is at most {@link GRAM_MAX_CONDITION}; the caller then falls
- * back to the QR engine. The step's relative error is then about p eps cond(S) <= 1e-8, which
- * changes the path of Newton's method, never its limit: the optimum is where the gradient, summed
- * row by row and exact up to rounding, vanishes.
- */
-/** Largest bound p trace(S^-1) on the condition number of the scaled Hessian for a Gram step (about the square of the design's 3e3). */
-const GRAM_MAX_CONDITION = 1e7;
-/**
- * Size of the Gram matrix of a p-column design extended by one column, rounded up to even (the
- * kernel, kernels/gram.ts, works on column pairs; the padding column is zero).
- */
-function gramSize(p) {
-    const q = p + 1;
-    return q + (q & 1);
-}
-/** out += a, entry by entry (Gram matrices of disjoint rows at the same coefficients add). */
-function addInto(out, a) {
-    for (let i = 0; i < out.length; i++)
-        out[i] += a[i];
-}
-/**
- * The Newton step of a Gram pass, or null when the scaled Hessian is not certainly well
- * conditioned (Cholesky breaks down, a value is not finite, or the bound exceeds
- * {@link GRAM_MAX_CONDITION}): the caller then solves with the QR engine.
- * @param G extended Gram (size {@link gramSize}(p)) at coefficients w
- * @param w the coefficients the Gram was taken at (length p)
- * @returns the new coefficients w + d and the Newton decrement d^T H d
- */
-function gramStep(G, w, ridge, penalised) {
-    const p = w.length;
-    const q = gramSize(p);
-    // H = X^T W X + ridge E and the right-hand side b = X^T (y - p) - ridge E w.
-    const H = new Float64Array(p * p);
-    const b = new Float64Array(p);
-    for (let k = 0; k < p; k++) {
-        for (let j = 0; j <= k; j++) {
-            const v = G[k * q + j];
-            H[k * p + j] = v;
-            H[j * p + k] = v;
-        }
-        b[k] = G[p * q + k];
-        if (penalised[k]) {
-            H[k * p + k] += ridge;
-            b[k] -= ridge * w[k];
-        }
-    }
-    const D = new Float64Array(p);
-    for (let j = 0; j < p; j++) {
-        const h = H[j * p + j];
-        if (!(h > 0 && Number.isFinite(h)))
-            return null;
-        D[j] = 1 / Math.sqrt(h);
-    }
-    // Cholesky S = L L^T of S = D H D (lower triangle, column-major L[j * p + i], i >= j).
-    const L = new Float64Array(p * p);
-    for (let j = 0; j < p; j++) {
-        for (let i = j; i < p; i++) {
-            let s = H[j * p + i] * D[i] * D[j];
-            for (let k = 0; k < j; k++)
-                s -= L[k * p + i] * L[k * p + j];
-            if (i === j) {
-                if (!(s > 0))
-                    return null;
-                L[j * p + j] = Math.sqrt(s);
-            }
-            else
-                L[j * p + i] = s / L[j * p + j];
-        }
-    }
-    // trace(S^-1) = ||L^-1||_F^2, by forward substitution for each unit vector.
-    let trace = 0;
-    const x = new Float64Array(p);
-    for (let c = 0; c < p; c++) {
-        for (let i = c; i < p; i++) {
-            let s = i === c ? 1 : 0;
-            for (let k = c; k < i; k++)
-                s -= L[k * p + i] * x[k];
-            x[i] = s / L[i * p + i];
-            trace += x[i] * x[i];
-        }
-    }
-    if (!(p * trace <= GRAM_MAX_CONDITION))
-        return null;
-    // S (D^-1 d) = D b.
-    const t = new Float64Array(p);
-    for (let i = 0; i < p; i++) {
-        let s = D[i] * b[i];
-        for (let k = 0; k < i; k++)
-            s -= L[k * p + i] * t[k];
-        t[i] = s / L[i * p + i];
-    }
-    for (let i = p - 1; i >= 0; i--) {
-        let s = t[i];
-        for (let k = i + 1; k < p; k++)
-            s -= L[i * p + k] * t[k];
-        t[i] = s / L[i * p + i];
-    }
-    const next = new Float64Array(p);
-    let decrement = 0;
-    for (let j = 0; j < p; j++) {
-        const d = D[j] * t[j];
-        next[j] = w[j] + d;
-        let hd = 0;
-        for (let k = 0; k < p; k++)
-            hd += H[k * p + j] * D[k] * t[k];
-        decrement += d * hd;
-    }
-    if (!next.every(Number.isFinite))
-        return null;
-    return { w: next, decrement };
-}
-
-// EXTERNAL MODULE: ./src/fit/qr-accumulator.ts
-var qr_accumulator = __nccwpck_require__(1355);
-// EXTERNAL MODULE: ./src/fit/index.ts + 2 modules
-var src_fit = __nccwpck_require__(2450);
-;// CONCATENATED MODULE: ./src/fit/logistic.ts
-/**
- * Binary logistic regression by iteratively reweighted least squares (IRLS), each Newton step
- * solved from the weighted Gram matrix or, when that is not certainly well conditioned, through
- * the streaming QR engine on the weighted design, block by block (memory grows with p^2 and the
- * block size, never with rows x p).
- *
- * Objective: F(w) = D(w) + ridge * sum over penalised j of w_j^2, with the deviance
- * D(w) = -2 sum_i [y_i log p_i + (1 - y_i) log(1 - p_i)], p_i = 1 / (1 + exp(-x_i^T w)). This is
- * 2 / C times the objective of scikit-learn's LogisticRegression with C = 1 / ridge and an
- * unpenalised intercept, so both have the same minimiser.
- *
- * Newton step (McCullagh & Nelder, Generalized Linear Models, 2nd ed., 1989, sec. 2.5; Green
- * 1984, JRSS B 46(2), "Iteratively reweighted least squares"): with W_i = p_i (1 - p_i) and the
- * working response z_i = eta_i + (y_i - p_i) / W_i, the next w minimises
- * sum_i W_i (z_i - x_i^T w)^2 + ridge ||E w||^2, i.e. the least squares of the rows
- * sqrt(W_i) x_i against sqrt(W_i) z_i with the ridge penalty rows, which the QR accumulator folds
- * (or, equivalently, (X^T W X + ridge E) d = X^T (y - p) - ridge E w for the step d = w_new - w)
- * (W_i is floored at 1e-14 so that a saturated row keeps a finite working response; the floor
- * changes the path, not the minimiser, where the gradient X^T (y - p) - ridge E w is zero).
- *
- * Step halving: when F at the new w is above F at the previous one (beyond 1e-12 relative, the
- * rounding of the sums), w moves half way back, up to 40 times.
- *
- * Stopping rule: the fit has converged when a Newton step lowers F by at most 1e-10 (|F| + 0.1)
- * (the relative rule of R's glm.fit, tighter: Newton converges quadratically, so the coefficients
- * of that step are accurate to about the square of the previous step's change), or, from the
- * second step on, when the Newton decrement of the step just solved (the decrease the quadratic
- * model predicts, d^T (X^T W X + ridge E) d) is at most that, the new coefficients then taken
- * without another pass; at most 100 Newton steps.
- *
- * Gram steps (gram-step.ts): a pass accumulates the weighted Gram matrix X^T W X and the gradient
- * X^T (y - p) instead of the QR factor (about a quarter of the multiply-adds per row), and the
- * Newton step is solved by Cholesky when the scaled Hessian is certainly well conditioned
- * (condition number bound at most 1e7); otherwise the problem repeats that pass at the same
- * coefficients with the QR engine and keeps it. Both solve the same Newton step up to rounding,
- * and the gradient that decides the optimum is summed row by row either way, so the optimum and
- * the stopping rule are the same. A problem that asks for its weighted factor
- * ({@link LogisticProblem.factor}) gets it from one QR pass at the returned coefficients.
- *
- * Shared Grams for cross-validation: a fit over all rows can keep one Gram per part of the rows
- * (the folds) at each pass; at the same coefficients every fold fit has the same weights, so the
- * Newton step of the fit without fold f is solved from the sum of the other folds' Grams
- * ({@link firstStepsWithout}) and the fold fits, started there, need one pass over the rows fewer.
- */
-
-
-
-
-
-/** Largest number of Newton steps. */
-const LOGISTIC_MAX_ITERATIONS = 100;
-/** Relative decrease of the objective at which IRLS stops. */
-const LOGISTIC_TOLERANCE = 1e-10;
-/** Smallest IRLS weight p (1 - p). */
-const MIN_WEIGHT = 1e-14;
-/** Largest number of step halvings in a row. */
-const MAX_HALVINGS = 40;
-/**
- * Fits one or more logistic regressions over the same design in shared passes (one pass over
- * the rows per Newton step of all problems still running: the design block is built once).
- *
- * @param design the fixed design
- * @param data the rows (y in {0, 1})
- * @param options ridge and penalised columns
- * @param problems the fits to make (e.g. the full fit, or one per cross-validation fold)
- * @returns one fit per problem, in order
- */
-function fitLogistic(design, data, options, problems) {
-    const p = design.p;
-    const maxIterations = options.maxIterations ?? LOGISTIC_MAX_ITERATIONS;
-    const states = problems.map((problem) => {
-        const s = {
-            problem,
-            w: problem.start ? Float64Array.from(problem.start) : new Float64Array(0),
-            previous: null,
-            previousObjective: Number.POSITIVE_INFINITY,
-            acc: new qr_accumulator/* QrAccumulator */.S(p),
-            deviance: 0,
-            rows: 0,
-            iterations: 0,
-            halvings: 0,
-            halvingRun: 0,
-            done: p === 0,
-            converged: p === 0,
-            lastFactor: null,
-            lastDeviance: Number.NaN,
-            partGram: null,
-            partRows: null,
-            partDev: null,
-            lastParts: null,
-            gram: true,
-            G: new Float64Array(0),
-            redo: false,
-        };
-        const first = problem.firstStep;
-        const prepared = first && p > 0 ? gramStep(first.gram, first.from, options.ridge, options.penalised) : null;
-        if (first && prepared) {
-            // Start after the prepared step: as if its pass had just been accepted and solved.
-            s.previous = Float64Array.from(first.from);
-            s.previousObjective = first.objective;
-            s.lastDeviance = first.deviance;
-            s.w = prepared.w;
-            s.iterations = 1;
-        }
-        else if (first) {
-            // The prepared Gram is not well conditioned: start where it was taken, with the QR engine.
-            s.w = Float64Array.from(first.from);
-            s.gram = false;
-        }
-        else if (!problem.start)
-            s.w = defaultStart(design, data, problem);
-        return s;
-    });
-    const q = gramSize(p);
-    const size = Math.max(1, Math.min(data.rows, 1 << 16));
-    const eta = new Float64Array(size);
-    const scale = new Float64Array(size);
-    const target = new Float64Array(size);
-    const index = new Int32Array(size);
-    const partScale = new Float64Array(size);
-    const resid = new Float64Array(size);
-    const partResid = new Float64Array(size);
-    const single = new Int32Array(2);
-    let work = new Float64Array(0);
-    for (let guard = 0; guard < (maxIterations + 1) * (MAX_HALVINGS + 2); guard++) {
-        const active = states.filter((s) => !s.done);
-        if (active.length === 0)
-            break;
-        for (const s of active) {
-            s.acc = new qr_accumulator/* QrAccumulator */.S(p);
-            s.G = new Float64Array(s.gram ? q * q : 0);
-            s.deviance = 0;
-            s.rows = 0;
-            const parts = s.problem.parts;
-            if (parts && s.gram) {
-                s.partGram = new Float64Array(parts.count * q * q);
-                s.partRows = new Float64Array(parts.count);
-                s.partDev = new Float64Array(parts.count);
-            }
-            else {
-                s.partGram = null;
-                s.partRows = null;
-                s.partDev = null;
-            }
-        }
-        (0,blocks/* forEachBlock */.aN)(design, data, (X, start, m) => {
-            if (work.length < m * p)
-                work = new Float64Array(m * p);
-            for (const s of active) {
-                eta.fill(0, 0, m);
-                (0,kernels/* addProducts */.kD)(eta, 0, X, m, s.w, p);
-                const { foldOf, exclude, parts } = s.problem;
-                if (parts && s.partGram && s.partRows && s.partDev) {
-                    // Every row, each into its part's Gram (rows of a part gathered in row order).
-                    weightRowsByPart(eta, data.y, start, m, parts.of, s.partDev, scale, resid);
-                    const offsets = sortByPart(parts.of, start, m, parts.count, index);
-                    gather(scale, index, m, partScale);
-                    gather(resid, index, m, partResid);
-                    (0,kernels/* addGramRows */.m$)(s.partGram, q, X, m, p, index, partScale, partResid, offsets, parts.count);
-                    for (let f = 0; f < parts.count; f++)
-                        s.partRows[f] += offsets[f + 1] - offsets[f];
-                    s.rows += m;
-                    continue;
-                }
-                const r = foldOf
-                    ? weightRows(eta, data.y, start, m, foldOf, exclude ?? -1, scale, target, resid, index)
-                    : weightAllRows(eta, data.y, start, m, scale, target, resid, index);
-                s.deviance += blockDeviance;
-                s.rows += r;
-                if (s.gram) {
-                    single[1] = r;
-                    (0,kernels/* addGramRows */.m$)(s.G, q, X, m, p, index, scale, resid, single, 1);
-                }
-                else {
-                    for (let j = 0; j < p; j++)
-                        scaleColumn(X, j * m, index, scale, r, work, j * r);
-                    s.acc.addRows(work, target, r);
-                }
-            }
-        });
-        for (const s of active) {
-            if (s.partGram && s.partDev) {
-                // The problem's Gram and deviance: the sums of its parts', in part order.
-                for (let f = 0; f < s.partDev.length; f++)
-                    addInto(s.G, s.partGram.subarray(f * q * q, (f + 1) * q * q));
-                s.deviance = 0;
-                for (let f = 0; f < s.partDev.length; f++)
-                    s.deviance += s.partDev[f];
-            }
-            step(s, options, maxIterations);
-        }
-    }
-    for (const s of states) {
-        // Problems that asked for their factor: one QR pass at the returned coefficients, which also
-        // gives the deviance and objective there.
-        if (!s.problem.factor || p === 0)
-            continue;
-        const at = factorAt(design, data, s.problem, s.w);
-        s.lastFactor = at.factor;
-        s.lastDeviance = at.deviance;
-        s.previousObjective = at.deviance + options.ridge * penaltySum(s.w, options.penalised);
-    }
-    return states.map((s) => ({
-        coefficients: s.w,
-        deviance: s.lastDeviance,
-        objective: s.previousObjective,
-        iterations: s.iterations,
-        halvings: s.halvings,
-        converged: s.converged,
-        rows: s.rows,
-        weightedFactor: s.lastFactor ?? (s.gram ? null : s.acc),
-        parts: s.lastParts,
-    }));
-}
-/** The QR factor of the weighted rows sqrt(W) [X | z] of a problem at coefficients w, and its deviance there, in one pass. */
-function factorAt(design, data, problem, w) {
-    const p = design.p;
-    const size = Math.max(1, Math.min(data.rows, 1 << 16));
-    const eta = new Float64Array(size);
-    const scale = new Float64Array(size);
-    const target = new Float64Array(size);
-    const resid = new Float64Array(size);
-    const index = new Int32Array(size);
-    const factor = new qr_accumulator/* QrAccumulator */.S(p);
-    let deviance = 0;
-    let work = new Float64Array(0);
-    (0,blocks/* forEachBlock */.aN)(design, data, (X, start, m) => {
-        if (work.length < m * p)
-            work = new Float64Array(m * p);
-        eta.fill(0, 0, m);
-        (0,kernels/* addProducts */.kD)(eta, 0, X, m, w, p);
-        const r = problem.foldOf
-            ? weightRows(eta, data.y, start, m, problem.foldOf, problem.exclude ?? -1, scale, target, resid, index)
-            : weightAllRows(eta, data.y, start, m, scale, target, resid, index);
-        deviance += blockDeviance;
-        for (let j = 0; j < p; j++)
-            scaleColumn(X, j * m, index, scale, r, work, j * r);
-        factor.addRows(work, target, r);
-    });
-    return { factor, deviance };
-}
-/**
- * The first Newton step of each fit without one part of the rows, from the per-part Grams of a
- * fit over all rows ({@link LogisticProblem.parts}): at the common coefficients `at` every row
- * has the same weight and residual in every such fit, so the Gram of the fit without part f is
- * the sum of the other parts' Grams (in part order; an exact addition, no subtraction), and its
- * deviance the sum of theirs. Each step is the Newton step a pass over those rows at `at` would
- * give (up to the rounding of the sums), so cross-validation folds started from the full fit need
- * one pass fewer. A fold whose summed Gram is not well conditioned starts at `at` instead.
- * @param parts the full fit's parts (at least 2)
- * @returns one prepared step per part, for {@link LogisticProblem.firstStep}
- */
-function firstStepsWithout(parts, options) {
-    const k = parts.grams.length;
-    const penalty = options.ridge * penaltySum(parts.at, options.penalised);
-    const steps = [];
-    for (let f = 0; f < k; f++) {
-        const gram = new Float64Array(gramSize(parts.at.length) ** 2);
-        let deviance = 0;
-        for (let q = 0; q < k; q++) {
-            if (q === f)
-                continue;
-            addInto(gram, parts.grams[q]);
-            deviance += parts.deviance[q];
-        }
-        steps.push({ from: parts.at, objective: deviance + penalty, deviance, gram });
-    }
-    return steps;
-}
-/** After a pass: accept the step (and solve the next), halve it, or stop. */
-function step(s, options, maxIterations) {
-    const objective = s.deviance + options.ridge * penaltySum(s.w, options.penalised);
-    if (s.redo) {
-        // The pass that was accepted, repeated at the same coefficients with the QR engine: solve only.
-        s.redo = false;
-        s.lastFactor = s.acc;
-        solveNext(s, options, objective);
-        return;
-    }
-    const noise = 1e-12 * (Math.abs(s.previousObjective) + 0.1);
-    if (s.previous !== null && !(objective <= s.previousObjective + noise)) {
-        // Not lower: halve the step back towards the previous coefficients.
-        s.halvings += 1;
-        s.halvingRun += 1;
-        if (s.halvingRun > MAX_HALVINGS || !Number.isFinite(s.previousObjective)) {
-            s.w = s.previous;
-            s.done = true;
-            return;
-        }
-        for (let j = 0; j < s.w.length; j++)
-            s.w[j] = (s.w[j] + s.previous[j]) / 2;
-        return;
-    }
-    s.halvingRun = 0;
-    s.lastFactor = s.gram ? null : s.acc;
-    s.lastDeviance = s.deviance;
-    s.lastParts =
-        s.partGram && s.partRows && s.partDev
-            ? {
-                at: Float64Array.from(s.w),
-                grams: Array.from(s.partDev, (_, f) => s.partGram.subarray(f * s.G.length, (f + 1) * s.G.length)),
-                rows: s.partRows,
-                deviance: s.partDev,
-            }
-            : null;
-    const decrease = s.previousObjective - objective;
-    s.previousObjective = objective;
-    if (s.previous !== null && decrease <= LOGISTIC_TOLERANCE * (Math.abs(objective) + 0.1)) {
-        s.done = true;
-        s.converged = true;
-        return;
-    }
-    if (s.iterations >= maxIterations) {
-        s.done = true;
-        return;
-    }
-    solveNext(s, options, objective);
-}
-/** Solves the Newton step from the pass just accepted (Gram, else QR factor), and stops when its decrement is below the tolerance. */
-function solveNext(s, options, objective) {
-    const previous = Float64Array.from(s.w);
-    let decrement;
-    if (s.gram) {
-        const next = gramStep(s.G, s.w, options.ridge, options.penalised);
-        if (next === null) {
-            // Not certainly well conditioned: the same pass again with the QR engine, from now on.
-            s.gram = false;
-            s.redo = true;
-            return;
-        }
-        s.w = next.w;
-        decrement = next.decrement;
-    }
-    else {
-        s.w = (0,src_fit/* solveCoefficients */.gQ)(s.acc, { ridge: options.ridge, penalised: options.penalised });
-        decrement = newtonDecrease(s.acc.R, s.w, previous, options);
-    }
-    s.previous = previous;
-    s.iterations += 1;
-    // Newton decrement: the quadratic model's decrease for the full step d = w_new - w, d^T (X^T W X + ridge E) d
-    // (= ||R d||^2 + ridge ||E d||^2 from a QR factor). When it is below the tolerance the new
-    // coefficients are taken without another pass (Boyd & Vandenberghe, Convex Optimization, 2004, sec. 9.5.1).
-    if (s.iterations > 1 && decrement <= LOGISTIC_TOLERANCE * (Math.abs(objective) + 0.1)) {
-        s.done = true;
-        s.converged = true;
-    }
-}
-/** ||R d||^2 + ridge ||E d||^2 with d = w - previous (R upper triangular, column-major p x p). */
-function newtonDecrease(R, w, previous, options) {
-    const p = w.length;
-    let total = 0;
-    for (let i = 0; i < p; i++) {
-        let row = 0;
-        for (let j = i; j < p; j++)
-            row += R[j * p + i] * (w[j] - previous[j]);
-        total += row * row;
-        if (options.penalised[i])
-            total += options.ridge * (w[i] - previous[i]) ** 2;
-    }
-    return total;
-}
-/** sum over penalised j of w_j^2. */
-function penaltySum(w, penalised) {
-    let s = 0;
-    for (let j = 0; j < w.length; j++)
-        if (penalised[j])
-            s += w[j] * w[j];
-    return s;
-}
-/** Zero coefficients, but the intercept (column 0 when the design has one) at logit of the mean target of the rows fitted. */
-function defaultStart(design, data, problem) {
-    const w = new Float64Array(design.p);
-    if (!design.intercept)
-        return w;
-    let n = 0;
-    let positives = 0;
-    for (let i = 0; i < data.rows; i++) {
-        if (problem.foldOf && problem.foldOf[i] === problem.exclude)
-            continue;
-        n += 1;
-        positives += data.y[i];
-    }
-    const mean = (positives + 0.5) / (n + 1);
-    w[0] = Math.log(mean / (1 - mean));
-    return w;
-}
-/** The deviance of the last block weighted (read right after {@link weightRows}). */
-let blockDeviance = 0;
-/**
- * The IRLS weights of one block: for each row kept, its index, sqrt(W), u = (y - p) / sqrt(W) and
- * sqrt(W) z = sqrt(W) eta + u, packed from 0; the block's deviance in {@link blockDeviance}.
- * @returns the number of rows kept
- */
-function weightRows(eta, y, start, m, foldOf, exclude, scale, target, resid, index) {
-    let r = 0;
-    let dev = 0;
-    for (let i = 0; i < m; i++) {
-        if (foldOf[start + i] === exclude)
-            continue;
-        const e = eta[i];
-        const yi = y[start + i];
-        const x = Math.exp(-Math.abs(e));
-        dev += 2 * (Math.log1p(x) + Math.max(e, 0) - yi * e);
-        const pr = e >= 0 ? 1 / (1 + x) : x / (1 + x);
-        const w = Math.max(pr * (1 - pr), MIN_WEIGHT);
-        const s = Math.sqrt(w);
-        scale[r] = s;
-        resid[r] = (yi - pr) / s;
-        target[r] = s * e + resid[r];
-        index[r] = i;
-        r++;
-    }
-    blockDeviance = dev;
-    return r;
-}
-/** {@link weightRows} for every row of the block. */
-function weightAllRows(eta, y, start, m, scale, target, resid, index) {
-    let dev = 0;
-    for (let i = 0; i < m; i++) {
-        const e = eta[i];
-        const yi = y[start + i];
-        const x = Math.exp(-Math.abs(e));
-        dev += 2 * (Math.log1p(x) + Math.max(e, 0) - yi * e);
-        const pr = e >= 0 ? 1 / (1 + x) : x / (1 + x);
-        const w = Math.max(pr * (1 - pr), MIN_WEIGHT);
-        const s = Math.sqrt(w);
-        scale[i] = s;
-        resid[i] = (yi - pr) / s;
-        target[i] = s * e + resid[i];
-        index[i] = i;
-    }
-    blockDeviance = dev;
-    return m;
-}
-/**
- * The out-of-fold deviance of k fits each made without one fold: per fold f, the deviance of the
- * rows of fold f under the coefficients of fit f, in one pass over the rows. Each row's logit is
- * summed column after column with its own fold's coefficients, as addProducts sums it, so the
- * figures are those of predicting each fold with its own fit.
- * @param foldOf fold of each row (0 .. k-1)
- * @param coefficients the k fits' coefficients, fit f made without fold f
- * @returns the deviance of each fold's rows (length k)
- */
-function outOfFoldDeviance(design, data, foldOf, coefficients) {
-    const k = coefficients.length;
-    const p = design.p;
-    const deviance = new Float64Array(k);
-    const eta = new Float64Array(Math.max(1, Math.min(data.rows, 1 << 16)));
-    const W = new Float64Array(p * k);
-    for (let f = 0; f < k; f++)
-        for (let j = 0; j < p; j++)
-            W[j * k + f] = coefficients[f][j];
-    (0,blocks/* forEachBlock */.aN)(design, data, (X, start, m) => {
-        eta.fill(0, 0, m);
-        for (let j = 0; j < p; j++)
-            addFoldColumn(eta, X, j * m, W, j * k, foldOf, start, m);
-        addFoldDeviance(deviance, eta, data.y, foldOf, start, m);
-    });
-    return deviance;
-}
-/** eta[i] += X[col + i] W[base + foldOf[start + i]] for i < m. */
-function addFoldColumn(eta, X, col, W, base, foldOf, start, m) {
-    for (let i = 0; i < m; i++)
-        eta[i] += X[col + i] * W[base + foldOf[start + i]];
-}
-/** deviance[foldOf[start + i]] += rowDeviance(eta[i], y[start + i]) for i < m, in row order. */
-function addFoldDeviance(deviance, eta, y, foldOf, start, m) {
-    for (let i = 0; i < m; i++)
-        deviance[foldOf[start + i]] += rowDeviance(eta[i], y[start + i]);
-}
-/**
- * sqrt(W) and u = (y - p) / sqrt(W) of every row of the block (as {@link weightRows}), each
- * row's deviance added to its part's sum (`partDev[of[start + i]]`).
- */
-function weightRowsByPart(eta, y, start, m, of, partDev, scale, resid) {
-    for (let i = 0; i < m; i++) {
-        const e = eta[i];
-        const yi = y[start + i];
-        const x = Math.exp(-Math.abs(e));
-        partDev[of[start + i]] += 2 * (Math.log1p(x) + Math.max(e, 0) - yi * e);
-        const pr = e >= 0 ? 1 / (1 + x) : x / (1 + x);
-        const w = Math.max(pr * (1 - pr), MIN_WEIGHT);
-        const s = Math.sqrt(w);
-        scale[i] = s;
-        resid[i] = (yi - pr) / s;
-    }
-}
-/** Block-row indices grouped by part (a stable counting sort into `index`); returns the offsets of the parts (length count + 1). */
-function sortByPart(of, start, m, count, index) {
-    const offsets = new Int32Array(count + 1);
-    for (let i = 0; i < m; i++)
-        offsets[of[start + i] + 1] += 1;
-    for (let q = 0; q < count; q++)
-        offsets[q + 1] += offsets[q];
-    const next = offsets.slice(0, count);
-    for (let i = 0; i < m; i++)
-        index[next[of[start + i]]++] = i;
-    return offsets;
-}
-/** out[k] = from[rows[k]] for k < r. */
-function gather(from, rows, r, out) {
-    for (let k = 0; k < r; k++)
-        out[k] = from[rows[k]];
-}
-/**
- * One row's deviance -2 [y log p + (1 - y) log(1 - p)] from eta = logit p, without overflow:
- * 2 [log(1 + exp(-|eta|)) + max(eta, 0) - y eta].
- */
-function rowDeviance(eta, y) {
-    return 2 * (Math.log1p(Math.exp(-Math.abs(eta))) + Math.max(eta, 0) - y * eta);
-}
-/** out[to + k] = scale[k] X[from + index[k]] for k < r. */
-function scaleColumn(X, from, index, scale, r, out, to) {
-    for (let k = 0; k < r; k++)
-        out[to + k] = scale[k] * X[from + index[k]];
-}
-
-// EXTERNAL MODULE: ./src/diagnostics/complexity.ts + 1 modules
-var complexity = __nccwpck_require__(7070);
-;// CONCATENATED MODULE: ./src/diagnostics/classifier-complexity.ts
-
-
-
-
-
-/**
- * Rows the classifier sweep uses at most (an even-stride subsample above it): every setting is
- * k IRLS fits, so the sweep is kept to a bounded cost; 20,000 rows rank the settings well within
- * their standard errors (common practice: the curve only has to rank the settings).
- */
-const CLASSIFIER_SWEEP_MAX_ROWS = 20000;
-/**
- * Sweeps the classifier's complexity setting. Ridge: lambda = s x 10^t, t = 3, 2, ..., -3, with
- * s = max(current lambda, rows / 1000), plus the current lambda, largest (simplest) first, each
- * setting's fit on all the sweep's rows started from the previous one's, and its fold fits from
- * it (their first Newton step from its per-fold Grams: fit/logistic.ts, firstStepsWithout). Degree: 1 .. current + 3 (at most 15). Width: current
- * x 2^t, t = 4 .. -2. Each setting: the mean of the fold log-losses and its standard error (sample
- * sd / sqrt(k)).
- * @returns null when there is nothing to sweep or fewer than 2 folds
- */
-function sweepClassifier(descriptor, design, train) {
-    const target = (0,complexity/* sweepTarget */.mb)(descriptor, design);
-    if (target === null || train.rows < 2)
-        return null;
-    const rows = train.rows > CLASSIFIER_SWEEP_MAX_ROWS ? (0,complexity/* subsample */.pb)(train, CLASSIFIER_SWEEP_MAX_ROWS) : train;
-    const folds = (0,diagnostics_folds/* assignFolds */.oF)(rows.rows, descriptor.fit.folds, descriptor.fit.foldOrder, descriptor.fit.seed);
-    if (folds.k < 2)
-        return null;
-    const ridge = descriptor.fit.ridge;
-    const points = [];
-    if (target.kind === 'ridge') {
-        const s = Math.max(ridge, rows.rows / 1000);
-        const grid = [];
-        for (let t = 3; t >= -3; t--)
-            grid.push(s * 10 ** t);
-        const lambdas = [...grid.filter((l) => l > ridge), ridge, ...grid.filter((l) => l < ridge)];
-        for (const l of lambdas)
-            points.push({ value: l, current: l === ridge, design, ridge: l });
-    }
-    else {
-        const trainColumns = new Map(design.inputs.map((name, c) => [name, train.inputs[c]]));
-        const spec = design.terms[target.term].spec;
-        const values = [];
-        if (target.kind === 'degree') {
-            const degree = spec.degree;
-            const top = Math.max(degree, Math.min(degree + 3, 15));
-            for (let g = 1; g <= top; g++)
-                values.push({ value: g, current: g === degree });
-        }
-        else {
-            const width = spec.width;
-            for (let t = 4; t >= -2; t--)
-                values.push({ value: width * 2 ** t, current: t === 0 });
-        }
-        for (const { value, current } of values) {
-            const changed = target.kind === 'degree' ? { ...spec, degree: value } : { ...spec, width: value };
-            const terms = design.terms.map((t, i) => (i === target.term ? (0,design_terms/* createTerm */.P)(changed, trainColumns, descriptor.file) : t));
-            points.push({ value, current, design: (0,design_matrix/* createDesign */.x)(terms, design.intercept), ridge });
-        }
-    }
-    const curve = [];
-    let start = null;
-    for (const point of points) {
-        const d = point.design;
-        const options = { ridge: point.ridge, penalised: [...d.penalised] };
-        // The fit on all the sweep's rows first (from the previous setting's, on the same design),
-        // keeping one Gram per fold: each fold's first Newton step then needs no pass of its own.
-        const [full] = fitLogistic(d, rows, options, [
-            { parts: { of: folds.foldOf, count: folds.k }, ...(start && d === design ? { start } : {}) },
-        ]);
-        if (d === design)
-            start = full.coefficients;
-        const steps = full.parts !== null ? firstStepsWithout(full.parts, options) : null;
-        const problems = Array.from({ length: folds.k }, (_, f) => ({
-            foldOf: folds.foldOf,
-            exclude: f,
-            ...(steps ? { firstStep: steps[f] } : { start: full.coefficients }),
-        }));
-        const fits = fitLogistic(d, rows, options, problems);
-        const deviance = outOfFoldDeviance(d, rows, folds.foldOf, fits.map((x) => x.coefficients));
-        const losses = Array.from(deviance, (dv, f) => dv / 2 / folds.sizes[f]);
-        const mean = losses.reduce((a, b) => a + b, 0) / losses.length;
-        const variance = losses.reduce((a, b) => a + (b - mean) ** 2, 0) / (losses.length - 1);
-        curve.push({ value: point.value, cvLogLoss: mean, standardError: Math.sqrt(variance / losses.length) });
-    }
-    const { best, chosen } = (0,complexity/* oneStandardErrorRule */.gs)(curve.map((c) => ({ mean: c.cvLogLoss, se: c.standardError })));
-    return { kind: target.kind, line: target.line, current: points.findIndex((p) => p.current), points: curve, chosen, best };
-}
-
-;// CONCATENATED MODULE: ./src/diagnostics/classification-metrics.ts
-/**
- * Figures of a binary classifier's probabilities against 0/1 labels: log-loss, Brier score,
- * accuracy at a threshold, ROC AUC (Mann-Whitney, ties counted half), class counts, and the
- * logistic recalibration (calibration intercept and slope, Cox 1958).
- */
-
-
-/** p = 1 / (1 + exp(-eta)) for every entry. */
-function probabilities(eta) {
-    const out = new Float64Array(eta.length);
-    for (let i = 0; i < eta.length; i++)
-        out[i] = 1 / (1 + Math.exp(-eta[i]));
-    return out;
-}
-/**
- * The figures of rows with labels y (0/1), linear predictors eta and probabilities p.
- * @param threshold a row is predicted positive when p >= threshold
- */
-function classificationFigures(y, eta, p, n, threshold) {
-    let dev = 0;
-    let brier = 0;
-    let correct = 0;
-    let positives = 0;
-    for (let i = 0; i < n; i++) {
-        const yi = y[i];
-        dev += rowDeviance(eta[i], yi);
-        const d = p[i] - yi;
-        brier += d * d;
-        if ((p[i] >= threshold ? 1 : 0) === yi)
-            correct += 1;
-        positives += yi;
-    }
-    return {
-        rows: n,
-        positives,
-        negatives: n - positives,
-        logLoss: dev / 2 / n,
-        brier: brier / n,
-        accuracy: correct / n,
-        auc: rocAuc(y, p, n),
-    };
-}
-/**
- * ROC AUC as the Mann-Whitney statistic: the share of (positive, negative) pairs in which the
- * positive scores higher, ties counted one half (Hanley & McNeil 1982, Radiology 143(1); equal to
- * the trapezoidal area under the ROC curve). NaN when either class is absent.
- */
-function rocAuc(y, score, n) {
-    let np = 0;
-    for (let i = 0; i < n; i++)
-        np += y[i];
-    const nn = n - np;
-    if (np === 0 || nn === 0)
-        return Number.NaN;
-    const pos = new Float64Array(np);
-    const neg = new Float64Array(nn);
-    let a = 0;
-    let b = 0;
-    for (let i = 0; i < n; i++) {
-        if (y[i] === 1)
-            pos[a++] = score[i];
-        else
-            neg[b++] = score[i];
-    }
-    (0,radix_sort/* sortFloat64 */.f)(pos);
-    (0,radix_sort/* sortFloat64 */.f)(neg);
-    return pairsAbove(pos, neg) / np / nn;
-}
-/** Sum over positives of (negatives below it + half the negatives equal to it), both sorted ascending. */
-function pairsAbove(pos, neg) {
-    let below = 0;
-    let equalEnd = 0;
-    let total = 0;
-    for (let i = 0; i < pos.length; i++) {
-        const v = pos[i];
-        while (below < neg.length && neg[below] < v)
-            below++;
-        if (equalEnd < below)
-            equalEnd = below;
-        while (equalEnd < neg.length && neg[equalEnd] === v)
-            equalEnd++;
-        total += below + (equalEnd - below) / 2;
-    }
-    return total;
-}
-/**
- * Calibration intercept and slope (Cox 1958, Biometrika 45(3-4), "Two further applications of a
- * model for binary regression"): the unpenalised logistic regression of y on the model's linear
- * predictor eta = logit p, by Newton's method on the two parameters with step halving, stopping
- * when a step lowers the deviance by at most 1e-12 relative (at most 100 steps). NaN when a class
- * is absent or eta is constant (the slope is then not identified); a separated recalibration
- * (perfect ranking) gives the large values its steps reach, flagged `converged: false`.
- */
-function calibration(y, eta, n) {
-    let positives = 0;
-    let lo = Number.POSITIVE_INFINITY;
-    let hi = Number.NEGATIVE_INFINITY;
-    for (let i = 0; i < n; i++) {
-        positives += y[i];
-        if (eta[i] < lo)
-            lo = eta[i];
-        if (eta[i] > hi)
-            hi = eta[i];
-    }
-    if (positives === 0 || positives === n || !(hi > lo))
-        return { intercept: Number.NaN, slope: Number.NaN, converged: false };
-    let a = Math.log(positives / (n - positives));
-    let b = 0;
-    let dev = twoParameterDeviance(y, eta, n, a, b);
-    for (let iter = 0; iter < 100; iter++) {
-        // Gradient and Hessian of the log-likelihood in (a, b).
-        let g0 = 0;
-        let g1 = 0;
-        let h00 = 0;
-        let h01 = 0;
-        let h11 = 0;
-        for (let i = 0; i < n; i++) {
-            const e = eta[i];
-            const pr = 1 / (1 + Math.exp(-(a + b * e)));
-            const r = y[i] - pr;
-            const w = pr * (1 - pr);
-            g0 += r;
-            g1 += r * e;
-            h00 += w;
-            h01 += w * e;
-            h11 += w * e * e;
-        }
-        const det = h00 * h11 - h01 * h01;
-        if (!(det > 0))
-            return { intercept: a, slope: b, converged: false };
-        let da = (h11 * g0 - h01 * g1) / det;
-        let db = (h00 * g1 - h01 * g0) / det;
-        let next = twoParameterDeviance(y, eta, n, a + da, b + db);
-        let halvings = 0;
-        while (!(next <= dev + 1e-13 * Math.abs(dev)) && halvings < 40) {
-            da /= 2;
-            db /= 2;
-            next = twoParameterDeviance(y, eta, n, a + da, b + db);
-            halvings++;
-        }
-        if (halvings >= 40)
-            return { intercept: a, slope: b, converged: false };
-        a += da;
-        b += db;
-        const decrease = dev - next;
-        dev = next;
-        if (decrease <= 1e-12 * (Math.abs(dev) + 0.1))
-            return { intercept: a, slope: b, converged: true };
-    }
-    return { intercept: a, slope: b, converged: false };
-}
-function twoParameterDeviance(y, eta, n, a, b) {
-    let dev = 0;
-    for (let i = 0; i < n; i++)
-        dev += rowDeviance(a + b * eta[i], y[i]);
-    return dev;
-}
-/**
- * Calibration diagram (reliability diagram; DeGroot & Fienberg 1983, The Statistician 32):
- * `bins` equal-width bins of the predicted probability, each with its count, mean prediction and
- * observed share of positives (the last bin includes 1).
- */
-function calibrationBins(y, p, n, bins = 10) {
-    const count = new Float64Array(bins);
-    const sumP = new Float64Array(bins);
-    const sumY = new Float64Array(bins);
-    for (let i = 0; i < n; i++) {
-        const b = Math.min(bins - 1, Math.floor(p[i] * bins));
-        count[b] += 1;
-        sumP[b] += p[i];
-        sumY[b] += y[i];
-    }
-    return Array.from(count, (c, b) => ({
-        from: b / bins,
-        to: (b + 1) / bins,
-        count: c,
-        predicted: c > 0 ? sumP[b] / c : Number.NaN,
-        observed: c > 0 ? sumY[b] / c : Number.NaN,
-    }));
-}
-/**
- * Points of the ROC curve (false positive rate, true positive rate) for drawing: the rates at the
- * thresholds t = 1 - k / max (k = 0 .. max; a row counts positive when p >= t), from (0, 0) to
- * (1, 1), counted in one pass over the rows (exact at those thresholds).
- */
-function rocPoints(y, p, n, max = 50) {
-    const pos = new Float64Array(max + 1);
-    const neg = new Float64Array(max + 1);
-    let positives = 0;
-    for (let i = 0; i < n; i++) {
-        // Bin k holds p in [1 - k/max, 1 - (k-1)/max): the rows first counted at threshold index k.
-        const k = Math.min(max, Math.max(0, Math.ceil((1 - p[i]) * max)));
-        if (y[i] === 1) {
-            pos[k] += 1;
-            positives += 1;
-        }
-        else {
-            neg[k] += 1;
-        }
-    }
-    const negatives = n - positives;
-    if (positives === 0 || negatives === 0)
-        return { fpr: [0, 1], tpr: [0, 1] };
-    const fpr = [0];
-    const tpr = [0];
-    let tp = 0;
-    let fp = 0;
-    for (let k = 0; k <= max; k++) {
-        tp += pos[k];
-        fp += neg[k];
-        fpr.push(fp / negatives);
-        tpr.push(tp / positives);
-    }
-    return { fpr, tpr };
-}
-
-// EXTERNAL MODULE: ./src/core/extremes.ts
-var extremes = __nccwpck_require__(398);
-;// CONCATENATED MODULE: ./src/diagnostics/separation.ts
-/**
- * Separation of a binary classifier's training rows (Albert & Anderson 1984, Biometrika 71(1),
- * "On the existence of maximum likelihood estimates in logistic regression models"): with
- * a_i = (2 y_i - 1) x_i, the rows are
- * - completely separated when some direction b gives a_i^T b > 0 for every row,
- * - quasi-completely separated when some b gives a_i^T b >= 0 for every row and > 0 for some,
- * - overlapping otherwise; only then do finite maximum-likelihood coefficients exist.
- *
- * Exact test by linear programming (the formulation of Konis 2007, "Linear programming algorithms
- * for detecting separated data in binary logistic regression models", DPhil thesis, University of
- * Oxford): maximise sum_{i in T} a_i^T b subject to a_i^T b >= 0 for every row and -1 <= b_j <= 1.
- * The optimum is positive exactly when some row of T can be separated; the rows with a_i^T b > 0
- * at the optimum are separated, and the test repeats with T = the rows not yet separated until the
- * optimum is 0. The union is the set of every separable row (the separating directions form a
- * convex cone, so the sum of those found separates all of them at once): complete separation when
- * it holds every row. Rows enter the program's constraints by cutting planes (a pass finds the rows
- * the current b violates and adds the worst), so the program stays small whatever the rows; the
- * simplex prices by Dantzig's rule and falls back to Bland's rule (no cycling on these degenerate
- * programs) when the objective stalls. On more than 4,000 rows an even-stride subset of 4,000 is
- * tested first: when its rows overlap and its design has full column rank, so do all rows (a
- * proof, not a sample estimate). Columns are scaled by their
- * largest magnitude; a_i^T b counts as positive above 1e-9 (|a_i| scaled, |b| <= 1).
- */
-
-
-
-/** Rows added to the program per cutting-plane round, at most. */
-const CUTS_PER_ROUND = 64;
-/** Largest number of row constraints in the program; beyond it the test gives up (`exact: false`). */
-const MAX_CUTS = 4000;
-/** A scaled a_i^T b above this counts as positive; below -this as violated. */
-const TOLERANCE = 1e-9;
-/** Rows listed in the result, at most. */
-const MAX_LISTED = 20;
-/**
- * Tests the training rows for separation (see the module comment).
- * @param design the fixed design (with its intercept column, if any)
- * @param data the training rows, y in {0, 1}
- */
-function findSeparation(design, data) {
-    if (data.rows > SUBSAMPLE_ROWS) {
-        // Overlap of a subset of rows whose design has full column rank proves overlap of all rows:
-        // every b with a_i^T b >= 0 on all rows has it on the subset, hence a_i^T b = 0 there, hence b = 0.
-        const sub = subsample(data, SUBSAMPLE_ROWS);
-        const found = separationOf(design, sub);
-        if (found.kind === 'none' && found.exact && fullColumnRank(design, sub))
-            return found;
-    }
-    return separationOf(design, data);
-}
-/** Rows of the even-stride subset tried first on large data. */
-const SUBSAMPLE_ROWS = 4000;
-/** Every (n / m)-th row. */
-function subsample(data, m) {
-    const n = data.rows;
-    const pick = (col, out) => {
-        for (let t = 0; t < m; t++)
-            out[t] = col[Math.floor((t * n) / m)];
-        return out;
-    };
-    return {
-        inputs: data.inputs.map((c) => pick(c, new Float64Array(m))),
-        y: pick(data.y, new Float64Array(m)),
-        rows: m,
-        lines: pick(data.lines, new Int32Array(m)),
-    };
-}
-/** Whether the design of these rows has rank p (the scaled-spectrum rule of the QR engine). */
-function fullColumnRank(design, data) {
-    const acc = new src_fit/* QrAccumulator */.SC(design.p);
-    const zeros = new Float64Array(Math.max(1, Math.min(data.rows, 1 << 16)));
-    (0,blocks/* forEachBlock */.aN)(design, data, (X, _start, m) => acc.addRows(X, zeros, m));
-    return (0,src_fit/* fitFactor */.Ps)(acc).rank === design.p;
-}
-/** The test on all of `data`'s rows (see the module comment). */
-function separationOf(design, data) {
-    const p = design.p;
-    const n = data.rows;
-    const none = { kind: 'none', separatedRows: 0, lines: [], columns: [], direction: new Array(p).fill(0), exact: true };
-    if (p === 0 || n === 0)
-        return none;
-    const scale = new Float64Array(p);
-    (0,blocks/* forEachBlock */.aN)(design, data, (X, _start, m) => {
-        for (let j = 0; j < p; j++)
-            for (let i = 0; i < m; i++)
-                scale[j] = Math.max(scale[j], Math.abs(X[j * m + i]));
-    });
-    for (let j = 0; j < p; j++)
-        if (!(scale[j] > 0) || !Number.isFinite(scale[j]))
-            scale[j] = 1;
-    const separated = new Uint8Array(n);
-    const total = new Float64Array(p);
-    let exact = true;
-    let count = 0;
-    const cuts = [];
-    for (let round = 0; round < n + 1; round++) {
-        // Objective: the sum of a_i over the rows not yet separated.
-        const c = new Float64Array(p);
-        (0,blocks/* forEachBlock */.aN)(design, data, (X, start, m) => {
-            for (let i = 0; i < m; i++) {
-                if (separated[start + i])
-                    continue;
-                const sign = 2 * data.y[start + i] - 1;
-                for (let j = 0; j < p; j++)
-                    c[j] += (sign * X[j * m + i]) / scale[j];
-            }
-        });
-        const solved = solveWithCuts(design, data, scale, c, cuts);
-        if (!solved.exact)
-            exact = false;
-        const b = solved.b;
-        let found = 0;
-        (0,blocks/* forEachBlock */.aN)(design, data, (X, start, m) => {
-            for (let i = 0; i < m; i++) {
-                if (separated[start + i])
-                    continue;
-                if (rowValue(X, m, i, p, b, scale, 2 * data.y[start + i] - 1) > TOLERANCE) {
-                    separated[start + i] = 1;
-                    found += 1;
-                }
-            }
-        });
-        if (found === 0)
-            break;
-        count += found;
-        for (let j = 0; j < p; j++)
-            total[j] += b[j];
-        if (count === n || !solved.exact)
-            break;
-    }
-    if (count === 0)
-        return { ...none, exact };
-    const lines = [];
-    for (let i = 0; i < n && lines.length < MAX_LISTED; i++)
-        if (separated[i])
-            lines.push(data.lines[i]);
-    const big = (0,extremes/* maxOf */._)(Array.from(total, Math.abs));
-    const columns = [];
-    const direction = [];
-    for (let j = 0; j < p; j++) {
-        const v = total[j] / big;
-        if (Math.abs(v) > 1e-6)
-            columns.push(j);
-        direction.push(Math.abs(v) > 1e-6 ? v / scale[j] : 0);
-    }
-    return { kind: count === n ? 'complete' : 'quasi-complete', separatedRows: count, lines, columns, direction, exact };
-}
-/** (2y - 1) x_i^T b with x scaled column by column. */
-function rowValue(X, m, i, p, b, scale, sign) {
-    let s = 0;
-    for (let j = 0; j < p; j++)
-        s += (X[j * m + i] / scale[j]) * b[j];
-    return sign * s;
-}
-/**
- * Maximises c^T b over -1 <= b <= 1 and a_i^T b >= 0 for every row, adding violated rows to
- * `cuts` (kept between calls: a cut stays valid) until the solution violates none.
- */
-function solveWithCuts(design, data, scale, c, cuts) {
-    const p = design.p;
-    // Each round adds at least one cut or returns, and the cuts are capped: at most MAX_CUTS rounds.
-    for (let round = 0; round <= MAX_CUTS; round++) {
-        const b = simplexMax(c, cuts, p);
-        const worst = [];
-        (0,blocks/* forEachBlock */.aN)(design, data, (X, start, m) => {
-            for (let i = 0; i < m; i++) {
-                const sign = 2 * data.y[start + i] - 1;
-                const v = rowValue(X, m, i, p, b, scale, sign);
-                if (v >= -TOLERANCE)
-                    continue;
-                if (worst.length === CUTS_PER_ROUND && v >= worst[worst.length - 1].value)
-                    continue;
-                const row = new Float64Array(p);
-                for (let j = 0; j < p; j++)
-                    row[j] = (sign * X[j * m + i]) / scale[j];
-                worst.push({ value: v, row });
-                worst.sort((a, z) => a.value - z.value);
-                if (worst.length > CUTS_PER_ROUND)
-                    worst.pop();
-            }
-        });
-        if (worst.length === 0)
-            return { b, exact: true };
-        if (cuts.length + worst.length > MAX_CUTS)
-            return { b: new Float64Array(p), exact: false };
-        for (const w of worst)
-            cuts.push(w.row);
-    }
-    return { b: new Float64Array(p), exact: false };
-}
-/**
- * Dense tableau simplex for max c^T b, -1 <= b_j <= 1, a^T b >= 0 for each a in `rows`, with
- * b = u - v (u, v >= 0, u_j + v_j <= 1): every right-hand side is 0 or 1, so the origin is a
- * feasible start (no phase one). Dantzig's rule (the most negative reduced cost enters) while the
- * objective rises; after 50 pivots without a rise, Bland's rule (the lowest-index improving column
- * enters, the lowest-index basic variable among ratio ties leaves), which cannot cycle. At most
- * 100,000 pivots.
- */
-function simplexMax(c, rows, p) {
-    const r = rows.length;
-    const mRows = r + p;
-    const nVars = 2 * p;
-    const cols = nVars + mRows + 1; // variables, slacks, right-hand side
-    const T = new Float64Array((mRows + 1) * cols);
-    const basis = new Int32Array(mRows);
-    for (let k = 0; k < r; k++) {
-        // -a^T (u - v) <= 0
-        const a = rows[k];
-        for (let j = 0; j < p; j++) {
-            T[k * cols + j] = -a[j];
-            T[k * cols + p + j] = a[j];
-        }
-    }
-    for (let j = 0; j < p; j++) {
-        const k = r + j;
-        T[k * cols + j] = 1;
-        T[k * cols + p + j] = 1;
-        T[k * cols + cols - 1] = 1;
-    }
-    for (let k = 0; k < mRows; k++) {
-        T[k * cols + nVars + k] = 1;
-        basis[k] = nVars + k;
-    }
-    const z = mRows * cols;
-    for (let j = 0; j < p; j++) {
-        T[z + j] = -c[j];
-        T[z + p + j] = c[j];
-    }
-    const nonZero = new Int32Array(cols);
-    const eps = 1e-12;
-    let stalled = 0;
-    let objective = 0;
-    for (let iter = 0; iter < 100000; iter++) {
-        // Dantzig's rule (most negative reduced cost) while the objective rises; Bland's rule after
-        // 50 pivots without a rise, which cannot cycle.
-        const bland = stalled > 50;
-        let enter = -1;
-        let most = -eps;
-        for (let j = 0; j < cols - 1; j++) {
-            if (T[z + j] < most) {
-                enter = j;
-                if (bland)
-                    break;
-                most = T[z + j];
-            }
-        }
-        if (enter < 0)
-            break;
-        let leave = -1;
-        let best = Number.POSITIVE_INFINITY;
-        for (let k = 0; k < mRows; k++) {
-            const a = T[k * cols + enter];
-            if (a <= eps)
-                continue;
-            const ratio = T[k * cols + cols - 1] / a;
-            if (ratio < best - 1e-15 || (Math.abs(ratio - best) <= 1e-15 && basis[k] < basis[leave])) {
-                best = ratio;
-                leave = k;
-            }
-        }
-        if (leave < 0)
-            break; // unbounded cannot happen (every variable is bounded)
-        const pivot = T[leave * cols + enter];
-        for (let j = 0; j < cols; j++)
-            T[leave * cols + j] /= pivot;
-        // Only the pivot row's non-zero entries change the other rows (most of its slack part is zero).
-        let nnz = 0;
-        for (let j = 0; j < cols; j++)
-            if (T[leave * cols + j] !== 0)
-                nonZero[nnz++] = j;
-        for (let k = 0; k <= mRows; k++) {
-            if (k === leave)
-                continue;
-            const f = T[k * cols + enter];
-            if (f === 0)
-                continue;
-            eliminate(T, k * cols, leave * cols, f, nonZero, nnz);
-        }
-        basis[leave] = enter;
-        const now = T[z + cols - 1];
-        stalled = now > objective + 1e-12 ? 0 : stalled + 1;
-        objective = Math.max(objective, now);
-    }
-    const x = new Float64Array(nVars);
-    for (let k = 0; k < mRows; k++)
-        if (basis[k] < nVars)
-            x[basis[k]] = T[k * cols + cols - 1];
-    const b = new Float64Array(p);
-    for (let j = 0; j < p; j++)
-        b[j] = x[j] - x[p + j];
-    return b;
-}
-/** T[row + j] -= f T[pivot + j] for the pivot row's non-zero columns j = nonZero[t], t < nnz. */
-function eliminate(T, row, pivot, f, nonZero, nnz) {
-    for (let t = 0; t < nnz; t++) {
-        const j = nonZero[t];
-        T[row + j] -= f * T[pivot + j];
-    }
-}
-
-// EXTERNAL MODULE: ./src/design/terms/transform.ts
-var terms_transform = __nccwpck_require__(7922);
-// EXTERNAL MODULE: ./src/design/weighted-design.ts
-var weighted_design = __nccwpck_require__(9416);
-// EXTERNAL MODULE: ./src/core/format.ts
-var format = __nccwpck_require__(6228);
-;// CONCATENATED MODULE: ./src/run/cost.ts
-
-
-
-
-
-/** Operations to build one design value of a Gaussian radial column (an exponential). */
-const BUILD_RBF = 20;
-/** Operations to build one design value of any other column (a copy, a power). */
-const BUILD_OTHER = 4;
-/**
- * Operations of one SVD of a p x p matrix, per p^3: one-sided Jacobi takes about 5.5 p^3
- * multiply-adds a sweep and converges in about 12 sweeps (measured: 70).
- */
-const SVD_OPERATIONS = 70;
-/**
- * SVDs' worth of work in one fit of the full factor: the scaled spectrum, the raw singular
- * values, the penalised factor's rank, the truncated solver of a rank-deficient factor and the
- * hat trace (measured on rank-deficient designs: about 10).
- */
-const FIT_SVDS = 10;
-/**
- * SVDs' worth of work in one solve of a fold's complement when its rank is in doubt (the rank
- * test, then the scaled spectrum and the truncated solver; measured: about 5).
- */
-const SOLVE_SVDS = 5;
-/**
- * Operations per row and p^2 of the leverages: forward substitution is p^2 / 2; a rank-deficient
- * factor's pseudo-inverse takes up to 4 times as long (measured: 3.5).
- */
-const LEVERAGE_OPERATIONS = 2;
-/**
- * Operations per row of the leakage scan: two probes of hash tables of the hold-out rows, each
- * a likely cache miss once the tables outgrow the cache (measured: about 200).
- */
-const LEAKAGE_ROW_OPERATIONS = 200;
-/** Operations of building `rows` rows of a design whose row costs `buildPerRow`. */
-function build(rows, buildPerRow) {
-    return rows * buildPerRow;
-}
-/** Operations to build one row of a design. */
-function buildCost(design) {
-    let ops = design.intercept ? BUILD_OTHER : 0;
-    for (const t of design.terms)
-        ops += t.columnNames.length * (t.spec.kind === 'rbf' ? BUILD_RBF : BUILD_OTHER);
-    return ops;
-}
-/** The sizes of a planned model. */
-function modelShape(descriptor, design, trainRows, holdoutRows, sampleRows) {
-    const sampled = sampleRows ?? trainRows;
-    return {
-        trainRows,
-        holdoutRows,
-        inputs: design.inputs.length,
-        columns: design.p,
-        buildPerRow: buildCost(design),
-        folds: Math.min(descriptor.fit.folds, trainRows),
-        shipped: descriptor.coefficients !== null,
-        sweep: (0,complexity/* sweepShape */.EH)(descriptor, design, sampled, { maxRows: complexity/* SWEEP_MAX_ROWS */.QA }),
-        ...(sampleRows === undefined ? {} : { sampleRows }),
-        ...(descriptor.data.targetTransform ? { targetTransform: true } : {}),
-    };
-}
-/** Points of the swing scan at most (every input's grid, the margins, the neighbour segments). */
-function swingPoints(inputs, rows) {
-    const s = swing/* SWING_DEFAULTS */.qk;
-    const gaps = Math.min(Math.max(0, rows - 1), s.maxGridRows) * inputs;
-    const gapPoints = Math.min(gaps, s.maxGaps + inputs) * s.perGap;
-    const segments = inputs >= 2 ? Math.min(rows, s.maxRows) * s.neighbours * s.segmentPoints : 0;
-    return inputs * (s.uniform + 2 * s.marginPoints) + gapPoints + segments;
-}
-/**
- * Estimates the operations of every stage of one model (see the module comment for the unit).
- * With n training rows, m hold-out rows, p columns, b operations to build a row, k folds and d
- * inputs:
- *
- * - fold pass: n (b + p^2); merges of the fold factors: 4 k p^3 (the full factor and every
- *   fold's complement);
- * - fit: {@link FIT_SVDS} SVDs of p x p ({@link SVD_OPERATIONS} p^3 each);
- * - refinement pass: n (b + 2p); scoring pass: n (b + {@link LEVERAGE_OPERATIONS} p^2 + 2p),
- *   hold-out rows m (b + p), shipped coefficients (n + m)(b + p);
- * - cross-validation solves: k ({@link SOLVE_SVDS} SVDs + p^3 / 3);
- * - swing scan: its points (b + p), the neighbour search 1000^2 d, the grid sorts;
- * - leakage: (n + m)({@link LEAKAGE_ROW_OPERATIONS} + 4d); charts: curves of 401 points per input (at most 12);
- * - complexity sweep: a ridge sweep k SVDs and 2 L k p^2 for L penalties; a degree or width
- *   sweep, per setting of p_s columns on its n_s rows, n_s (2 b_s + p_s^2 + p_s) + 4 k p_s^3 +
- *   k ({@link SOLVE_SVDS} SVDs + p_s^3 / 3);
- * - a transformed target's original scale: the out-of-fold pass n (b + p) and k fold solves.
- */
-function estimateCost(shape) {
-    const { trainRows: n, holdoutRows: m, columns: p, buildPerRow: b, inputs: d } = shape;
-    const k = shape.folds >= 2 ? shape.folds : 0;
-    const p2 = p * p;
-    const p3 = p2 * p;
-    const svd = (q) => SVD_OPERATIONS * q * q * q;
-    const solves = (folds, q) => folds * (SOLVE_SVDS * svd(q) + (q * q * q) / 3);
-    const rowsBy = (rows) => `${rows} rows x ${p} columns`;
-    const parts = [
-        { stage: 'fold pass', operations: build(n, b) + n * p2, sizes: rowsBy(n) },
-        { stage: 'fold merges and fit', operations: 4 * k * p3 + FIT_SVDS * svd(p), sizes: `${k} folds, ${p} columns` },
-        { stage: 'refinement pass', operations: build(n, b) + 2 * n * p, sizes: rowsBy(n) },
-        {
-            stage: 'scoring pass',
-            operations: build(n, b) + n * (LEVERAGE_OPERATIONS * p2 + 2 * p) + build(m, b) + m * p + (shape.shipped ? build(n + m, b) + (n + m) * p : 0),
-            sizes: `${n} + ${m} rows x ${p} columns`,
-        },
-        { stage: 'cross-validation', operations: solves(k, p), sizes: `${k} fold solves of ${p} columns` },
-    ];
-    // A streamed model's swing scan and charts read its sample (ns rows); leakage streams every row.
-    const ns = shape.sampleRows ?? n;
-    const grid = swingPoints(d, ns);
-    const sampled = Math.min(ns, swing/* SWING_DEFAULTS */.qk.maxRows);
-    const sorted = Math.min(ns, swing/* SWING_DEFAULTS */.qk.maxGridRows);
-    parts.push({
-        stage: 'swing scan',
-        operations: grid * (b + p) + (d >= 2 ? sampled * sampled * d : 0) + d * (32 * sorted + 4 * ns),
-        sizes: `${grid} points`,
-    });
-    const curves = Math.min(d, MAX_PARTIAL_CURVES);
-    parts.push({
-        stage: 'leakage and charts',
-        operations: (n + m) * (LEAKAGE_ROW_OPERATIONS + 4 * d) + curves * CURVE_POINTS * (b + p) + 4 * ns * d,
-        sizes: `${n} + ${m} rows x ${d} inputs`,
-    });
-    parts.push(sweepPart(shape, k));
-    if (shape.targetTransform === true)
-        parts.push({ stage: 'original scale of the target', operations: build(n, b) + n * p + solves(k, p), sizes: rowsBy(n) });
-    return { total: parts.reduce((sum, part) => sum + part.operations, 0), parts };
-}
-/** The complexity sweep's share (see {@link estimateCost}). */
-function sweepPart(shape, k) {
-    const sweep = shape.sweep;
-    if (sweep === null || k < 2)
-        return { stage: 'complexity sweep', operations: 0, sizes: 'no setting to sweep' };
-    const p = shape.columns;
-    if (sweep.kind === 'ridge') {
-        const L = sweep.parameters.length;
-        return {
-            stage: 'complexity sweep',
-            operations: k * SVD_OPERATIONS * p * p * p + 2 * L * k * p * p,
-            sizes: `${L} ridge penalties x ${k} folds`,
-        };
-    }
-    const perColumn = shape.buildPerRow / Math.max(1, p);
-    let ops = 0;
-    for (const q of sweep.parameters) {
-        const bq = perColumn * q;
-        ops += sweep.rows * (2 * bq + q * q + q) + 4 * k * q * q * q + k * (SOLVE_SVDS * SVD_OPERATIONS * q * q * q + (q * q * q) / 3);
-    }
-    return { stage: 'complexity sweep', operations: ops, sizes: `${sweep.parameters.length} ${sweep.kind} settings on ${sweep.rows} rows` };
-}
-/** Error code of a model whose estimate is over `caps.max_operations`. */
-const OVER_BUDGET = 'over-budget';
-/** A count of operations for people: `4.2e10`. */
-function formatOperations(x) {
-    return x < 1e6 ? (0,format/* formatNumber */.Z)(Math.round(x)) : x.toExponential(1).replace('e+', 'e');
-}
-/**
- * Refuses a model whose estimate is over the cap.
- * @param descriptor the model (its `terms` line is named)
- * @param estimate from {@link estimateCost}
- * @param settings the settings file (`caps.maxOperations`, and its path for the message)
- * @throws InputError {@link OVER_BUDGET} naming the largest stages and the cap to raise
- */
-function checkBudget(descriptor, estimate, settings) {
-    const cap = settings.caps.maxOperations;
-    if (!(estimate.total > cap))
-        return;
-    const largest = estimate.parts
-        .filter((part) => part.operations > 0)
-        .sort((a, b) => b.operations - a.operations)
-        .slice(0, 3)
-        .map((part) => `${part.stage} ${formatOperations(part.operations)} (${part.sizes})`)
-        .join(', ');
-    throw new errors/* InputError */.dz(OVER_BUDGET, `the estimated work of this model, ${formatOperations(estimate.total)} operations, is over the cap of ${formatOperations(cap)} (largest: ${largest}); raise caps.max_operations in ${settings.file ?? 'the settings file (fitgate.yml)'} to allow it, or use fewer rows, columns, folds or sweep settings`, { file: descriptor.file, line: descriptor.termsLine, key: 'terms' });
-}
-
-;// CONCATENATED MODULE: ./src/run/plan.ts
-
-
-
-
-
-
-
-
-
-
-
-
-
-
-/**
- * Largest number of design columns. The diagnostics take singular value decompositions of p x p
- * factors (several per model and fold when the design is rank deficient), whose cost grows with
- * p^3: at 200 columns each takes about 0.4 s here, so a pull request cannot make a run take hours.
- */
-const MAX_PARAMETERS = 200;
-/**
- * Largest magnitude of a design value or target: sums of squares of up to 1e9 rows must stay
- * finite in double precision (1e140^2 * 1e9 = 1e289 < 1.8e308).
- */
-const MAX_MAGNITUDE = 1e140;
-/**
- * Plans one model.
- * @param load how the columns are read: default {@link loadModelData}; classifiers read their target as two classes
- * @throws InputError for bad data, a design over the caps, a target out of range or constant
- *   or work estimated over `caps.max_operations` (`over-budget`)
- */
-async function planModel(repo, descriptor, settings, load = loadModelData, scale = {}) {
-    const inputs = [];
-    for (const t of descriptor.terms)
-        for (const c of (0,design_terms/* termInputs */.Q)(t))
-            if (!inputs.includes(c))
-                inputs.push(c);
-    const file = descriptor.file;
-    // A streamed training file meets the checks of every row chunk by chunk in its sampling read.
-    const everyRow = (data) => {
-        (0,core_deadline/* checkDeadline */.Ft)('reading of the data');
-        for (const spec of descriptor.terms)
-            (0,terms_transform/* checkTransformDomain */.F4)(spec, (0,design_terms/* termInputs */.Q)(spec), data, inputs);
-        checkTargetRange(descriptor, data);
-    };
-    let tables = await load(repo, descriptor, inputs, settings, { ...scale, onTrainChunk: everyRow });
-    (0,core_deadline/* checkDeadline */.Ft)('reading of the data');
-    const { train } = tables;
-    const streamed = tables.streamed ?? null;
-    const rows = streamed === null ? train.rows : streamed.rows;
-    // A transformed input outside its transform's domain is an error naming file, line, column, value.
-    for (const spec of descriptor.terms)
-        for (const data of streamed === null ? [train, tables.holdout] : [tables.holdout])
-            (0,terms_transform/* checkTransformDomain */.F4)(spec, (0,design_terms/* termInputs */.Q)(spec), data, inputs);
-    // Fix term parameters from the training rows, then check the size before taking memory.
-    const terms = descriptor.terms.map((spec) => (0,design_terms/* createTerm */.P)(spec, tables.trainColumns, file, tables.levels, tables.streamed?.inputStats));
-    const design = (0,design_matrix/* createDesign */.x)(terms, descriptor.fit.intercept);
-    const p = design.p;
-    if (p > MAX_PARAMETERS) {
-        throw new errors/* InputError */.dz('too-many-parameters', `the terms build ${p} design columns; at most ${MAX_PARAMETERS} are supported (the diagnostics decompose p x p factors, at a cost that grows with p^3); use fewer radial centres or a lower degree`, { file, line: descriptor.termsLine, key: 'terms' });
-    }
-    // caps.max_cells guards the memory of columns held whole; a streamed model holds none (its
-    // work is still held to caps.max_operations below).
-    if (streamed === null && rows * p > settings.caps.maxCells) {
-        throw new errors/* InputError */.dz('too-large', `${rows} training rows x ${p} parameters = ${rows * p} cells is over the cap of ${settings.caps.maxCells}; raise caps.max_cells in the settings file to allow it`, { file, line: descriptor.termsLine, key: 'terms' });
-    }
-    for (const data of streamed === null ? [train, tables.holdout] : [tables.holdout])
-        checkTargetRange(descriptor, data);
-    // `data.target_transform`: the fit and every figure of the passes work on t = g(y) (a streamed
-    // training file is refused with a transform: data/load-model-data.ts).
-    const transform = descriptor.data.targetTransform ?? null;
-    let originalTargets = null;
-    if (transform !== null && streamed === null) {
-        const transformed = (0,target_transform/* transformTables */.mZ)(tables, transform.kind, descriptor.data.target);
-        tables = transformed.tables;
-        originalTargets = transformed.original;
-    }
-    const targetStats = streamed === null ? (0,stats/* meanAndSd */.ud)(tables.train.y, tables.train.rows) : { mean: streamed.targetMean, sd: streamed.targetSd };
-    if (!(targetStats.sd > 0)) {
-        throw new errors/* InputError */.dz('constant-target', `the target \`${(0,errors/* clip */.$Q)(descriptor.data.target)}\` is constant (${train.y[0]}) in every training row; there is nothing to model`, { file, line: descriptor.data.lines.target, key: 'data.target' });
-    }
-    // The whole model's work, estimated from its shape before the first pass over the rows.
-    checkBudget(descriptor, estimateCost(modelShape(descriptor, design, rows, tables.holdout.rows, streamed === null ? undefined : train.rows)), settings);
-    const { folds: k, foldOrder, seed } = descriptor.fit;
-    if (streamed !== null) {
-        return {
-            descriptor,
-            tables,
-            design,
-            folds: (0,diagnostics_folds/* streamedFolds */.g7)(rows, k, foldOrder, seed),
-            targetSd: targetStats.sd,
-            scaling: null,
-            source: streamed.source,
-            rows,
-            targetRange: [streamed.targetMin, streamed.targetMax],
-            ...(scale.chunkRows ? { chunkRows: scale.chunkRows } : {}),
-        };
-    }
-    const folds = (0,diagnostics_folds/* assignFolds */.oF)(rows, k, foldOrder, seed);
-    return {
-        descriptor,
-        tables,
-        design,
-        folds,
-        targetSd: targetStats.sd,
-        scaling: (0,weighted_design/* rowScaling */.on)(tables.train),
-        originalTargets,
-        source: memoryRowSource(tables.train),
-        rows,
-        targetRange: (0,stats/* range */.y1)(tables.train.y, tables.train.rows),
-    };
-}
-/** InputError `target-range` when a target is not within ±{@link MAX_MAGNITUDE}. */
-function checkTargetRange(descriptor, data) {
-    const i = (0,kernels/* firstBeyond */.gy)(data.y, data.rows, MAX_MAGNITUDE);
-    if (i < 0)
-        return;
-    throw new errors/* InputError */.dz('target-range', `the target \`${(0,errors/* clip */.$Q)(descriptor.data.target)}\` is ${data.y[i]} on ${(0,data_parts/* lineOfFile */.ui)(data, data.lines[i])}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): rescale the target`, { file: descriptor.file, line: descriptor.data.lines.target, key: 'data.target' });
-}
-
-;// CONCATENATED MODULE: ./src/run/fit-classifier.ts
-
-
-
-
-
-
-
-
-
-
-
-
-
-/**
- * Largest estimated CSV text of a classifier's training file (data/row-source.ts estimates it):
- * 512 MiB, the default file cap, so classifiers within the defaults are unaffected.
- */
-const CLASSIFIER_MAX_BYTES = 512 * 1024 * 1024;
-/**
- * Loads, fits and scores one classifier.
- * @throws InputError for bad data or labels, a design over the caps, or shipped coefficients of the wrong length
- */
-async function fitClassifier(repo, descriptor, settings) {
-    // Classifiers are held in memory (their fit makes several passes of its own): a file above the
-    // default file cap is refused plainly rather than left to run out of memory.
-    const { train: file, trainParts } = descriptor.data;
-    if (streamsTrainingData(await trainingFileSizes(repo, file, trainParts), CLASSIFIER_MAX_BYTES)) {
-        throw new errors/* InputError */.dz('too-large-to-hold', `${trainParts === undefined ? 'the training file' : `the ${trainParts.length} training parts`} ${(0,errors/* clip */.$Q)(trainParts === undefined ? file : (0,data_parts/* partsLabel */.xq)(trainParts))} ${trainParts === undefined ? 'is' : 'are'} estimated at over ${CLASSIFIER_MAX_BYTES / (1024 * 1024)} MiB of CSV text; a classifier's rows are held in memory and files this large are read as a stream for regression models only; expected a smaller training file`, { file: descriptor.file, line: descriptor.data.lines.train, key: 'data.train' });
-    }
-    let labels = null;
-    const plan = await planModel(repo, descriptor, settings, async (r, d, inputs, s) => {
-        const tables = await loadClassifierData(r, d, inputs, s);
-        labels = tables.labels;
-        return tables;
-    });
-    const { design, tables, folds } = plan;
-    const { train, holdout } = tables;
-    const options = { ridge: descriptor.fit.ridge, penalised: [...design.penalised] };
-    const spread = new ColumnSpread(design.p);
-    (0,blocks/* forEachBlock */.aN)(design, train, (X, _start, m) => spread.add(X, m));
-    const columnSd = spread.sd();
-    // With folds, each pass also keeps one Gram per fold, so that the folds' first Newton steps need no pass of their own.
-    const parts = folds.k >= 2 ? { of: folds.foldOf, count: folds.k } : undefined;
-    const [fit] = fitLogistic(design, train, options, [{ start: warmStart(design, train, options), parts, factor: true }]);
-    if (fit.weightedFactor === null)
-        throw new Error('fitLogistic: the weighted factor asked for is missing');
-    const weighted = (0,src_fit/* fitFactor */.Ps)(fit.weightedFactor, options);
-    const trainEta = (0,blocks/* predictRows */.tp)(design, train, fit.coefficients);
-    const holdoutEta = (0,blocks/* predictRows */.tp)(design, holdout, fit.coefficients);
-    const threshold = descriptor.fit.threshold ?? 0.5;
-    const trainP = probabilities(trainEta);
-    const holdoutP = probabilities(holdoutEta);
-    const trainFigures = classificationFigures(train.y, trainEta, trainP, train.rows, threshold);
-    const holdoutFigures = classificationFigures(holdout.y, holdoutEta, holdoutP, holdout.rows, threshold);
-    const separation = findSeparation(design, train);
-    // Without a penalty, separated rows have no finite maximum-likelihood coefficients (Albert &
-    // Anderson 1984): the stopping rule is then met only because the objective approaches 0 as the
-    // coefficients grow, so neither the fit nor its folds count as converged.
-    const unbounded = options.ridge === 0 && separation.kind !== 'none';
-    return {
-        context: {
-            descriptor,
-            design,
-            fit: unbounded ? { ...fit, converged: false } : fit,
-            weighted,
-            train: trainFigures,
-            holdout: holdoutFigures,
-            calibration: calibration(holdout.y, holdoutEta, holdout.rows),
-            crossValidation: crossValidateClassifier(design, train, folds, fit, options, unbounded),
-            separation,
-            shipped: shippedClassifier(descriptor, design, train, holdout, fit, trainEta, holdoutEta),
-            columnSd,
-            leakage: leakageOf(train, holdout),
-            ...(train.parts !== undefined ? { trainSource: { file: train.file, parts: train.parts } } : {}),
-            complexity: sweepClassifier(descriptor, design, train),
-        },
-        labels: labels,
-        train,
-        holdout,
-        trainEta,
-        holdoutEta,
-        folds,
-        charts: {
-            rocTrain: rocPoints(train.y, trainP, train.rows),
-            rocHoldout: rocPoints(holdout.y, holdoutP, holdout.rows),
-            calibration: calibrationBins(holdout.y, holdoutP, holdout.rows),
-        },
-    };
-}
-/** Above this many training rows the full fit starts from the fit of an even-stride subset of this many rows. */
-const WARM_START_ROWS = 50000;
-/**
- * Starting coefficients for the full fit: on large data, the fit of an even-stride subset of
- * {@link WARM_START_ROWS} rows with the penalty scaled to its share of the rows (the optimum is
- * the full fit's, from wherever Newton's method starts; a near start saves whole passes over the
- * rows). Undefined (the default start) on smaller data.
- */
-function warmStart(design, train, options) {
-    const n = train.rows;
-    const m = WARM_START_ROWS;
-    if (n <= 2 * m)
-        return undefined;
-    const pick = (col) => {
-        const out = new Float64Array(m);
-        for (let t = 0; t < m; t++)
-            out[t] = col[Math.floor((t * n) / m)];
-        return out;
-    };
-    const sub = { inputs: train.inputs.map(pick), y: pick(train.y), rows: m };
-    const [fit] = fitLogistic(design, sub, { ...options, ridge: (options.ridge * m) / n }, [{}]);
-    return fit.coefficients.every(Number.isFinite) ? fit.coefficients : undefined;
-}
-/**
- * k-fold cross-validation: the fit without each fold (the same terms, fixed from all training
- * rows, and the same ridge), started from the full fit, all folds in shared passes; the pooled
- * log-loss of the out-of-fold probabilities. Null below 2 folds. When the full fit kept its
- * per-fold Grams (`full.parts`, one part per fold), each fold's first Newton step is solved
- * from them without a pass (fit/logistic.ts, firstStepsWithout); the optimum is the same.
- * With `unbounded` (ridge 0 and separated training rows: no finite optimum) the fold fits are
- * reported as not converged, whatever the stopping rule said: their log-loss is where the
- * iterations stopped on the way to infinite coefficients (on completely separated rows it tends
- * to 0, the out-of-fold rows being separated by the same direction).
- */
-function crossValidateClassifier(design, train, folds, full, options, unbounded = false) {
-    const k = folds.k;
-    if (k < 2)
-        return null;
-    const steps = full.parts !== null && full.parts.grams.length === k ? firstStepsWithout(full.parts, options) : null;
-    const problems = Array.from({ length: k }, (_, f) => ({
-        foldOf: folds.foldOf,
-        exclude: f,
-        start: full.coefficients,
-        ...(steps ? { firstStep: steps[f] } : {}),
-    }));
-    const fits = fitLogistic(design, train, options, problems);
-    const foldDeviance = outOfFoldDeviance(design, train, folds.foldOf, fits.map((x) => x.coefficients));
-    let total = 0;
-    for (let f = 0; f < k; f++)
-        total += foldDeviance[f];
-    return {
-        k,
-        logLoss: total / 2 / train.rows,
-        foldLogLoss: Array.from(foldDeviance, (d, f) => d / 2 / folds.sizes[f]),
-        foldRows: [...folds.sizes],
-        converged: !unbounded && fits.every((x) => x.converged),
-    };
-}
-/** The shipped coefficients' probabilities against the refit's; null when the descriptor ships none. */
-function shippedClassifier(descriptor, design, train, holdout, fit, trainEta, holdoutEta) {
-    const shipped = descriptor.coefficients;
-    if (shipped === null)
-        return null;
-    if (shipped.length !== design.p) {
-        throw new errors/* InputError */.dz('coefficients-length', `\`coefficients\` has ${shipped.length} values but the terms build ${design.p} columns (${design.columnNames.slice(0, 12).join(', ')}${design.p > 12 ? ', …' : ''}); expected one value per column, intercept first`, { file: descriptor.file, line: descriptor.coefficientsLine ?? undefined, key: 'coefficients' });
-    }
-    let maxP = 0;
-    const losses = [];
-    for (const [data, refit] of [
-        [train, trainEta],
-        [holdout, holdoutEta],
-    ]) {
-        const eta = (0,blocks/* predictRows */.tp)(design, data, shipped);
-        let dev = 0;
-        for (let i = 0; i < data.rows; i++) {
-            const d = Math.abs(1 / (1 + Math.exp(-eta[i])) - 1 / (1 + Math.exp(-refit[i])));
-            if (d > maxP || Number.isNaN(d))
-                maxP = d;
-            dev += rowDeviance(eta[i], data.y[i]);
-        }
-        losses.push(dev / 2 / data.rows);
-    }
-    let maxW = 0;
-    for (let j = 0; j < design.p; j++)
-        maxW = Math.max(maxW, Math.abs(shipped[j] - fit.coefficients[j]));
-    return { maxProbabilityDifference: maxP, maxCoefficientDifference: maxW, trainLogLoss: losses[0], holdoutLogLoss: losses[1] };
-}
-function leakageOf(train, holdout) {
-    const found = findLeakage(train, holdout);
-    return {
-        duplicates: found.fullMatches,
-        examples: found.holdoutLines.map((line, i) => {
-            if (train.parts === undefined && holdout.parts === undefined)
-                return { holdoutLine: line, trainLine: found.trainLines[i] };
-            // Read from parts: each part's own line and its file.
-            const h = (0,data_parts/* placeOfLine */.xX)(holdout, line);
-            const t = (0,data_parts/* placeOfLine */.xX)(train, found.trainLines[i]);
-            return { holdoutLine: h.line, trainLine: t.line, holdoutFile: h.file, trainFile: t.file };
-        }),
-    };
-}
-
 // EXTERNAL MODULE: ./src/diagnostics/regression-metrics.ts
 var regression_metrics = __nccwpck_require__(155);
-;// CONCATENATED MODULE: ./src/run/evaluate-classifier.ts
-/**
- * One binary classifier from descriptor to outcome: fit and score it (fit-classifier.ts), run
- * every check of the registry with its classifier measure (checks that apply to regression only
- * are skipped with `<id>/not-for-classification`), and build its part of the Result.
- */
-
-
-
-
-
-
-
-
-
-/**
- * The report keys of a classifier's figures on both files, shared by models of terms and models
- * trained elsewhere: log-loss, Brier score, accuracy at the threshold, ROC AUC and class counts.
- * @param threshold `fit.threshold` (default 0.5)
- */
-function classificationFigureMetrics(train, holdout, threshold) {
-    const n = (x) => (0,result_result/* jsonNumber */.qj)(x);
-    return {
-        train_log_loss: n(train.logLoss),
-        holdout_log_loss: n(holdout.logLoss),
-        train_brier: n(train.brier),
-        holdout_brier: n(holdout.brier),
-        train_accuracy: n(train.accuracy),
-        holdout_accuracy: n(holdout.accuracy),
-        train_auc: n(train.auc),
-        holdout_auc: n(holdout.auc),
-        threshold,
-        train_positives: train.positives,
-        train_negatives: train.negatives,
-        holdout_positives: holdout.positives,
-        holdout_negatives: holdout.negatives,
-    };
-}
-/**
- * The report's metrics of a classifier: the training and hold-out figures, calibration, class
- * counts and the fit's convergence; the checks add theirs (gap ratio, CV log-loss...). The
- * regression keys (RMSE, MAE, R^2) are null: they do not apply.
- */
-function classifierMetrics(model) {
-    const { train, holdout, fit, design, weighted } = model.context;
-    const n = (x) => (0,result_result/* jsonNumber */.qj)(x);
-    return {
-        task: 'classification',
-        train_rmse: null,
-        holdout_rmse: null,
-        train_mae: null,
-        holdout_mae: null,
-        train_r2: null,
-        holdout_r2: null,
-        gap_ratio: n((0,regression_metrics/* gapRatio */.yr)(train.logLoss, holdout.logLoss)),
-        params_per_sample: n(design.p / train.rows),
-        max_std_coefficient: null,
-        max_std_coefficient_column: null,
-        max_abs_coefficient: n((0,extremes/* maxOf */._)(Array.from(fit.coefficients, Math.abs), 0)),
-        rank: weighted.rank,
-        condition_number: n(weighted.conditionNumberScaled),
-        ...classificationFigureMetrics(train, holdout, model.context.descriptor.fit.threshold ?? 0.5),
-        positive_label: model.labels.positive,
-        negative_label: model.labels.negative,
-        fit_iterations: fit.iterations,
-        fit_converged: fit.converged ? 1 : 0,
-        deviance: n(fit.deviance),
-    };
-}
-/**
- * Fits one classifier and runs every check on it. Errors are handled by the caller
- * (evaluate.ts), as for regression models.
- */
-async function evaluateClassifier(repo, descriptor, settings, base) {
-    const model = await fitClassifier(repo, descriptor, settings);
-    const baseMatch = base?.matches.get(descriptor.file) ?? null;
-    const context = { ...model.context, baseline: baseMatch?.model ?? null };
-    const metrics = classifierMetrics(model);
-    const { checks, verdict } = runChecks(src_checks/* CHECKS */.ui, (check) => (0,src_checks/* runClassifierCheck */.Rc)(check, context), metrics);
-    return {
-        name: descriptor.name,
-        descriptor: descriptor.file,
-        verdict,
-        rows: { train: model.train.rows, holdout: model.holdout.rows },
-        ...(0,data_paths/* dataFilesField */.IJ)(descriptor.data),
-        parameters: model.context.design.p,
-        columns: [...model.context.design.columnNames],
-        metrics,
-        coefficients: Array.from(model.context.fit.coefficients, result_result/* jsonNumber */.qj),
-        shipped: null,
-        checks,
-        ...(base ? { base: (0,base_comparison/* compareWithBase */.te)(metrics, baseMatch, base.commit) } : {}),
-        error: null,
-        extra: {
-            task: 'classification',
-            labels: model.labels,
-            roc: { train: model.charts.rocTrain, holdout: model.charts.rocHoldout },
-            calibration_bins: model.charts.calibration.map((b) => ({
-                from: b.from,
-                to: b.to,
-                count: b.count,
-                predicted: (0,result_result/* jsonNumber */.qj)(b.predicted),
-                observed: (0,result_result/* jsonNumber */.qj)(b.observed),
-            })),
-            terms: model.context.design.terms.map((t, i) => ({
-                kind: t.spec.kind,
-                line: t.spec.line,
-                first_column: model.context.design.termOffsets[i],
-                columns: t.columnNames.length,
-                fixed: t.fixed,
-            })),
-        },
-        classifier_charts: buildClassifierChartData(model),
-    };
-}
-
-;// CONCATENATED MODULE: ./src/data/load-predictions.ts
-
-
-
-
-
-/** Stable codes of the errors this module throws. */
-const PREDICTIONS_ERROR = Object.freeze({
-    /** The prediction column is the target or an input. */
-    column: 'predictions-column',
-    /** Data and side file do not hold the same rows (count, or keys missing on either side). */
-    rows: 'predictions-rows',
-    /** A key cell is empty or a key repeats. */
-    key: 'predictions-key',
-    /** A prediction is not finite, or a classifier's probability is outside [0, 1]. */
-    value: 'predictions-value',
-});
-/**
- * Loads a model trained elsewhere: inputs (`predictions.inputs`, for leakage), target and
- * predictions of both files. Classifiers' targets become 0/1 as for models of terms (labels.ts),
- * and their predictions must be probabilities in [0, 1].
- * @throws InputError every data-file error of {@link loadModelData}, plus `predictions-column`,
- *   `predictions-rows` (naming both files and the first bad line), `predictions-key`,
- *   `predictions-value`
- */
-async function loadPredictionsData(repo, descriptor, settings) {
-    const spec = descriptor.predictions;
-    if (!spec)
-        throw new TypeError('loadPredictionsData needs a descriptor with `predictions`');
-    for (const which of ['train', 'holdout']) {
-        const source = spec[which];
-        if (source.file !== null)
-            continue;
-        const clash = source.column === descriptor.data.target ? 'the target column' : spec.inputs.includes(source.column) ? 'an input' : null;
-        if (clash !== null) {
-            throw new errors/* InputError */.dz(PREDICTIONS_ERROR.column, `\`predictions.${which}.column\` names ${clash} (\`${(0,errors/* clip */.$Q)(source.column)}\`); expected the column that holds the model's predictions`, { file: descriptor.file, line: source.line, key: `predictions.${which}.column` });
-        }
-    }
-    const classifier = descriptor.task === 'classification';
-    let tables;
-    let labels = null;
-    try {
-        if (classifier) {
-            const t = await loadClassifierData(repo, descriptor, spec.inputs, settings);
-            labels = t.labels;
-            tables = t;
-        }
-        else {
-            tables = await loadModelData(repo, descriptor, spec.inputs, settings);
-        }
-    }
-    catch (error) {
-        throw namedInput(error, descriptor);
-    }
-    const out = {};
-    for (const which of ['train', 'holdout']) {
-        const data = tables[which];
-        const read = await load_predictions_readPredictions(repo, descriptor, settings, data, spec[which], which);
-        checkValues(read, spec[which], which, classifier);
-        out[which] = { ...data, predictions: read.values, predictionFile: read.file, predictionLines: read.lines };
-    }
-    return { train: out.train, holdout: out.holdout, labels };
-}
-async function load_predictions_readPredictions(repo, descriptor, settings, data, source, which) {
-    const maxBytes = settings.caps.maxFileBytes;
-    const format = descriptor.data.format;
-    if (source.file === null)
-        return columnOfDataFile(repo, descriptor, data, source, which, maxBytes);
-    // A side file: its own rows, every cell of the column present.
-    const side = await (0,data_table/* readTable */.xz)(repo, source.file, {
-        columns: [source.column],
-        maxBytes,
-        ...(format ? { format: { ...format, missing: 'error' } } : {}),
-    });
-    const values = side.columns.get(source.column);
-    if (source.key === null)
-        return inFileOrder(descriptor, data, source.file, side.lines, values, side.rows, which);
-    return byKey(repo, data, source, side.lines, values, side.rows, maxBytes);
-}
-/** The prediction column of the data file itself, row for row (the same split side; missing cells refused). */
-async function columnOfDataFile(repo, descriptor, data, source, which, maxBytes) {
-    const split = descriptor.data.split ?? null;
-    const side = split === null
-        ? undefined
-        : which === 'train'
-            ? { column: split.column, keep: split.train, other: split.holdout }
-            : { column: split.column, keep: split.holdout, other: split.train };
-    const format = descriptor.data.format;
-    let table;
-    try {
-        table = await (0,data_table/* readTable */.xz)(repo, data.file, {
-            columns: [source.column],
-            maxBytes,
-            ...(format ? { format } : {}),
-            ...(side ? { split: side } : {}),
-        });
-    }
-    catch (error) {
-        if (error instanceof errors/* InputError */.dz && error.code === 'csv-missing-column' && error.location.key === source.column)
-            throw new errors/* InputError */.dz(error.code, `${error.message} (asked for by \`predictions.${which}.column\` on line ${source.line} of ${(0,errors/* clip */.$Q)(descriptor.file)})`, error.location);
-        throw error;
-    }
-    const all = table.columns.get(source.column);
-    // With `data.missing: drop` either read may have dropped rows: pair them by line.
-    const values = new Float64Array(data.rows);
-    let j = 0;
-    for (let i = 0; i < data.rows; i++) {
-        const line = data.lines[i];
-        while (j < table.rows && table.lines[j] < line)
-            j++;
-        if (j >= table.rows || table.lines[j] !== line) {
-            throw new errors/* InputError */.dz(PREDICTIONS_ERROR.rows, `line ${line} of ${(0,errors/* clip */.$Q)(data.file)} has no prediction in column \`${(0,errors/* clip */.$Q)(source.column)}\` (\`predictions.${which}.column\`); expected a prediction for every data row`, { file: data.file, line, key: source.column });
-        }
-        values[i] = all[j];
-    }
-    return { values, file: data.file, lines: data.lines };
-}
-/** A side file without a key: its rows go with the data rows in file order, one for one. */
-function inFileOrder(descriptor, data, sideFile, sideLines, values, sideRows, which) {
-    if ((data.dropped ?? 0) > 0) {
-        throw new errors/* InputError */.dz(PREDICTIONS_ERROR.rows, `${data.dropped} rows of ${(0,errors/* clip */.$Q)(data.file)} were dropped for missing cells, so the rows of ${(0,errors/* clip */.$Q)(sideFile)} cannot be paired with them in file order; expected \`predictions.${which}.key\` (a key column both files hold)`, { file: descriptor.file, line: descriptor.predictions?.[which].line, key: `predictions.${which}` });
-    }
-    if (sideRows !== data.rows) {
-        const short = sideRows < data.rows;
-        const message = short
-            ? `${(0,errors/* clip */.$Q)(sideFile)} has ${sideRows} prediction rows but ${(0,errors/* clip */.$Q)(data.file)} has ${data.rows} data rows: line ${data.lines[sideRows]} of ${(0,errors/* clip */.$Q)(data.file)} (data row ${sideRows + 1}) has no prediction row`
-            : `${(0,errors/* clip */.$Q)(sideFile)} has ${sideRows} prediction rows but ${(0,errors/* clip */.$Q)(data.file)} has ${data.rows} data rows: line ${sideLines[data.rows]} of ${(0,errors/* clip */.$Q)(sideFile)} (prediction row ${data.rows + 1}) has no data row`;
-        throw new errors/* InputError */.dz(PREDICTIONS_ERROR.rows, `${message}; expected one prediction row per data row, in the same order (or \`predictions.${which}.key\` to match rows by a key column)`, short ? { file: data.file, line: data.lines[sideRows] } : { file: sideFile, line: sideLines[data.rows] });
-    }
-    return { values: values.slice(0, sideRows), file: sideFile, lines: sideLines.slice(0, sideRows) };
-}
-/**
- * A side file with a key column: each data row takes the side row of the same key. Keys are text
- * as written (trimmed; `07` and `7` differ) and unique in each file. A side key held by no row of
- * the data file is an error; one held by a row of the other split side or a dropped row is not.
- */
-async function byKey(repo, data, source, sideLines, values, sideRows, maxBytes) {
-    const keyColumn = source.key;
-    const dataKeys = await readTextColumns(repo, data.file, [keyColumn], maxBytes);
-    const sideKeys = await readTextColumns(repo, source.file, [keyColumn], maxBytes);
-    // Every key of the data file (all its rows) by line, for the rows used and for the others.
-    const allDataKeys = new Set();
-    const dataKeyOf = keysByLine(dataKeys, keyColumn, data.file);
-    for (const k of dataKeyOf.values())
-        allDataKeys.add(k);
-    // Side rows by key (unique), paired with their numeric row by line.
-    const sideKeyOf = keysByLine(sideKeys, keyColumn, source.file);
-    const sideIndex = new Map();
-    for (let j = 0; j < sideRows; j++) {
-        const k = sideKeyOf.get(sideLines[j]);
-        if (k === undefined) {
-            throw new errors/* InputError */.dz(PREDICTIONS_ERROR.rows, `line ${sideLines[j]} of ${(0,errors/* clip */.$Q)(source.file)} has a prediction but no key`, {
-                file: source.file,
-                line: sideLines[j],
-                key: keyColumn,
-            });
-        }
-        const first = sideIndex.get(k);
-        if (first !== undefined)
-            throw duplicateKey(source.file, keyColumn, k, sideLines[first], sideLines[j]);
-        sideIndex.set(k, j);
-    }
-    const out = new Float64Array(data.rows);
-    const lines = new Int32Array(data.rows);
-    const used = new Map();
-    for (let i = 0; i < data.rows; i++) {
-        const k = dataKeyOf.get(data.lines[i]);
-        if (k === undefined) {
-            throw new errors/* InputError */.dz(PREDICTIONS_ERROR.key, `line ${data.lines[i]} of ${(0,errors/* clip */.$Q)(data.file)} has no key in column \`${(0,errors/* clip */.$Q)(keyColumn)}\` as its text is read; expected one record per line (no line breaks inside quoted cells)`, { file: data.file, line: data.lines[i], key: keyColumn });
-        }
-        const seen = used.get(k);
-        if (seen !== undefined)
-            throw duplicateKey(data.file, keyColumn, k, data.lines[seen], data.lines[i]);
-        used.set(k, i);
-        const j = sideIndex.get(k);
-        if (j === undefined) {
-            throw new errors/* InputError */.dz(PREDICTIONS_ERROR.rows, `line ${data.lines[i]} of ${(0,errors/* clip */.$Q)(data.file)} has key ${(0,errors/* quoteValue */.cl)(k, 40)} (column \`${(0,errors/* clip */.$Q)(keyColumn)}\`), which no row of ${(0,errors/* clip */.$Q)(source.file)} holds; expected a prediction row for every data row (${data.rows} data rows, ${sideRows} prediction rows)`, { file: data.file, line: data.lines[i], key: keyColumn });
-        }
-        out[i] = values[j];
-        lines[i] = sideLines[j];
-    }
-    for (let j = 0; j < sideRows; j++) {
-        const k = sideKeyOf.get(sideLines[j]);
-        if (!allDataKeys.has(k)) {
-            throw new errors/* InputError */.dz(PREDICTIONS_ERROR.rows, `line ${sideLines[j]} of ${(0,errors/* clip */.$Q)(source.file)} has key ${(0,errors/* quoteValue */.cl)(k, 40)} (column \`${(0,errors/* clip */.$Q)(keyColumn)}\`), which no row of ${(0,errors/* clip */.$Q)(data.file)} holds; expected predictions of the data file's rows only (${data.rows} data rows, ${sideRows} prediction rows)`, { file: source.file, line: sideLines[j], key: keyColumn });
-        }
-    }
-    return { values: out, file: source.file, lines };
-}
-/** Key of each row by its line; an empty key cell is an error naming the file and line. */
-function keysByLine(text, column, file) {
-    const keys = text.columns.get(column);
-    const out = new Map();
-    for (let r = 0; r < keys.length; r++) {
-        if (keys[r] === '') {
-            throw new errors/* InputError */.dz(PREDICTIONS_ERROR.key, `line ${text.lines[r]} of ${(0,errors/* clip */.$Q)(file)} has an empty key in column \`${(0,errors/* clip */.$Q)(column)}\`; expected a key in every row`, {
-                file,
-                line: text.lines[r],
-                key: column,
-            });
-        }
-        out.set(text.lines[r], keys[r]);
-    }
-    return out;
-}
-function duplicateKey(file, column, key, firstLine, line) {
-    return new errors/* InputError */.dz(PREDICTIONS_ERROR.key, `line ${line} of ${(0,errors/* clip */.$Q)(file)} repeats key ${(0,errors/* quoteValue */.cl)(key, 40)} of line ${firstLine} (column \`${(0,errors/* clip */.$Q)(column)}\`); expected each key once`, { file, line, key: column });
-}
-/** Predictions are finite; a classifier's are probabilities in [0, 1]. */
-function checkValues(read, source, which, classifier) {
-    for (let i = 0; i < read.values.length; i++) {
-        const v = read.values[i];
-        const bad = classifier ? !(v >= 0 && v <= 1) : !Number.isFinite(v);
-        if (!bad)
-            continue;
-        throw new errors/* InputError */.dz(PREDICTIONS_ERROR.value, classifier
-            ? `the prediction ${v} on line ${read.lines[i]} of ${(0,errors/* clip */.$Q)(read.file)} (column \`${(0,errors/* clip */.$Q)(source.column)}\`, \`predictions.${which}\`) is not a probability; a classifier's predictions (\`task: classification\`) are probabilities of the positive class in [0, 1]`
-            : `the prediction ${v} on line ${read.lines[i]} of ${(0,errors/* clip */.$Q)(read.file)} (column \`${(0,errors/* clip */.$Q)(source.column)}\`, \`predictions.${which}\`) is not a finite number`, { file: read.file, line: read.lines[i], key: source.column });
-    }
-}
-/** A missing input column names `predictions.inputs` as the asker. */
-function namedInput(error, descriptor) {
-    if (!(error instanceof errors/* InputError */.dz) || error.code !== 'csv-missing-column' || error.location.key === undefined)
-        return error;
-    if (!descriptor.predictions?.inputs.includes(error.location.key))
-        return error;
-    return new errors/* InputError */.dz(error.code, `${error.message} (asked for by \`predictions.inputs\` on line ${descriptor.predictions.line} of ${(0,errors/* clip */.$Q)(descriptor.file)})`, error.location);
-}
-
-;// CONCATENATED MODULE: ./src/diagnostics/observed-spread.ts
-/**
- * The swing figure of a model known only by its predictions: how far its predictions of the
- * observed rows (training and hold-out) leave the band of training targets. Without the model
- * itself nothing can be predicted between or beyond the rows, so this is the part of the swing
- * scan (diagnostics/swing.ts) that predictions allow.
- */
-/**
- * The spread of the predictions of the observed rows against the training target band (the same
- * figure as the `swing` check's, on these rows only).
- * @param y training targets (the first `trainRows` entries are read)
- * @param files the training and hold-out rows with their predictions
- */
-function observedSpread(y, trainRows, files) {
-    let lo = Infinity;
-    let hi = -Infinity;
-    for (let i = 0; i < trainRows; i++) {
-        if (y[i] < lo)
-            lo = y[i];
-        if (y[i] > hi)
-            hi = y[i];
-    }
-    let pLo = Infinity;
-    let pHi = -Infinity;
-    let worstOut = 0;
-    let worst = null;
-    let rows = 0;
-    for (const f of files) {
-        for (let i = 0; i < f.rows; i++) {
-            const p = f.predictions[i];
-            if (p < pLo)
-                pLo = p;
-            if (p > pHi)
-                pHi = p;
-            const out = Math.max(p - hi, lo - p);
-            if (out > worstOut) {
-                worstOut = out;
-                worst = { file: f.file, line: f.lines[i], prediction: p };
-            }
-        }
-        rows += f.rows;
-    }
-    const width = hi - lo;
-    return { band: [lo, hi], predicted: [pLo, pHi], value: width > 0 ? worstOut / width : Number.NaN, rows, worst };
-}
-
-;// CONCATENATED MODULE: ./src/run/evaluate-predictions.ts
-/**
- * One model trained elsewhere (`predictions`) from descriptor to outcome: its rows and
- * predictions (data/load-predictions.ts), the figures that need only predictions, every check of
- * the registry through its `measurePredictions` (the others skipped with `<id>/needs-refit`),
- * and its part of the Result (`kind: 'predictions'`). Nothing is fitted.
- */
-
-
-
-
-
-
-
-
-
-
-
-/**
- * Probabilities are kept inside [EPS, 1 - EPS] where a logit is taken (log-loss, calibration), so
- * that a stated 0 or 1 gives a large finite loss instead of an infinite one (common practice;
- * 1e-15 as many metric libraries use, from memory). Brier score, accuracy and AUC use the
- * probabilities as given.
- */
-const PROBABILITY_EPS = 1e-15;
-/** logit(clamp(p, EPS, 1 - EPS)) of each entry. */
-function clampedLogits(p, n) {
-    const out = new Float64Array(n);
-    for (let i = 0; i < n; i++) {
-        const q = Math.min(1 - PROBABILITY_EPS, Math.max(PROBABILITY_EPS, p[i]));
-        out[i] = Math.log(q / (1 - q));
-    }
-    return out;
-}
-function errorsOf(rows) {
-    const sums = (0,regression_metrics/* emptySums */.y3)();
-    (0,regression_metrics/* addErrors */.xB)(sums, rows.y, rows.predictions, rows.rows);
-    const m = (0,regression_metrics/* errorMeasures */._I)(sums);
-    return { rmse: m.rmse, mae: m.mae, r2: m.r2 };
-}
-/**
- * Scores one model trained elsewhere and runs every check on it. Errors are handled by the caller
- * (evaluate.ts), as for models of terms.
- * @param base outcomes on the base commit to compare with; default none
- */
-async function evaluatePredictions(repo, descriptor, settings, base) {
-    const spec = descriptor.predictions;
-    if (!spec)
-        throw new TypeError('evaluatePredictions needs a descriptor with `predictions`');
-    const tables = await loadPredictionsData(repo, descriptor, settings);
-    (0,core_deadline/* checkDeadline */.Ft)('predictions');
-    const { train, holdout } = tables;
-    const parameters = descriptor.parameters ?? null;
-    const isClassifier = descriptor.task === 'classification';
-    // The figures of the predictions: errors (regression) or the probabilities' figures (classifiers).
-    let classifier = null;
-    let regression = null;
-    let charts = {};
-    if (isClassifier) {
-        const threshold = descriptor.fit.threshold ?? 0.5;
-        const trainEta = clampedLogits(train.predictions, train.rows);
-        const holdoutEta = clampedLogits(holdout.predictions, holdout.rows);
-        classifier = {
-            train: classificationFigures(train.y, trainEta, train.predictions, train.rows, threshold),
-            holdout: classificationFigures(holdout.y, holdoutEta, holdout.predictions, holdout.rows, threshold),
-            calibration: calibration(holdout.y, holdoutEta, holdout.rows),
-        };
-        charts = {
-            roc: { train: rocPoints(train.y, train.predictions, train.rows), holdout: rocPoints(holdout.y, holdout.predictions, holdout.rows) },
-            calibration_bins: calibrationBins(holdout.y, holdout.predictions, holdout.rows).map((b) => ({
-                from: b.from,
-                to: b.to,
-                count: b.count,
-                predicted: (0,result_result/* jsonNumber */.qj)(b.predicted),
-                observed: (0,result_result/* jsonNumber */.qj)(b.observed),
-            })),
-        };
-    }
-    else {
-        regression = { train: errorsOf(train), holdout: errorsOf(holdout) };
-    }
-    (0,core_deadline/* checkDeadline */.Ft)('predictions');
-    const leakage = spec.inputs.length > 0 ? findLeakage(train, holdout) : null;
-    const spread = observedSpread(train.y, train.rows, [
-        { file: train.predictionFile, lines: train.predictionLines, predictions: train.predictions, rows: train.rows },
-        { file: holdout.predictionFile, lines: holdout.predictionLines, predictions: holdout.predictions, rows: holdout.rows },
-    ]);
-    const baseMatch = base?.matches.get(descriptor.file) ?? null;
-    const context = {
-        descriptor,
-        parameters,
-        inputs: spec.inputs,
-        rows: { train: train.rows, holdout: holdout.rows },
-        files: { train: train.file, holdout: holdout.file },
-        regression,
-        classifier,
-        leakage,
-        spread,
-        baseline: baseMatch?.model ?? null,
-    };
-    const metrics = classifier !== null
-        ? evaluate_predictions_classifierMetrics(classifier, parameters, train.rows, descriptor, tables.labels)
-        : regressionMetrics(regression, parameters, train.rows);
-    const { checks, verdict } = runChecks((0,src_checks/* checksFor */.NR)(descriptor.task), (check) => (0,src_checks/* runPredictionsCheck */.KK)(check, context), metrics);
-    const source = (which) => {
-        const s = spec[which];
-        return { column: s.column, file: s.file, key: s.key };
-    };
-    return {
-        name: descriptor.name,
-        descriptor: descriptor.file,
-        kind: 'predictions',
-        verdict,
-        rows: { train: train.rows, holdout: holdout.rows },
-        ...(train.dropped !== undefined ? { dropped: { train: train.dropped, holdout: holdout.dropped ?? 0 } } : {}),
-        parameters: parameters ?? 0,
-        columns: [],
-        metrics,
-        coefficients: [],
-        shipped: null,
-        checks,
-        ...(base && !isClassifier ? { base: (0,base_comparison/* compareWithBase */.te)(metrics, baseMatch, base.commit) } : {}),
-        error: null,
-        extra: {
-            kind: 'predictions',
-            ...(isClassifier ? { task: 'classification', labels: tables.labels } : {}),
-            predictions: { train: source('train'), holdout: source('holdout'), inputs: [...spec.inputs] },
-            parameters_stated: parameters !== null,
-            observed_spread: {
-                band: spread.band.map(result_result/* jsonNumber */.qj),
-                predicted: spread.predicted.map(result_result/* jsonNumber */.qj),
-                rows: spread.rows,
-                worst: spread.worst === null ? null : { ...spread.worst, prediction: (0,result_result/* jsonNumber */.qj)(spread.worst.prediction) },
-            },
-            ...charts,
-        },
-    };
-}
-/**
- * The report's metrics of a regression model trained elsewhere: the error figures of its
- * predictions. The keys of coefficients and of the design (`max_std_coefficient`, `rank`...) are
- * left out: there are none; so is `params_per_sample` without a stated `parameters`.
- */
-function regressionMetrics(r, parameters, rows) {
-    const n = (x) => (0,result_result/* jsonNumber */.qj)(x);
-    return {
-        train_rmse: n(r.train.rmse),
-        holdout_rmse: n(r.holdout.rmse),
-        train_mae: n(r.train.mae),
-        holdout_mae: n(r.holdout.mae),
-        train_r2: n(r.train.r2),
-        holdout_r2: n(r.holdout.r2),
-        gap_ratio: n((0,regression_metrics/* gapRatio */.yr)(r.train.rmse, r.holdout.rmse)),
-        ...(parameters === null ? {} : { params_per_sample: n(parameters / rows) }),
-    };
-}
-/**
- * The report's metrics of a classifier trained elsewhere: the keys of evaluate-classifier.ts that
- * predictions give (log-loss, Brier, accuracy, AUC, class counts); the regression, coefficient and
- * design keys are left out.
- */
-function evaluate_predictions_classifierMetrics(c, parameters, rows, descriptor, labels) {
-    const n = (x) => (0,result_result/* jsonNumber */.qj)(x);
-    const train = c.train;
-    const holdout = c.holdout;
-    return {
-        task: 'classification',
-        gap_ratio: n((0,regression_metrics/* gapRatio */.yr)(train.logLoss, holdout.logLoss)),
-        ...(parameters === null ? {} : { params_per_sample: n(parameters / rows) }),
-        ...classificationFigureMetrics(train, holdout, descriptor.fit.threshold ?? 0.5),
-        positive_label: labels?.positive ?? null,
-        negative_label: labels?.negative ?? null,
-    };
-}
-
 // EXTERNAL MODULE: ./src/diagnostics/weighted-metrics.ts
 var weighted_metrics = __nccwpck_require__(3759);
 ;// CONCATENATED MODULE: ./src/diagnostics/refit-compare.ts
@@ -23726,6 +21064,16 @@ function scoreShipped(design, train, holdout, shipped, refit) {
     };
 }
 
+// EXTERNAL MODULE: ./src/data/load-model-data.ts + 1 modules
+var load_model_data = __nccwpck_require__(5240);
+// EXTERNAL MODULE: ./src/design/column-spread.ts
+var column_spread = __nccwpck_require__(1552);
+// EXTERNAL MODULE: ./src/design/weighted-design.ts
+var weighted_design = __nccwpck_require__(9416);
+// EXTERNAL MODULE: ./src/fit/index.ts + 2 modules
+var src_fit = __nccwpck_require__(2450);
+// EXTERNAL MODULE: ./src/run/plan.ts + 1 modules
+var run_plan = __nccwpck_require__(7143);
 ;// CONCATENATED MODULE: ./src/run/passes.ts
 /**
  * The planned passes over a model's training rows, each building the design block by block
@@ -23761,7 +21109,7 @@ function scoreShipped(design, train, holdout, shipped, refit) {
 async function foldPass(plan) {
     const { design, folds, descriptor } = plan;
     const builder = new cross_validation/* FoldFactorBuilder */.UN(design.p, folds);
-    const spread = new ColumnSpread(design.p);
+    const spread = new column_spread/* ColumnSpread */.W(design.p);
     const scaling = plan.scaling ?? null;
     let ids = new Int32Array(0);
     await plan.source.forEachChunk((chunk, first) => {
@@ -23860,7 +21208,7 @@ async function streamedScoringPass(plan, fit, foldFactors, shipped) {
     const scorer = new cross_validation/* CrossValidationScorer */.OY(design, fit, folds, { factors: foldFactors.perFold, complements: foldFactors.complements });
     const trainSums = (0,regression_metrics/* emptySums */.y3)();
     const shippedTrainSums = shipped === null ? null : (0,regression_metrics/* emptySums */.y3)();
-    const leakage = new LeakageScan(holdout);
+    const leakage = new diagnostics_leakage/* LeakageScan */.ik(holdout);
     let predictions = new Float64Array(0);
     let other = new Float64Array(0);
     await plan.source.forEachChunk((chunk) => {
@@ -23894,7 +21242,7 @@ async function streamedScoringPass(plan, fit, foldFactors, shipped) {
  */
 function checkRange(plan, train, X, start, m) {
     const { design, descriptor } = plan;
-    const at = (0,kernels/* firstBeyond */.gy)(X, design.p * m, MAX_MAGNITUDE);
+    const at = (0,kernels/* firstBeyond */.gy)(X, design.p * m, run_plan/* MAX_MAGNITUDE */.ag);
     if (at < 0)
         return;
     const j = Math.floor(at / m);
@@ -23903,9 +21251,11 @@ function checkRange(plan, train, X, start, m) {
     while (term + 1 < design.termOffsets.length && design.termOffsets[term + 1] <= j)
         term += 1;
     const line = design.terms[term]?.spec.line ?? descriptor.termsLine;
-    throw new errors/* InputError */.dz('design-overflow', `design column \`${(0,errors/* clip */.$Q)(design.columnNames[j])}\` is ${X[at]} at training row on line ${train.lines[start + i]} of ${(0,errors/* clip */.$Q)(train.file)}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): use inputs of a smaller size, a lower degree, or a shift and scale near the data`, { file: descriptor.file, line, key: 'terms' });
+    throw new errors/* InputError */.dz('design-overflow', `design column \`${(0,errors/* clip */.$Q)(design.columnNames[j])}\` is ${X[at]} at training row on line ${train.lines[start + i]} of ${(0,errors/* clip */.$Q)(train.file)}; expected values within ±${run_plan/* MAX_MAGNITUDE */.ag} (sums of squares must stay finite): use inputs of a smaller size, a lower degree, or a shift and scale near the data`, { file: descriptor.file, line, key: 'terms' });
 }
 
+// EXTERNAL MODULE: ./src/data/target-transform.ts
+var target_transform = __nccwpck_require__(1938);
 ;// CONCATENATED MODULE: ./src/diagnostics/target-scale.ts
 
 
@@ -24107,7 +21457,7 @@ async function partsNamed(tables, step) {
  *   coefficients of the wrong length
  */
 async function fitModel(repo, descriptor, settings, scale = {}) {
-    const plan = await planModel(repo, descriptor, settings, loadModelData, scale);
+    const plan = await (0,run_plan/* planModel */.B7)(repo, descriptor, settings, load_model_data/* loadModelData */.u, scale);
     const { design, tables, folds } = plan;
     if (tables.streamed !== undefined && descriptor.fit.refit === false) {
         throw new errors/* InputError */.dz('too-large-to-hold', `the training file ${(0,errors/* clip */.$Q)(descriptor.data.train)} is read as a stream (too large to hold in memory), which \`fit.refit: false\` does not support yet; expected a smaller file, or a refit`, { file: descriptor.file, line: descriptor.data.lines.train, key: 'data.train' });
@@ -24305,8 +21655,6 @@ var model_data = __nccwpck_require__(9642);
 
 
 
-
-
 /**
  * What a streamed model's report says of its sampling (docs/scale.md): which figures come from
  * every row and which from the sample.
@@ -24367,7 +21715,7 @@ function reportMetrics(model) {
  * @param share the model's share of the run's chart data (result/chart-types.ts `chartShare`); default the full share
  * @param scale when to stream the training file and how (plan.ts {@link ScaleOptions}); default the built-in threshold
  */
-async function evaluateModel(repo, descriptor, settings, base, deadline, share = FULL_CHART_SHARE, scale = {}) {
+async function evaluateModel(repo, descriptor, settings, base, deadline, share = chart_types/* FULL_CHART_SHARE */.Lc, scale = {}) {
     const within = deadline ?? new core_deadline/* Deadline */.B2(settings.caps.maxModelSeconds * 1000);
     try {
         return await (0,core_deadline/* withDeadline */.NE)(within, () => evaluateWithin(repo, descriptor, settings, share, base, scale));
@@ -24382,10 +21730,16 @@ async function evaluateModel(repo, descriptor, settings, base, deadline, share =
 async function evaluateWithin(repo, descriptor, settings, share, base, scale) {
     let model;
     try {
-        if (descriptor.predictions)
+        // Classifiers and models judged on their predictions load their modules when a run has one,
+        // so that a run of regression models starts without them (a smaller bundle to compile).
+        if (descriptor.predictions) {
+            const { evaluatePredictions } = await Promise.all(/* import() */[__nccwpck_require__.e(84), __nccwpck_require__.e(134), __nccwpck_require__.e(229)]).then(__nccwpck_require__.bind(__nccwpck_require__, 1229));
             return await evaluatePredictions(repo, descriptor, settings, base);
-        if (descriptor.task === 'classification')
+        }
+        if (descriptor.task === 'classification') {
+            const { evaluateClassifier } = await Promise.all(/* import() */[__nccwpck_require__.e(84), __nccwpck_require__.e(134)]).then(__nccwpck_require__.bind(__nccwpck_require__, 8134));
             return await evaluateClassifier(repo, descriptor, settings, base);
+        }
         model = await fitModel(repo, descriptor, settings, scale);
     }
     catch (error) {
@@ -24428,7 +21782,7 @@ async function evaluateWithin(repo, descriptor, settings, share, base, scale) {
         targetScale: model.targetScale ?? null,
     };
     const metrics = reportMetrics(model);
-    const { checks, verdict } = runChecks((0,src_checks/* checksFor */.NR)('regression'), (check) => (0,src_checks/* runCheck */.k_)(check, context), metrics);
+    const { checks, verdict } = (0,run_checks/* runChecks */.J)((0,src_checks/* checksFor */.NR)('regression'), (check) => (0,src_checks/* runCheck */.k_)(check, context), metrics);
     return {
         name: descriptor.name,
         descriptor: descriptor.file,
@@ -24460,7 +21814,7 @@ async function evaluateWithin(repo, descriptor, settings, share, base, scale) {
                 fixed: t.fixed,
             })),
         },
-        charts: withBaseCurves(buildChartData(model, checks, MAX_CHART_POINTS, share), { columns: model.design.columnNames, coefficients: Array.from(model.fit.coefficients, result_result/* jsonNumber */.qj) }, context.baseline, base?.commit ?? ''),
+        charts: withBaseCurves((0,chart_data/* buildChartData */.LJ)(model, checks, chart_types/* MAX_CHART_POINTS */.Q5, share), { columns: model.design.columnNames, coefficients: Array.from(model.fit.coefficients, result_result/* jsonNumber */.qj) }, context.baseline, base?.commit ?? ''),
     };
 }
 
@@ -24628,7 +21982,7 @@ async function evaluateModels(repo, descriptors, settings, options = {}) {
     const serial = async () => {
         const results = [];
         for (let i = 0; i < descriptors.length; i++)
-            results.push(keep(await evaluateModel(repo, descriptors[i], settings, options.base, undefined, chartShare(models, i))));
+            results.push(keep(await evaluateModel(repo, descriptors[i], settings, options.base, undefined, (0,chart_types/* chartShare */.c_)(models, i))));
         return results;
     };
     if (jobs <= 1 || options.root === undefined || script === null)
@@ -24641,8 +21995,8 @@ async function evaluateModels(repo, descriptors, settings, options = {}) {
         return serial();
     const base = options.base;
     const tasks = descriptors.map((descriptor, i) => base
-        ? { descriptor, baseline: base.matches.get(descriptor.file) ?? null, commit: base.commit, share: chartShare(models, i) }
-        : { descriptor, share: chartShare(models, i) });
+        ? { descriptor, baseline: base.matches.get(descriptor.file) ?? null, commit: base.commit, share: (0,chart_types/* chartShare */.c_)(models, i) }
+        : { descriptor, share: (0,chart_types/* chartShare */.c_)(models, i) });
     const data = { [worker_role/* WORKER_FLAG */.o]: true, root: options.root, settings };
     // The worker checks the model's time limit itself between stages; a model still running
     // HARD_STOP_GRACE_MS later is stuck in one step, and its thread is ended from here.
@@ -24776,6 +22130,353 @@ function quoted(text) {
 /** The note of a base model that matched no model of this run. */
 function removedNote(m) {
     return `base model ${quoted(m.name)} (${quoted(m.descriptor)}) matches no model of this run by name, descriptor path or data files: it was removed, or renamed and moved with other data, and is not compared`;
+}
+
+
+/***/ }),
+
+/***/ 7143:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+
+// EXPORTS
+__nccwpck_require__.d(__webpack_exports__, {
+  ag: () => (/* binding */ MAX_MAGNITUDE),
+  B7: () => (/* binding */ planModel)
+});
+
+// UNUSED EXPORTS: MAX_PARAMETERS
+
+// EXTERNAL MODULE: ./src/core/errors.ts
+var errors = __nccwpck_require__(4296);
+// EXTERNAL MODULE: ./src/data/load-model-data.ts + 1 modules
+var load_model_data = __nccwpck_require__(5240);
+// EXTERNAL MODULE: ./src/data/row-source.ts
+var row_source = __nccwpck_require__(7172);
+// EXTERNAL MODULE: ./src/data/data-parts.ts
+var data_parts = __nccwpck_require__(6837);
+// EXTERNAL MODULE: ./src/data/target-transform.ts
+var target_transform = __nccwpck_require__(1938);
+// EXTERNAL MODULE: ./src/design/design-matrix.ts
+var design_matrix = __nccwpck_require__(6566);
+// EXTERNAL MODULE: ./src/design/stats.ts
+var stats = __nccwpck_require__(6801);
+// EXTERNAL MODULE: ./src/design/terms/index.ts + 8 modules
+var design_terms = __nccwpck_require__(6872);
+// EXTERNAL MODULE: ./src/design/terms/transform.ts
+var terms_transform = __nccwpck_require__(7922);
+// EXTERNAL MODULE: ./src/design/weighted-design.ts
+var weighted_design = __nccwpck_require__(9416);
+// EXTERNAL MODULE: ./src/diagnostics/folds.ts
+var diagnostics_folds = __nccwpck_require__(9236);
+// EXTERNAL MODULE: ./src/kernels/index.ts + 11 modules
+var kernels = __nccwpck_require__(7114);
+// EXTERNAL MODULE: ./src/core/deadline.ts + 1 modules
+var deadline = __nccwpck_require__(2091);
+// EXTERNAL MODULE: ./src/core/format.ts
+var format = __nccwpck_require__(6228);
+// EXTERNAL MODULE: ./src/diagnostics/complexity.ts + 1 modules
+var complexity = __nccwpck_require__(7070);
+// EXTERNAL MODULE: ./src/diagnostics/swing.ts + 1 modules
+var swing = __nccwpck_require__(309);
+// EXTERNAL MODULE: ./src/result/chart-types.ts
+var chart_types = __nccwpck_require__(3473);
+;// CONCATENATED MODULE: ./src/run/cost.ts
+
+
+
+
+
+/** Operations to build one design value of a Gaussian radial column (an exponential). */
+const BUILD_RBF = 20;
+/** Operations to build one design value of any other column (a copy, a power). */
+const BUILD_OTHER = 4;
+/**
+ * Operations of one SVD of a p x p matrix, per p^3: one-sided Jacobi takes about 5.5 p^3
+ * multiply-adds a sweep and converges in about 12 sweeps (measured: 70).
+ */
+const SVD_OPERATIONS = 70;
+/**
+ * SVDs' worth of work in one fit of the full factor: the scaled spectrum, the raw singular
+ * values, the penalised factor's rank, the truncated solver of a rank-deficient factor and the
+ * hat trace (measured on rank-deficient designs: about 10).
+ */
+const FIT_SVDS = 10;
+/**
+ * SVDs' worth of work in one solve of a fold's complement when its rank is in doubt (the rank
+ * test, then the scaled spectrum and the truncated solver; measured: about 5).
+ */
+const SOLVE_SVDS = 5;
+/**
+ * Operations per row and p^2 of the leverages: forward substitution is p^2 / 2; a rank-deficient
+ * factor's pseudo-inverse takes up to 4 times as long (measured: 3.5).
+ */
+const LEVERAGE_OPERATIONS = 2;
+/**
+ * Operations per row of the leakage scan: two probes of hash tables of the hold-out rows, each
+ * a likely cache miss once the tables outgrow the cache (measured: about 200).
+ */
+const LEAKAGE_ROW_OPERATIONS = 200;
+/** Operations of building `rows` rows of a design whose row costs `buildPerRow`. */
+function build(rows, buildPerRow) {
+    return rows * buildPerRow;
+}
+/** Operations to build one row of a design. */
+function buildCost(design) {
+    let ops = design.intercept ? BUILD_OTHER : 0;
+    for (const t of design.terms)
+        ops += t.columnNames.length * (t.spec.kind === 'rbf' ? BUILD_RBF : BUILD_OTHER);
+    return ops;
+}
+/** The sizes of a planned model. */
+function modelShape(descriptor, design, trainRows, holdoutRows, sampleRows) {
+    const sampled = sampleRows ?? trainRows;
+    return {
+        trainRows,
+        holdoutRows,
+        inputs: design.inputs.length,
+        columns: design.p,
+        buildPerRow: buildCost(design),
+        folds: Math.min(descriptor.fit.folds, trainRows),
+        shipped: descriptor.coefficients !== null,
+        sweep: (0,complexity/* sweepShape */.EH)(descriptor, design, sampled, { maxRows: complexity/* SWEEP_MAX_ROWS */.QA }),
+        ...(sampleRows === undefined ? {} : { sampleRows }),
+        ...(descriptor.data.targetTransform ? { targetTransform: true } : {}),
+    };
+}
+/** Points of the swing scan at most (every input's grid, the margins, the neighbour segments). */
+function swingPoints(inputs, rows) {
+    const s = swing/* SWING_DEFAULTS */.qk;
+    const gaps = Math.min(Math.max(0, rows - 1), s.maxGridRows) * inputs;
+    const gapPoints = Math.min(gaps, s.maxGaps + inputs) * s.perGap;
+    const segments = inputs >= 2 ? Math.min(rows, s.maxRows) * s.neighbours * s.segmentPoints : 0;
+    return inputs * (s.uniform + 2 * s.marginPoints) + gapPoints + segments;
+}
+/**
+ * Estimates the operations of every stage of one model (see the module comment for the unit).
+ * With n training rows, m hold-out rows, p columns, b operations to build a row, k folds and d
+ * inputs:
+ *
+ * - fold pass: n (b + p^2); merges of the fold factors: 4 k p^3 (the full factor and every
+ *   fold's complement);
+ * - fit: {@link FIT_SVDS} SVDs of p x p ({@link SVD_OPERATIONS} p^3 each);
+ * - refinement pass: n (b + 2p); scoring pass: n (b + {@link LEVERAGE_OPERATIONS} p^2 + 2p),
+ *   hold-out rows m (b + p), shipped coefficients (n + m)(b + p);
+ * - cross-validation solves: k ({@link SOLVE_SVDS} SVDs + p^3 / 3);
+ * - swing scan: its points (b + p), the neighbour search 1000^2 d, the grid sorts;
+ * - leakage: (n + m)({@link LEAKAGE_ROW_OPERATIONS} + 4d); charts: curves of 401 points per input (at most 12);
+ * - complexity sweep: a ridge sweep k SVDs and 2 L k p^2 for L penalties; a degree or width
+ *   sweep, per setting of p_s columns on its n_s rows, n_s (2 b_s + p_s^2 + p_s) + 4 k p_s^3 +
+ *   k ({@link SOLVE_SVDS} SVDs + p_s^3 / 3);
+ * - a transformed target's original scale: the out-of-fold pass n (b + p) and k fold solves.
+ */
+function estimateCost(shape) {
+    const { trainRows: n, holdoutRows: m, columns: p, buildPerRow: b, inputs: d } = shape;
+    const k = shape.folds >= 2 ? shape.folds : 0;
+    const p2 = p * p;
+    const p3 = p2 * p;
+    const svd = (q) => SVD_OPERATIONS * q * q * q;
+    const solves = (folds, q) => folds * (SOLVE_SVDS * svd(q) + (q * q * q) / 3);
+    const rowsBy = (rows) => `${rows} rows x ${p} columns`;
+    const parts = [
+        { stage: 'fold pass', operations: build(n, b) + n * p2, sizes: rowsBy(n) },
+        { stage: 'fold merges and fit', operations: 4 * k * p3 + FIT_SVDS * svd(p), sizes: `${k} folds, ${p} columns` },
+        { stage: 'refinement pass', operations: build(n, b) + 2 * n * p, sizes: rowsBy(n) },
+        {
+            stage: 'scoring pass',
+            operations: build(n, b) + n * (LEVERAGE_OPERATIONS * p2 + 2 * p) + build(m, b) + m * p + (shape.shipped ? build(n + m, b) + (n + m) * p : 0),
+            sizes: `${n} + ${m} rows x ${p} columns`,
+        },
+        { stage: 'cross-validation', operations: solves(k, p), sizes: `${k} fold solves of ${p} columns` },
+    ];
+    // A streamed model's swing scan and charts read its sample (ns rows); leakage streams every row.
+    const ns = shape.sampleRows ?? n;
+    const grid = swingPoints(d, ns);
+    const sampled = Math.min(ns, swing/* SWING_DEFAULTS */.qk.maxRows);
+    const sorted = Math.min(ns, swing/* SWING_DEFAULTS */.qk.maxGridRows);
+    parts.push({
+        stage: 'swing scan',
+        operations: grid * (b + p) + (d >= 2 ? sampled * sampled * d : 0) + d * (32 * sorted + 4 * ns),
+        sizes: `${grid} points`,
+    });
+    const curves = Math.min(d, chart_types/* MAX_PARTIAL_CURVES */.Ql);
+    parts.push({
+        stage: 'leakage and charts',
+        operations: (n + m) * (LEAKAGE_ROW_OPERATIONS + 4 * d) + curves * chart_types/* CURVE_POINTS */.M0 * (b + p) + 4 * ns * d,
+        sizes: `${n} + ${m} rows x ${d} inputs`,
+    });
+    parts.push(sweepPart(shape, k));
+    if (shape.targetTransform === true)
+        parts.push({ stage: 'original scale of the target', operations: build(n, b) + n * p + solves(k, p), sizes: rowsBy(n) });
+    return { total: parts.reduce((sum, part) => sum + part.operations, 0), parts };
+}
+/** The complexity sweep's share (see {@link estimateCost}). */
+function sweepPart(shape, k) {
+    const sweep = shape.sweep;
+    if (sweep === null || k < 2)
+        return { stage: 'complexity sweep', operations: 0, sizes: 'no setting to sweep' };
+    const p = shape.columns;
+    if (sweep.kind === 'ridge') {
+        const L = sweep.parameters.length;
+        return {
+            stage: 'complexity sweep',
+            operations: k * SVD_OPERATIONS * p * p * p + 2 * L * k * p * p,
+            sizes: `${L} ridge penalties x ${k} folds`,
+        };
+    }
+    const perColumn = shape.buildPerRow / Math.max(1, p);
+    let ops = 0;
+    for (const q of sweep.parameters) {
+        const bq = perColumn * q;
+        ops += sweep.rows * (2 * bq + q * q + q) + 4 * k * q * q * q + k * (SOLVE_SVDS * SVD_OPERATIONS * q * q * q + (q * q * q) / 3);
+    }
+    return { stage: 'complexity sweep', operations: ops, sizes: `${sweep.parameters.length} ${sweep.kind} settings on ${sweep.rows} rows` };
+}
+/** Error code of a model whose estimate is over `caps.max_operations`. */
+const OVER_BUDGET = 'over-budget';
+/** A count of operations for people: `4.2e10`. */
+function formatOperations(x) {
+    return x < 1e6 ? (0,format/* formatNumber */.Z)(Math.round(x)) : x.toExponential(1).replace('e+', 'e');
+}
+/**
+ * Refuses a model whose estimate is over the cap.
+ * @param descriptor the model (its `terms` line is named)
+ * @param estimate from {@link estimateCost}
+ * @param settings the settings file (`caps.maxOperations`, and its path for the message)
+ * @throws InputError {@link OVER_BUDGET} naming the largest stages and the cap to raise
+ */
+function checkBudget(descriptor, estimate, settings) {
+    const cap = settings.caps.maxOperations;
+    if (!(estimate.total > cap))
+        return;
+    const largest = estimate.parts
+        .filter((part) => part.operations > 0)
+        .sort((a, b) => b.operations - a.operations)
+        .slice(0, 3)
+        .map((part) => `${part.stage} ${formatOperations(part.operations)} (${part.sizes})`)
+        .join(', ');
+    throw new errors/* InputError */.dz(OVER_BUDGET, `the estimated work of this model, ${formatOperations(estimate.total)} operations, is over the cap of ${formatOperations(cap)} (largest: ${largest}); raise caps.max_operations in ${settings.file ?? 'the settings file (fitgate.yml)'} to allow it, or use fewer rows, columns, folds or sweep settings`, { file: descriptor.file, line: descriptor.termsLine, key: 'terms' });
+}
+
+;// CONCATENATED MODULE: ./src/run/plan.ts
+
+
+
+
+
+
+
+
+
+
+
+
+
+
+/**
+ * Largest number of design columns. The diagnostics take singular value decompositions of p x p
+ * factors (several per model and fold when the design is rank deficient), whose cost grows with
+ * p^3: at 200 columns each takes about 0.4 s here, so a pull request cannot make a run take hours.
+ */
+const MAX_PARAMETERS = 200;
+/**
+ * Largest magnitude of a design value or target: sums of squares of up to 1e9 rows must stay
+ * finite in double precision (1e140^2 * 1e9 = 1e289 < 1.8e308).
+ */
+const MAX_MAGNITUDE = 1e140;
+/**
+ * Plans one model.
+ * @param load how the columns are read: default {@link loadModelData}; classifiers read their target as two classes
+ * @throws InputError for bad data, a design over the caps, a target out of range or constant
+ *   or work estimated over `caps.max_operations` (`over-budget`)
+ */
+async function planModel(repo, descriptor, settings, load = load_model_data/* loadModelData */.u, scale = {}) {
+    const inputs = [];
+    for (const t of descriptor.terms)
+        for (const c of (0,design_terms/* termInputs */.Q)(t))
+            if (!inputs.includes(c))
+                inputs.push(c);
+    const file = descriptor.file;
+    // A streamed training file meets the checks of every row chunk by chunk in its sampling read.
+    const everyRow = (data) => {
+        (0,deadline/* checkDeadline */.Ft)('reading of the data');
+        for (const spec of descriptor.terms)
+            (0,terms_transform/* checkTransformDomain */.F4)(spec, (0,design_terms/* termInputs */.Q)(spec), data, inputs);
+        checkTargetRange(descriptor, data);
+    };
+    let tables = await load(repo, descriptor, inputs, settings, { ...scale, onTrainChunk: everyRow });
+    (0,deadline/* checkDeadline */.Ft)('reading of the data');
+    const { train } = tables;
+    const streamed = tables.streamed ?? null;
+    const rows = streamed === null ? train.rows : streamed.rows;
+    // A transformed input outside its transform's domain is an error naming file, line, column, value.
+    for (const spec of descriptor.terms)
+        for (const data of streamed === null ? [train, tables.holdout] : [tables.holdout])
+            (0,terms_transform/* checkTransformDomain */.F4)(spec, (0,design_terms/* termInputs */.Q)(spec), data, inputs);
+    // Fix term parameters from the training rows, then check the size before taking memory.
+    const terms = descriptor.terms.map((spec) => (0,design_terms/* createTerm */.P)(spec, tables.trainColumns, file, tables.levels, tables.streamed?.inputStats));
+    const design = (0,design_matrix/* createDesign */.x)(terms, descriptor.fit.intercept);
+    const p = design.p;
+    if (p > MAX_PARAMETERS) {
+        throw new errors/* InputError */.dz('too-many-parameters', `the terms build ${p} design columns; at most ${MAX_PARAMETERS} are supported (the diagnostics decompose p x p factors, at a cost that grows with p^3); use fewer radial centres or a lower degree`, { file, line: descriptor.termsLine, key: 'terms' });
+    }
+    // caps.max_cells guards the memory of columns held whole; a streamed model holds none (its
+    // work is still held to caps.max_operations below).
+    if (streamed === null && rows * p > settings.caps.maxCells) {
+        throw new errors/* InputError */.dz('too-large', `${rows} training rows x ${p} parameters = ${rows * p} cells is over the cap of ${settings.caps.maxCells}; raise caps.max_cells in the settings file to allow it`, { file, line: descriptor.termsLine, key: 'terms' });
+    }
+    for (const data of streamed === null ? [train, tables.holdout] : [tables.holdout])
+        checkTargetRange(descriptor, data);
+    // `data.target_transform`: the fit and every figure of the passes work on t = g(y) (a streamed
+    // training file is refused with a transform: data/load-model-data.ts).
+    const transform = descriptor.data.targetTransform ?? null;
+    let originalTargets = null;
+    if (transform !== null && streamed === null) {
+        const transformed = (0,target_transform/* transformTables */.mZ)(tables, transform.kind, descriptor.data.target);
+        tables = transformed.tables;
+        originalTargets = transformed.original;
+    }
+    const targetStats = streamed === null ? (0,stats/* meanAndSd */.ud)(tables.train.y, tables.train.rows) : { mean: streamed.targetMean, sd: streamed.targetSd };
+    if (!(targetStats.sd > 0)) {
+        throw new errors/* InputError */.dz('constant-target', `the target \`${(0,errors/* clip */.$Q)(descriptor.data.target)}\` is constant (${train.y[0]}) in every training row; there is nothing to model`, { file, line: descriptor.data.lines.target, key: 'data.target' });
+    }
+    // The whole model's work, estimated from its shape before the first pass over the rows.
+    checkBudget(descriptor, estimateCost(modelShape(descriptor, design, rows, tables.holdout.rows, streamed === null ? undefined : train.rows)), settings);
+    const { folds: k, foldOrder, seed } = descriptor.fit;
+    if (streamed !== null) {
+        return {
+            descriptor,
+            tables,
+            design,
+            folds: (0,diagnostics_folds/* streamedFolds */.g7)(rows, k, foldOrder, seed),
+            targetSd: targetStats.sd,
+            scaling: null,
+            source: streamed.source,
+            rows,
+            targetRange: [streamed.targetMin, streamed.targetMax],
+            ...(scale.chunkRows ? { chunkRows: scale.chunkRows } : {}),
+        };
+    }
+    const folds = (0,diagnostics_folds/* assignFolds */.oF)(rows, k, foldOrder, seed);
+    return {
+        descriptor,
+        tables,
+        design,
+        folds,
+        targetSd: targetStats.sd,
+        scaling: (0,weighted_design/* rowScaling */.on)(tables.train),
+        originalTargets,
+        source: (0,row_source/* memoryRowSource */.dN)(tables.train),
+        rows,
+        targetRange: (0,stats/* range */.y1)(tables.train.y, tables.train.rows),
+    };
+}
+/** InputError `target-range` when a target is not within ±{@link MAX_MAGNITUDE}. */
+function checkTargetRange(descriptor, data) {
+    const i = (0,kernels/* firstBeyond */.gy)(data.y, data.rows, MAX_MAGNITUDE);
+    if (i < 0)
+        return;
+    throw new errors/* InputError */.dz('target-range', `the target \`${(0,errors/* clip */.$Q)(descriptor.data.target)}\` is ${data.y[i]} on ${(0,data_parts/* lineOfFile */.ui)(data, data.lines[i])}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): rescale the target`, { file: descriptor.file, line: descriptor.data.lines.target, key: 'data.target' });
 }
 
 
@@ -24963,6 +22664,42 @@ function serveTasks(handle) {
 
 /***/ }),
 
+/***/ 6580:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   J: () => (/* binding */ runChecks)
+/* harmony export */ });
+/* harmony import */ var _core_deadline_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(2091);
+/* harmony import */ var _result_result_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(1628);
+
+
+/**
+ * Runs `checks` in order with `run` (the task's runner: `runCheck` or `runClassifierCheck` bound
+ * to the model's context), adding each check's figures to `metrics` in place.
+ * @returns the outcomes in order and the model's verdict (`pass` when nothing warns or fails)
+ */
+function runChecks(checks, run, metrics) {
+    const outcomes = [];
+    let verdict = 'pass';
+    for (const check of checks) {
+        const stage = `${check.id} check`;
+        (0,_core_deadline_js__WEBPACK_IMPORTED_MODULE_0__/* .checkDeadline */ .Ft)(stage);
+        const { outcome, figures } = run(check);
+        // A check stopped by the deadline is caught as a check error: the model stops here instead.
+        (0,_core_deadline_js__WEBPACK_IMPORTED_MODULE_0__/* .checkDeadline */ .Ft)(stage);
+        outcomes.push(outcome);
+        if (figures)
+            Object.assign(metrics, figures);
+        if (outcome.status === 'fail' || outcome.status === 'warn')
+            verdict = (0,_result_result_js__WEBPACK_IMPORTED_MODULE_1__/* .worse */ .JJ)(verdict, outcome.status);
+    }
+    return { checks: outcomes, verdict };
+}
+
+
+/***/ }),
+
 /***/ 6941:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
@@ -25109,6 +22846,13 @@ module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:worker_
 /***/ ((module) => {
 
 module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("process");
+
+/***/ }),
+
+/***/ 2203:
+/***/ ((module) => {
+
+module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("stream");
 
 /***/ }),
 
@@ -33675,2296 +31419,6 @@ function replaceNode(key, path, node) {
 
 exports.visit = visit;
 exports.visitAsync = visitAsync;
-
-
-/***/ }),
-
-/***/ 6892:
-/***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __nccwpck_require__) => {
-
-/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   J: () => (/* binding */ CsvError)
-/* harmony export */ });
-class CsvError extends Error {
-  constructor(code, message, options, ...contexts) {
-    if (Array.isArray(message)) message = message.join(" ").trim();
-    super(message);
-    if (Error.captureStackTrace !== undefined) {
-      Error.captureStackTrace(this, CsvError);
-    }
-    this.code = code;
-    for (const context of contexts) {
-      for (const key in context) {
-        const value = context[key];
-        this[key] = Buffer.isBuffer(value)
-          ? value.toString(options.encoding)
-          : value == null
-            ? value
-            : JSON.parse(JSON.stringify(value));
-      }
-    }
-  }
-}
-
-
-
-
-/***/ }),
-
-/***/ 7084:
-/***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __nccwpck_require__) => {
-
-
-// EXPORTS
-__nccwpck_require__.d(__webpack_exports__, {
-  p: () => (/* binding */ transform)
-});
-
-// UNUSED EXPORTS: CsvError
-
-// EXTERNAL MODULE: ./node_modules/csv-parse/lib/api/normalize_columns_array.js
-var normalize_columns_array = __nccwpck_require__(9321);
-;// CONCATENATED MODULE: ./node_modules/csv-parse/lib/utils/ResizeableBuffer.js
-class ResizeableBuffer {
-  constructor(size = 100) {
-    this.size = size;
-    this.length = 0;
-    this.buf = Buffer.allocUnsafe(size);
-  }
-  prepend(val) {
-    if (Buffer.isBuffer(val)) {
-      const length = this.length + val.length;
-      if (length >= this.size) {
-        this.resize();
-        if (length >= this.size) {
-          throw Error("INVALID_BUFFER_STATE");
-        }
-      }
-      const buf = this.buf;
-      this.buf = Buffer.allocUnsafe(this.size);
-      val.copy(this.buf, 0);
-      buf.copy(this.buf, val.length);
-      this.length += val.length;
-    } else {
-      const length = this.length++;
-      if (length === this.size) {
-        this.resize();
-      }
-      const buf = this.clone();
-      this.buf[0] = val;
-      buf.copy(this.buf, 1, 0, length);
-    }
-  }
-  append(val) {
-    const length = this.length++;
-    if (length === this.size) {
-      this.resize();
-    }
-    this.buf[length] = val;
-  }
-  clone() {
-    return Buffer.from(this.buf.slice(0, this.length));
-  }
-  resize() {
-    const length = this.length;
-    this.size = this.size * 2;
-    const buf = Buffer.allocUnsafe(this.size);
-    this.buf.copy(buf, 0, 0, length);
-    this.buf = buf;
-  }
-  toString(encoding) {
-    if (encoding) {
-      return this.buf.toString(encoding, 0, this.length);
-    } else {
-      return Uint8Array.prototype.slice.call(this.buf.slice(0, this.length));
-    }
-  }
-  toJSON() {
-    return this.toString("utf8");
-  }
-  reset() {
-    this.length = 0;
-  }
-}
-
-/* harmony default export */ const utils_ResizeableBuffer = (ResizeableBuffer);
-
-;// CONCATENATED MODULE: ./node_modules/csv-parse/lib/api/init_state.js
-
-
-const init_state = function (options) {
-  // ECMAScript WhiteSpace + LineTerminator codepoints, encoded under
-  // `options.encoding`. Aligns trimming with `String.prototype.trim()`.
-  // https://tc39.es/ecma262/#sec-white-space
-  // https://tc39.es/ecma262/#sec-line-terminators
-  //
-  // Codepoints unrepresentable in the target encoding are dropped: Node's
-  // Buffer substitutes them with `?` (0x3F), and including those would cause
-  // literal `?` bytes in the input to be trimmed under `latin1`/`ascii`.
-  const timchars = [
-    // Basic Latin
-    0x0020, // [Space](https://www.fileformat.info/info/unicode/char/0020/index.htm)
-    0x0009, // [CHARACTER TABULATION (HT)](https://www.fileformat.info/info/unicode/char/0009/index.htm)
-    0x000a, // [LINE FEED (LF)](https://www.fileformat.info/info/unicode/char/000a/index.htm)
-    0x000d, // [CARRIAGE RETURN (CR)](https://www.fileformat.info/info/unicode/char/000d/index.htm)
-    0x000c, // [FORM FEED (FF)](https://www.fileformat.info/info/unicode/char/000c/index.htm)
-    0x000b, // [LINE TABULATION (VT)](https://www.fileformat.info/info/unicode/char/000b/index.htm)
-    // Latin-1 Supplement
-    0x00a0, // [NO-BREAK SPACE (NBSP)](https://www.fileformat.info/info/unicode/char/00a0/index.htm)
-    // Ogham
-    0x1680, // [OGHAM SPACE MARK](https://www.fileformat.info/info/unicode/char/1680/index.htm)
-    // General Punctuation
-    0x2000, // [EN QUAD](https://www.fileformat.info/info/unicode/char/2000/index.htm)
-    0x2001, // [EM QUAD](https://www.fileformat.info/info/unicode/char/2001/index.htm)
-    0x2002, // [EN SPACE](https://www.fileformat.info/info/unicode/char/2002/index.htm)
-    0x2003, // [EM SPACE](https://www.fileformat.info/info/unicode/char/2003/index.htm)
-    0x2004, // [THREE-PER-EM SPACE](https://www.fileformat.info/info/unicode/char/2004/index.htm)
-    0x2005, // [FOUR-PER-EM SPACE](https://www.fileformat.info/info/unicode/char/2005/index.htm)
-    0x2006, // [SIX-PER-EM SPACE](https://www.fileformat.info/info/unicode/char/2006/index.htm)
-    0x2007, // [FIGURE SPACE](https://www.fileformat.info/info/unicode/char/2007/index.htm)
-    0x2008, // [PUNCTUATION SPACE](https://www.fileformat.info/info/unicode/char/2008/index.htm)
-    0x2009, // [THIN SPACE](https://www.fileformat.info/info/unicode/char/2009/index.htm)
-    0x200a, // [HAIR SPACE](https://www.fileformat.info/info/unicode/char/200a/index.htm)
-    0x2028, // [LINE SEPARATOR](https://www.fileformat.info/info/unicode/char/2028/index.htm)
-    0x2029, // [PARAGRAPH SEPARATOR](https://www.fileformat.info/info/unicode/char/2029/index.htm)
-    0x202f, // [NARROW NO-BREAK SPACE (NNBSP)](https://www.fileformat.info/info/unicode/char/202f/index.htm)
-    0x205f, // [MEDIUM MATHEMATICAL SPACE (MMSP)](https://www.fileformat.info/info/unicode/char/205f/index.htm)
-    0x3000, // [IDEOGRAPHIC SPACE](https://www.fileformat.info/info/unicode/char/3000/index.htm)
-    0xfeff, // [ZERO WIDTH NO-BREAK SPACE (BOM)](https://www.fileformat.info/info/unicode/char/feff/index.htm)
-  ].reduce((acc, codepoint) => {
-    const encoded = Buffer.from(
-      String.fromCharCode(codepoint),
-      options.encoding,
-    );
-    if (codepoint !== 0x3f && encoded.length === 1 && encoded[0] === 0x3f) {
-      return acc;
-    }
-    acc.push(encoded);
-    return acc;
-  }, []);
-  // First-byte lookup table for `__isCharTrimable`. Non-whitespace bytes
-  // (the common case) bail out in O(1) without scanning every timchar.
-  const timcharFirstBytes = new Uint8Array(256);
-  for (const t of timchars) timcharFirstBytes[t[0]] = 1;
-  return {
-    bomSkipped: false,
-    bufBytesStart: 0,
-    castField: options.cast_function,
-    commenting: false,
-    delimiterBufPrevious: undefined,
-    delimiterDiscovered: false,
-    // Current error encountered by a record
-    error: undefined,
-    enabled: options.from_line === 1,
-    escaping: false,
-    escapeIsQuote:
-      Buffer.isBuffer(options.escape) &&
-      Buffer.isBuffer(options.quote) &&
-      Buffer.compare(options.escape, options.quote) === 0,
-    // columns can be `false`, `true`, `Array`
-    expectedRecordLength: Array.isArray(options.columns)
-      ? options.columns.length
-      : undefined,
-    field: new utils_ResizeableBuffer(20),
-    firstLineToHeaders: options.cast_first_line_to_header,
-    needMoreDataSize: Math.max(
-      // Skip if the remaining buffer smaller than comment
-      options.comment !== null ? options.comment.length : 0,
-      // Skip if the remaining buffer can be delimiter
-      ...(options.delimiter
-        ? options.delimiter.map((delimiter) => delimiter.length)
-        : []),
-      // Auto discovery of delimiter is limited to 1 character
-      options.delimiter_auto ? 1 : 0,
-      // Skip if the remaining buffer can be escape sequence
-      options.quote !== null ? options.quote.length : 0,
-      // Skip if the remaining buffer can be a multi-byte trim character
-      ...timchars.map((t) => t.length),
-    ),
-    previousBuf: undefined,
-    quoting: false,
-    stop: false,
-    rawBuffer: new utils_ResizeableBuffer(100),
-    record: [],
-    recordHasError: false,
-    record_length: 0,
-    recordDelimiterMaxLength:
-      options.record_delimiter.length === 0
-        ? 0
-        : Math.max(...options.record_delimiter.map((v) => v.length)),
-    trimChars: [
-      Buffer.from(" ", options.encoding)[0],
-      Buffer.from("\t", options.encoding)[0],
-    ],
-    wasQuoting: false,
-    wasRowDelimiter: false,
-    timchars: timchars,
-    timcharFirstBytes: timcharFirstBytes,
-  };
-};
-
-
-
-// EXTERNAL MODULE: ./node_modules/csv-parse/lib/api/normalize_options.js + 1 modules
-var normalize_options = __nccwpck_require__(6845);
-// EXTERNAL MODULE: ./node_modules/csv-parse/lib/api/CsvError.js
-var CsvError = __nccwpck_require__(6892);
-;// CONCATENATED MODULE: ./node_modules/csv-parse/lib/utils/delimiter_discover.js
-
-
-
-// Discussed in [issue #400](https://github.com/adaltas/node-csv/issues/400)
-// See https://github.com/python/cpython/blob/ea1b1c579f600cc85d145c60862b2e6b98701b24/Lib/csv.py#L349
-const delimiter_discover = function (records, options) {
-  // Normalize the configuration
-  if (!options) {
-    ({ delimiter_auto: options } = (0,normalize_options/* normalize_options */.f)({ delimiter_auto: true }));
-  }
-  // Convert String to Buffer
-  if (typeof records === "string") {
-    records = Buffer.from(records);
-  }
-  // Convert Buffer to an array of records
-  if (Buffer.isBuffer(records)) {
-    records = ((data) => {
-      const records = [];
-      const parser = transform({ delimiter: [] });
-      const push = (record) => records.push(record);
-      const close = () => {};
-      const error = parser.parse(data, true, push, close);
-      if (error !== undefined) throw error;
-      return records;
-    })(records);
-  }
-  // Info array initialization, 127 entries, one per char code
-  const info = Array(127)
-    .fill()
-    .map(() => ({ lines: [] }));
-  // Traverse each records, count occurences per char code
-  records.map(([record], line) => {
-    for (let i = 0, l = record.length; i < l; i++) {
-      // Count the character frequency
-      const code = record.charCodeAt(i);
-      if (info[code].lines[line] === undefined) info[code].lines[line] = 0;
-      info[code].lines[line]++;
-    }
-  });
-  // Traverse each char code, compute the score
-  info.map((info, i) => {
-    info.char_code = i;
-    info.std = std(info.lines);
-    info.total = info.lines.reduce((acc, val) => acc + val, 0);
-    info.preferred = !!options.preferred[i];
-    info.score = options.score(info, options);
-  });
-  // Extract the dominant character
-  const result = info.reduce(
-    (acc, info) => (acc.score > info.score ? acc : info),
-    {},
-  );
-  return String.fromCharCode(result.char_code);
-};
-
-const std = function (array) {
-  const n = array.length;
-  if (n === 0) return 0;
-  const mean = array.reduce((a, b) => a + b) / n;
-  return Math.sqrt(
-    array.map((x) => Math.pow(x - mean, 2)).reduce((a, b) => a + b) / n,
-  );
-};
-
-
-
-;// CONCATENATED MODULE: ./node_modules/csv-parse/lib/api/index.js
-
-
-
-
-
-
-const isRecordEmpty = function (record) {
-  return record.every(
-    (field) =>
-      field == null || (field.toString && field.toString().trim() === ""),
-  );
-};
-
-const cr = 13; // `\r`, carriage return, 0x0D in hexadécimal, 13 in decimal
-const nl = 10; // `\n`, newline, 0x0A in hexadecimal, 10 in decimal
-
-const boms = {
-  // Note, the following are equals:
-  // Buffer.from("\ufeff")
-  // Buffer.from([239, 187, 191])
-  // Buffer.from('EFBBBF', 'hex')
-  utf8: Buffer.from([239, 187, 191]),
-  // Note, the following are equals:
-  // Buffer.from "\ufeff", 'utf16le
-  // Buffer.from([255, 254])
-  utf16le: Buffer.from([255, 254]),
-};
-
-const transform = function (original_options = {}) {
-  const info = {
-    bytes: 0,
-    bytes_records: 0,
-    comment_lines: 0,
-    empty_lines: 0,
-    invalid_field_length: 0,
-    lines: 1,
-    records: 0,
-  };
-  const options = (0,normalize_options/* normalize_options */.f)(original_options);
-  return {
-    info: info,
-    original_options: original_options,
-    options: options,
-    state: init_state(options),
-    __needMoreData: function (i, bufLen, end) {
-      if (end) return false;
-      const { encoding, escape, quote } = this.options;
-      const { quoting, needMoreDataSize, recordDelimiterMaxLength } =
-        this.state;
-      const numOfCharLeft = bufLen - i - 1;
-      const requiredLength = Math.max(
-        needMoreDataSize,
-        // Skip if the remaining buffer smaller than record delimiter
-        // If "record_delimiter" is yet to be discovered:
-        // 1. It is equals to `[]` and "recordDelimiterMaxLength" equals `0`
-        // 2. We set the length to windows line ending in the current encoding
-        // Note, that encoding is known from user or bom discovery at that point
-        // recordDelimiterMaxLength,
-        recordDelimiterMaxLength === 0
-          ? Buffer.from("\r\n", encoding).length
-          : recordDelimiterMaxLength,
-        // Skip if remaining buffer can be an escaped quote
-        quoting ? (escape === null ? 0 : escape.length) + quote.length : 0,
-        // Skip if remaining buffer can be record delimiter following the closing quote
-        quoting ? quote.length + recordDelimiterMaxLength : 0,
-      );
-      return numOfCharLeft < requiredLength;
-    },
-    // Central parser implementation
-    parse: function (nextBuf, end, push, close) {
-      const {
-        bom,
-        comment_no_infix,
-        delimiter_auto,
-        encoding,
-        from_line,
-        ltrim,
-        max_record_size,
-        raw,
-        relax_quotes,
-        rtrim,
-        skip_empty_lines,
-        to,
-        to_line,
-      } = this.options;
-      let { comment, escape, quote, record_delimiter } = this.options;
-      const {
-        bomSkipped,
-        delimiterDiscovered,
-        delimiterBufPrevious,
-        rawBuffer,
-        escapeIsQuote,
-      } = this.state;
-      // Automatic delimiter discovery
-      if (!delimiterDiscovered && delimiter_auto) {
-        let delimiterBuf;
-        if (delimiterBufPrevious === undefined) {
-          delimiterBuf = nextBuf;
-        } else if (
-          delimiterBufPrevious !== undefined &&
-          nextBuf === undefined
-        ) {
-          delimiterBuf = delimiterBufPrevious;
-        } else {
-          delimiterBuf = Buffer.concat([delimiterBufPrevious, nextBuf]);
-        }
-        // Ensure that nextBuf is not concatenated a second time during buffer reconciliation
-        nextBuf = undefined;
-        // this.delimiterBufPrevious = delimiterBuf;
-        if (end || delimiterBuf.length > delimiter_auto.size) {
-          this.options.delimiter = [
-            Buffer.from(
-              delimiter_discover(delimiterBuf, this.options.delimiter_auto),
-            ),
-          ];
-          this.state.previousBuf = delimiterBuf;
-          this.state.delimiterBufPrevious = undefined;
-          this.state.delimiterDiscovered = true;
-        } else {
-          this.state.delimiterBufPrevious = delimiterBuf;
-          return;
-        }
-      }
-      // Previous buffers reconciliation
-      const { previousBuf } = this.state;
-      let buf;
-      if (previousBuf === undefined) {
-        if (nextBuf === undefined) {
-          // Handle empty string
-          close();
-          return;
-        } else {
-          buf = nextBuf;
-        }
-      } else if (previousBuf !== undefined && nextBuf === undefined) {
-        buf = previousBuf;
-      } else {
-        buf = Buffer.concat([previousBuf, nextBuf]);
-      }
-      // Handle UTF BOM
-      if (bomSkipped === false) {
-        if (bom === false) {
-          this.state.bomSkipped = true;
-        } else if (buf.length < 3) {
-          // No enough data
-          if (end === false) {
-            // Wait for more data
-            this.state.previousBuf = buf;
-            return;
-          }
-        } else {
-          for (const encoding in boms) {
-            if (boms[encoding].compare(buf, 0, boms[encoding].length) === 0) {
-              // Skip BOM
-              const bomLength = boms[encoding].length;
-              this.state.bufBytesStart += bomLength;
-              buf = buf.slice(bomLength);
-              // Renormalize original options with the new encoding
-              const options = (0,normalize_options/* normalize_options */.f)({
-                ...this.original_options,
-                encoding: encoding,
-              });
-              // Properties are merged with the existing options instance
-              for (const key in options) {
-                this.options[key] = options[key];
-              }
-              // Options will re-evaluate the Buffer with the new encoding
-              ({ comment, escape, quote } = this.options);
-              break;
-            }
-          }
-          this.state.bomSkipped = true;
-        }
-      }
-      const bufLen = buf.length;
-      let pos;
-      for (pos = 0; pos < bufLen; pos++) {
-        // Ensure we get enough space to look ahead
-        // There should be a way to move this out of the loop
-        if (this.__needMoreData(pos, bufLen, end)) {
-          break;
-        }
-        if (this.state.wasRowDelimiter === true) {
-          this.info.lines++;
-          this.state.wasRowDelimiter = false;
-        }
-        if (to_line !== -1 && this.info.lines > to_line) {
-          this.state.stop = true;
-          close();
-          return;
-        }
-        // Auto discovery of record_delimiter, unix, mac and windows supported
-        if (this.state.quoting === false && record_delimiter.length === 0) {
-          const record_delimiterCount = this.__autoDiscoverRecordDelimiter(
-            buf,
-            pos,
-          );
-          if (record_delimiterCount) {
-            record_delimiter = this.options.record_delimiter;
-          }
-        }
-        const chr = buf[pos];
-        if (raw === true) {
-          rawBuffer.append(chr);
-        }
-        if (
-          (chr === cr || chr === nl) &&
-          this.state.wasRowDelimiter === false
-        ) {
-          this.state.wasRowDelimiter = true;
-        }
-        // Previous char was a valid escape char
-        // treat the current char as a regular char
-        if (this.state.escaping === true) {
-          this.state.escaping = false;
-        } else {
-          // Escape is only active inside quoted fields
-          // We are quoting, the char is an escape chr and there is a chr to escape
-          // if(escape !== null && this.state.quoting === true && chr === escape && pos + 1 < bufLen){
-          if (
-            escape !== null &&
-            this.state.quoting === true &&
-            this.__isEscape(buf, pos, chr) &&
-            pos + escape.length < bufLen
-          ) {
-            if (escapeIsQuote) {
-              if (this.__isQuote(buf, pos + escape.length)) {
-                this.state.escaping = true;
-                pos += escape.length - 1;
-                continue;
-              }
-            } else {
-              this.state.escaping = true;
-              pos += escape.length - 1;
-              continue;
-            }
-          }
-          // Not currently escaping and chr is a quote
-          // TODO: need to compare bytes instead of single char
-          if (this.state.commenting === false && this.__isQuote(buf, pos)) {
-            if (this.state.quoting === true) {
-              const nextChr = buf[pos + quote.length];
-              const isNextChrTrimable =
-                rtrim && this.__isCharTrimable(buf, pos + quote.length);
-              const isNextChrComment =
-                comment !== null &&
-                this.__compareBytes(comment, buf, pos + quote.length, nextChr);
-              const isNextChrDelimiter = this.__isDelimiter(
-                buf,
-                pos + quote.length,
-                nextChr,
-              );
-              const isNextChrRecordDelimiter =
-                record_delimiter.length === 0
-                  ? this.__autoDiscoverRecordDelimiter(buf, pos + quote.length)
-                  : this.__isRecordDelimiter(nextChr, buf, pos + quote.length);
-              // Escape a quote
-              // Treat next char as a regular character
-              if (
-                escape !== null &&
-                this.__isEscape(buf, pos, chr) &&
-                this.__isQuote(buf, pos + escape.length)
-              ) {
-                pos += escape.length - 1;
-              } else if (
-                !nextChr ||
-                isNextChrDelimiter ||
-                isNextChrRecordDelimiter ||
-                isNextChrComment ||
-                isNextChrTrimable
-              ) {
-                this.state.quoting = false;
-                this.state.wasQuoting = true;
-                pos += quote.length - 1;
-                continue;
-              } else if (relax_quotes === false) {
-                const err = this.__error(
-                  new CsvError/* CsvError */.J(
-                    "CSV_INVALID_CLOSING_QUOTE",
-                    [
-                      "Invalid Closing Quote:",
-                      `got "${String.fromCharCode(nextChr)}"`,
-                      `at line ${this.info.lines}`,
-                      "instead of delimiter, record delimiter, trimable character",
-                      "(if activated) or comment",
-                    ],
-                    this.options,
-                    this.__infoField(),
-                  ),
-                );
-                if (err !== undefined) return err;
-              } else {
-                this.state.quoting = false;
-                this.state.wasQuoting = true;
-                this.state.field.prepend(quote);
-                pos += quote.length - 1;
-              }
-            } else {
-              if (this.state.field.length !== 0) {
-                // In relax_quotes mode, treat opening quote preceded by chrs as regular
-                if (relax_quotes === false) {
-                  const info = this.__infoField();
-                  const bom = Object.keys(boms)
-                    .map((b) =>
-                      boms[b].equals(this.state.field.toString()) ? b : false,
-                    )
-                    .filter(Boolean)[0];
-                  const err = this.__error(
-                    new CsvError/* CsvError */.J(
-                      "INVALID_OPENING_QUOTE",
-                      [
-                        "Invalid Opening Quote:",
-                        `a quote is found on field ${JSON.stringify(info.column)} at line ${info.lines}, value is ${JSON.stringify(this.state.field.toString(encoding))}`,
-                        bom ? `(${bom} bom)` : undefined,
-                      ],
-                      this.options,
-                      info,
-                      {
-                        field: this.state.field,
-                      },
-                    ),
-                  );
-                  if (err !== undefined) return err;
-                }
-              } else {
-                this.state.quoting = true;
-                pos += quote.length - 1;
-                continue;
-              }
-            }
-          }
-          if (this.state.quoting === false) {
-            const recordDelimiterLength = this.__isRecordDelimiter(
-              chr,
-              buf,
-              pos,
-            );
-            if (recordDelimiterLength !== 0) {
-              // Do not emit comments which take a full line
-              const skipCommentLine =
-                this.state.commenting &&
-                this.state.wasQuoting === false &&
-                this.state.record.length === 0 &&
-                this.state.field.length === 0;
-              if (skipCommentLine) {
-                this.info.comment_lines++;
-                // Skip full comment line
-              } else {
-                // Activate records emission if above from_line
-                if (
-                  this.state.enabled === false &&
-                  this.info.lines +
-                    (this.state.wasRowDelimiter === true ? 1 : 0) >=
-                    from_line
-                ) {
-                  this.state.enabled = true;
-                  this.__resetField();
-                  this.__resetRecord();
-                  pos += recordDelimiterLength - 1;
-                  continue;
-                }
-                // Skip if line is empty and skip_empty_lines activated
-                if (
-                  skip_empty_lines === true &&
-                  this.state.wasQuoting === false &&
-                  this.state.record.length === 0 &&
-                  this.state.field.length === 0
-                ) {
-                  this.info.empty_lines++;
-                  pos += recordDelimiterLength - 1;
-                  continue;
-                }
-                this.info.bytes = this.state.bufBytesStart + pos;
-                const errField = this.__onField();
-                if (errField !== undefined) return errField;
-                this.info.bytes =
-                  this.state.bufBytesStart + pos + recordDelimiterLength;
-                const errRecord = this.__onRecord(push);
-                if (errRecord !== undefined) return errRecord;
-                if (to !== -1 && this.info.records >= to) {
-                  this.state.stop = true;
-                  close();
-                  return;
-                }
-              }
-              this.state.commenting = false;
-              pos += recordDelimiterLength - 1;
-              continue;
-            }
-            if (this.state.commenting) {
-              continue;
-            }
-            if (
-              comment !== null &&
-              (comment_no_infix === false ||
-                (this.state.record.length === 0 &&
-                  this.state.field.length === 0))
-            ) {
-              const commentCount = this.__compareBytes(comment, buf, pos, chr);
-              if (commentCount !== 0) {
-                this.state.commenting = true;
-                continue;
-              }
-            }
-            const delimiterLength = this.__isDelimiter(buf, pos, chr);
-            if (delimiterLength !== 0) {
-              this.info.bytes = this.state.bufBytesStart + pos;
-              const errField = this.__onField();
-              if (errField !== undefined) return errField;
-              pos += delimiterLength - 1;
-              continue;
-            }
-          }
-        }
-        if (this.state.commenting === false) {
-          if (
-            max_record_size !== 0 &&
-            this.state.record_length + this.state.field.length > max_record_size
-          ) {
-            return this.__error(
-              new CsvError/* CsvError */.J(
-                "CSV_MAX_RECORD_SIZE",
-                [
-                  "Max Record Size:",
-                  "record exceed the maximum number of tolerated bytes",
-                  `of ${max_record_size}`,
-                  `at line ${this.info.lines}`,
-                ],
-                this.options,
-                this.__infoField(),
-              ),
-            );
-          }
-        }
-        const lappend =
-          ltrim === false ||
-          this.state.quoting === true ||
-          this.state.field.length !== 0 ||
-          !this.__isCharTrimable(buf, pos);
-        // rtrim in non quoting is handle in __onField
-        const rappend = rtrim === false || this.state.wasQuoting === false;
-        if (lappend === true && rappend === true) {
-          this.state.field.append(chr);
-        } else if (rtrim === true && !this.__isCharTrimable(buf, pos)) {
-          return this.__error(
-            new CsvError/* CsvError */.J(
-              "CSV_NON_TRIMABLE_CHAR_AFTER_CLOSING_QUOTE",
-              [
-                "Invalid Closing Quote:",
-                "found non trimable byte after quote",
-                `at line ${this.info.lines}`,
-              ],
-              this.options,
-              this.__infoField(),
-            ),
-          );
-        } else {
-          if (lappend === false) {
-            pos += this.__isCharTrimable(buf, pos) - 1;
-          }
-          continue;
-        }
-      }
-      if (end === true) {
-        // Ensure we are not ending in a quoting state
-        if (this.state.quoting === true) {
-          const err = this.__error(
-            new CsvError/* CsvError */.J(
-              "CSV_QUOTE_NOT_CLOSED",
-              [
-                "Quote Not Closed:",
-                `the parsing is finished with an opening quote at line ${this.info.lines}`,
-              ],
-              this.options,
-              this.__infoField(),
-            ),
-          );
-          if (err !== undefined) return err;
-        } else {
-          // Skip last line if it has no characters
-          if (
-            this.state.wasQuoting === true ||
-            this.state.record.length !== 0 ||
-            this.state.field.length !== 0
-          ) {
-            this.info.bytes = this.state.bufBytesStart + pos;
-            const errField = this.__onField();
-            if (errField !== undefined) return errField;
-            const errRecord = this.__onRecord(push);
-            if (errRecord !== undefined) return errRecord;
-          } else if (this.state.wasRowDelimiter === true) {
-            this.info.empty_lines++;
-          } else if (this.state.commenting === true) {
-            this.info.comment_lines++;
-          }
-        }
-      } else {
-        this.state.bufBytesStart += pos;
-        this.state.previousBuf = buf.slice(pos);
-      }
-      if (this.state.wasRowDelimiter === true) {
-        this.info.lines++;
-        this.state.wasRowDelimiter = false;
-      }
-    },
-    __onRecord: function (push) {
-      const {
-        columns,
-        group_columns_by_name,
-        encoding,
-        info,
-        from,
-        relax_column_count,
-        relax_column_count_less,
-        relax_column_count_more,
-        raw,
-        skip_records_with_empty_values,
-      } = this.options;
-      const { enabled, record } = this.state;
-      if (enabled === false) {
-        return this.__resetRecord();
-      }
-      // Convert the first line into column names
-      const recordLength = record.length;
-      if (columns === true) {
-        if (skip_records_with_empty_values === true && isRecordEmpty(record)) {
-          this.__resetRecord();
-          return;
-        }
-        return this.__firstLineToColumns(record);
-      }
-      if (columns === false && this.info.records === 0) {
-        this.state.expectedRecordLength = recordLength;
-      }
-      if (recordLength !== this.state.expectedRecordLength) {
-        const err =
-          columns === false
-            ? new CsvError/* CsvError */.J(
-                "CSV_RECORD_INCONSISTENT_FIELDS_LENGTH",
-                [
-                  "Invalid Record Length:",
-                  `expect ${this.state.expectedRecordLength},`,
-                  `got ${recordLength} on line ${this.info.lines}`,
-                ],
-                this.options,
-                this.__infoField(),
-                {
-                  record: record,
-                },
-              )
-            : new CsvError/* CsvError */.J(
-                "CSV_RECORD_INCONSISTENT_COLUMNS",
-                [
-                  "Invalid Record Length:",
-                  `columns length is ${columns.length},`, // rename columns
-                  `got ${recordLength} on line ${this.info.lines}`,
-                ],
-                this.options,
-                this.__infoField(),
-                {
-                  record: record,
-                },
-              );
-        if (
-          relax_column_count === true ||
-          (relax_column_count_less === true &&
-            recordLength < this.state.expectedRecordLength) ||
-          (relax_column_count_more === true &&
-            recordLength > this.state.expectedRecordLength)
-        ) {
-          this.info.invalid_field_length++;
-          this.state.error = err;
-          // Error is undefined with skip_records_with_error
-        } else {
-          const finalErr = this.__error(err);
-          if (finalErr) return finalErr;
-        }
-      }
-      if (skip_records_with_empty_values === true && isRecordEmpty(record)) {
-        this.__resetRecord();
-        return;
-      }
-      if (this.state.recordHasError === true) {
-        this.__resetRecord();
-        this.state.recordHasError = false;
-        return;
-      }
-      this.info.records++;
-      if (from === 1 || this.info.records >= from) {
-        const { objname } = this.options;
-        // With columns, records are object
-        if (columns !== false) {
-          const obj = {};
-          // Transform record array to an object
-          for (let i = 0, l = record.length; i < l; i++) {
-            if (columns[i] === undefined || columns[i].disabled) continue;
-            // Turn duplicate columns into an array
-            if (
-              group_columns_by_name === true &&
-              Object.hasOwn(obj, columns[i].name)
-            ) {
-              if (Array.isArray(obj[columns[i].name])) {
-                obj[columns[i].name] = obj[columns[i].name].concat(record[i]);
-              } else {
-                obj[columns[i].name] = [obj[columns[i].name], record[i]];
-              }
-            } else {
-              Object.defineProperty(obj, columns[i].name, {
-                value: record[i],
-                enumerable: true,
-                writable: true,
-                configurable: true,
-              });
-            }
-          }
-          // Without objname (default)
-          if (raw === true || info === true) {
-            const extRecord = Object.assign(
-              { record: obj },
-              raw === true
-                ? { raw: this.state.rawBuffer.toString(encoding) }
-                : {},
-              info === true ? { info: this.__infoRecord() } : {},
-            );
-            const err = this.__push(
-              objname === undefined ? extRecord : [obj[objname], extRecord],
-              push,
-            );
-            if (err) {
-              return err;
-            }
-          } else {
-            const err = this.__push(
-              objname === undefined ? obj : [obj[objname], obj],
-              push,
-            );
-            if (err) {
-              return err;
-            }
-          }
-          // Without columns, records are array
-        } else {
-          if (raw === true || info === true) {
-            const extRecord = Object.assign(
-              { record: record },
-              raw === true
-                ? { raw: this.state.rawBuffer.toString(encoding) }
-                : {},
-              info === true ? { info: this.__infoRecord() } : {},
-            );
-            const err = this.__push(
-              objname === undefined ? extRecord : [record[objname], extRecord],
-              push,
-            );
-            if (err) {
-              return err;
-            }
-          } else {
-            const err = this.__push(
-              objname === undefined ? record : [record[objname], record],
-              push,
-            );
-            if (err) {
-              return err;
-            }
-          }
-        }
-      }
-      this.__resetRecord();
-    },
-    __firstLineToColumns: function (record) {
-      const { firstLineToHeaders } = this.state;
-      try {
-        const headers =
-          firstLineToHeaders === undefined
-            ? record
-            : firstLineToHeaders.call(null, record);
-        if (!Array.isArray(headers)) {
-          return this.__error(
-            new CsvError/* CsvError */.J(
-              "CSV_INVALID_COLUMN_MAPPING",
-              [
-                "Invalid Column Mapping:",
-                "expect an array from column function,",
-                `got ${JSON.stringify(headers)}`,
-              ],
-              this.options,
-              this.__infoField(),
-              {
-                headers: headers,
-              },
-            ),
-          );
-        }
-        const normalizedHeaders = (0,normalize_columns_array/* normalize_columns_array */.q)(headers);
-        this.state.expectedRecordLength = normalizedHeaders.length;
-        this.options.columns = normalizedHeaders;
-        this.__resetRecord();
-        return;
-      } catch (err) {
-        return err;
-      }
-    },
-    __resetRecord: function () {
-      if (this.options.raw === true) {
-        this.state.rawBuffer.reset();
-      }
-      this.state.error = undefined;
-      this.state.record = [];
-      this.state.record_length = 0;
-    },
-    __onField: function () {
-      const { cast, encoding, rtrim, max_record_size } = this.options;
-      const { enabled, wasQuoting } = this.state;
-      // Short circuit for the from_line options
-      if (enabled === false) {
-        return this.__resetField();
-      }
-      let field = this.state.field.toString(encoding);
-      if (rtrim === true && wasQuoting === false) {
-        field = field.trimRight();
-      }
-      if (cast === true) {
-        const [err, f] = this.__cast(field);
-        if (err !== undefined) return err;
-        field = f;
-      }
-      this.state.record.push(field);
-      // Increment record length if record size must not exceed a limit
-      if (max_record_size !== 0 && typeof field === "string") {
-        this.state.record_length += field.length;
-      }
-      this.__resetField();
-    },
-    __resetField: function () {
-      this.state.field.reset();
-      this.state.wasQuoting = false;
-    },
-    __push: function (record, push) {
-      const { on_record } = this.options;
-      if (on_record !== undefined) {
-        const info = this.__infoRecord();
-        try {
-          record = on_record.call(null, record, info);
-        } catch (err) {
-          return err;
-        }
-        if (record === undefined || record === null) {
-          return;
-        }
-      }
-      this.info.bytes_records += this.info.bytes;
-      push(record);
-    },
-    // Return a tuple with the error and the casted value
-    __cast: function (field) {
-      const { columns, relax_column_count } = this.options;
-      const isColumns = Array.isArray(columns);
-      // Dont loose time calling cast
-      // because the final record is an object
-      // and this field can't be associated to a key present in columns
-      if (
-        isColumns === true &&
-        relax_column_count &&
-        this.options.columns.length <= this.state.record.length
-      ) {
-        return [undefined, undefined];
-      }
-      if (this.state.castField !== null) {
-        try {
-          const info = this.__infoField();
-          return [undefined, this.state.castField.call(null, field, info)];
-        } catch (err) {
-          return [err];
-        }
-      }
-      if (this.__isFloat(field)) {
-        return [undefined, parseFloat(field)];
-      } else if (this.options.cast_date !== false) {
-        const info = this.__infoField();
-        return [undefined, this.options.cast_date.call(null, field, info)];
-      }
-      return [undefined, field];
-    },
-    __compareBytes: function (sourceBuf, targetBuf, targetPos, firstByte) {
-      if (sourceBuf[0] !== firstByte) return 0;
-      const sourceLength = sourceBuf.length;
-      for (let i = 1; i < sourceLength; i++) {
-        if (sourceBuf[i] !== targetBuf[targetPos + i]) return 0;
-      }
-      return sourceLength;
-    },
-    // Helper to test if a character is trimable
-    __isCharTrimable: function (buf, pos) {
-      const { timchars, timcharFirstBytes } = this.state;
-      // Fast bail-out: non-whitespace bytes (the common case) are rejected
-      // without scanning the full timchar list.
-      const first = buf[pos];
-      if (first === undefined || timcharFirstBytes[first] === 0) return 0;
-      loop1: for (let i = 0; i < timchars.length; i++) {
-        const timchar = timchars[i];
-        for (let j = 0; j < timchar.length; j++) {
-          if (timchar[j] !== buf[pos + j]) continue loop1;
-        }
-        return timchar.length;
-      }
-      return 0;
-    },
-    __isDelimiter: function (buf, pos, chr) {
-      const { delimiter, ignore_last_delimiters } = this.options;
-      if (
-        ignore_last_delimiters === true &&
-        this.state.record.length === this.options.columns.length - 1
-      ) {
-        return 0;
-      } else if (
-        ignore_last_delimiters !== false &&
-        typeof ignore_last_delimiters === "number" &&
-        this.state.record.length === ignore_last_delimiters - 1
-      ) {
-        return 0;
-      }
-      loop1: for (let i = 0; i < delimiter.length; i++) {
-        const del = delimiter[i];
-        if (del[0] === chr) {
-          for (let j = 1; j < del.length; j++) {
-            if (del[j] !== buf[pos + j]) continue loop1;
-          }
-          return del.length;
-        }
-      }
-      return 0;
-    },
-    __isEscape: function (buf, pos, chr) {
-      const { escape } = this.options;
-      if (escape === null) return false;
-      const l = escape.length;
-      if (escape[0] === chr) {
-        for (let i = 0; i < l; i++) {
-          if (escape[i] !== buf[pos + i]) {
-            return false;
-          }
-        }
-        return true;
-      }
-      return false;
-    },
-    __isFloat: function (value) {
-      return value - parseFloat(value) + 1 >= 0; // Borrowed from jquery
-    },
-    // Keep it in case we implement the `cast_int` option
-    // __isInt(value){
-    //   // return Number.isInteger(parseInt(value))
-    //   // return !isNaN( parseInt( obj ) );
-    //   return /^(\-|\+)?[1-9][0-9]*$/.test(value)
-    // }
-    __isQuote: function (buf, pos) {
-      const { quote } = this.options;
-      if (quote === null) return false;
-      const l = quote.length;
-      for (let i = 0; i < l; i++) {
-        if (quote[i] !== buf[pos + i]) {
-          return false;
-        }
-      }
-      return true;
-    },
-    __isRecordDelimiter: function (chr, buf, pos) {
-      const { record_delimiter } = this.options;
-      const recordDelimiterLength = record_delimiter.length;
-      loop1: for (let i = 0; i < recordDelimiterLength; i++) {
-        const rd = record_delimiter[i];
-        const rdLength = rd.length;
-        if (rd[0] !== chr) {
-          continue;
-        }
-        for (let j = 1; j < rdLength; j++) {
-          if (rd[j] !== buf[pos + j]) {
-            continue loop1;
-          }
-        }
-        return rd.length;
-      }
-      return 0;
-    },
-    __autoDiscoverRecordDelimiter: function (buf, pos) {
-      const { encoding } = this.options;
-      // Note, we don't need to cache this information in state,
-      // It is only called on the first line until we find out a suitable
-      // record delimiter.
-      const rds = [
-        // Important, the windows line ending must be before mac os 9
-        Buffer.from("\r\n", encoding),
-        Buffer.from("\n", encoding),
-        Buffer.from("\r", encoding),
-      ];
-      loop: for (let i = 0; i < rds.length; i++) {
-        const l = rds[i].length;
-        for (let j = 0; j < l; j++) {
-          if (rds[i][j] !== buf[pos + j]) {
-            continue loop;
-          }
-        }
-        this.options.record_delimiter.push(rds[i]);
-        this.state.recordDelimiterMaxLength = rds[i].length;
-        return rds[i].length;
-      }
-      return 0;
-    },
-    __error: function (msg) {
-      const { encoding, raw, skip_records_with_error } = this.options;
-      const err = typeof msg === "string" ? new Error(msg) : msg;
-      if (skip_records_with_error) {
-        this.state.recordHasError = true;
-        if (this.options.on_skip !== undefined) {
-          try {
-            this.options.on_skip(
-              err,
-              raw ? this.state.rawBuffer.toString(encoding) : undefined,
-            );
-          } catch (err) {
-            return err;
-          }
-        }
-        // this.emit('skip', err, raw ? this.state.rawBuffer.toString(encoding) : undefined);
-        return undefined;
-      } else {
-        return err;
-      }
-    },
-    __infoDataSet: function () {
-      return {
-        ...this.info,
-        columns: this.options.columns,
-      };
-    },
-    __infoRecord: function () {
-      const { columns, raw, encoding } = this.options;
-      return {
-        ...this.__infoDataSet(),
-        bytes_records: this.info.bytes,
-        error: this.state.error,
-        header: columns === true,
-        index: this.state.record.length,
-        raw: raw ? this.state.rawBuffer.toString(encoding) : undefined,
-      };
-    },
-    __infoField: function () {
-      const { columns } = this.options;
-      const isColumns = Array.isArray(columns);
-      // Bytes records are only incremented when all records'fields are parsed
-      const bytes_records = this.info.bytes_records;
-      return {
-        ...this.__infoRecord(),
-        bytes_records: bytes_records,
-        column:
-          isColumns === true
-            ? columns.length > this.state.record.length
-              ? columns[this.state.record.length].name
-              : null
-            : this.state.record.length,
-        quoting: this.state.wasQuoting,
-      };
-    },
-  };
-};
-
-
-
-
-/***/ }),
-
-/***/ 9321:
-/***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __nccwpck_require__) => {
-
-/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   q: () => (/* binding */ normalize_columns_array)
-/* harmony export */ });
-/* harmony import */ var _CsvError_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(6892);
-/* harmony import */ var _utils_is_object_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(8467);
-
-
-
-const normalize_columns_array = function (columns) {
-  const normalizedColumns = [];
-  for (let i = 0, l = columns.length; i < l; i++) {
-    const column = columns[i];
-    if (column === undefined || column === null || column === false) {
-      normalizedColumns[i] = { disabled: true };
-    } else if (typeof column === "string" || typeof column === "number") {
-      normalizedColumns[i] = { name: `${column}` };
-    } else if ((0,_utils_is_object_js__WEBPACK_IMPORTED_MODULE_1__/* .is_object */ .v)(column)) {
-      if (typeof column.name !== "string") {
-        throw new _CsvError_js__WEBPACK_IMPORTED_MODULE_0__/* .CsvError */ .J("CSV_OPTION_COLUMNS_MISSING_NAME", [
-          "Option columns missing name:",
-          `property "name" is required at position ${i}`,
-          "when column is an object literal",
-        ]);
-      }
-      normalizedColumns[i] = column;
-    } else {
-      throw new _CsvError_js__WEBPACK_IMPORTED_MODULE_0__/* .CsvError */ .J("CSV_INVALID_COLUMN_DEFINITION", [
-        "Invalid column definition:",
-        "expect a string or a literal object,",
-        `got ${JSON.stringify(column)} at position ${i}`,
-      ]);
-    }
-  }
-  return normalizedColumns;
-};
-
-
-
-
-/***/ }),
-
-/***/ 6845:
-/***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __nccwpck_require__) => {
-
-
-// EXPORTS
-__nccwpck_require__.d(__webpack_exports__, {
-  f: () => (/* binding */ normalize_options)
-});
-
-// EXTERNAL MODULE: ./node_modules/csv-parse/lib/api/normalize_columns_array.js
-var normalize_columns_array = __nccwpck_require__(9321);
-// EXTERNAL MODULE: ./node_modules/csv-parse/lib/api/CsvError.js
-var CsvError = __nccwpck_require__(6892);
-;// CONCATENATED MODULE: ./node_modules/csv-parse/lib/utils/underscore.js
-const underscore = function (str) {
-  return str.replace(/([A-Z])/g, function (_, match) {
-    return "_" + match.toLowerCase();
-  });
-};
-
-
-
-// EXTERNAL MODULE: ./node_modules/csv-parse/lib/utils/is_object.js
-var is_object = __nccwpck_require__(8467);
-;// CONCATENATED MODULE: ./node_modules/csv-parse/lib/api/normalize_options.js
-
-
-
-
-
-const normalize_options = function (opts) {
-  const options = {};
-  // Merge with user options
-  for (const opt in opts) {
-    options[underscore(opt)] = opts[opt];
-  }
-  // Normalize option `encoding`
-  // Note: defined first because other options depends on it
-  // to convert chars/strings into buffers.
-  if (options.encoding === undefined || options.encoding === true) {
-    options.encoding = "utf8";
-  } else if (options.encoding === null || options.encoding === false) {
-    options.encoding = null;
-  } else if (
-    typeof options.encoding !== "string" &&
-    options.encoding !== null
-  ) {
-    throw new CsvError/* CsvError */.J(
-      "CSV_INVALID_OPTION_ENCODING",
-      [
-        "Invalid option encoding:",
-        "encoding must be a string or null to return a buffer,",
-        `got ${JSON.stringify(options.encoding)}`,
-      ],
-      options,
-    );
-  }
-  // Normalize option `bom`
-  if (
-    options.bom === undefined ||
-    options.bom === null ||
-    options.bom === false
-  ) {
-    options.bom = false;
-  } else if (options.bom !== true) {
-    throw new CsvError/* CsvError */.J(
-      "CSV_INVALID_OPTION_BOM",
-      [
-        "Invalid option bom:",
-        "bom must be true,",
-        `got ${JSON.stringify(options.bom)}`,
-      ],
-      options,
-    );
-  }
-  // Normalize option `cast`
-  options.cast_function = null;
-  if (
-    options.cast === undefined ||
-    options.cast === null ||
-    options.cast === false ||
-    options.cast === ""
-  ) {
-    options.cast = undefined;
-  } else if (typeof options.cast === "function") {
-    options.cast_function = options.cast;
-    options.cast = true;
-  } else if (options.cast !== true) {
-    throw new CsvError/* CsvError */.J(
-      "CSV_INVALID_OPTION_CAST",
-      [
-        "Invalid option cast:",
-        "cast must be true or a function,",
-        `got ${JSON.stringify(options.cast)}`,
-      ],
-      options,
-    );
-  }
-  // Normalize option `cast_date`
-  if (
-    options.cast_date === undefined ||
-    options.cast_date === null ||
-    options.cast_date === false ||
-    options.cast_date === ""
-  ) {
-    options.cast_date = false;
-  } else if (options.cast_date === true) {
-    options.cast_date = function (value) {
-      const date = Date.parse(value);
-      return !isNaN(date) ? new Date(date) : value;
-    };
-  } else if (typeof options.cast_date !== "function") {
-    throw new CsvError/* CsvError */.J(
-      "CSV_INVALID_OPTION_CAST_DATE",
-      [
-        "Invalid option cast_date:",
-        "cast_date must be true or a function,",
-        `got ${JSON.stringify(options.cast_date)}`,
-      ],
-      options,
-    );
-  }
-  // Normalize option `columns`
-  options.cast_first_line_to_header = undefined;
-  if (options.columns === true) {
-    // Fields in the first line are converted as-is to columns
-    options.cast_first_line_to_header = undefined;
-  } else if (typeof options.columns === "function") {
-    options.cast_first_line_to_header = options.columns;
-    options.columns = true;
-  } else if (Array.isArray(options.columns)) {
-    options.columns = (0,normalize_columns_array/* normalize_columns_array */.q)(options.columns);
-  } else if (
-    options.columns === undefined ||
-    options.columns === null ||
-    options.columns === false
-  ) {
-    options.columns = false;
-  } else {
-    throw new CsvError/* CsvError */.J(
-      "CSV_INVALID_OPTION_COLUMNS",
-      [
-        "Invalid option columns:",
-        "expect an array, a function or true,",
-        `got ${JSON.stringify(options.columns)}`,
-      ],
-      options,
-    );
-  }
-  // Normalize option `group_columns_by_name`
-  if (
-    options.group_columns_by_name === undefined ||
-    options.group_columns_by_name === null ||
-    options.group_columns_by_name === false
-  ) {
-    options.group_columns_by_name = false;
-  } else if (options.group_columns_by_name !== true) {
-    throw new CsvError/* CsvError */.J(
-      "CSV_INVALID_OPTION_GROUP_COLUMNS_BY_NAME",
-      [
-        "Invalid option group_columns_by_name:",
-        "expect an boolean,",
-        `got ${JSON.stringify(options.group_columns_by_name)}`,
-      ],
-      options,
-    );
-  } else if (options.columns === false) {
-    throw new CsvError/* CsvError */.J(
-      "CSV_INVALID_OPTION_GROUP_COLUMNS_BY_NAME",
-      [
-        "Invalid option group_columns_by_name:",
-        "the `columns` mode must be activated.",
-      ],
-      options,
-    );
-  }
-  // Normalize option `comment`
-  if (
-    options.comment === undefined ||
-    options.comment === null ||
-    options.comment === false ||
-    options.comment === ""
-  ) {
-    options.comment = null;
-  } else {
-    if (typeof options.comment === "string") {
-      options.comment = Buffer.from(options.comment, options.encoding);
-    }
-    if (!Buffer.isBuffer(options.comment)) {
-      throw new CsvError/* CsvError */.J(
-        "CSV_INVALID_OPTION_COMMENT",
-        [
-          "Invalid option comment:",
-          "comment must be a buffer or a string,",
-          `got ${JSON.stringify(options.comment)}`,
-        ],
-        options,
-      );
-    }
-  }
-  // Normalize option `comment_no_infix`
-  if (
-    options.comment_no_infix === undefined ||
-    options.comment_no_infix === null ||
-    options.comment_no_infix === false
-  ) {
-    options.comment_no_infix = false;
-  } else if (options.comment_no_infix !== true) {
-    throw new CsvError/* CsvError */.J(
-      "CSV_INVALID_OPTION_COMMENT",
-      [
-        "Invalid option comment_no_infix:",
-        "value must be a boolean,",
-        `got ${JSON.stringify(options.comment_no_infix)}`,
-      ],
-      options,
-    );
-  }
-  // Normalize option `delimiter_auto`
-  if (
-    options.delimiter_auto === undefined ||
-    options.delimiter_auto === null ||
-    options.delimiter_auto === false
-  ) {
-    options.delimiter_auto = false;
-  } else if (options.delimiter_auto === true) {
-    options.delimiter_auto = {};
-  } else if (!(0,is_object/* is_object */.v)(options.delimiter_auto)) {
-    throw new CsvError/* CsvError */.J(
-      "CSV_INVALID_OPTION_DELIMITER_AUTO",
-      [
-        "Invalid option delimiter_auto:",
-        "delimiter_auto must be a boolean or a configuration object,",
-        `got ${JSON.stringify(options.delimiter_auto)}`,
-      ],
-      options,
-    );
-  }
-  if (options.delimiter_auto) {
-    if (options.delimiter_auto.preferred === undefined)
-      options.delimiter_auto.preferred = {
-        [",".charCodeAt(0)]: 1.8,
-        ["\t".charCodeAt(0)]: 1.8,
-        [";".charCodeAt(0)]: 1.6,
-        [" ".charCodeAt(0)]: 1.6,
-        [":".charCodeAt(0)]: 1.5,
-        [".".charCodeAt(0)]: 1.4,
-        ["/".charCodeAt(0)]: 1.4,
-      };
-    else if (!(0,is_object/* is_object */.v)(options.delimiter_auto.preferred)) {
-      throw new CsvError/* CsvError */.J(
-        "CSV_INVALID_OPTION_DELIMITER_AUTO",
-        [
-          "Invalid option delimiter_auto:",
-          "preferred must be an object,",
-          `got ${JSON.stringify(options.delimiter_auto.preferred)}`,
-        ],
-        options,
-      );
-    }
-    if (options.delimiter_auto.score === undefined)
-      options.delimiter_auto.score = (info, options) => {
-        return (
-          (info.total - info.std) * (options.preferred[info.char_code] || 1)
-        );
-      };
-    else if (typeof options.delimiter_auto.score !== "function") {
-      throw new CsvError/* CsvError */.J(
-        "CSV_INVALID_OPTION_DELIMITER_AUTO",
-        [
-          "Invalid option delimiter_auto:",
-          "score must be a function,",
-          `got ${JSON.stringify(options.delimiter_auto.score)}`,
-        ],
-        options,
-      );
-    }
-    if (options.delimiter_auto.size === undefined)
-      options.delimiter_auto.size = 2048;
-    else if (typeof options.delimiter_auto.size !== "number") {
-      throw new CsvError/* CsvError */.J(
-        "CSV_INVALID_OPTION_DELIMITER_AUTO",
-        [
-          "Invalid option delimiter_auto:",
-          "size must be a number,",
-          `got ${JSON.stringify(options.delimiter_auto.size)}`,
-        ],
-        options,
-      );
-    }
-  }
-  // Normalize option `delimiter`
-  const delimiter_json = JSON.stringify(options.delimiter);
-  if (options.delimiter_auto !== false) {
-    options.delimiter = [];
-  }
-  if (!Array.isArray(options.delimiter)) {
-    if (
-      options.delimiter === undefined ||
-      options.delimiter === null ||
-      options.delimiter === false
-    ) {
-      options.delimiter = Buffer.from(",", options.encoding);
-    }
-    options.delimiter = [options.delimiter];
-  }
-  options.delimiter = options.delimiter.map(function (delimiter) {
-    if (typeof delimiter === "string") {
-      delimiter = Buffer.from(delimiter, options.encoding);
-    }
-    if (!Buffer.isBuffer(delimiter) || delimiter.length === 0) {
-      throw new CsvError/* CsvError */.J(
-        "CSV_INVALID_OPTION_DELIMITER",
-        [
-          "Invalid option delimiter:",
-          "delimiter must be a non empty string or buffer or array of string|buffer,",
-          `got ${delimiter_json}`,
-        ],
-        options,
-      );
-    }
-    return delimiter;
-  });
-  // Normalize option `escape`
-  if (options.escape === undefined || options.escape === true) {
-    options.escape = Buffer.from('"', options.encoding);
-  } else if (typeof options.escape === "string") {
-    options.escape = Buffer.from(options.escape, options.encoding);
-  } else if (options.escape === null || options.escape === false) {
-    options.escape = null;
-  }
-  if (options.escape !== null) {
-    if (!Buffer.isBuffer(options.escape)) {
-      throw new Error(
-        `Invalid Option: escape must be a buffer, a string or a boolean, got ${JSON.stringify(options.escape)}`,
-      );
-    }
-  }
-  // Normalize option `from`
-  if (options.from === undefined || options.from === null) {
-    options.from = 1;
-  } else {
-    if (typeof options.from === "string" && /\d+/.test(options.from)) {
-      options.from = parseInt(options.from);
-    }
-    if (Number.isInteger(options.from)) {
-      if (options.from < 0) {
-        throw new Error(
-          `Invalid Option: from must be a positive integer, got ${JSON.stringify(opts.from)}`,
-        );
-      }
-    } else {
-      throw new Error(
-        `Invalid Option: from must be an integer, got ${JSON.stringify(options.from)}`,
-      );
-    }
-  }
-  // Normalize option `from_line`
-  if (options.from_line === undefined || options.from_line === null) {
-    options.from_line = 1;
-  } else {
-    if (
-      typeof options.from_line === "string" &&
-      /\d+/.test(options.from_line)
-    ) {
-      options.from_line = parseInt(options.from_line);
-    }
-    if (Number.isInteger(options.from_line)) {
-      if (options.from_line <= 0) {
-        throw new Error(
-          `Invalid Option: from_line must be a positive integer greater than 0, got ${JSON.stringify(opts.from_line)}`,
-        );
-      }
-    } else {
-      throw new Error(
-        `Invalid Option: from_line must be an integer, got ${JSON.stringify(opts.from_line)}`,
-      );
-    }
-  }
-  // Normalize options `ignore_last_delimiters`
-  if (
-    options.ignore_last_delimiters === undefined ||
-    options.ignore_last_delimiters === null
-  ) {
-    options.ignore_last_delimiters = false;
-  } else if (typeof options.ignore_last_delimiters === "number") {
-    options.ignore_last_delimiters = Math.floor(options.ignore_last_delimiters);
-    if (options.ignore_last_delimiters === 0) {
-      options.ignore_last_delimiters = false;
-    }
-  } else if (typeof options.ignore_last_delimiters !== "boolean") {
-    throw new CsvError/* CsvError */.J(
-      "CSV_INVALID_OPTION_IGNORE_LAST_DELIMITERS",
-      [
-        "Invalid option `ignore_last_delimiters`:",
-        "the value must be a boolean value or an integer,",
-        `got ${JSON.stringify(options.ignore_last_delimiters)}`,
-      ],
-      options,
-    );
-  }
-  if (options.ignore_last_delimiters === true && options.columns === false) {
-    throw new CsvError/* CsvError */.J(
-      "CSV_IGNORE_LAST_DELIMITERS_REQUIRES_COLUMNS",
-      [
-        "The option `ignore_last_delimiters`",
-        "requires the activation of the `columns` option",
-      ],
-      options,
-    );
-  }
-  // Normalize option `info`
-  if (
-    options.info === undefined ||
-    options.info === null ||
-    options.info === false
-  ) {
-    options.info = false;
-  } else if (options.info !== true) {
-    throw new Error(
-      `Invalid Option: info must be true, got ${JSON.stringify(options.info)}`,
-    );
-  }
-  // Normalize option `max_record_size`
-  if (
-    options.max_record_size === undefined ||
-    options.max_record_size === null ||
-    options.max_record_size === false
-  ) {
-    options.max_record_size = 0;
-  } else if (
-    Number.isInteger(options.max_record_size) &&
-    options.max_record_size >= 0
-  ) {
-    // Great, nothing to do
-  } else if (
-    typeof options.max_record_size === "string" &&
-    /\d+/.test(options.max_record_size)
-  ) {
-    options.max_record_size = parseInt(options.max_record_size);
-  } else {
-    throw new Error(
-      `Invalid Option: max_record_size must be a positive integer, got ${JSON.stringify(options.max_record_size)}`,
-    );
-  }
-  // Normalize option `objname`
-  if (
-    options.objname === undefined ||
-    options.objname === null ||
-    options.objname === false
-  ) {
-    options.objname = undefined;
-  } else if (Buffer.isBuffer(options.objname)) {
-    if (options.objname.length === 0) {
-      throw new Error(`Invalid Option: objname must be a non empty buffer`);
-    }
-    if (options.encoding === null) {
-      // Don't call `toString`, leave objname as a buffer
-    } else {
-      options.objname = options.objname.toString(options.encoding);
-    }
-  } else if (typeof options.objname === "string") {
-    if (options.objname.length === 0) {
-      throw new Error(`Invalid Option: objname must be a non empty string`);
-    }
-    // Great, nothing to do
-  } else if (typeof options.objname === "number") {
-    // if(options.objname.length === 0){
-    //   throw new Error(`Invalid Option: objname must be a non empty string`);
-    // }
-    // Great, nothing to do
-  } else {
-    throw new Error(
-      `Invalid Option: objname must be a string or a buffer, got ${options.objname}`,
-    );
-  }
-  if (options.objname !== undefined) {
-    if (typeof options.objname === "number") {
-      if (options.columns !== false) {
-        throw Error(
-          "Invalid Option: objname index cannot be combined with columns or be defined as a field",
-        );
-      }
-    } else {
-      // A string or a buffer
-      if (options.columns === false) {
-        throw Error(
-          "Invalid Option: objname field must be combined with columns or be defined as an index",
-        );
-      }
-    }
-  }
-  // Normalize option `on_record`
-  if (options.on_record === undefined || options.on_record === null) {
-    options.on_record = undefined;
-  } else if (typeof options.on_record !== "function") {
-    throw new CsvError/* CsvError */.J(
-      "CSV_INVALID_OPTION_ON_RECORD",
-      [
-        "Invalid option `on_record`:",
-        "expect a function,",
-        `got ${JSON.stringify(options.on_record)}`,
-      ],
-      options,
-    );
-  }
-  // Normalize option `on_skip`
-  // options.on_skip ??= (err, chunk) => {
-  //   this.emit('skip', err, chunk);
-  // };
-  if (
-    options.on_skip !== undefined &&
-    options.on_skip !== null &&
-    typeof options.on_skip !== "function"
-  ) {
-    throw new Error(
-      `Invalid Option: on_skip must be a function, got ${JSON.stringify(options.on_skip)}`,
-    );
-  }
-  // Normalize option `quote`
-  if (
-    options.quote === null ||
-    options.quote === false ||
-    options.quote === ""
-  ) {
-    options.quote = null;
-  } else {
-    if (options.quote === undefined || options.quote === true) {
-      options.quote = Buffer.from('"', options.encoding);
-    } else if (typeof options.quote === "string") {
-      options.quote = Buffer.from(options.quote, options.encoding);
-    }
-    if (!Buffer.isBuffer(options.quote)) {
-      throw new Error(
-        `Invalid Option: quote must be a buffer or a string, got ${JSON.stringify(options.quote)}`,
-      );
-    }
-  }
-  // Normalize option `raw`
-  if (
-    options.raw === undefined ||
-    options.raw === null ||
-    options.raw === false
-  ) {
-    options.raw = false;
-  } else if (options.raw !== true) {
-    throw new Error(
-      `Invalid Option: raw must be true, got ${JSON.stringify(options.raw)}`,
-    );
-  }
-  // Normalize option `record_delimiter`
-  if (options.record_delimiter === undefined) {
-    options.record_delimiter = [];
-  } else if (
-    typeof options.record_delimiter === "string" ||
-    Buffer.isBuffer(options.record_delimiter)
-  ) {
-    if (options.record_delimiter.length === 0) {
-      throw new CsvError/* CsvError */.J(
-        "CSV_INVALID_OPTION_RECORD_DELIMITER",
-        [
-          "Invalid option `record_delimiter`:",
-          "value must be a non empty string or buffer,",
-          `got ${JSON.stringify(options.record_delimiter)}`,
-        ],
-        options,
-      );
-    }
-    options.record_delimiter = [options.record_delimiter];
-  } else if (!Array.isArray(options.record_delimiter)) {
-    throw new CsvError/* CsvError */.J(
-      "CSV_INVALID_OPTION_RECORD_DELIMITER",
-      [
-        "Invalid option `record_delimiter`:",
-        "value must be a string, a buffer or array of string|buffer,",
-        `got ${JSON.stringify(options.record_delimiter)}`,
-      ],
-      options,
-    );
-  }
-  options.record_delimiter = options.record_delimiter.map(function (rd, i) {
-    if (typeof rd !== "string" && !Buffer.isBuffer(rd)) {
-      throw new CsvError/* CsvError */.J(
-        "CSV_INVALID_OPTION_RECORD_DELIMITER",
-        [
-          "Invalid option `record_delimiter`:",
-          "value must be a string, a buffer or array of string|buffer",
-          `at index ${i},`,
-          `got ${JSON.stringify(rd)}`,
-        ],
-        options,
-      );
-    } else if (rd.length === 0) {
-      throw new CsvError/* CsvError */.J(
-        "CSV_INVALID_OPTION_RECORD_DELIMITER",
-        [
-          "Invalid option `record_delimiter`:",
-          "value must be a non empty string or buffer",
-          `at index ${i},`,
-          `got ${JSON.stringify(rd)}`,
-        ],
-        options,
-      );
-    }
-    if (typeof rd === "string") {
-      rd = Buffer.from(rd, options.encoding);
-    }
-    return rd;
-  });
-  // Normalize option `relax_column_count`
-  if (typeof options.relax_column_count === "boolean") {
-    // Great, nothing to do
-  } else if (
-    options.relax_column_count === undefined ||
-    options.relax_column_count === null
-  ) {
-    options.relax_column_count = false;
-  } else {
-    throw new Error(
-      `Invalid Option: relax_column_count must be a boolean, got ${JSON.stringify(options.relax_column_count)}`,
-    );
-  }
-  if (typeof options.relax_column_count_less === "boolean") {
-    // Great, nothing to do
-  } else if (
-    options.relax_column_count_less === undefined ||
-    options.relax_column_count_less === null
-  ) {
-    options.relax_column_count_less = false;
-  } else {
-    throw new Error(
-      `Invalid Option: relax_column_count_less must be a boolean, got ${JSON.stringify(options.relax_column_count_less)}`,
-    );
-  }
-  if (typeof options.relax_column_count_more === "boolean") {
-    // Great, nothing to do
-  } else if (
-    options.relax_column_count_more === undefined ||
-    options.relax_column_count_more === null
-  ) {
-    options.relax_column_count_more = false;
-  } else {
-    throw new Error(
-      `Invalid Option: relax_column_count_more must be a boolean, got ${JSON.stringify(options.relax_column_count_more)}`,
-    );
-  }
-  // Normalize option `relax_quotes`
-  if (typeof options.relax_quotes === "boolean") {
-    // Great, nothing to do
-  } else if (
-    options.relax_quotes === undefined ||
-    options.relax_quotes === null
-  ) {
-    options.relax_quotes = false;
-  } else {
-    throw new Error(
-      `Invalid Option: relax_quotes must be a boolean, got ${JSON.stringify(options.relax_quotes)}`,
-    );
-  }
-  // Normalize option `skip_empty_lines`
-  if (typeof options.skip_empty_lines === "boolean") {
-    // Great, nothing to do
-  } else if (
-    options.skip_empty_lines === undefined ||
-    options.skip_empty_lines === null
-  ) {
-    options.skip_empty_lines = false;
-  } else {
-    throw new Error(
-      `Invalid Option: skip_empty_lines must be a boolean, got ${JSON.stringify(options.skip_empty_lines)}`,
-    );
-  }
-  // Normalize option `skip_records_with_empty_values`
-  if (typeof options.skip_records_with_empty_values === "boolean") {
-    // Great, nothing to do
-  } else if (
-    options.skip_records_with_empty_values === undefined ||
-    options.skip_records_with_empty_values === null
-  ) {
-    options.skip_records_with_empty_values = false;
-  } else {
-    throw new Error(
-      `Invalid Option: skip_records_with_empty_values must be a boolean, got ${JSON.stringify(options.skip_records_with_empty_values)}`,
-    );
-  }
-  // Normalize option `skip_records_with_error`
-  if (typeof options.skip_records_with_error === "boolean") {
-    // Great, nothing to do
-  } else if (
-    options.skip_records_with_error === undefined ||
-    options.skip_records_with_error === null
-  ) {
-    options.skip_records_with_error = false;
-  } else {
-    throw new Error(
-      `Invalid Option: skip_records_with_error must be a boolean, got ${JSON.stringify(options.skip_records_with_error)}`,
-    );
-  }
-  // Normalize option `rtrim`
-  if (
-    options.rtrim === undefined ||
-    options.rtrim === null ||
-    options.rtrim === false
-  ) {
-    options.rtrim = false;
-  } else if (options.rtrim !== true) {
-    throw new Error(
-      `Invalid Option: rtrim must be a boolean, got ${JSON.stringify(options.rtrim)}`,
-    );
-  }
-  // Normalize option `ltrim`
-  if (
-    options.ltrim === undefined ||
-    options.ltrim === null ||
-    options.ltrim === false
-  ) {
-    options.ltrim = false;
-  } else if (options.ltrim !== true) {
-    throw new Error(
-      `Invalid Option: ltrim must be a boolean, got ${JSON.stringify(options.ltrim)}`,
-    );
-  }
-  // Normalize option `trim`
-  if (
-    options.trim === undefined ||
-    options.trim === null ||
-    options.trim === false
-  ) {
-    options.trim = false;
-  } else if (options.trim !== true) {
-    throw new Error(
-      `Invalid Option: trim must be a boolean, got ${JSON.stringify(options.trim)}`,
-    );
-  }
-  // Normalize options `trim`, `ltrim` and `rtrim`
-  if (options.trim === true && opts.ltrim !== false) {
-    options.ltrim = true;
-  } else if (options.ltrim !== true) {
-    options.ltrim = false;
-  }
-  if (options.trim === true && opts.rtrim !== false) {
-    options.rtrim = true;
-  } else if (options.rtrim !== true) {
-    options.rtrim = false;
-  }
-  // Normalize option `to`
-  if (options.to === undefined || options.to === null) {
-    options.to = -1;
-  } else if (options.to !== -1) {
-    if (typeof options.to === "string" && /\d+/.test(options.to)) {
-      options.to = parseInt(options.to);
-    }
-    if (Number.isInteger(options.to)) {
-      if (options.to <= 0) {
-        throw new Error(
-          `Invalid Option: to must be a positive integer greater than 0, got ${JSON.stringify(opts.to)}`,
-        );
-      }
-    } else {
-      throw new Error(
-        `Invalid Option: to must be an integer, got ${JSON.stringify(opts.to)}`,
-      );
-    }
-  }
-  // Normalize option `to_line`
-  if (options.to_line === undefined || options.to_line === null) {
-    options.to_line = -1;
-  } else if (options.to_line !== -1) {
-    if (typeof options.to_line === "string" && /\d+/.test(options.to_line)) {
-      options.to_line = parseInt(options.to_line);
-    }
-    if (Number.isInteger(options.to_line)) {
-      if (options.to_line <= 0) {
-        throw new Error(
-          `Invalid Option: to_line must be a positive integer greater than 0, got ${JSON.stringify(opts.to_line)}`,
-        );
-      }
-    } else {
-      throw new Error(
-        `Invalid Option: to_line must be an integer, got ${JSON.stringify(opts.to_line)}`,
-      );
-    }
-  }
-  return options;
-};
-
-
-
-
-/***/ }),
-
-/***/ 3046:
-/***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __nccwpck_require__) => {
-
-
-// EXPORTS
-__nccwpck_require__.d(__webpack_exports__, {
-  qg: () => (/* binding */ parse)
-});
-
-// UNUSED EXPORTS: CsvError, Parser, normalize_options
-
-;// CONCATENATED MODULE: external "stream"
-const external_stream_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("stream");
-// EXTERNAL MODULE: ./node_modules/csv-parse/lib/utils/is_object.js
-var is_object = __nccwpck_require__(8467);
-// EXTERNAL MODULE: ./node_modules/csv-parse/lib/api/index.js + 3 modules
-var api = __nccwpck_require__(7084);
-// EXTERNAL MODULE: ./node_modules/csv-parse/lib/api/CsvError.js
-var CsvError = __nccwpck_require__(6892);
-// EXTERNAL MODULE: ./node_modules/csv-parse/lib/api/normalize_options.js + 1 modules
-var normalize_options = __nccwpck_require__(6845);
-;// CONCATENATED MODULE: ./node_modules/csv-parse/lib/index.js
-/*
-CSV Parse
-
-Please look at the [project documentation](https://csv.js.org/parse/) for
-additional information.
-*/
-
-
-
-
-
-
-
-class Parser extends external_stream_namespaceObject.Transform {
-  constructor(opts = {}) {
-    super({ ...{ readableObjectMode: true }, ...opts, encoding: null });
-    this.api = (0,api/* transform */.p)({
-      on_skip: (err, chunk) => {
-        this.emit("skip", err, chunk);
-      },
-      ...opts,
-    });
-    // Backward compatibility
-    this.state = this.api.state;
-    this.options = this.api.options;
-    this.info = this.api.info;
-  }
-  // Implementation of `Transform._transform`
-  _transform(buf, _, callback) {
-    if (this.state.stop === true) {
-      return;
-    }
-    const err = this.api.parse(
-      buf,
-      false,
-      (record) => {
-        this.push(record);
-      },
-      () => {
-        this.push(null);
-        this.end();
-        // Fix #333 and break #410
-        //   ko: api.stream.iterator.coffee
-        //   ko with v21.4.0, ok with node v20.5.1: api.stream.finished # aborted (with generate())
-        //   ko: api.stream.finished # aborted (with Readable)
-        // this.destroy()
-        // Fix #410 and partially break #333
-        //   ok: api.stream.iterator.coffee
-        //   ok: api.stream.finished # aborted (with generate())
-        //   broken: api.stream.finished # aborted (with Readable)
-        this.on("end", this.destroy);
-      },
-    );
-    if (err !== undefined) {
-      this.state.stop = true;
-    }
-    callback(err);
-  }
-  // Implementation of `Transform._flush`
-  _flush(callback) {
-    if (this.state.stop === true) {
-      return;
-    }
-    const err = this.api.parse(
-      undefined,
-      true,
-      (record) => {
-        this.push(record);
-      },
-      () => {
-        this.push(null);
-        this.on("end", this.destroy);
-      },
-    );
-    callback(err);
-  }
-}
-
-const parse = function () {
-  let data, options, callback;
-  for (const i in arguments) {
-    const argument = arguments[i];
-    const type = typeof argument;
-    if (
-      data === undefined &&
-      (typeof argument === "string" || Buffer.isBuffer(argument))
-    ) {
-      data = argument;
-    } else if (options === undefined && (0,is_object/* is_object */.v)(argument)) {
-      options = argument;
-    } else if (callback === undefined && type === "function") {
-      callback = argument;
-    } else {
-      throw new CsvError/* CsvError */.J(
-        "CSV_INVALID_ARGUMENT",
-        ["Invalid argument:", `got ${JSON.stringify(argument)} at index ${i}`],
-        options || {},
-      );
-    }
-  }
-  const parser = new Parser(options);
-  if (callback) {
-    const records =
-      options === undefined || options.objname === undefined
-        ? []
-        : Object.create(null);
-    parser.on("readable", function () {
-      let record;
-      while ((record = this.read()) !== null) {
-        if (options === undefined || options.objname === undefined) {
-          records.push(record);
-        } else {
-          Object.assign(records, {
-            [record[0]]: record[1],
-            // writable: true,
-            // enumerable: true,
-            // configurable: true
-          });
-        }
-      }
-    });
-    parser.on("error", function (err) {
-      callback(err, undefined, parser.api.__infoDataSet());
-    });
-    parser.on("end", function () {
-      callback(undefined, records, parser.api.__infoDataSet());
-    });
-  }
-  if (data !== undefined) {
-    const writer = function () {
-      parser.write(data);
-      parser.end();
-    };
-    // Support Deno, Rollup doesn't provide a shim for setImmediate
-    if (typeof setImmediate === "function") {
-      setImmediate(writer);
-    } else {
-      setTimeout(writer, 0);
-    }
-  }
-  return parser;
-};
-
-
-
-
-/***/ }),
-
-/***/ 8467:
-/***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __nccwpck_require__) => {
-
-/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   v: () => (/* binding */ is_object)
-/* harmony export */ });
-const is_object = function (obj) {
-  return typeof obj === "object" && obj !== null && !Array.isArray(obj);
-};
-
-
 
 
 /***/ })
