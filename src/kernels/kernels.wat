@@ -502,13 +502,15 @@
   ;; load reads (x_j, x_j+1) of a row; the tile's four sums are two f64x2 lanes each,
   ;; (s00, s10) += (x0, x1) * (y0, y0) and (s01, s11) += (x0, x1) * (y1, y1): per lane the same
   ;; multiply and add, in the same row order, as the scalar sums (f64x2 arithmetic is IEEE 754
-  ;; per lane, and WebAssembly never fuses a multiply and an add).
+  ;; per lane, and WebAssembly never fuses a multiply and an add). Two tiles side by side,
+  ;; (j, j+1) x (k .. k+3), are summed in one loop over the rows where both are in the triangle
+  ;; (four independent sums per row instead of two; each sum the same).
   (func (export "gramRows") (param $G i32) (param $q i32) (param $X i32) (param $m i32) (param $p i32)
     (param $index i32) (param $scale i32) (param $u i32) (param $offsets i32) (param $count i32) (param $work i32) (param $chunk i32)
     (local $f i32) (local $g i32) (local $s i32) (local $stop i32) (local $n i32) (local $j i32) (local $k i32) (local $t i32)
     (local $src i32) (local $dst i32) (local $ldp i32) (local $at i32)
     (local $a i32) (local $b i32) (local $i i32) (local $end i32) (local $e i32)
-    (local $x v128) (local $acc0 v128) (local $acc1 v128)
+    (local $x v128) (local $acc0 v128) (local $acc1 v128) (local $acc2 v128) (local $acc3 v128) (local $b2 i32)
     (local.set $ldp (i32.shl (local.get $chunk) (i32.const 4)))
     (block $parts
       (loop $part
@@ -571,22 +573,53 @@
                     (local.set $acc0 (f64x2.splat (f64.const 0)))
                     (local.set $acc1 (f64x2.splat (f64.const 0)))
                     (local.set $i (i32.const 0))
-                    (block $rows
-                      (loop $row
-                        (br_if $rows (i32.ge_s (local.get $i) (local.get $end)))
-                        (local.set $x (v128.load (i32.add (local.get $a) (local.get $i))))
-                        (local.set $acc0 (f64x2.add (local.get $acc0)
-                          (f64x2.mul (local.get $x) (v128.load64_splat (i32.add (local.get $b) (local.get $i))))))
-                        (local.set $acc1 (f64x2.add (local.get $acc1)
-                          (f64x2.mul (local.get $x) (v128.load64_splat offset=8 (i32.add (local.get $b) (local.get $i))))))
-                        (local.set $i (i32.add (local.get $i) (i32.const 16)))
-                        (br $row)))
-                    ;; (G_f[k*q + j], G_f[k*q + j + 1]) += (s00, s10); (G_f[(k+1)*q + j], G_f[(k+1)*q + j + 1]) += (s01, s11)
-                    (local.set $e (i32.add (local.get $g) (i32.shl (i32.add (i32.mul (local.get $k) (local.get $q)) (local.get $j)) (i32.const 3))))
-                    (v128.store (local.get $e) (f64x2.add (v128.load (local.get $e)) (local.get $acc0)))
-                    (local.set $e (i32.add (local.get $e) (i32.shl (local.get $q) (i32.const 3))))
-                    (v128.store (local.get $e) (f64x2.add (v128.load (local.get $e)) (local.get $acc1)))
-                    (local.set $k (i32.add (local.get $k) (i32.const 2)))
+                    (if (i32.lt_s (i32.add (local.get $k) (i32.const 2)) (local.get $q))
+                      (then
+                        ;; two tiles at once, (j, j+1) x (k .. k+3): four independent sums per row
+                        (local.set $b2 (i32.add (local.get $b) (local.get $ldp)))
+                        (local.set $acc2 (f64x2.splat (f64.const 0)))
+                        (local.set $acc3 (f64x2.splat (f64.const 0)))
+                        (block $rows4
+                          (loop $row4
+                            (br_if $rows4 (i32.ge_s (local.get $i) (local.get $end)))
+                            (local.set $x (v128.load (i32.add (local.get $a) (local.get $i))))
+                            (local.set $acc0 (f64x2.add (local.get $acc0)
+                              (f64x2.mul (local.get $x) (v128.load64_splat (i32.add (local.get $b) (local.get $i))))))
+                            (local.set $acc1 (f64x2.add (local.get $acc1)
+                              (f64x2.mul (local.get $x) (v128.load64_splat offset=8 (i32.add (local.get $b) (local.get $i))))))
+                            (local.set $acc2 (f64x2.add (local.get $acc2)
+                              (f64x2.mul (local.get $x) (v128.load64_splat (i32.add (local.get $b2) (local.get $i))))))
+                            (local.set $acc3 (f64x2.add (local.get $acc3)
+                              (f64x2.mul (local.get $x) (v128.load64_splat offset=8 (i32.add (local.get $b2) (local.get $i))))))
+                            (local.set $i (i32.add (local.get $i) (i32.const 16)))
+                            (br $row4)))
+                        ;; columns k .. k+3 of G_f, rows j and j + 1 of each
+                        (local.set $e (i32.add (local.get $g) (i32.shl (i32.add (i32.mul (local.get $k) (local.get $q)) (local.get $j)) (i32.const 3))))
+                        (v128.store (local.get $e) (f64x2.add (v128.load (local.get $e)) (local.get $acc0)))
+                        (local.set $e (i32.add (local.get $e) (i32.shl (local.get $q) (i32.const 3))))
+                        (v128.store (local.get $e) (f64x2.add (v128.load (local.get $e)) (local.get $acc1)))
+                        (local.set $e (i32.add (local.get $e) (i32.shl (local.get $q) (i32.const 3))))
+                        (v128.store (local.get $e) (f64x2.add (v128.load (local.get $e)) (local.get $acc2)))
+                        (local.set $e (i32.add (local.get $e) (i32.shl (local.get $q) (i32.const 3))))
+                        (v128.store (local.get $e) (f64x2.add (v128.load (local.get $e)) (local.get $acc3)))
+                        (local.set $k (i32.add (local.get $k) (i32.const 4))))
+                      (else
+                        (block $rows
+                          (loop $row
+                            (br_if $rows (i32.ge_s (local.get $i) (local.get $end)))
+                            (local.set $x (v128.load (i32.add (local.get $a) (local.get $i))))
+                            (local.set $acc0 (f64x2.add (local.get $acc0)
+                              (f64x2.mul (local.get $x) (v128.load64_splat (i32.add (local.get $b) (local.get $i))))))
+                            (local.set $acc1 (f64x2.add (local.get $acc1)
+                              (f64x2.mul (local.get $x) (v128.load64_splat offset=8 (i32.add (local.get $b) (local.get $i))))))
+                            (local.set $i (i32.add (local.get $i) (i32.const 16)))
+                            (br $row)))
+                        ;; (G_f[k*q + j], G_f[k*q + j + 1]) += (s00, s10); (G_f[(k+1)*q + j], G_f[(k+1)*q + j + 1]) += (s01, s11)
+                        (local.set $e (i32.add (local.get $g) (i32.shl (i32.add (i32.mul (local.get $k) (local.get $q)) (local.get $j)) (i32.const 3))))
+                        (v128.store (local.get $e) (f64x2.add (v128.load (local.get $e)) (local.get $acc0)))
+                        (local.set $e (i32.add (local.get $e) (i32.shl (local.get $q) (i32.const 3))))
+                        (v128.store (local.get $e) (f64x2.add (v128.load (local.get $e)) (local.get $acc1)))
+                        (local.set $k (i32.add (local.get $k) (i32.const 2)))))
                     (br $kLoop)))
                 (local.set $j (i32.add (local.get $j) (i32.const 2)))
                 (br $jLoop)))
