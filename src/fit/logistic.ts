@@ -104,6 +104,12 @@ export interface LogisticProblem {
    * sums it (length rows).
    */
   eta?: Float64Array;
+  /**
+   * With `factor`: called with each design block of the factor pass (every row once, in order;
+   * X column-major m x p, to be read only), so that the caller can take column statistics in
+   * the same pass. Not called when p = 0.
+   */
+  onBlock?: (X: Float64Array, start: number, m: number) => void;
   /** A Newton step already prepared (see {@link firstStepsWithout}): the fit starts at its solution; `start` is then not read. */
   firstStep?: LogisticFirstStep;
 }
@@ -367,7 +373,9 @@ function gramAt(design: Design, data: LogisticRows, problem: LogisticProblem, w:
   const single = new Int32Array(2);
   const gram = new Float64Array(q * q);
   let deviance = 0;
+  const onBlock = problem.onBlock;
   forEachBlock(design, data, (X, start, m) => {
+    if (onBlock) onBlock(X, start, m);
     let eta: Float64Array = block;
     if (out) {
       addProducts(out, start, X, m, w, p);

@@ -11,7 +11,7 @@ import { streamsTrainingData, trainingFileSizes } from '../data/row-source.js';
 import { loadClassifierData, type ClassLabels } from '../data/labels.js';
 import type { ModelData } from '../data/model-data.js';
 import { partsLabel, placeOfLine } from '../data/data-parts.js';
-import { forEachBlock, predictRows } from '../design/blocks.js';
+import { predictRows } from '../design/blocks.js';
 import { ColumnSpread } from '../design/column-spread.js';
 import type { Design } from '../design/design-matrix.js';
 import { sweepClassifier } from '../diagnostics/classifier-complexity.js';
@@ -77,14 +77,14 @@ export async function fitClassifier(repo: RepoReader, descriptor: Descriptor, se
   const options = { ridge: descriptor.fit.ridge, penalised: [...design.penalised] };
 
   const spread = new ColumnSpread(design.p);
-  forEachBlock(design, train, (X, _start, m) => spread.add(X, m));
-  const columnSd = spread.sd();
-
   // With folds, each pass also keeps one Gram per fold, so that the folds' first Newton steps need no pass of their own.
   const parts = folds.k >= 2 ? { of: folds.foldOf, count: folds.k } : undefined;
-  // The factor pass at the returned coefficients also leaves the training rows' logits.
+  // The factor pass at the returned coefficients also leaves the training rows' logits and takes the columns' spread.
   const trainEta = new Float64Array(train.rows);
-  const [fit] = fitLogistic(design, train, options, [{ start: warmStart(design, train, options), parts, factor: true, eta: trainEta }]);
+  const [fit] = fitLogistic(design, train, options, [
+    { start: warmStart(design, train, options), parts, factor: true, eta: trainEta, onBlock: (X, _start, m) => spread.add(X, m) },
+  ]);
+  const columnSd = spread.sd();
   const weighted = weightedDiagnostics(fit, design.p, options);
   const holdoutEta = predictRows(design, holdout, fit.coefficients);
   const threshold = descriptor.fit.threshold ?? 0.5;

@@ -1,7 +1,8 @@
 // The Cholesky factor of a weighted Gram (fit/gram-step.ts, gramFactor) against the QR factor of
 // the same weighted rows (fit/qr-accumulator.ts): the rank and conditioning diagnostics
 // (fit/index.ts, factorDiagnostics) agree, the bound refuses ill-conditioned Grams, and the
-// factor pass of fitLogistic leaves the training logits and deviance predictRows and a plain sum give.
+// factor pass of fitLogistic leaves the training logits and deviance predictRows and a plain sum give,
+// and shows its design blocks to the caller.
 import { describe, expect, it } from 'vitest';
 import { predictRows } from '../../src/design/blocks.js';
 import { createDesign } from '../../src/design/design-matrix.js';
@@ -86,7 +87,7 @@ describe('Cholesky factor of the weighted Gram', () => {
   });
 
   it("fitLogistic's factor pass leaves every row's logit as predictRows gives it and the deviance at the returned coefficients", () => {
-    const n = 70_000; // more than one block of 65,536 rows
+    const n = 70_000; // several design blocks
     const random = seededRandom(12);
     const a = new Float64Array(n);
     const b = new Float64Array(n);
@@ -110,7 +111,20 @@ describe('Cholesky factor of the weighted Gram', () => {
     );
     const options = { ridge: 0.5, penalised: [...design.penalised] };
     const eta = new Float64Array(n).fill(7);
-    const [fit] = fitLogistic(design, data, options, [{ factor: true, eta }]);
+    const starts: number[] = [];
+    let seen = 0;
+    const onBlock = (X: Float64Array, start: number, m: number) => {
+      starts.push(start);
+      expect(start).toBe(seen);
+      // The block is the design's rows start .. start + m - 1 (column 1: the input a, degree 1, standardised).
+      const { shift, scale } = design.terms[0].fixed as { shift: number; scale: number };
+      expect(X[0]).toBe(1);
+      expect(X[m]).toBeCloseTo((a[start] - shift) / scale, 12);
+      seen += m;
+    };
+    const [fit] = fitLogistic(design, data, options, [{ factor: true, eta, onBlock }]);
+    expect(seen).toBe(n);
+    expect(starts.length).toBeGreaterThan(1);
     expect(fit.converged).toBe(true);
     expect(fit.weightedR).not.toBeNull();
     expect(fit.weightedFactor).toBeNull();
