@@ -69,18 +69,42 @@ interface RowTable {
   next: Int32Array;
   /** repOf[r]: the first hold-out row (in file order) equal to row r (r itself when it is the first). */
   repOf: Int32Array;
+  /**
+   * One bit per value of the top `filterBits` bits of a hash, set for every hash in the table:
+   * a row whose bit is clear has no equal row in the table (equal rows hash equal), which a
+   * lookup learns from a bit set small enough to stay in cache (about 16 bits per row, so at most
+   * about 1 in 16 rows without a match goes on to the slots).
+   */
+  filter: Uint32Array;
+  filterBits: number;
 }
 
 function newTable(rows: number): RowTable {
   let size = 1024;
   while (size < 2 * rows) size *= 2;
+  // size >= 2 rows, so 8 size bits are at least 16 per row: 2^13 .. 2^32 bits (32 at most).
+  const filterBits = Math.min(32, Math.log2(size) + 3);
   return {
+    filter: new Uint32Array(2 ** (filterBits - 5)),
+    filterBits,
     mask: size - 1,
     slotHash: new Uint32Array(size),
     slotHead: new Int32Array(size).fill(-1),
     next: new Int32Array(rows).fill(-1),
     repOf: new Int32Array(rows),
   };
+}
+
+/** Whether some row in the table may have this hash (false: certainly none). */
+function mayHold(table: RowTable, hash: number): boolean {
+  const b = hash >>> (32 - table.filterBits);
+  return ((table.filter[b >>> 5] >>> (b & 31)) & 1) === 1;
+}
+
+/** Records `hash` in the table's filter. */
+function holdHash(table: RowTable, hash: number): void {
+  const b = hash >>> (32 - table.filterBits);
+  table.filter[b >>> 5] |= 1 << (b & 31);
 }
 
 /** The slot of `hash`: where it is, or the empty slot where it goes. */
@@ -109,6 +133,7 @@ function indexRows(inputs: RowTable, full: RowTable, holdout: Pick<ModelData, 'i
       inputs.next[r] = inputs.slotHead[s];
       inputs.slotHash[s] = hash;
       inputs.slotHead[s] = r;
+      holdHash(inputs, hash);
     }
     const hashY = rowTargetHash(hash, holdout.y, r);
     s = findSlot(full, hashY);
@@ -139,6 +164,7 @@ function matchRows(
 ): void {
   for (let i = 0; i < train.rows; i++) {
     const hash = rowHash(train.inputs, i);
+    if (!mayHold(inputs, hash)) continue;
     let q = inputs.slotHead[findSlot(inputs, hash)];
     while (q >= 0 && !sameInputs(holdout.inputs, q, train.inputs, i)) q = inputs.next[q];
     if (q < 0) continue;

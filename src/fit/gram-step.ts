@@ -18,6 +18,9 @@
  * back to the QR engine. The step's relative error is then about p eps cond(S) <= 1e-8, which
  * changes the path of Newton's method, never its limit: the optimum is where the gradient, summed
  * row by row and exact up to rounding, vanishes.
+ *
+ * Under the same bound, the Cholesky factor of the scaled Gram (no penalty) also gives the R
+ * factor of the weighted design itself ({@link gramFactor}), for its rank and condition numbers.
  */
 
 /** Largest bound p trace(S^-1) on the condition number of the scaled Hessian for a Gram step (about the square of the design's 3e3). */
@@ -35,6 +38,79 @@ export function gramSize(p: number): number {
 /** out += a, entry by entry (Gram matrices of disjoint rows at the same coefficients add). */
 export function addInto(out: Float64Array, a: Float64Array): void {
   for (let i = 0; i < out.length; i++) out[i] += a[i];
+}
+
+/**
+ * The Cholesky factor of the symmetrically scaled matrix S = D H D, D = diag(H)^-1/2 (Golub & Van
+ * Loan, sec. 4.2), when S is certainly well conditioned: null when a diagonal entry of H is not
+ * positive and finite, Cholesky breaks down, or the bound p trace(S^-1) on the 2-norm condition
+ * number of S exceeds {@link GRAM_MAX_CONDITION} (trace(S^-1) = ||L^-1||_F^2, by forward
+ * substitution for each unit vector).
+ * @param H symmetric positive (semi-)definite p x p, column-major, both triangles filled
+ * @returns D (length p) and the lower-triangular L (column-major, L[j * p + i] for i >= j) with S = L L^T
+ */
+export function scaledCholesky(H: Float64Array, p: number): { D: Float64Array; L: Float64Array } | null {
+  const D = new Float64Array(p);
+  for (let j = 0; j < p; j++) {
+    const h = H[j * p + j];
+    if (!(h > 0 && Number.isFinite(h))) return null;
+    D[j] = 1 / Math.sqrt(h);
+  }
+  // Cholesky S = L L^T of S = D H D (lower triangle, column-major L[j * p + i], i >= j).
+  const L = new Float64Array(p * p);
+  for (let j = 0; j < p; j++) {
+    for (let i = j; i < p; i++) {
+      let s = H[j * p + i] * D[i] * D[j];
+      for (let k = 0; k < j; k++) s -= L[k * p + i] * L[k * p + j];
+      if (i === j) {
+        if (!(s > 0)) return null;
+        L[j * p + j] = Math.sqrt(s);
+      } else L[j * p + i] = s / L[j * p + j];
+    }
+  }
+  let trace = 0;
+  const x = new Float64Array(p);
+  for (let c = 0; c < p; c++) {
+    for (let i = c; i < p; i++) {
+      let s = i === c ? 1 : 0;
+      for (let k = c; k < i; k++) s -= L[k * p + i] * x[k];
+      x[i] = s / L[i * p + i];
+      trace += x[i] * x[i];
+    }
+  }
+  if (!(p * trace <= GRAM_MAX_CONDITION)) return null;
+  return { D, L };
+}
+
+/**
+ * The upper-triangular factor R (p x p, column-major, positive diagonal) with R^T R = X^T W X,
+ * the leading p x p part of an extended Gram (no penalty), from the Cholesky factor of its scaled
+ * form ({@link scaledCholesky}: R = L^T D^-1), or null when that is not certainly well conditioned.
+ * R is the R factor of the weighted design sqrt(W) X up to the signs of its rows (the factor is
+ * unique with a positive diagonal), so its singular values and right singular vectors are the
+ * design's, as from a QR factor of the same rows up to rounding: forming the Gram perturbs the
+ * smallest singular value by about p eps cond(S) / 2 relative (cond(S) = cond(sqrt(W) X D)^2,
+ * the squaring of the normal equations, Golub & Van Loan, sec. 5.3.7), against about p eps
+ * cond(sqrt(W) X D) for the QR factor: at most about 3e-8 under the bound, about 1e-12 at a
+ * scaled condition number of 70 (test/fit/gram-factor.test.ts compares both).
+ * @param G extended Gram (size {@link gramSize}(p) squared, upper triangle)
+ * @param p design columns (>= 1)
+ */
+export function gramFactor(G: Float64Array, p: number): Float64Array | null {
+  const q = gramSize(p);
+  const H = new Float64Array(p * p);
+  for (let k = 0; k < p; k++) {
+    for (let j = 0; j <= k; j++) {
+      H[k * p + j] = G[k * q + j];
+      H[j * p + k] = G[k * q + j];
+    }
+  }
+  const scaled = scaledCholesky(H, p);
+  if (scaled === null) return null;
+  const { D, L } = scaled;
+  const R = new Float64Array(p * p);
+  for (let j = 0; j < p; j++) for (let i = 0; i <= j; i++) R[j * p + i] = L[i * p + j] / D[j];
+  return R;
 }
 
 /**
@@ -68,36 +144,9 @@ export function gramStep(
       b[k] -= ridge * w[k];
     }
   }
-  const D = new Float64Array(p);
-  for (let j = 0; j < p; j++) {
-    const h = H[j * p + j];
-    if (!(h > 0 && Number.isFinite(h))) return null;
-    D[j] = 1 / Math.sqrt(h);
-  }
-  // Cholesky S = L L^T of S = D H D (lower triangle, column-major L[j * p + i], i >= j).
-  const L = new Float64Array(p * p);
-  for (let j = 0; j < p; j++) {
-    for (let i = j; i < p; i++) {
-      let s = H[j * p + i] * D[i] * D[j];
-      for (let k = 0; k < j; k++) s -= L[k * p + i] * L[k * p + j];
-      if (i === j) {
-        if (!(s > 0)) return null;
-        L[j * p + j] = Math.sqrt(s);
-      } else L[j * p + i] = s / L[j * p + j];
-    }
-  }
-  // trace(S^-1) = ||L^-1||_F^2, by forward substitution for each unit vector.
-  let trace = 0;
-  const x = new Float64Array(p);
-  for (let c = 0; c < p; c++) {
-    for (let i = c; i < p; i++) {
-      let s = i === c ? 1 : 0;
-      for (let k = c; k < i; k++) s -= L[k * p + i] * x[k];
-      x[i] = s / L[i * p + i];
-      trace += x[i] * x[i];
-    }
-  }
-  if (!(p * trace <= GRAM_MAX_CONDITION)) return null;
+  const scaled = scaledCholesky(H, p);
+  if (scaled === null) return null;
+  const { D, L } = scaled;
   // S (D^-1 d) = D b.
   const t = new Float64Array(p);
   for (let i = 0; i < p; i++) {

@@ -77,6 +77,36 @@ export interface FitResult {
   refined: boolean;
 }
 
+/** The rank and conditioning diagnostics of a design, as {@link FitResult} states them. */
+export type FactorDiagnostics = Pick<
+  FitResult,
+  'rank' | 'rankDeficient' | 'conditionNumber' | 'conditionNumberScaled' | 'singularValuesScaled' | 'collinearColumns'
+>;
+
+/**
+ * Rank, condition numbers, scaled singular values and nearly collinear columns of a design from
+ * an R factor of it (R^T R = X^T X; a QR factor, or a Cholesky factor of the Gram as
+ * fit/gram-step.ts's gramFactor makes one), as {@link fitFactor} reports them: rank from the
+ * column-scaled factor (factor-solver.ts, s_i > max(rows, p) eps s_max).
+ * @param R p x p upper triangular, column-major
+ * @param p columns (>= 1)
+ * @param rows rows of the design (for the rank tolerance)
+ */
+export function factorDiagnostics(R: Float64Array, p: number, rows: number): FactorDiagnostics {
+  const spectrum = scaledSpectrum(R, p, rows);
+  const rank = spectrum.rank;
+  const rankDeficient = rank < p;
+  const sRaw = rawSingularValues(R, p);
+  const conditionNumber = rankDeficient ? Infinity : sRaw[0] / sRaw[p - 1];
+  const sScaled = spectrum.singularValues;
+  const conditionNumberScaled = rankDeficient ? Infinity : sScaled[0] / sScaled[p - 1];
+  const collinearColumns: number[] = [];
+  for (let j = 0; j < p; j++) {
+    if (spectrum.columnNorms[j] === 0 || Math.abs(spectrum.V[(p - 1) * p + j]) >= 0.1) collinearColumns.push(j);
+  }
+  return { rank, rankDeficient, conditionNumber, conditionNumberScaled, singularValuesScaled: sScaled, collinearColumns };
+}
+
 /**
  * Solves least squares or ridge from a data factor (data rows only). Never mutates `data`.
  *
@@ -116,17 +146,14 @@ export function fitFactor(data: QrAccumulator, options: FitOptions = {}): FitRes
   }
 
   // Diagnostics of the design itself.
-  const spectrum = scaledSpectrum(data.R, p, data.rows);
-  const rank = spectrum.rank;
-  const rankDeficient = rank < p;
-  const sRaw = rawSingularValues(data.R, p);
-  const conditionNumber = rankDeficient ? Infinity : sRaw[0] / sRaw[p - 1];
-  const sScaled = spectrum.singularValues;
-  const conditionNumberScaled = rankDeficient ? Infinity : sScaled[0] / sScaled[p - 1];
-  const collinearColumns: number[] = [];
-  for (let j = 0; j < p; j++) {
-    if (spectrum.columnNorms[j] === 0 || Math.abs(spectrum.V[(p - 1) * p + j]) >= 0.1) collinearColumns.push(j);
-  }
+  const {
+    rank,
+    rankDeficient,
+    conditionNumber,
+    conditionNumberScaled,
+    singularValuesScaled: sScaled,
+    collinearColumns,
+  } = factorDiagnostics(data.R, p, data.rows);
 
   // Solve with the factor of the design plus penalty rows.
   const factorRank = factor.rows === data.rows ? rank : scaledSpectrum(factor.R, p, factor.rows).rank;

@@ -35,7 +35,10 @@
  * coefficients with the QR engine and keeps it. Both solve the same Newton step up to rounding,
  * and the gradient that decides the optimum is summed row by row either way, so the optimum and
  * the stopping rule are the same. A problem that asks for its weighted factor
- * ({@link LogisticProblem.factor}) gets it from one QR pass at the returned coefficients.
+ * ({@link LogisticProblem.factor}) gets it from one Gram pass at the returned coefficients, as the
+ * Cholesky factor of that Gram (the R of a QR factor of sqrt(W) X up to row signs) when the Gram
+ * is certainly well conditioned (the same bound as for a step), else from one more pass with the
+ * QR engine.
  *
  * Shared Grams for cross-validation: a fit over all rows can keep one Gram per part of the rows
  * (the folds) at each pass; at the same coefficients every fold fit has the same weights, so the
@@ -45,7 +48,7 @@
 import { forEachBlock } from '../design/blocks.js';
 import type { Design } from '../design/design-matrix.js';
 import { addGramRows, addProducts } from '../kernels/index.js';
-import { addInto, gramSize, gramStep } from './gram-step.js';
+import { addInto, gramFactor, gramSize, gramStep } from './gram-step.js';
 import { QrAccumulator } from './qr-accumulator.js';
 import { solveCoefficients } from './index.js';
 
@@ -88,8 +91,25 @@ export interface LogisticProblem {
    * sum: {@link LogisticFit.parts} (while the problem takes Gram steps). Default none.
    */
   parts?: { of: Int32Array; count: number };
-  /** Return the QR factor of the weighted design at the returned coefficients ({@link LogisticFit.weightedFactor}). Default false. */
+  /**
+   * Return a factor of the weighted design at the returned coefficients, for its diagnostics:
+   * from one Gram pass there, the Cholesky factor of the Gram ({@link LogisticFit.weightedR}) when
+   * it is certainly well conditioned (gram-step.ts, gramFactor), else the QR factor from one more
+   * pass with the QR engine ({@link LogisticFit.weightedFactor}). Default false.
+   */
   factor?: boolean;
+  /**
+   * With `factor`: filled with the linear predictor x_i^T w of every row (all of them, also those
+   * of an excluded fold) at the returned coefficients, summed as design/blocks.ts's predictRows
+   * sums it (length rows).
+   */
+  eta?: Float64Array;
+  /**
+   * With `factor`: called with each design block of the factor pass (every row once, in order;
+   * X column-major m x p, to be read only), so that the caller can take column statistics in
+   * the same pass. Not called when p = 0.
+   */
+  onBlock?: (X: Float64Array, start: number, m: number) => void;
   /** A Newton step already prepared (see {@link firstStepsWithout}): the fit starts at its solution; `start` is then not read. */
   firstStep?: LogisticFirstStep;
 }
@@ -136,10 +156,16 @@ export interface LogisticFit {
   rows: number;
   /**
    * QR factor of the weighted rows sqrt(W) X (no penalty rows): with {@link LogisticProblem.factor}
-   * at the returned coefficients; otherwise at the last coefficients evaluated when the problem
-   * solved its steps with the QR engine, else null.
+   * at the returned coefficients when {@link weightedR} is null; otherwise at the last coefficients
+   * evaluated when the problem solved its steps with the QR engine, else null.
    */
   weightedFactor: QrAccumulator | null;
+  /**
+   * With {@link LogisticProblem.factor}: the upper-triangular R (p x p, column-major) with
+   * R^T R = X^T W X at the returned coefficients, from the Gram (gram-step.ts, gramFactor), when
+   * that is certainly well conditioned; else null (and {@link weightedFactor} is the QR factor).
+   */
+  weightedR: Float64Array | null;
   /** With {@link LogisticProblem.parts}: the Grams and deviances per part at the last coefficients accepted; null otherwise (or when no pass was accepted, or the problem left Gram steps). */
   parts: LogisticParts | null;
 }
@@ -158,6 +184,7 @@ interface State {
   done: boolean;
   converged: boolean;
   lastFactor: QrAccumulator | null;
+  lastR: Float64Array | null;
   lastDeviance: number;
   /** Per-part Grams (one after another), rows and deviances of the pass under way (problems with `parts`, Gram steps). */
   partGram: Float64Array | null;
@@ -205,6 +232,7 @@ export function fitLogistic(
       done: p === 0,
       converged: p === 0,
       lastFactor: null,
+      lastR: null,
       lastDeviance: Number.NaN,
       partGram: null,
       partRows: null,
@@ -302,11 +330,13 @@ export function fitLogistic(
     }
   }
   for (const s of states) {
-    // Problems that asked for their factor: one QR pass at the returned coefficients, which also
-    // gives the deviance and objective there.
+    // Problems that asked for their factor: one Gram pass at the returned coefficients, which
+    // also gives the deviance and objective there (and the predictors, when asked), then the
+    // Cholesky factor of that Gram, or, when it is not certainly well conditioned, one QR pass.
     if (!s.problem.factor || p === 0) continue;
-    const at = factorAt(design, data, s.problem, s.w);
-    s.lastFactor = at.factor;
+    const at = gramAt(design, data, s.problem, s.w);
+    s.lastR = gramFactor(at.gram, p);
+    s.lastFactor = s.lastR === null ? factorAt(design, data, s.problem, s.w).factor : null;
     s.lastDeviance = at.deviance;
     s.previousObjective = at.deviance + options.ridge * penaltySum(s.w, options.penalised);
   }
@@ -318,9 +348,50 @@ export function fitLogistic(
     halvings: s.halvings,
     converged: s.converged,
     rows: s.rows,
-    weightedFactor: s.lastFactor ?? (s.gram ? null : s.acc),
+    weightedFactor: s.lastR !== null ? null : (s.lastFactor ?? (s.gram ? null : s.acc)),
+    weightedR: s.lastR,
     parts: s.lastParts,
   }));
+}
+
+/**
+ * The extended Gram of a problem's weighted rows [sqrt(W) X | u] at coefficients w (gram-step.ts)
+ * and its deviance there, in one pass; with `problem.eta`, every row's linear predictor is left
+ * there (each block's sum as predictRows makes it: zero, then addProducts).
+ */
+function gramAt(design: Design, data: LogisticRows, problem: LogisticProblem, w: Float64Array): { gram: Float64Array; deviance: number } {
+  const p = design.p;
+  const q = gramSize(p);
+  const size = Math.max(1, Math.min(data.rows, 1 << 16));
+  const out = problem.eta;
+  if (out) out.fill(0, 0, data.rows);
+  const block = new Float64Array(size);
+  const scale = new Float64Array(size);
+  const target = new Float64Array(size);
+  const resid = new Float64Array(size);
+  const index = new Int32Array(size);
+  const single = new Int32Array(2);
+  const gram = new Float64Array(q * q);
+  let deviance = 0;
+  const onBlock = problem.onBlock;
+  forEachBlock(design, data, (X, start, m) => {
+    if (onBlock) onBlock(X, start, m);
+    let eta: Float64Array = block;
+    if (out) {
+      addProducts(out, start, X, m, w, p);
+      eta = out.subarray(start, start + m);
+    } else {
+      eta.fill(0, 0, m);
+      addProducts(eta, 0, X, m, w, p);
+    }
+    const r = problem.foldOf
+      ? weightRows(eta, data.y, start, m, problem.foldOf, problem.exclude ?? -1, scale, target, resid, index)
+      : weightAllRows(eta, data.y, start, m, scale, target, resid, index);
+    deviance += blockDeviance;
+    single[1] = r;
+    addGramRows(gram, q, X, m, p, index, scale, resid, single, 1);
+  });
+  return { gram, deviance };
 }
 
 /** The QR factor of the weighted rows sqrt(W) [X | z] of a problem at coefficients w, and its deviance there, in one pass. */

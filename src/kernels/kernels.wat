@@ -495,17 +495,23 @@
         (br $column))))
 
 ;; For each part f < count (kept rows offsets[f] .. offsets[f+1] - 1, i32 offsets): the chunks
-  ;; of `chunk` rows of the extended rows [scale[t] X[index[t], :] | u[t] | 0] gathered into `work`
-  ;; (leading dimension chunk), then the tiles (j, j+1) x (k, k+1), k >= j, of their Gram added to
-  ;; G_f = G + f q q (gram.ts, addGramRowsJs: the same operations in the same order).
+  ;; of `chunk` rows of the extended rows [scale[t] X[index[t], :] | u[t] | 0] gathered into `work`,
+  ;; then the tiles (j, j+1) x (k, k+1), k >= j, of their Gram added to G_f = G + f q q (gram.ts,
+  ;; addGramRowsJs: the same operations in the same order). `work` holds the columns in pairs, row
+  ;; by row: column j of row t at work + (j >> 1) * 16 chunk + 16 t + 8 (j & 1), so that one v128
+  ;; load reads (x_j, x_j+1) of a row; the tile's four sums are two f64x2 lanes each,
+  ;; (s00, s10) += (x0, x1) * (y0, y0) and (s01, s11) += (x0, x1) * (y1, y1): per lane the same
+  ;; multiply and add, in the same row order, as the scalar sums (f64x2 arithmetic is IEEE 754
+  ;; per lane, and WebAssembly never fuses a multiply and an add). Two tiles side by side,
+  ;; (j, j+1) x (k .. k+3), are summed in one loop over the rows where both are in the triangle
+  ;; (four independent sums per row instead of two; each sum the same).
   (func (export "gramRows") (param $G i32) (param $q i32) (param $X i32) (param $m i32) (param $p i32)
     (param $index i32) (param $scale i32) (param $u i32) (param $offsets i32) (param $count i32) (param $work i32) (param $chunk i32)
     (local $f i32) (local $g i32) (local $s i32) (local $stop i32) (local $n i32) (local $j i32) (local $k i32) (local $t i32)
-    (local $src i32) (local $dst i32) (local $ldb i32) (local $at i32)
-    (local $a0 i32) (local $a1 i32) (local $b0 i32) (local $b1 i32) (local $i i32) (local $end i32) (local $e i32)
-    (local $s00 f64) (local $s01 f64) (local $s10 f64) (local $s11 f64)
-    (local $x0 f64) (local $x1 f64) (local $y0 f64) (local $y1 f64)
-    (local.set $ldb (i32.shl (local.get $chunk) (i32.const 3)))
+    (local $src i32) (local $dst i32) (local $ldp i32) (local $at i32)
+    (local $a i32) (local $b i32) (local $i i32) (local $end i32) (local $e i32)
+    (local $x v128) (local $acc0 v128) (local $acc1 v128) (local $acc2 v128) (local $acc3 v128) (local $b2 i32)
+    (local.set $ldp (i32.shl (local.get $chunk) (i32.const 4)))
     (block $parts
       (loop $part
         (br_if $parts (i32.ge_s (local.get $f) (local.get $count)))
@@ -517,19 +523,20 @@
             (br_if $chunks (i32.ge_s (local.get $s) (local.get $stop)))
             (local.set $n (i32.sub (local.get $stop) (local.get $s)))
             (if (i32.gt_s (local.get $n) (local.get $chunk)) (then (local.set $n (local.get $chunk))))
-            ;; work[j][t] = scale[s + t] * X[j*m + index[s + t]] for j < p
+            ;; column j < p of row t: scale[s + t] * X[j*m + index[s + t]]
             (local.set $j (i32.const 0))
             (block $cols
               (loop $col
                 (br_if $cols (i32.ge_s (local.get $j) (local.get $p)))
                 (local.set $src (i32.add (local.get $X) (i32.shl (i32.mul (local.get $j) (local.get $m)) (i32.const 3))))
-                (local.set $dst (i32.add (local.get $work) (i32.mul (local.get $j) (local.get $ldb))))
+                (local.set $dst (i32.add (i32.add (local.get $work) (i32.mul (i32.shr_u (local.get $j) (i32.const 1)) (local.get $ldp)))
+                  (i32.shl (i32.and (local.get $j) (i32.const 1)) (i32.const 3))))
                 (local.set $t (i32.const 0))
                 (block $gathered
                   (loop $gather
                     (br_if $gathered (i32.ge_s (local.get $t) (local.get $n)))
                     (local.set $at (i32.add (local.get $s) (local.get $t)))
-                    (f64.store (i32.add (local.get $dst) (i32.shl (local.get $t) (i32.const 3)))
+                    (f64.store (i32.add (local.get $dst) (i32.shl (local.get $t) (i32.const 4)))
                       (f64.mul
                         (f64.load (i32.add (local.get $scale) (i32.shl (local.get $at) (i32.const 3))))
                         (f64.load (i32.add (local.get $src) (i32.shl (i32.load (i32.add (local.get $index) (i32.shl (local.get $at) (i32.const 2)))) (i32.const 3))))))
@@ -537,58 +544,82 @@
                     (br $gather)))
                 (local.set $j (i32.add (local.get $j) (i32.const 1)))
                 (br $col)))
-            ;; work[p][t] = u[s + t]; the padding columns zero
-            (memory.copy
-              (i32.add (local.get $work) (i32.mul (local.get $p) (local.get $ldb)))
-              (i32.add (local.get $u) (i32.shl (local.get $s) (i32.const 3)))
-              (i32.shl (local.get $n) (i32.const 3)))
-            (local.set $j (i32.add (local.get $p) (i32.const 1)))
-            (block $pads
-              (loop $pad
-                (br_if $pads (i32.ge_s (local.get $j) (local.get $q)))
-                (memory.fill (i32.add (local.get $work) (i32.mul (local.get $j) (local.get $ldb))) (i32.const 0) (i32.shl (local.get $n) (i32.const 3)))
-                (local.set $j (i32.add (local.get $j) (i32.const 1)))
-                (br $pad)))
+            ;; column p: u[s + t]; the padding column p + 1 < q: zero
+            (local.set $dst (i32.add (i32.add (local.get $work) (i32.mul (i32.shr_u (local.get $p) (i32.const 1)) (local.get $ldp)))
+              (i32.shl (i32.and (local.get $p) (i32.const 1)) (i32.const 3))))
+            (local.set $src (i32.add (local.get $u) (i32.shl (local.get $s) (i32.const 3))))
+            (local.set $t (i32.const 0))
+            (block $copied
+              (loop $copy
+                (br_if $copied (i32.ge_s (local.get $t) (local.get $n)))
+                (f64.store (i32.add (local.get $dst) (i32.shl (local.get $t) (i32.const 4)))
+                  (f64.load (i32.add (local.get $src) (i32.shl (local.get $t) (i32.const 3)))))
+                (if (i32.lt_s (i32.add (local.get $p) (i32.const 1)) (local.get $q))
+                  (then (f64.store offset=8 (i32.add (local.get $dst) (i32.shl (local.get $t) (i32.const 4))) (f64.const 0))))
+                (local.set $t (i32.add (local.get $t) (i32.const 1)))
+                (br $copy)))
             ;; the tiles
-            (local.set $end (i32.shl (local.get $n) (i32.const 3)))
+            (local.set $end (i32.shl (local.get $n) (i32.const 4)))
             (local.set $j (i32.const 0))
             (block $js
               (loop $jLoop
                 (br_if $js (i32.ge_s (local.get $j) (local.get $q)))
-                (local.set $a0 (i32.add (local.get $work) (i32.mul (local.get $j) (local.get $ldb))))
-                (local.set $a1 (i32.add (local.get $a0) (local.get $ldb)))
+                (local.set $a (i32.add (local.get $work) (i32.mul (i32.shr_u (local.get $j) (i32.const 1)) (local.get $ldp))))
                 (local.set $k (local.get $j))
                 (block $ks
                   (loop $kLoop
                     (br_if $ks (i32.ge_s (local.get $k) (local.get $q)))
-                    (local.set $b0 (i32.add (local.get $work) (i32.mul (local.get $k) (local.get $ldb))))
-                    (local.set $b1 (i32.add (local.get $b0) (local.get $ldb)))
-                    (local.set $s00 (f64.const 0))
-                    (local.set $s01 (f64.const 0))
-                    (local.set $s10 (f64.const 0))
-                    (local.set $s11 (f64.const 0))
+                    (local.set $b (i32.add (local.get $work) (i32.mul (i32.shr_u (local.get $k) (i32.const 1)) (local.get $ldp))))
+                    (local.set $acc0 (f64x2.splat (f64.const 0)))
+                    (local.set $acc1 (f64x2.splat (f64.const 0)))
                     (local.set $i (i32.const 0))
-                    (block $rows
-                      (loop $row
-                        (br_if $rows (i32.ge_s (local.get $i) (local.get $end)))
-                        (local.set $x0 (f64.load (i32.add (local.get $a0) (local.get $i))))
-                        (local.set $x1 (f64.load (i32.add (local.get $a1) (local.get $i))))
-                        (local.set $y0 (f64.load (i32.add (local.get $b0) (local.get $i))))
-                        (local.set $y1 (f64.load (i32.add (local.get $b1) (local.get $i))))
-                        (local.set $s00 (f64.add (local.get $s00) (f64.mul (local.get $x0) (local.get $y0))))
-                        (local.set $s01 (f64.add (local.get $s01) (f64.mul (local.get $x0) (local.get $y1))))
-                        (local.set $s10 (f64.add (local.get $s10) (f64.mul (local.get $x1) (local.get $y0))))
-                        (local.set $s11 (f64.add (local.get $s11) (f64.mul (local.get $x1) (local.get $y1))))
-                        (local.set $i (i32.add (local.get $i) (i32.const 8)))
-                        (br $row)))
-                    ;; G_f[k*q + j] += s00, [k*q + j + 1] += s10, [(k+1)*q + j] += s01, [(k+1)*q + j + 1] += s11
-                    (local.set $e (i32.add (local.get $g) (i32.shl (i32.add (i32.mul (local.get $k) (local.get $q)) (local.get $j)) (i32.const 3))))
-                    (f64.store (local.get $e) (f64.add (f64.load (local.get $e)) (local.get $s00)))
-                    (f64.store offset=8 (local.get $e) (f64.add (f64.load offset=8 (local.get $e)) (local.get $s10)))
-                    (local.set $e (i32.add (local.get $e) (i32.shl (local.get $q) (i32.const 3))))
-                    (f64.store (local.get $e) (f64.add (f64.load (local.get $e)) (local.get $s01)))
-                    (f64.store offset=8 (local.get $e) (f64.add (f64.load offset=8 (local.get $e)) (local.get $s11)))
-                    (local.set $k (i32.add (local.get $k) (i32.const 2)))
+                    (if (i32.lt_s (i32.add (local.get $k) (i32.const 2)) (local.get $q))
+                      (then
+                        ;; two tiles at once, (j, j+1) x (k .. k+3): four independent sums per row
+                        (local.set $b2 (i32.add (local.get $b) (local.get $ldp)))
+                        (local.set $acc2 (f64x2.splat (f64.const 0)))
+                        (local.set $acc3 (f64x2.splat (f64.const 0)))
+                        (block $rows4
+                          (loop $row4
+                            (br_if $rows4 (i32.ge_s (local.get $i) (local.get $end)))
+                            (local.set $x (v128.load (i32.add (local.get $a) (local.get $i))))
+                            (local.set $acc0 (f64x2.add (local.get $acc0)
+                              (f64x2.mul (local.get $x) (v128.load64_splat (i32.add (local.get $b) (local.get $i))))))
+                            (local.set $acc1 (f64x2.add (local.get $acc1)
+                              (f64x2.mul (local.get $x) (v128.load64_splat offset=8 (i32.add (local.get $b) (local.get $i))))))
+                            (local.set $acc2 (f64x2.add (local.get $acc2)
+                              (f64x2.mul (local.get $x) (v128.load64_splat (i32.add (local.get $b2) (local.get $i))))))
+                            (local.set $acc3 (f64x2.add (local.get $acc3)
+                              (f64x2.mul (local.get $x) (v128.load64_splat offset=8 (i32.add (local.get $b2) (local.get $i))))))
+                            (local.set $i (i32.add (local.get $i) (i32.const 16)))
+                            (br $row4)))
+                        ;; columns k .. k+3 of G_f, rows j and j + 1 of each
+                        (local.set $e (i32.add (local.get $g) (i32.shl (i32.add (i32.mul (local.get $k) (local.get $q)) (local.get $j)) (i32.const 3))))
+                        (v128.store (local.get $e) (f64x2.add (v128.load (local.get $e)) (local.get $acc0)))
+                        (local.set $e (i32.add (local.get $e) (i32.shl (local.get $q) (i32.const 3))))
+                        (v128.store (local.get $e) (f64x2.add (v128.load (local.get $e)) (local.get $acc1)))
+                        (local.set $e (i32.add (local.get $e) (i32.shl (local.get $q) (i32.const 3))))
+                        (v128.store (local.get $e) (f64x2.add (v128.load (local.get $e)) (local.get $acc2)))
+                        (local.set $e (i32.add (local.get $e) (i32.shl (local.get $q) (i32.const 3))))
+                        (v128.store (local.get $e) (f64x2.add (v128.load (local.get $e)) (local.get $acc3)))
+                        (local.set $k (i32.add (local.get $k) (i32.const 4))))
+                      (else
+                        (block $rows
+                          (loop $row
+                            (br_if $rows (i32.ge_s (local.get $i) (local.get $end)))
+                            (local.set $x (v128.load (i32.add (local.get $a) (local.get $i))))
+                            (local.set $acc0 (f64x2.add (local.get $acc0)
+                              (f64x2.mul (local.get $x) (v128.load64_splat (i32.add (local.get $b) (local.get $i))))))
+                            (local.set $acc1 (f64x2.add (local.get $acc1)
+                              (f64x2.mul (local.get $x) (v128.load64_splat offset=8 (i32.add (local.get $b) (local.get $i))))))
+                            (local.set $i (i32.add (local.get $i) (i32.const 16)))
+                            (br $row)))
+                        ;; (G_f[k*q + j], G_f[k*q + j + 1]) += (s00, s10); (G_f[(k+1)*q + j], G_f[(k+1)*q + j + 1]) += (s01, s11)
+                        (local.set $e (i32.add (local.get $g) (i32.shl (i32.add (i32.mul (local.get $k) (local.get $q)) (local.get $j)) (i32.const 3))))
+                        (v128.store (local.get $e) (f64x2.add (v128.load (local.get $e)) (local.get $acc0)))
+                        (local.set $e (i32.add (local.get $e) (i32.shl (local.get $q) (i32.const 3))))
+                        (v128.store (local.get $e) (f64x2.add (v128.load (local.get $e)) (local.get $acc1)))
+                        (local.set $k (i32.add (local.get $k) (i32.const 2)))))
                     (br $kLoop)))
                 (local.set $j (i32.add (local.get $j) (i32.const 2)))
                 (br $jLoop)))

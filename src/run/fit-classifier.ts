@@ -11,7 +11,7 @@ import { streamsTrainingData, trainingFileSizes } from '../data/row-source.js';
 import { loadClassifierData, type ClassLabels } from '../data/labels.js';
 import type { ModelData } from '../data/model-data.js';
 import { partsLabel, placeOfLine } from '../data/data-parts.js';
-import { forEachBlock, predictRows } from '../design/blocks.js';
+import { predictRows } from '../design/blocks.js';
 import { ColumnSpread } from '../design/column-spread.js';
 import type { Design } from '../design/design-matrix.js';
 import { sweepClassifier } from '../diagnostics/classifier-complexity.js';
@@ -26,7 +26,7 @@ import {
 import type { Folds } from '../diagnostics/folds.js';
 import { findLeakage } from '../diagnostics/leakage.js';
 import { findSeparation } from '../diagnostics/separation.js';
-import { fitFactor } from '../fit/index.js';
+import { factorDiagnostics, fitFactor, type FactorDiagnostics } from '../fit/index.js';
 import { firstStepsWithout, fitLogistic, outOfFoldDeviance, rowDeviance, type LogisticFit } from '../fit/logistic.js';
 import type { RepoReader } from '../repo/types.js';
 import { planModel } from './plan.js';
@@ -77,15 +77,15 @@ export async function fitClassifier(repo: RepoReader, descriptor: Descriptor, se
   const options = { ridge: descriptor.fit.ridge, penalised: [...design.penalised] };
 
   const spread = new ColumnSpread(design.p);
-  forEachBlock(design, train, (X, _start, m) => spread.add(X, m));
-  const columnSd = spread.sd();
-
   // With folds, each pass also keeps one Gram per fold, so that the folds' first Newton steps need no pass of their own.
   const parts = folds.k >= 2 ? { of: folds.foldOf, count: folds.k } : undefined;
-  const [fit] = fitLogistic(design, train, options, [{ start: warmStart(design, train, options), parts, factor: true }]);
-  if (fit.weightedFactor === null) throw new Error('fitLogistic: the weighted factor asked for is missing');
-  const weighted = fitFactor(fit.weightedFactor, options);
-  const trainEta = predictRows(design, train, fit.coefficients);
+  // The factor pass at the returned coefficients also leaves the training rows' logits and takes the columns' spread.
+  const trainEta = new Float64Array(train.rows);
+  const [fit] = fitLogistic(design, train, options, [
+    { start: warmStart(design, train, options), parts, factor: true, eta: trainEta, onBlock: (X, _start, m) => spread.add(X, m) },
+  ]);
+  const columnSd = spread.sd();
+  const weighted = weightedDiagnostics(fit, design.p, options);
   const holdoutEta = predictRows(design, holdout, fit.coefficients);
   const threshold = descriptor.fit.threshold ?? 0.5;
   const trainP = probabilities(trainEta);
@@ -127,6 +127,17 @@ export async function fitClassifier(repo: RepoReader, descriptor: Descriptor, se
       calibration: calibrationBins(holdout.y, holdoutP, holdout.rows),
     },
   };
+}
+
+/**
+ * Rank and conditioning of the weighted design sqrt(W) X at the fit's coefficients: from the
+ * Cholesky factor of its Gram when the fit has one (fit/gram-step.ts, gramFactor), else from its
+ * QR factor (fit/index.ts, fitFactor).
+ */
+function weightedDiagnostics(fit: LogisticFit, p: number, options: { ridge: number; penalised: boolean[] }): FactorDiagnostics {
+  if (fit.weightedR !== null) return factorDiagnostics(fit.weightedR, p, fit.rows);
+  if (fit.weightedFactor === null) throw new Error('fitLogistic: the weighted factor asked for is missing');
+  return fitFactor(fit.weightedFactor, options);
 }
 
 /** Above this many training rows the full fit starts from the fit of an even-stride subset of this many rows. */

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { findLeakage } from '../../src/diagnostics/leakage.js';
+import { findLeakage, LeakageScan } from '../../src/diagnostics/leakage.js';
 
 function data(rows: number[][], firstLine = 2): { inputs: Float64Array[]; y: Float64Array; rows: number; lines: Int32Array } {
   const q = rows.length > 0 ? rows[0].length - 1 : 1;
@@ -95,5 +95,37 @@ describe('leakage: hold-out rows equal to a training row', () => {
     }
     const leak = findLeakage(data(train), data(holdout));
     expect([leak.inputMatches, leak.fullMatches]).toEqual([inputs, full]);
+  });
+
+  it('finds every planted copy among 60,000 hold-out and 300,000 training rows streamed in chunks (the hash filter drops no match)', () => {
+    let s = 11;
+    const next = (): number => {
+      s = (s * 16807) % 2147483647;
+      return s / 2147483647;
+    };
+    const holdout = Array.from({ length: 60000 }, () => [next(), next(), next() < 0.5 ? 1 : 0]);
+    const train = Array.from({ length: 300000 }, () => [next(), next(), next() < 0.5 ? 1 : 0]);
+    // Every 37th hold-out row planted in the training rows (every 3rd of them with the other label).
+    const planted = new Set<number>();
+    for (let h = 0; h < holdout.length; h += 37) {
+      const at = Math.floor(next() * train.length);
+      train[at] = [holdout[h][0], holdout[h][1], h % 3 === 0 ? 1 - holdout[h][2] : holdout[h][2]];
+      planted.add(h);
+    }
+    const trainInputs = new Set(train.map((t) => `${t[0]},${t[1]}`));
+    const trainRows = new Set(train.map((t) => `${t[0]},${t[1]},${t[2]}`));
+    let inputs = 0;
+    let full = 0;
+    for (const h of holdout) {
+      if (trainInputs.has(`${h[0]},${h[1]}`)) inputs++;
+      if (trainRows.has(`${h[0]},${h[1]},${h[2]}`)) full++;
+    }
+    // A later copy may overwrite an earlier one: nearly every planted row is there.
+    expect(inputs).toBeGreaterThan(0.99 * planted.size);
+    const scan = new LeakageScan(data(holdout));
+    for (let start = 0; start < train.length; start += 70000) scan.add(data(train.slice(start, start + 70000), 2 + start));
+    const leak = scan.finish();
+    expect([leak.inputMatches, leak.fullMatches]).toEqual([inputs, full]);
+    expect(leak.fullMatches).toBeLessThan(leak.inputMatches);
   });
 });

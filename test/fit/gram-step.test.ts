@@ -115,9 +115,12 @@ describe('Gram steps', () => {
       grad[1] -= ridge * w[1];
       grad[2] -= ridge * w[2];
       for (const g of grad) expect(Math.abs(g)).toBeLessThan(1e-6);
-      // Asking for the factor gives the QR factor at the returned coefficients.
+      // Asking for the factor gives the Gram's Cholesky factor at the returned coefficients when
+      // the Gram is well conditioned, else the QR factor there.
       const [withFactor] = fitLogistic(design, data, options, [{ factor: true }]);
-      expect(withFactor.weightedFactor?.rows).toBe(n);
+      expect(withFactor.weightedR === null).toBe(near > 0);
+      expect(withFactor.weightedFactor === null ? n : withFactor.weightedFactor.rows).toBe(n);
+      expect(withFactor.weightedFactor === null).toBe(near === 0);
       for (let j = 0; j < 3; j++) expect(relative(withFactor.coefficients[j], w[j])).toBeLessThan(1e-12);
     }
   });

@@ -418,12 +418,17 @@ const CASES: KernelCase[] = [
       return [out];
     },
   },
-  ...[false, true].map(
-    (parts): KernelCase => ({
-      label: `addGramRows over several chunks${parts ? ', three parts (one empty)' : ''}`,
+  ...(
+    [
+      [false, 7],
+      [true, 7],
+      [true, 6],
+    ] as const
+  ).map(
+    ([parts, p]): KernelCase => ({
+      label: `addGramRows over several chunks${parts ? ', three parts (one empty)' : ''}, p = ${p}${p === 6 ? ' (a zero padding column)' : ''}`,
       run(js) {
         const m = 1300;
-        const p = 7;
         const q = 8;
         const { X } = block(m, p, 32);
         const rnd = seeded(34);

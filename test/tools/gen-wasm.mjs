@@ -17,7 +17,7 @@ const out = path.join(root, 'src', 'kernels', 'generated', 'kernels-wasm.ts');
 /** The generated module's text. */
 export async function generate() {
   const tools = await wabt();
-  const module = tools.parseWat('kernels.wat', readFileSync(source, 'utf8'), { bulk_memory: true, mutable_globals: true });
+  const module = tools.parseWat('kernels.wat', readFileSync(source, 'utf8'), { bulk_memory: true, mutable_globals: true, simd: true });
   try {
     module.validate();
     const { buffer } = module.toBinary({ log: false, write_debug_names: false });

@@ -9,7 +9,7 @@ import type { ClassifierSweep } from '../../diagnostics/classifier-complexity.js
 import type { Calibration, ClassificationFigures } from '../../diagnostics/classification-metrics.js';
 import type { Separation } from '../../diagnostics/separation.js';
 import type { DataPart } from '../../data/data-parts.js';
-import type { FitResult } from '../../fit/index.js';
+import type { FactorDiagnostics } from '../../fit/index.js';
 import type { LogisticFit } from '../../fit/logistic.js';
 import type { ModelResult } from '../../result/result.js';
 
@@ -40,7 +40,7 @@ export interface ClassifierContext {
   design: Design;
   fit: LogisticFit;
   /** Least-squares diagnostics of the weighted design sqrt(W) X at the optimum (rank, condition numbers). */
-  weighted: FitResult;
+  weighted: FactorDiagnostics;
   train: ClassificationFigures;
   holdout: ClassificationFigures;
   /** Logistic recalibration on the hold-out rows. */
