@@ -2,19 +2,24 @@
  * The one choice between the WebAssembly kernels and the JavaScript ones, made per thread: the
  * WebAssembly where this runtime has it (compiled on the first kernel call), the JavaScript where
  * it has not (`node --jitless`) or a test turned it off. When WebAssembly memory cannot be
- * reserved (a low `ulimit -v`), the kernel that asked runs in JavaScript instead and so does every
- * later one in the thread; {@link kernelNotes} then holds one note for the run's Result. The
+ * reserved (a low `ulimit -v`), or this runtime cannot compile the module (a WebAssembly without the
+ * SIMD it uses), the kernel that asked runs in JavaScript instead and so does every later one in
+ * the thread; {@link kernelNotes} then holds one note for the run's Result. The
  * figures do not change: each WebAssembly kernel does its JavaScript reference's operations in the
  * same order (test/kernels/wasm-kernels.test.ts compares the bits).
  */
-import { instantiateKernels, ResourceFault, WASM_AVAILABLE, type KernelExports } from './wasm.js';
+import { CompileFault, instantiateKernels, ResourceFault, WASM_AVAILABLE, type KernelExports } from './wasm.js';
 
 /** Which kernels a call runs. */
 export type KernelEngine = 'webassembly' | 'javascript';
 
-/** The note a run's Result gets when the kernels fell back to JavaScript. */
+/** The note a run's Result gets when the kernels fell back to JavaScript for want of memory. */
 export const KERNEL_FALLBACK_NOTE =
   'WebAssembly memory could not be reserved (a low virtual-memory limit such as `ulimit -v` does this), so the row kernels ran in JavaScript: the same figures, more slowly.';
+
+/** The note a run's Result gets when this runtime could not compile the kernels' module. */
+export const KERNEL_COMPILE_NOTE =
+  'This runtime could not compile the WebAssembly row kernels (they use 128-bit SIMD), so they ran in JavaScript: the same figures, more slowly.';
 
 /** Whether to use WebAssembly (false after a fallback, or when a test turned it off). */
 let wanted = WASM_AVAILABLE;
@@ -24,10 +29,10 @@ let kernels: KernelExports | null = null;
 const notes: string[] = [];
 
 /** JavaScript from now on in this thread, with its note. */
-function fallBack(): void {
+function fallBack(note: string = KERNEL_FALLBACK_NOTE): void {
   wanted = false;
   kernels = null;
-  if (!notes.includes(KERNEL_FALLBACK_NOTE)) notes.push(KERNEL_FALLBACK_NOTE);
+  if (!notes.includes(note)) notes.push(note);
 }
 
 /** The compiled module when WebAssembly is in use, else null (falling back when it cannot be instantiated). */
@@ -37,8 +42,9 @@ function current(): KernelExports | null {
     try {
       kernels = instantiateKernels();
     } catch (error) {
-      if (!(error instanceof ResourceFault)) throw error;
-      fallBack();
+      if (error instanceof CompileFault) fallBack(KERNEL_COMPILE_NOTE);
+      else if (error instanceof ResourceFault) fallBack();
+      else throw error;
     }
   }
   return kernels;
@@ -73,18 +79,19 @@ export function kernelEngine(): KernelEngine {
 
 /**
  * Tests: turns the WebAssembly kernels on (where the runtime has WebAssembly) or off for this
- * thread, forgetting an earlier fallback and its note.
+ * thread, forgetting an earlier fallback and its note (the module is compiled again on the next call).
  * @param on true for WebAssembly, false for JavaScript
  * @returns whether WebAssembly was wanted before
  */
 export function useWasmKernels(on: boolean): boolean {
   const before = wanted;
   wanted = on && WASM_AVAILABLE;
+  kernels = null;
   notes.length = 0;
   return before;
 }
 
-/** Notes about the kernels for the run's Result: empty, or the one {@link KERNEL_FALLBACK_NOTE}. */
+/** Notes about the kernels for the run's Result: empty, {@link KERNEL_FALLBACK_NOTE} or {@link KERNEL_COMPILE_NOTE}. */
 export function kernelNotes(): string[] {
   return [...notes];
 }

@@ -5,7 +5,15 @@
  * module (qr-fold.ts, refine.ts, ...) holds its JavaScript reference (`...Js`), which
  * test/kernels/ compares the WebAssembly with. Code outside src/kernels/ imports from here only.
  */
-export { kernelEngine, kernelNotes, KERNEL_FALLBACK_NOTE, recordKernelNotes, useWasmKernels, type KernelEngine } from './engine.js';
+export {
+  kernelEngine,
+  kernelNotes,
+  KERNEL_COMPILE_NOTE,
+  KERNEL_FALLBACK_NOTE,
+  recordKernelNotes,
+  useWasmKernels,
+  type KernelEngine,
+} from './engine.js';
 export { leverageRows } from './leverages.js';
 export { outOfFoldRows } from './out-of-fold.js';
 export { polynomialColumns } from './polynomial-columns.js';

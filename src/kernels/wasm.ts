@@ -90,18 +90,53 @@ const PAGE = 65536;
 let faultIn = -1;
 
 /**
+ * The module could not be compiled by this runtime: its WebAssembly lacks a feature the module
+ * uses (the Gram kernel's 128-bit SIMD, which V8 offers on x64 with SSE4.1 and on arm64), or the
+ * bytes were refused. Thrown before any kernel ran.
+ */
+export class CompileFault extends Error {
+  override readonly name = 'CompileFault';
+
+  /** @param cause the WebAssembly.CompileError (or LinkError) */
+  constructor(cause: Error) {
+    super(cause.message, { cause });
+  }
+}
+
+/** Module bytes a test puts in place of the assembled ones ({@link injectModuleBytes}); null: the real module. */
+let testBytes: Uint8Array | null = null;
+
+/**
  * Compiles and instantiates the module.
  * @returns its exports, or null where this runtime has no WebAssembly
  * @throws ResourceFault when the instance's memory cannot be reserved
+ * @throws CompileFault when this runtime cannot compile the module
  */
 export function instantiateKernels(): KernelExports | null {
   if (WASM === undefined) return null;
+  let module: object;
   try {
-    return new WASM.Instance(new WASM.Module(Buffer.from(KERNELS_WASM, 'base64'))).exports as KernelExports;
+    module = new WASM.Module(testBytes ?? Buffer.from(KERNELS_WASM, 'base64'));
   } catch (error) {
     if (error instanceof RangeError) throw new ResourceFault(error);
+    if (error instanceof Error && (error.name === 'CompileError' || error.name === 'LinkError')) throw new CompileFault(error);
     throw error;
   }
+  try {
+    return new WASM.Instance(module).exports as KernelExports;
+  } catch (error) {
+    if (error instanceof RangeError) throw new ResourceFault(error);
+    if (error instanceof Error && error.name === 'LinkError') throw new CompileFault(error);
+    throw error;
+  }
+}
+
+/**
+ * Tests: compiles these bytes instead of the assembled module from the next instantiation on.
+ * @param bytes module bytes (invalid ones stand for a runtime that cannot compile the module); null restores the real module
+ */
+export function injectModuleBytes(bytes: Uint8Array | null): void {
+  testBytes = bytes;
 }
 
 /**

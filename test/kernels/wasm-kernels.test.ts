@@ -19,6 +19,7 @@ import {
   addProducts,
   firstBeyond,
   foldRows,
+  KERNEL_COMPILE_NOTE,
   KERNEL_FALLBACK_NOTE,
   kernelEngine,
   kernelNotes,
@@ -36,7 +37,7 @@ import { addProductsJs } from '../../src/kernels/products.js';
 import { foldRowsJs } from '../../src/kernels/qr-fold.js';
 import { firstBeyondJs } from '../../src/kernels/range-check.js';
 import { refineRowsJs } from '../../src/kernels/refine.js';
-import { injectMemoryFault } from '../../src/kernels/wasm.js';
+import { injectMemoryFault, injectModuleBytes } from '../../src/kernels/wasm.js';
 // @ts-expect-error the generator is a plain ES module without types
 import { generate } from '../tools/gen-wasm.mjs';
 import { fitRows, linearDesign, randomRows } from '../diagnostics/helpers.js';
@@ -539,6 +540,29 @@ describe('when WebAssembly memory cannot be reserved', () => {
       expect(faulted.notes).toEqual([...plain.notes, KERNEL_FALLBACK_NOTE]);
       expect(formatJson({ ...faulted, notes: plain.notes }) === plainJson, `fault after ${after}: the reports differ`).toBe(true);
     }
+  }, 60_000);
+});
+
+describe('when this runtime cannot compile the module (a WebAssembly without SIMD)', () => {
+  afterEach(() => {
+    injectModuleBytes(null);
+    useWasmKernels(true);
+  });
+
+  it('a whole run falls back to JavaScript: the same Result but for the compile note', async () => {
+    const root = fileURLToPath(new URL('../../examples', import.meta.url));
+    const run = () => runPipeline(defaultSettings(root), createFsRepository(root), { jobs: 1 });
+    useWasmKernels(true);
+    const plain = await run();
+    expect(plain.notes).not.toContain(KERNEL_COMPILE_NOTE);
+    // A module header followed by a section WebAssembly does not know: every runtime refuses it
+    // with a CompileError, as one without SIMD refuses the real module.
+    useWasmKernels(true);
+    injectModuleBytes(new Uint8Array([0x00, 0x61, 0x73, 0x6d, 0x01, 0x00, 0x00, 0x00, 0x7f, 0x01, 0x00]));
+    const refused = await run();
+    expect(kernelEngine()).toBe('javascript');
+    expect(refused.notes).toEqual([...plain.notes, KERNEL_COMPILE_NOTE]);
+    expect(formatJson({ ...refused, notes: plain.notes })).toBe(formatJson(plain));
   }, 60_000);
 });
 
