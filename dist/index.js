@@ -37772,13 +37772,27 @@ function newTable(rows) {
     let size = 1024;
     while (size < 2 * rows)
         size *= 2;
+    // size >= 2 rows, so 8 size bits are at least 16 per row: 2^13 .. 2^32 bits (32 at most).
+    const filterBits = Math.min(32, Math.log2(size) + 3);
     return {
+        filter: new Uint32Array(2 ** (filterBits - 5)),
+        filterBits,
         mask: size - 1,
         slotHash: new Uint32Array(size),
         slotHead: new Int32Array(size).fill(-1),
         next: new Int32Array(rows).fill(-1),
         repOf: new Int32Array(rows),
     };
+}
+/** Whether some row in the table may have this hash (false: certainly none). */
+function mayHold(table, hash) {
+    const b = hash >>> (32 - table.filterBits);
+    return ((table.filter[b >>> 5] >>> (b & 31)) & 1) === 1;
+}
+/** Records `hash` in the table's filter. */
+function holdHash(table, hash) {
+    const b = hash >>> (32 - table.filterBits);
+    table.filter[b >>> 5] |= 1 << (b & 31);
 }
 /** The slot of `hash`: where it is, or the empty slot where it goes. */
 function findSlot(table, hash) {
@@ -37807,6 +37821,7 @@ function indexRows(inputs, full, holdout) {
             inputs.next[r] = inputs.slotHead[s];
             inputs.slotHash[s] = hash;
             inputs.slotHead[s] = r;
+            holdHash(inputs, hash);
         }
         const hashY = rowTargetHash(hash, holdout.y, r);
         s = findSlot(full, hashY);
@@ -37831,6 +37846,8 @@ function indexRows(inputs, full, holdout) {
 function matchRows(inputs, full, holdout, train, firstMatch, targetToo) {
     for (let i = 0; i < train.rows; i++) {
         const hash = rowHash(train.inputs, i);
+        if (!mayHold(inputs, hash))
+            continue;
         let q = inputs.slotHead[findSlot(inputs, hash)];
         while (q >= 0 && !sameInputs(holdout.inputs, q, train.inputs, i))
             q = inputs.next[q];
@@ -41701,6 +41718,7 @@ function syncFolder(dir) {
 __nccwpck_require__.d(__webpack_exports__, {
   SC: () => (/* reexport */ qr_accumulator/* QrAccumulator */.S),
   rT: () => (/* binding */ RefinementPass),
+  _z: () => (/* binding */ factorDiagnostics),
   Ps: () => (/* binding */ fitFactor),
   lG: () => (/* binding */ leveragesInto),
   C4: () => (/* binding */ refinementApplies),
@@ -41932,6 +41950,30 @@ var kernels = __nccwpck_require__(4733);
 
 
 /**
+ * Rank, condition numbers, scaled singular values and nearly collinear columns of a design from
+ * an R factor of it (R^T R = X^T X; a QR factor, or a Cholesky factor of the Gram as
+ * fit/gram-step.ts's gramFactor makes one), as {@link fitFactor} reports them: rank from the
+ * column-scaled factor (factor-solver.ts, s_i > max(rows, p) eps s_max).
+ * @param R p x p upper triangular, column-major
+ * @param p columns (>= 1)
+ * @param rows rows of the design (for the rank tolerance)
+ */
+function factorDiagnostics(R, p, rows) {
+    const spectrum = scaledSpectrum(R, p, rows);
+    const rank = spectrum.rank;
+    const rankDeficient = rank < p;
+    const sRaw = rawSingularValues(R, p);
+    const conditionNumber = rankDeficient ? Infinity : sRaw[0] / sRaw[p - 1];
+    const sScaled = spectrum.singularValues;
+    const conditionNumberScaled = rankDeficient ? Infinity : sScaled[0] / sScaled[p - 1];
+    const collinearColumns = [];
+    for (let j = 0; j < p; j++) {
+        if (spectrum.columnNorms[j] === 0 || Math.abs(spectrum.V[(p - 1) * p + j]) >= 0.1)
+            collinearColumns.push(j);
+    }
+    return { rank, rankDeficient, conditionNumber, conditionNumberScaled, singularValuesScaled: sScaled, collinearColumns };
+}
+/**
  * Solves least squares or ridge from a data factor (data rows only). Never mutates `data`.
  *
  * Rank is decided on the column-scaled factor (see factor-solver.ts: s_i > max(n, p) eps s_max).
@@ -41969,18 +42011,7 @@ function fitFactor(data, options = {}) {
         };
     }
     // Diagnostics of the design itself.
-    const spectrum = scaledSpectrum(data.R, p, data.rows);
-    const rank = spectrum.rank;
-    const rankDeficient = rank < p;
-    const sRaw = rawSingularValues(data.R, p);
-    const conditionNumber = rankDeficient ? Infinity : sRaw[0] / sRaw[p - 1];
-    const sScaled = spectrum.singularValues;
-    const conditionNumberScaled = rankDeficient ? Infinity : sScaled[0] / sScaled[p - 1];
-    const collinearColumns = [];
-    for (let j = 0; j < p; j++) {
-        if (spectrum.columnNorms[j] === 0 || Math.abs(spectrum.V[(p - 1) * p + j]) >= 0.1)
-            collinearColumns.push(j);
-    }
+    const { rank, rankDeficient, conditionNumber, conditionNumberScaled, singularValuesScaled: sScaled, collinearColumns, } = factorDiagnostics(data.R, p, data.rows);
     // Solve with the factor of the design plus penalty rows.
     const factorRank = factor.rows === data.rows ? rank : scaledSpectrum(factor.R, p, factor.rows).rank;
     const solver = new FactorSolver(factor.R, p, factorRank);
@@ -42674,17 +42705,17 @@ __nccwpck_require__.d(__webpack_exports__, {
   Hb: () => (/* reexport */ refineRows)
 });
 
-// UNUSED EXPORTS: KERNEL_FALLBACK_NOTE, kernelEngine, residualsInto, sumOfSquares, useWasmKernels
+// UNUSED EXPORTS: KERNEL_COMPILE_NOTE, KERNEL_FALLBACK_NOTE, kernelEngine, residualsInto, sumOfSquares, useWasmKernels
 
 ;// CONCATENATED MODULE: ./src/kernels/generated/kernels-wasm.ts
 // Generated by test/tools/gen-wasm.mjs from src/kernels/kernels.wat; do not edit.
-/** The row kernels' WebAssembly module (4718 bytes), in base64. */
+/** The row kernels' WebAssembly module (4983 bytes), in base64. */
 const KERNELS_WASM = 'AGFzbQEAAAABnwERYAJ/fwF/YAN/f38Bf2ACf38BfGADf398AXxgA39/fABgCH9/f39/f398AGAGf39/f3x/AGAHf39/f39/fwBg' +
     'CX9/f39/f39/fwF/YAZ/f39/f38AYAN8fHwBfGAJf39/f39/f39/AXxgBX9/f39/AGAMf39/f39/f39/f39/AGALf39/f39/f39/' +
     'f38AYAd/f3x8f39/AGADf398AX8DGBcAAQICAwQDBQUFBgcICQoHCQsMDQ4PEAUDAQABBi8FfwFBAAt/AUEAC3wBRAAAAAAAAAAA' +
     'C3wARHWUP2rnL8ogC3wARK+WUC41jRNfCweZAQ0GbWVtb3J5AgAGYmFkUm93AwAJYmFkQ29sdW1uAwEDcnNzAwIOZmlyc3ROb3RG' +
     'aW5pdGUAAARmb2xkAAwJbGV2ZXJhZ2VzAA0GcmVmaW5lABELYWRkUHJvZHVjdHMAEghncmFtUm93cwATCW91dE9mRm9sZAAUEXBv' +
-    'bHlub21pYWxDb2x1bW5zABULZmlyc3RCZXlvbmQAFgrVIRdAAgF/AXwCQANAIAIgAU4NASAAIAJBA3RqKwMAIQMgAyADoUQAAAAA' +
+    'bHlub21pYWxDb2x1bW5zABULZmlyc3RCZXlvbmQAFgreIxdAAgF/AXwCQANAIAIgAU4NASAAIAJBA3RqKwMAIQMgAyADoUQAAAAA' +
     'AAAAAGIEQCACDwsgAkEBaiECDAALC0F/CyMBAX8gACACEAAhAyADQQBIBEAgASAAIAJBA3T8CgAACyADCzgCAX8CfAJAA0AgAiAB' +
     'Tg0BIAAgAkEDdGorAwCZIQQgBCADZARAIAQhAwsgAkEBaiECDAALCyADCzUCAX8CfAJAA0AgAiABTg0BIAAgAkEDdGorAwAhBCAD' +
     'IAQgBKKgIQMgAkEBaiECDAALCyADCzgCAX8CfAJAA0AgAyABTg0BIAAgA0EDdGorAwAgAqMhBSAEIAUgBaKgIQQgA0EBaiEDDAAL' +
@@ -42726,22 +42757,26 @@ const KERNELS_WASM = 'AGFzbQEAAAABnwERYAJ/fwF/YAN/f38Bf2ACf38BfGADf398AXxgA39/fA
     'IAZBAWohBgwACwsgBCAIOQMAIAUgCTkDAAtZAgF/AXwgACABIAIgAyAEIAUgBhAPIAUgAhADIQoCQANAIAkgBE4NASAAIAkgAmxB' +
     'A3RqIAIgBSAGIAcgCUEDdGogCCAJQQN0ahAQIAlBAWohCQwACwsgCguCAQMBfwF8BH8gAkEDdCEJAkADQCAFIARODQEgAyAFQQN0' +
     'aisDACEGIAZEAAAAAAAAAABiBEAgASAFIAlsaiEHQQAhCAJAA0AgCCAJTg0BIAAgCGohCiAKIAorAwAgByAIaisDACAGoqA5AwAg' +
-    'CEEIaiEIDAALCwsgBUEBaiEFDAALCwv/BAITfwh8IAtBA3QhFgJAA0AgDCAJTg0BIAAgDCABIAFsbEEDdGohDSAIIAxBAnRqKAIA' +
-    'IQ4gCCAMQQFqQQJ0aigCACEPAkADQCAOIA9ODQEgDyAOayEQIBAgC0oEQCALIRALQQAhEQJAA0AgESAETg0BIAIgESADbEEDdGoh' +
-    'FCAKIBEgFmxqIRVBACETAkADQCATIBBODQEgDiATaiEXIBUgE0EDdGogBiAXQQN0aisDACAUIAUgF0ECdGooAgBBA3RqKwMAojkD' +
-    'ACATQQFqIRMMAAsLIBFBAWohEQwACwsgCiAEIBZsaiAHIA5BA3RqIBBBA3T8CgAAIARBAWohEQJAA0AgESABTg0BIAogESAWbGpB' +
-    'ACAQQQN0/AsAIBFBAWohEQwACwsgEEEDdCEdQQAhEQJAA0AgESABTg0BIAogESAWbGohGCAYIBZqIRkgESESAkADQCASIAFODQEg' +
-    'CiASIBZsaiEaIBogFmohG0QAAAAAAAAAACEfRAAAAAAAAAAAISBEAAAAAAAAAAAhIUQAAAAAAAAAACEiQQAhHAJAA0AgHCAdTg0B' +
-    'IBggHGorAwAhIyAZIBxqKwMAISQgGiAcaisDACElIBsgHGorAwAhJiAfICMgJaKgIR8gICAjICaioCEgICEgJCAloqAhISAiICQg' +
-    'JqKgISIgHEEIaiEcDAALCyANIBIgAWwgEWpBA3RqIR4gHiAeKwMAIB+gOQMAIB4gHisDCCAhoDkDCCAeIAFBA3RqIR4gHiAeKwMA' +
-    'ICCgOQMAIB4gHisDCCAioDkDCCASQQJqIRIMAAsLIBFBAmohEQwACwsgDiAQaiEODAALCyAMQQFqIQwMAAsLC68CAgZ/AXwgCEEA' +
-    'IAFBA3T8CwAgBkEATgRAAkADQCAMIAJODQEgCSAMQQN0aiADIAwgBGwgBmpBA3RqKwMAOQMAIAxBAWohDAwACwsgCCAAIAEgCSAC' +
-    'EBIFAkADQCAMIAJODQEgACAMIAFsQQN0aiENIAwgBGwhDkEAIQsCQANAIAsgAU4NASAIIAtBA3RqIQ8gDyAPKwMAIA0gC0EDdGor' +
-    'AwAgAyAOIAUgC0ECdGooAgBqQQN0aisDAKKgOQMAIAtBAWohCwwACwsgDEEBaiEMDAALCwtBACELAkADQCALIAFODQEgByALQQN0' +
-    'aisDACAIIAtBA3RqKwMAoSERIAUgC0ECdGooAgAhECAKIBBBA3RqIQ8gDyAPKwMAIBEgEaKgOQMAIAtBAWohCwwACwsLqwEBBX8g' +
-    'AUEDdCEJIAQEQCAGIAAgCfwKAAAFAkADQCAIIAlODQEgBiAIaiAAIAhqKwMAIAKhIAOjOQMAIAhBCGohCAwACwsLQQEhBwJAA0Ag' +
-    'ByAFTg0BIAYgB0EBayAJbGohCiAGIAcgCWxqIQtBACEIAkADQCAIIAlODQEgCyAIaiAKIAhqKwMAIAYgCGorAwCiOQMAIAhBCGoh' +
-    'CAwACwsgB0EBaiEHDAALCwsyAQF/AkADQCADIAFODQEgACADQQN0aisDAJkgAmVFBEAgAw8LIANBAWohAwwACwtBfws=';
+    'CEEIaiEIDAALCwsgBUEBaiEFDAALCwuIBwMRfwV7AX8gC0EEdCEWAkADQCAMIAlODQEgACAMIAEgAWxsQQN0aiENIAggDEECdGoo' +
+    'AgAhDiAIIAxBAWpBAnRqKAIAIQ8CQANAIA4gD04NASAPIA5rIRAgECALSgRAIAshEAtBACERAkADQCARIARODQEgAiARIANsQQN0' +
+    'aiEUIAogEUEBdiAWbGogEUEBcUEDdGohFUEAIRMCQANAIBMgEE4NASAOIBNqIRcgFSATQQR0aiAGIBdBA3RqKwMAIBQgBSAXQQJ0' +
+    'aigCAEEDdGorAwCiOQMAIBNBAWohEwwACwsgEUEBaiERDAALCyAKIARBAXYgFmxqIARBAXFBA3RqIRUgByAOQQN0aiEUQQAhEwJA' +
+    'A0AgEyAQTg0BIBUgE0EEdGogFCATQQN0aisDADkDACAEQQFqIAFIBEAgFSATQQR0akQAAAAAAAAAADkDCAsgE0EBaiETDAALCyAQ' +
+    'QQR0IRtBACERAkADQCARIAFODQEgCiARQQF2IBZsaiEYIBEhEgJAA0AgEiABTg0BIAogEkEBdiAWbGohGUQAAAAAAAAAAP0UIR5E' +
+    'AAAAAAAAAAD9FCEfQQAhGiASQQJqIAFIBEAgGSAWaiEiRAAAAAAAAAAA/RQhIEQAAAAAAAAAAP0UISECQANAIBogG04NASAYIBpq' +
+    '/QAEACEdIB4gHSAZIBpq/QoDAP3yAf3wASEeIB8gHSAZIBpq/QoDCP3yAf3wASEfICAgHSAiIBpq/QoDAP3yAf3wASEgICEgHSAi' +
+    'IBpq/QoDCP3yAf3wASEhIBpBEGohGgwACwsgDSASIAFsIBFqQQN0aiEcIBwgHP0ABAAgHv3wAf0LBAAgHCABQQN0aiEcIBwgHP0A' +
+    'BAAgH/3wAf0LBAAgHCABQQN0aiEcIBwgHP0ABAAgIP3wAf0LBAAgHCABQQN0aiEcIBwgHP0ABAAgIf3wAf0LBAAgEkEEaiESBQJA' +
+    'A0AgGiAbTg0BIBggGmr9AAQAIR0gHiAdIBkgGmr9CgMA/fIB/fABIR4gHyAdIBkgGmr9CgMI/fIB/fABIR8gGkEQaiEaDAALCyAN' +
+    'IBIgAWwgEWpBA3RqIRwgHCAc/QAEACAe/fAB/QsEACAcIAFBA3RqIRwgHCAc/QAEACAf/fAB/QsEACASQQJqIRILDAALCyARQQJq' +
+    'IREMAAsLIA4gEGohDgwACwsgDEEBaiEMDAALCwuvAgIGfwF8IAhBACABQQN0/AsAIAZBAE4EQAJAA0AgDCACTg0BIAkgDEEDdGog' +
+    'AyAMIARsIAZqQQN0aisDADkDACAMQQFqIQwMAAsLIAggACABIAkgAhASBQJAA0AgDCACTg0BIAAgDCABbEEDdGohDSAMIARsIQ5B' +
+    'ACELAkADQCALIAFODQEgCCALQQN0aiEPIA8gDysDACANIAtBA3RqKwMAIAMgDiAFIAtBAnRqKAIAakEDdGorAwCioDkDACALQQFq' +
+    'IQsMAAsLIAxBAWohDAwACwsLQQAhCwJAA0AgCyABTg0BIAcgC0EDdGorAwAgCCALQQN0aisDAKEhESAFIAtBAnRqKAIAIRAgCiAQ' +
+    'QQN0aiEPIA8gDysDACARIBGioDkDACALQQFqIQsMAAsLC6sBAQV/IAFBA3QhCSAEBEAgBiAAIAn8CgAABQJAA0AgCCAJTg0BIAYg' +
+    'CGogACAIaisDACACoSADozkDACAIQQhqIQgMAAsLC0EBIQcCQANAIAcgBU4NASAGIAdBAWsgCWxqIQogBiAHIAlsaiELQQAhCAJA' +
+    'A0AgCCAJTg0BIAsgCGogCiAIaisDACAGIAhqKwMAojkDACAIQQhqIQgMAAsLIAdBAWohBwwACwsLMgEBfwJAA0AgAyABTg0BIAAg' +
+    'A0EDdGorAwCZIAJlRQRAIAMPCyADQQFqIQMMAAsLQX8L';
 
 ;// CONCATENATED MODULE: ./src/kernels/wasm.ts
 /**
@@ -42773,21 +42808,56 @@ const PAGE = 65536;
 /** Memory requests left before the injected fault ({@link injectMemoryFault}); -1: none. */
 let faultIn = -1;
 /**
+ * The module could not be compiled by this runtime: its WebAssembly lacks a feature the module
+ * uses (the Gram kernel's 128-bit SIMD, which V8 offers on x64 with SSE4.1 and on arm64), or the
+ * bytes were refused. Thrown before any kernel ran.
+ */
+class CompileFault extends Error {
+    name = 'CompileFault';
+    /** @param cause the WebAssembly.CompileError (or LinkError) */
+    constructor(cause) {
+        super(cause.message, { cause });
+    }
+}
+/** Module bytes a test puts in place of the assembled ones ({@link injectModuleBytes}); null: the real module. */
+let testBytes = null;
+/**
  * Compiles and instantiates the module.
  * @returns its exports, or null where this runtime has no WebAssembly
  * @throws ResourceFault when the instance's memory cannot be reserved
+ * @throws CompileFault when this runtime cannot compile the module
  */
 function instantiateKernels() {
     if (WASM === undefined)
         return null;
+    let module;
     try {
-        return new WASM.Instance(new WASM.Module(Buffer.from(KERNELS_WASM, 'base64'))).exports;
+        module = new WASM.Module(testBytes ?? Buffer.from(KERNELS_WASM, 'base64'));
     }
     catch (error) {
         if (error instanceof RangeError)
             throw new ResourceFault(error);
+        if (error instanceof Error && (error.name === 'CompileError' || error.name === 'LinkError'))
+            throw new CompileFault(error);
         throw error;
     }
+    try {
+        return new WASM.Instance(module).exports;
+    }
+    catch (error) {
+        if (error instanceof RangeError)
+            throw new ResourceFault(error);
+        if (error instanceof Error && error.name === 'LinkError')
+            throw new CompileFault(error);
+        throw error;
+    }
+}
+/**
+ * Tests: compiles these bytes instead of the assembled module from the next instantiation on.
+ * @param bytes module bytes (invalid ones stand for a runtime that cannot compile the module); null restores the real module
+ */
+function injectModuleBytes(bytes) {
+    testBytes = bytes;
 }
 /**
  * A view of the module's memory with room for at least `doubles` float64 values from address 0,
@@ -42824,14 +42894,17 @@ function injectMemoryFault(after) {
  * The one choice between the WebAssembly kernels and the JavaScript ones, made per thread: the
  * WebAssembly where this runtime has it (compiled on the first kernel call), the JavaScript where
  * it has not (`node --jitless`) or a test turned it off. When WebAssembly memory cannot be
- * reserved (a low `ulimit -v`), the kernel that asked runs in JavaScript instead and so does every
- * later one in the thread; {@link kernelNotes} then holds one note for the run's Result. The
+ * reserved (a low `ulimit -v`), or this runtime cannot compile the module (a WebAssembly without the
+ * SIMD it uses), the kernel that asked runs in JavaScript instead and so does every later one in
+ * the thread; {@link kernelNotes} then holds one note for the run's Result. The
  * figures do not change: each WebAssembly kernel does its JavaScript reference's operations in the
  * same order (test/kernels/wasm-kernels.test.ts compares the bits).
  */
 
-/** The note a run's Result gets when the kernels fell back to JavaScript. */
+/** The note a run's Result gets when the kernels fell back to JavaScript for want of memory. */
 const KERNEL_FALLBACK_NOTE = 'WebAssembly memory could not be reserved (a low virtual-memory limit such as `ulimit -v` does this), so the row kernels ran in JavaScript: the same figures, more slowly.';
+/** The note a run's Result gets when this runtime could not compile the kernels' module. */
+const KERNEL_COMPILE_NOTE = 'This runtime could not compile the WebAssembly row kernels (they use 128-bit SIMD), so they ran in JavaScript: the same figures, more slowly.';
 /** Whether to use WebAssembly (false after a fallback, or when a test turned it off). */
 let wanted = wasm_WASM_AVAILABLE;
 /** The module's exports once compiled. */
@@ -42839,11 +42912,11 @@ let kernels = null;
 /** Notes of this thread's fallback and of those other threads reported ({@link recordKernelNotes}). */
 const notes = [];
 /** JavaScript from now on in this thread, with its note. */
-function fallBack() {
+function fallBack(note = KERNEL_FALLBACK_NOTE) {
     wanted = false;
     kernels = null;
-    if (!notes.includes(KERNEL_FALLBACK_NOTE))
-        notes.push(KERNEL_FALLBACK_NOTE);
+    if (!notes.includes(note))
+        notes.push(note);
 }
 /** The compiled module when WebAssembly is in use, else null (falling back when it cannot be instantiated). */
 function current() {
@@ -42854,9 +42927,12 @@ function current() {
             kernels = instantiateKernels();
         }
         catch (error) {
-            if (!(error instanceof ResourceFault))
+            if (error instanceof CompileFault)
+                fallBack(KERNEL_COMPILE_NOTE);
+            else if (error instanceof ResourceFault)
+                fallBack();
+            else
                 throw error;
-            fallBack();
         }
     }
     return kernels;
@@ -42890,17 +42966,18 @@ function kernelEngine() {
 }
 /**
  * Tests: turns the WebAssembly kernels on (where the runtime has WebAssembly) or off for this
- * thread, forgetting an earlier fallback and its note.
+ * thread, forgetting an earlier fallback and its note (the module is compiled again on the next call).
  * @param on true for WebAssembly, false for JavaScript
  * @returns whether WebAssembly was wanted before
  */
 function useWasmKernels(on) {
     const before = wanted;
     wanted = on && WASM_AVAILABLE;
+    kernels = null;
     notes.length = 0;
     return before;
 }
-/** Notes about the kernels for the run's Result: empty, or the one {@link KERNEL_FALLBACK_NOTE}. */
+/** Notes about the kernels for the run's Result: empty, {@link KERNEL_FALLBACK_NOTE} or {@link KERNEL_COMPILE_NOTE}. */
 function kernelNotes() {
     return [...notes];
 }

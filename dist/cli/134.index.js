@@ -522,6 +522,9 @@ var kernels = __webpack_require__(7114);
  * back to the QR engine. The step's relative error is then about p eps cond(S) <= 1e-8, which
  * changes the path of Newton's method, never its limit: the optimum is where the gradient, summed
  * row by row and exact up to rounding, vanishes.
+ *
+ * Under the same bound, the Cholesky factor of the scaled Gram (no penalty) also gives the R
+ * factor of the weighted design itself ({@link gramFactor}), for its rank and condition numbers.
  */
 /** Largest bound p trace(S^-1) on the condition number of the scaled Hessian for a Gram step (about the square of the design's 3e3). */
 const GRAM_MAX_CONDITION = 1e7;
@@ -537,6 +540,87 @@ function gramSize(p) {
 function addInto(out, a) {
     for (let i = 0; i < out.length; i++)
         out[i] += a[i];
+}
+/**
+ * The Cholesky factor of the symmetrically scaled matrix S = D H D, D = diag(H)^-1/2 (Golub & Van
+ * Loan, sec. 4.2), when S is certainly well conditioned: null when a diagonal entry of H is not
+ * positive and finite, Cholesky breaks down, or the bound p trace(S^-1) on the 2-norm condition
+ * number of S exceeds {@link GRAM_MAX_CONDITION} (trace(S^-1) = ||L^-1||_F^2, by forward
+ * substitution for each unit vector).
+ * @param H symmetric positive (semi-)definite p x p, column-major, both triangles filled
+ * @returns D (length p) and the lower-triangular L (column-major, L[j * p + i] for i >= j) with S = L L^T
+ */
+function scaledCholesky(H, p) {
+    const D = new Float64Array(p);
+    for (let j = 0; j < p; j++) {
+        const h = H[j * p + j];
+        if (!(h > 0 && Number.isFinite(h)))
+            return null;
+        D[j] = 1 / Math.sqrt(h);
+    }
+    // Cholesky S = L L^T of S = D H D (lower triangle, column-major L[j * p + i], i >= j).
+    const L = new Float64Array(p * p);
+    for (let j = 0; j < p; j++) {
+        for (let i = j; i < p; i++) {
+            let s = H[j * p + i] * D[i] * D[j];
+            for (let k = 0; k < j; k++)
+                s -= L[k * p + i] * L[k * p + j];
+            if (i === j) {
+                if (!(s > 0))
+                    return null;
+                L[j * p + j] = Math.sqrt(s);
+            }
+            else
+                L[j * p + i] = s / L[j * p + j];
+        }
+    }
+    let trace = 0;
+    const x = new Float64Array(p);
+    for (let c = 0; c < p; c++) {
+        for (let i = c; i < p; i++) {
+            let s = i === c ? 1 : 0;
+            for (let k = c; k < i; k++)
+                s -= L[k * p + i] * x[k];
+            x[i] = s / L[i * p + i];
+            trace += x[i] * x[i];
+        }
+    }
+    if (!(p * trace <= GRAM_MAX_CONDITION))
+        return null;
+    return { D, L };
+}
+/**
+ * The upper-triangular factor R (p x p, column-major, positive diagonal) with R^T R = X^T W X,
+ * the leading p x p part of an extended Gram (no penalty), from the Cholesky factor of its scaled
+ * form ({@link scaledCholesky}: R = L^T D^-1), or null when that is not certainly well conditioned.
+ * R is the R factor of the weighted design sqrt(W) X up to the signs of its rows (the factor is
+ * unique with a positive diagonal), so its singular values and right singular vectors are the
+ * design's, as from a QR factor of the same rows up to rounding: forming the Gram perturbs the
+ * smallest singular value by about p eps cond(S) / 2 relative (cond(S) = cond(sqrt(W) X D)^2,
+ * the squaring of the normal equations, Golub & Van Loan, sec. 5.3.7), against about p eps
+ * cond(sqrt(W) X D) for the QR factor: at most about 3e-8 under the bound, about 1e-12 at a
+ * scaled condition number of 70 (test/fit/gram-factor.test.ts compares both).
+ * @param G extended Gram (size {@link gramSize}(p) squared, upper triangle)
+ * @param p design columns (>= 1)
+ */
+function gramFactor(G, p) {
+    const q = gramSize(p);
+    const H = new Float64Array(p * p);
+    for (let k = 0; k < p; k++) {
+        for (let j = 0; j <= k; j++) {
+            H[k * p + j] = G[k * q + j];
+            H[j * p + k] = G[k * q + j];
+        }
+    }
+    const scaled = scaledCholesky(H, p);
+    if (scaled === null)
+        return null;
+    const { D, L } = scaled;
+    const R = new Float64Array(p * p);
+    for (let j = 0; j < p; j++)
+        for (let i = 0; i <= j; i++)
+            R[j * p + i] = L[i * p + j] / D[j];
+    return R;
 }
 /**
  * The Newton step of a Gram pass, or null when the scaled Hessian is not certainly well
@@ -564,43 +648,10 @@ function gramStep(G, w, ridge, penalised) {
             b[k] -= ridge * w[k];
         }
     }
-    const D = new Float64Array(p);
-    for (let j = 0; j < p; j++) {
-        const h = H[j * p + j];
-        if (!(h > 0 && Number.isFinite(h)))
-            return null;
-        D[j] = 1 / Math.sqrt(h);
-    }
-    // Cholesky S = L L^T of S = D H D (lower triangle, column-major L[j * p + i], i >= j).
-    const L = new Float64Array(p * p);
-    for (let j = 0; j < p; j++) {
-        for (let i = j; i < p; i++) {
-            let s = H[j * p + i] * D[i] * D[j];
-            for (let k = 0; k < j; k++)
-                s -= L[k * p + i] * L[k * p + j];
-            if (i === j) {
-                if (!(s > 0))
-                    return null;
-                L[j * p + j] = Math.sqrt(s);
-            }
-            else
-                L[j * p + i] = s / L[j * p + j];
-        }
-    }
-    // trace(S^-1) = ||L^-1||_F^2, by forward substitution for each unit vector.
-    let trace = 0;
-    const x = new Float64Array(p);
-    for (let c = 0; c < p; c++) {
-        for (let i = c; i < p; i++) {
-            let s = i === c ? 1 : 0;
-            for (let k = c; k < i; k++)
-                s -= L[k * p + i] * x[k];
-            x[i] = s / L[i * p + i];
-            trace += x[i] * x[i];
-        }
-    }
-    if (!(p * trace <= GRAM_MAX_CONDITION))
+    const scaled = scaledCholesky(H, p);
+    if (scaled === null)
         return null;
+    const { D, L } = scaled;
     // S (D^-1 d) = D b.
     const t = new Float64Array(p);
     for (let i = 0; i < p; i++) {
@@ -672,7 +723,10 @@ var fit = __webpack_require__(2450);
  * coefficients with the QR engine and keeps it. Both solve the same Newton step up to rounding,
  * and the gradient that decides the optimum is summed row by row either way, so the optimum and
  * the stopping rule are the same. A problem that asks for its weighted factor
- * ({@link LogisticProblem.factor}) gets it from one QR pass at the returned coefficients.
+ * ({@link LogisticProblem.factor}) gets it from one Gram pass at the returned coefficients, as the
+ * Cholesky factor of that Gram (the R of a QR factor of sqrt(W) X up to row signs) when the Gram
+ * is certainly well conditioned (the same bound as for a step), else from one more pass with the
+ * QR engine.
  *
  * Shared Grams for cross-validation: a fit over all rows can keep one Gram per part of the rows
  * (the folds) at each pass; at the same coefficients every fold fit has the same weights, so the
@@ -720,6 +774,7 @@ function fitLogistic(design, data, options, problems) {
             done: p === 0,
             converged: p === 0,
             lastFactor: null,
+            lastR: null,
             lastDeviance: Number.NaN,
             partGram: null,
             partRows: null,
@@ -828,12 +883,14 @@ function fitLogistic(design, data, options, problems) {
         }
     }
     for (const s of states) {
-        // Problems that asked for their factor: one QR pass at the returned coefficients, which also
-        // gives the deviance and objective there.
+        // Problems that asked for their factor: one Gram pass at the returned coefficients, which
+        // also gives the deviance and objective there (and the predictors, when asked), then the
+        // Cholesky factor of that Gram, or, when it is not certainly well conditioned, one QR pass.
         if (!s.problem.factor || p === 0)
             continue;
-        const at = factorAt(design, data, s.problem, s.w);
-        s.lastFactor = at.factor;
+        const at = gramAt(design, data, s.problem, s.w);
+        s.lastR = gramFactor(at.gram, p);
+        s.lastFactor = s.lastR === null ? factorAt(design, data, s.problem, s.w).factor : null;
         s.lastDeviance = at.deviance;
         s.previousObjective = at.deviance + options.ridge * penaltySum(s.w, options.penalised);
     }
@@ -845,9 +902,52 @@ function fitLogistic(design, data, options, problems) {
         halvings: s.halvings,
         converged: s.converged,
         rows: s.rows,
-        weightedFactor: s.lastFactor ?? (s.gram ? null : s.acc),
+        weightedFactor: s.lastR !== null ? null : (s.lastFactor ?? (s.gram ? null : s.acc)),
+        weightedR: s.lastR,
         parts: s.lastParts,
     }));
+}
+/**
+ * The extended Gram of a problem's weighted rows [sqrt(W) X | u] at coefficients w (gram-step.ts)
+ * and its deviance there, in one pass; with `problem.eta`, every row's linear predictor is left
+ * there (each block's sum as predictRows makes it: zero, then addProducts).
+ */
+function gramAt(design, data, problem, w) {
+    const p = design.p;
+    const q = gramSize(p);
+    const size = Math.max(1, Math.min(data.rows, 1 << 16));
+    const out = problem.eta;
+    if (out)
+        out.fill(0, 0, data.rows);
+    const block = new Float64Array(size);
+    const scale = new Float64Array(size);
+    const target = new Float64Array(size);
+    const resid = new Float64Array(size);
+    const index = new Int32Array(size);
+    const single = new Int32Array(2);
+    const gram = new Float64Array(q * q);
+    let deviance = 0;
+    const onBlock = problem.onBlock;
+    (0,blocks/* forEachBlock */.aN)(design, data, (X, start, m) => {
+        if (onBlock)
+            onBlock(X, start, m);
+        let eta = block;
+        if (out) {
+            (0,kernels/* addProducts */.kD)(out, start, X, m, w, p);
+            eta = out.subarray(start, start + m);
+        }
+        else {
+            eta.fill(0, 0, m);
+            (0,kernels/* addProducts */.kD)(eta, 0, X, m, w, p);
+        }
+        const r = problem.foldOf
+            ? weightRows(eta, data.y, start, m, problem.foldOf, problem.exclude ?? -1, scale, target, resid, index)
+            : weightAllRows(eta, data.y, start, m, scale, target, resid, index);
+        deviance += blockDeviance;
+        single[1] = r;
+        (0,kernels/* addGramRows */.m$)(gram, q, X, m, p, index, scale, resid, single, 1);
+    });
+    return { gram, deviance };
 }
 /** The QR factor of the weighted rows sqrt(W) [X | z] of a problem at coefficients w, and its deviance there, in one pass. */
 function factorAt(design, data, problem, w) {
@@ -2033,15 +2133,15 @@ async function fitClassifier(repo, descriptor, settings) {
     const { train, holdout } = tables;
     const options = { ridge: descriptor.fit.ridge, penalised: [...design.penalised] };
     const spread = new column_spread/* ColumnSpread */.W(design.p);
-    (0,blocks/* forEachBlock */.aN)(design, train, (X, _start, m) => spread.add(X, m));
-    const columnSd = spread.sd();
     // With folds, each pass also keeps one Gram per fold, so that the folds' first Newton steps need no pass of their own.
     const parts = folds.k >= 2 ? { of: folds.foldOf, count: folds.k } : undefined;
-    const [fit] = (0,logistic/* fitLogistic */.Sz)(design, train, options, [{ start: warmStart(design, train, options), parts, factor: true }]);
-    if (fit.weightedFactor === null)
-        throw new Error('fitLogistic: the weighted factor asked for is missing');
-    const weighted = (0,src_fit/* fitFactor */.Ps)(fit.weightedFactor, options);
-    const trainEta = (0,blocks/* predictRows */.tp)(design, train, fit.coefficients);
+    // The factor pass at the returned coefficients also leaves the training rows' logits and takes the columns' spread.
+    const trainEta = new Float64Array(train.rows);
+    const [fit] = (0,logistic/* fitLogistic */.Sz)(design, train, options, [
+        { start: warmStart(design, train, options), parts, factor: true, eta: trainEta, onBlock: (X, _start, m) => spread.add(X, m) },
+    ]);
+    const columnSd = spread.sd();
+    const weighted = weightedDiagnostics(fit, design.p, options);
     const holdoutEta = (0,blocks/* predictRows */.tp)(design, holdout, fit.coefficients);
     const threshold = descriptor.fit.threshold ?? 0.5;
     const trainP = (0,classification_metrics/* probabilities */.gt)(trainEta);
@@ -2082,6 +2182,18 @@ async function fitClassifier(repo, descriptor, settings) {
             calibration: (0,classification_metrics/* calibrationBins */.N0)(holdout.y, holdoutP, holdout.rows),
         },
     };
+}
+/**
+ * Rank and conditioning of the weighted design sqrt(W) X at the fit's coefficients: from the
+ * Cholesky factor of its Gram when the fit has one (fit/gram-step.ts, gramFactor), else from its
+ * QR factor (fit/index.ts, fitFactor).
+ */
+function weightedDiagnostics(fit, p, options) {
+    if (fit.weightedR !== null)
+        return (0,src_fit/* factorDiagnostics */._z)(fit.weightedR, p, fit.rows);
+    if (fit.weightedFactor === null)
+        throw new Error('fitLogistic: the weighted factor asked for is missing');
+    return (0,src_fit/* fitFactor */.Ps)(fit.weightedFactor, options);
 }
 /** Above this many training rows the full fit starts from the fit of an even-stride subset of this many rows. */
 const WARM_START_ROWS = 50000;
