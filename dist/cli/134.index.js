@@ -806,11 +806,9 @@ function fitLogistic(design, data, options, problems) {
     const q = gramSize(p);
     const size = Math.max(1, Math.min(data.rows, 1 << 16));
     const eta = new Float64Array(size);
-    const scale = new Float64Array(size);
-    const target = new Float64Array(size);
-    const index = new Int32Array(size);
+    const weighted = blockWeights(size);
+    const { scale, target, resid, index } = weighted;
     const partScale = new Float64Array(size);
-    const resid = new Float64Array(size);
     const partResid = new Float64Array(size);
     const single = new Int32Array(2);
     let work = new Float64Array(0);
@@ -841,7 +839,7 @@ function fitLogistic(design, data, options, problems) {
             for (const s of active) {
                 eta.fill(0, 0, m);
                 (0,kernels/* addProducts */.kD)(eta, 0, X, m, s.w, p);
-                const { foldOf, exclude, parts } = s.problem;
+                const { parts } = s.problem;
                 if (parts && s.partGram && s.partRows && s.partDev) {
                     // Every row, each into its part's Gram (rows of a part gathered in row order).
                     weightRowsByPart(eta, data.y, start, m, parts.of, s.partDev, scale, resid);
@@ -854,9 +852,7 @@ function fitLogistic(design, data, options, problems) {
                     s.rows += m;
                     continue;
                 }
-                const r = foldOf
-                    ? weightRows(eta, data.y, start, m, foldOf, exclude ?? -1, scale, target, resid, index)
-                    : weightAllRows(eta, data.y, start, m, scale, target, resid, index);
+                const r = weighBlock(eta, data.y, start, m, s.problem, weighted);
                 s.deviance += blockDeviance;
                 s.rows += r;
                 if (s.gram) {
@@ -920,10 +916,8 @@ function gramAt(design, data, problem, w) {
     if (out)
         out.fill(0, 0, data.rows);
     const block = new Float64Array(size);
-    const scale = new Float64Array(size);
-    const target = new Float64Array(size);
-    const resid = new Float64Array(size);
-    const index = new Int32Array(size);
+    const weighted = blockWeights(size);
+    const { scale, resid, index } = weighted;
     const single = new Int32Array(2);
     const gram = new Float64Array(q * q);
     let deviance = 0;
@@ -940,9 +934,7 @@ function gramAt(design, data, problem, w) {
             eta.fill(0, 0, m);
             (0,kernels/* addProducts */.kD)(eta, 0, X, m, w, p);
         }
-        const r = problem.foldOf
-            ? weightRows(eta, data.y, start, m, problem.foldOf, problem.exclude ?? -1, scale, target, resid, index)
-            : weightAllRows(eta, data.y, start, m, scale, target, resid, index);
+        const r = weighBlock(eta, data.y, start, m, problem, weighted);
         deviance += blockDeviance;
         single[1] = r;
         (0,kernels/* addGramRows */.m$)(gram, q, X, m, p, index, scale, resid, single, 1);
@@ -954,10 +946,8 @@ function factorAt(design, data, problem, w) {
     const p = design.p;
     const size = Math.max(1, Math.min(data.rows, 1 << 16));
     const eta = new Float64Array(size);
-    const scale = new Float64Array(size);
-    const target = new Float64Array(size);
-    const resid = new Float64Array(size);
-    const index = new Int32Array(size);
+    const weighted = blockWeights(size);
+    const { scale, target, index } = weighted;
     const factor = new qr_accumulator/* QrAccumulator */.S(p);
     let deviance = 0;
     let work = new Float64Array(0);
@@ -966,9 +956,7 @@ function factorAt(design, data, problem, w) {
             work = new Float64Array(m * p);
         eta.fill(0, 0, m);
         (0,kernels/* addProducts */.kD)(eta, 0, X, m, w, p);
-        const r = problem.foldOf
-            ? weightRows(eta, data.y, start, m, problem.foldOf, problem.exclude ?? -1, scale, target, resid, index)
-            : weightAllRows(eta, data.y, start, m, scale, target, resid, index);
+        const r = weighBlock(eta, data.y, start, m, problem, weighted);
         deviance += blockDeviance;
         for (let j = 0; j < p; j++)
             scaleColumn(X, j * m, index, scale, r, work, j * r);
@@ -1120,6 +1108,21 @@ function defaultStart(design, data, problem) {
     const mean = (positives + 0.5) / (n + 1);
     w[0] = Math.log(mean / (1 - mean));
     return w;
+}
+/** {@link BlockWeights} for blocks of up to `size` rows. */
+function blockWeights(size) {
+    return { scale: new Float64Array(size), target: new Float64Array(size), resid: new Float64Array(size), index: new Int32Array(size) };
+}
+/**
+ * The IRLS weights of one block of a problem's rows: {@link weightRows} without the rows of the
+ * problem's excluded fold, {@link weightAllRows} when it has no folds.
+ * @returns the number of rows kept (packed from 0 in `into`)
+ */
+function weighBlock(eta, y, start, m, problem, into) {
+    const { scale, target, resid, index } = into;
+    return problem.foldOf
+        ? weightRows(eta, y, start, m, problem.foldOf, problem.exclude ?? -1, scale, target, resid, index)
+        : weightAllRows(eta, y, start, m, scale, target, resid, index);
 }
 /** The deviance of the last block weighted (read right after {@link weightRows}). */
 let blockDeviance = 0;

@@ -261,11 +261,9 @@ export function fitLogistic(
   const q = gramSize(p);
   const size = Math.max(1, Math.min(data.rows, 1 << 16));
   const eta = new Float64Array(size);
-  const scale = new Float64Array(size);
-  const target = new Float64Array(size);
-  const index = new Int32Array(size);
+  const weighted = blockWeights(size);
+  const { scale, target, resid, index } = weighted;
   const partScale = new Float64Array(size);
-  const resid = new Float64Array(size);
   const partResid = new Float64Array(size);
   const single = new Int32Array(2);
   let work = new Float64Array(0);
@@ -293,7 +291,7 @@ export function fitLogistic(
       for (const s of active) {
         eta.fill(0, 0, m);
         addProducts(eta, 0, X, m, s.w, p);
-        const { foldOf, exclude, parts } = s.problem;
+        const { parts } = s.problem;
         if (parts && s.partGram && s.partRows && s.partDev) {
           // Every row, each into its part's Gram (rows of a part gathered in row order).
           weightRowsByPart(eta, data.y, start, m, parts.of, s.partDev, scale, resid);
@@ -305,9 +303,7 @@ export function fitLogistic(
           s.rows += m;
           continue;
         }
-        const r = foldOf
-          ? weightRows(eta, data.y, start, m, foldOf, exclude ?? -1, scale, target, resid, index)
-          : weightAllRows(eta, data.y, start, m, scale, target, resid, index);
+        const r = weighBlock(eta, data.y, start, m, s.problem, weighted);
         s.deviance += blockDeviance;
         s.rows += r;
         if (s.gram) {
@@ -366,10 +362,8 @@ function gramAt(design: Design, data: LogisticRows, problem: LogisticProblem, w:
   const out = problem.eta;
   if (out) out.fill(0, 0, data.rows);
   const block = new Float64Array(size);
-  const scale = new Float64Array(size);
-  const target = new Float64Array(size);
-  const resid = new Float64Array(size);
-  const index = new Int32Array(size);
+  const weighted = blockWeights(size);
+  const { scale, resid, index } = weighted;
   const single = new Int32Array(2);
   const gram = new Float64Array(q * q);
   let deviance = 0;
@@ -384,9 +378,7 @@ function gramAt(design: Design, data: LogisticRows, problem: LogisticProblem, w:
       eta.fill(0, 0, m);
       addProducts(eta, 0, X, m, w, p);
     }
-    const r = problem.foldOf
-      ? weightRows(eta, data.y, start, m, problem.foldOf, problem.exclude ?? -1, scale, target, resid, index)
-      : weightAllRows(eta, data.y, start, m, scale, target, resid, index);
+    const r = weighBlock(eta, data.y, start, m, problem, weighted);
     deviance += blockDeviance;
     single[1] = r;
     addGramRows(gram, q, X, m, p, index, scale, resid, single, 1);
@@ -404,10 +396,8 @@ function factorAt(
   const p = design.p;
   const size = Math.max(1, Math.min(data.rows, 1 << 16));
   const eta = new Float64Array(size);
-  const scale = new Float64Array(size);
-  const target = new Float64Array(size);
-  const resid = new Float64Array(size);
-  const index = new Int32Array(size);
+  const weighted = blockWeights(size);
+  const { scale, target, index } = weighted;
   const factor = new QrAccumulator(p);
   let deviance = 0;
   let work = new Float64Array(0);
@@ -415,9 +405,7 @@ function factorAt(
     if (work.length < m * p) work = new Float64Array(m * p);
     eta.fill(0, 0, m);
     addProducts(eta, 0, X, m, w, p);
-    const r = problem.foldOf
-      ? weightRows(eta, data.y, start, m, problem.foldOf, problem.exclude ?? -1, scale, target, resid, index)
-      : weightAllRows(eta, data.y, start, m, scale, target, resid, index);
+    const r = weighBlock(eta, data.y, start, m, problem, weighted);
     deviance += blockDeviance;
     for (let j = 0; j < p; j++) scaleColumn(X, j * m, index, scale, r, work, j * r);
     factor.addRows(work, target, r);
@@ -565,6 +553,42 @@ function defaultStart(design: Design, data: LogisticRows, problem: LogisticProbl
   const mean = (positives + 0.5) / (n + 1);
   w[0] = Math.log(mean / (1 - mean));
   return w;
+}
+
+/** One block's IRLS rows as {@link weightRows} packs them (each array of the block's size). */
+interface BlockWeights {
+  /** sqrt(W) of each row kept. */
+  scale: Float64Array;
+  /** sqrt(W) z = sqrt(W) eta + u of each row kept. */
+  target: Float64Array;
+  /** u = (y - p) / sqrt(W) of each row kept. */
+  resid: Float64Array;
+  /** Each kept row's index in the block. */
+  index: Int32Array;
+}
+
+/** {@link BlockWeights} for blocks of up to `size` rows. */
+function blockWeights(size: number): BlockWeights {
+  return { scale: new Float64Array(size), target: new Float64Array(size), resid: new Float64Array(size), index: new Int32Array(size) };
+}
+
+/**
+ * The IRLS weights of one block of a problem's rows: {@link weightRows} without the rows of the
+ * problem's excluded fold, {@link weightAllRows} when it has no folds.
+ * @returns the number of rows kept (packed from 0 in `into`)
+ */
+function weighBlock(
+  eta: Float64Array,
+  y: Float64Array,
+  start: number,
+  m: number,
+  problem: Pick<LogisticProblem, 'foldOf' | 'exclude'>,
+  into: BlockWeights,
+): number {
+  const { scale, target, resid, index } = into;
+  return problem.foldOf
+    ? weightRows(eta, y, start, m, problem.foldOf, problem.exclude ?? -1, scale, target, resid, index)
+    : weightAllRows(eta, y, start, m, scale, target, resid, index);
 }
 
 /** The deviance of the last block weighted (read right after {@link weightRows}). */
