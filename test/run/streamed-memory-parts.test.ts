@@ -6,9 +6,11 @@
 // extra rows would add 300,000 x 10 columns x 8 bytes = 23 MiB of columns, plus their lines, the
 // fold table and the predictions (the same parts held in memory peaked 47 and 80 MiB higher at 8
 // parts than at 2 in two runs here); streamed, the peak resident memory must not grow by more
-// than 16 MiB between the two (chunks, sample and hold-out rows are the same size for both, and a
-// part is closed before the next is opened; 0 and 5 MiB in the same runs) and stays under 256 MiB.
-// Each peak is the smaller of two processes' (see `peak`).
+// than 24 MiB between the two, half the smaller of those in-memory growths (chunks, sample and
+// hold-out rows are the same size for both, and a part is closed before the next is opened; 0 and
+// 5 MiB in the same runs on an idle machine, up to 16 MiB under the full suite in CI) and stays
+// under 256 MiB. Each peak is the smallest of three processes' (see `peak`), the two repositories'
+// processes taking turns.
 import { spawnSync } from 'node:child_process';
 import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
@@ -83,21 +85,26 @@ function runOnce(root: string): Peak {
 }
 
 /**
- * The smaller peak of two processes over the same repository: on a loaded machine (the suite runs
- * files side by side) the collector's timing only adds to a process's peak, by up to about 20 MiB
- * in single runs seen here, so the smaller of two is the nearer to what the process needs.
+ * The smallest peak of three processes per repository, the repositories' processes taking turns:
+ * on a loaded machine (the suite runs files side by side) the collector's timing only adds to a
+ * process's peak, by up to about 20 MiB in single runs seen here, so the smallest of three is the
+ * nearest to what the process needs, and turns spread a busy stretch over both repositories.
  */
-async function peak(parts: number): Promise<Peak> {
-  const root = await repository(parts);
-  const first = runOnce(root);
-  const second = runOnce(root);
-  return first.maxRssKiB <= second.maxRssKiB ? first : second;
+function peaks(roots: readonly string[]): Peak[] {
+  const best: (Peak | null)[] = roots.map(() => null);
+  for (let round = 0; round < 3; round++) {
+    roots.forEach((root, k) => {
+      const run = runOnce(root);
+      const held = best[k];
+      if (held === null || run.maxRssKiB < held.maxRssKiB) best[k] = run;
+    });
+  }
+  return best.map((p) => p as Peak);
 }
 
 describe('training data in gzip parts streamed in bounded memory (heap capped at 192 MiB)', () => {
   it('peaks under 256 MiB and does not grow from 2 parts (100,000 rows) to 8 parts (400,000 rows)', async () => {
-    const small = await peak(2);
-    const large = await peak(8);
+    const [small, large] = peaks([await repository(2), await repository(8)]);
     for (const [r, parts] of [
       [small, 2],
       [large, 8],
@@ -110,6 +117,6 @@ describe('training data in gzip parts streamed in bounded memory (heap capped at
     const mib = (kib: number): number => kib / 1024;
     const growth = mib(large.maxRssKiB) - mib(small.maxRssKiB);
     expect(mib(large.maxRssKiB), 'peak resident MiB at 400,000 rows').toBeLessThan(256);
-    expect(growth, `peak grew from ${mib(small.maxRssKiB).toFixed(0)} to ${mib(large.maxRssKiB).toFixed(0)} MiB`).toBeLessThan(16);
-  }, 240_000);
+    expect(growth, `peak grew from ${mib(small.maxRssKiB).toFixed(0)} to ${mib(large.maxRssKiB).toFixed(0)} MiB`).toBeLessThan(24);
+  }, 360_000);
 });
