@@ -70,8 +70,8 @@ async function main(argv: string[]): Promise<number> {
       // checks it, never through a link), and the Result keeps a small copy (entries/model-spool.ts).
       if (parsed.format === 'json' && parsed.out !== null && parsed.html === null && parsed.sarif === null && parsed.junit === null)
         spool = openModelSpool({ file: parsed.out, place: { option: '--out', within: [parsed.settings.root, process.cwd()] } });
-      const onModel = spool === null ? undefined : spool.keep;
-      result = await runCheck(parsed.settings, { base: parsed.base, entry: 'command', shard: parsed.shard, jobs: parsed.jobs, onModel });
+      const handoff = spool === null ? undefined : spool.handoff;
+      result = await runCheck(parsed.settings, { base: parsed.base, entry: 'command', shard: parsed.shard, jobs: parsed.jobs, handoff });
       failOn = parsed.settings.failOn;
     }
     const toFile = parsed.out !== null;

@@ -37,7 +37,7 @@ export interface CheckCommand {
   base: string | null;
   /** Check only this share of the models (`--shard K/N`), or null for all. */
   shard: Shard | null;
-  /** Worker threads for models (`--jobs N`); null = one per core. */
+  /** Threads evaluating models, the main thread included (`--jobs N`: N - 1 workers); null = up to one per core. */
   jobs: number | null;
   /** Write the HTML report into this folder (`--html DIR`, path as given), or null. */
   html: string | null;
@@ -159,7 +159,7 @@ function parseJobs(value: string | undefined): number | null {
   if (value === undefined) return null;
   const n = Number(value);
   if (!/^\s*\d+\s*$/.test(value) || !Number.isSafeInteger(n) || n < 1) {
-    throw new InputError('jobs-value', `expected a whole number of worker threads >= 1, got ${quoteValue(value)}`, { key: '--jobs' });
+    throw new InputError('jobs-value', `expected a whole number of threads >= 1, got ${quoteValue(value)}`, { key: '--jobs' });
   }
   return n;
 }
@@ -249,7 +249,8 @@ const COMMANDS: readonly CommandSpec[] = [
       {
         name: 'jobs',
         value: 'n',
-        description: "worker threads to run models on (default: one per core, when the models' work pays for starting them; 1 = serial)",
+        description:
+          "threads to run models on, the main thread and n - 1 workers (default: up to one per core, as many as the models' work pays for; 1 = serial)",
       },
       { name: 'html', value: 'dir', description: 'also write the HTML report (index.html, self-contained) into this folder' },
       { name: 'sarif', value: 'file', description: 'also write a SARIF 2.1.0 log for code scanning to this file' },

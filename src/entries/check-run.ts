@@ -5,6 +5,7 @@
  * entry (the command writes one report and the file reports; the action annotates, summarises
  * and comments).
  */
+import type { ModelHandoff } from '../run/model-handoff.js';
 import type { PipelineOptions } from '../run/pipeline.js';
 import { runPipeline } from '../run/pipeline.js';
 import { defaultJobs } from '../run/pool.js';
@@ -21,10 +22,12 @@ export interface CheckRunOptions {
   entry: 'command' | 'action';
   /** Check only this shard of the models, or null for all of them. */
   shard: Shard | null;
-  /** Worker threads named by the user (`--jobs N`: exactly min(N, models)), or null: up to one per core, as many as the work pays for. */
+  /** Threads named by the user (`--jobs N`: the main thread and exactly min(N, models) - 1 workers), or null: up to one per core, as many as the work pays for. */
   jobs: number | null;
   /** Called with each model's outcome as soon as it is final; the Result keeps what it returns (run/pipeline.ts `onModel`). Default none. */
   onModel?: (model: ModelResult) => ModelResult;
+  /** Each outcome rendered where it was evaluated and taken on the main thread (run/model-handoff.ts). Default none. */
+  handoff?: ModelHandoff;
 }
 
 /**
@@ -49,6 +52,7 @@ export async function runCheck(settings: Settings, options: CheckRunOptions): Pr
     jobs: options.jobs ?? defaultJobs(),
     exactJobs: options.jobs !== null,
     onModel: options.onModel,
+    handoff: options.handoff,
     root: settings.root,
   });
 }

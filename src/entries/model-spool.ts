@@ -22,12 +22,18 @@ import { closeSync, readSync, unlinkSync, writeSync } from 'node:fs';
 import { StringDecoder } from 'node:string_decoder';
 import { jsonModelReport } from '../report/json.js';
 import type { ModelResult } from '../result/result.js';
+import { registerModelRender, type ModelHandoff, type RenderedModel } from '../run/model-handoff.js';
 import { openTempBeside, type TempFile, type WritePlace } from './safe-write.js';
 
 /** Models' report text set aside; see the module comment. */
 export interface ModelSpool {
   /** Renders the model's text, sets it aside and returns the small copy to keep in the Result. */
   keep(model: ModelResult): ModelResult;
+  /**
+   * The same in two steps, for a run on several threads: {@link SPOOL_RENDER} renders the model on
+   * the thread that evaluated it, `take` sets the text aside here (run/model-handoff.ts).
+   */
+  handoff: ModelHandoff;
   /**
    * The text set aside for a copy {@link keep} returned, in pieces (read from the spool file as
    * they are asked for), or undefined for any other model. A piece that cannot be read throws.
@@ -75,6 +81,21 @@ export function smallCopy(model: ModelResult): ModelResult {
     error: model.error === null ? null : { ...model.error },
   };
 }
+
+/** Name of the spool's render in the registry of run/model-handoff.ts. */
+export const SPOOL_RENDER = 'json-model-spool';
+
+/**
+ * A model's small copy ({@link smallCopy}) and its part of the JSON report (report/json.ts
+ * `jsonModelReport`), joined into one string.
+ * @param model a model's outcome
+ */
+export function renderForSpool(model: ModelResult): RenderedModel {
+  return { kept: smallCopy(model), text: [...jsonModelReport(model)].join('') };
+}
+
+// Registered on every thread that loads this module (worker threads load the CLI bundle whole).
+registerModelRender(SPOOL_RENDER, renderForSpool);
 
 /** Where one model's text lies in the spool file. */
 interface Extent {
@@ -158,14 +179,23 @@ export function openModelSpool(target?: SpoolTarget, hooks: SpoolHooks = {}): Mo
     if (rest !== '') yield rest;
   };
 
+  const take = ({ kept, text }: RenderedModel): ModelResult => {
+    if (file === undefined) file = openFile();
+    if (file === null || !append(file, kept, text)) texts.set(kept, text);
+    return kept;
+  };
   return {
     keep(model) {
       if (!open) return model;
-      const copy = smallCopy(model);
-      const text = [...jsonModelReport(model)].join('');
-      if (file === undefined) file = openFile();
-      if (file === null || !append(file, copy, text)) texts.set(copy, text);
-      return copy;
+      return take(renderForSpool(model));
+    },
+    handoff: {
+      render: SPOOL_RENDER,
+      take(rendered) {
+        // A closed spool keeps nothing: the copy alone would lose the model's text.
+        if (!open) throw new Error('the model spool is closed');
+        return take(rendered);
+      },
     },
     text(model) {
       if (!open) return undefined;

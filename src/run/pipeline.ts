@@ -2,15 +2,14 @@
  * The whole run: settings file -> descriptors -> one outcome per model -> Result.
  * No output of its own: reporters format the Result; the entry points decide the exit status.
  */
-import { checkUniqueNames, loadDescriptor } from '../config/descriptor.js';
+import { checkUniqueNames } from '../config/descriptor.js';
 import { discoverDescriptors } from '../config/discover.js';
 import { loadSettings } from '../config/settings-file.js';
 import type { Descriptor, SettingsFile } from '../config/types.js';
-import { InputError } from '../core/errors.js';
 import { kernelNotes } from '../kernels/index.js';
 import { matchBase, type BaseInput } from './base-comparison.js';
-import { errorResult } from './error-result.js';
-import { evaluateModels } from './model-worker.js';
+import { wholeModelKeeper, type ModelHandoff } from './model-handoff.js';
+import { evaluateModels, loadDescriptors, openModelThreads } from './model-worker.js';
 import type { RepoReader } from '../repo/types.js';
 import { summarise, type ModelResult, type Result } from '../result/result.js';
 import type { Settings } from './settings.js';
@@ -37,24 +36,31 @@ export interface PipelineOptions {
   /** Check only this shard of the descriptors (see shard.ts for the rule). Default: all of them. */
   shard?: Shard | null;
   /**
-   * Largest number of worker threads to run models on. Default 1 (serial). Workers are used only
-   * when `root` is given too and there is more than one model; results are the same either way.
+   * Largest number of threads to evaluate models on, the main thread included (workers: jobs - 1).
+   * Default 1 (serial). Workers are used only when `root` is given too and there is more than one
+   * model; results are the same either way.
    */
   jobs?: number;
   /** Absolute repository root on disk for worker threads to read from. Default none (serial). */
   root?: string;
   /**
-   * True: start min(jobs, models) workers whatever the work (a count the user named, `--jobs N`).
-   * Default false: as many as the guessed work pays for, at most `jobs` (run/work-guess.ts).
+   * True: start min(jobs, models) - 1 workers whatever the work (a count the user named, `--jobs N`).
+   * Default false: as many as the guessed work pays for, at most `jobs` - 1 (run/work-guess.ts).
    */
   exactJobs?: boolean;
   /**
    * Called with each model's outcome as soon as it is final (a writer keeps its report text
    * elsewhere); the Result keeps what it returns instead (a smaller copy: the verdict and what
-   * the summaries read). Called once per model; on the main thread alone in descriptor order
-   * (load errors first), on workers after they finish. Default: the Result keeps every outcome whole.
+   * the summaries read). Called once per model, on the main thread, in the order the outcomes
+   * become final (load errors first). Default: the Result keeps every outcome whole.
    */
   onModel?: (model: ModelResult) => ModelResult;
+  /**
+   * Each outcome rendered on the thread that evaluated it (a worker thread too) and taken on the
+   * main thread (model-handoff.ts); `onModel` then sees only outcomes no thread could render.
+   * Default none.
+   */
+  handoff?: ModelHandoff;
 }
 
 /**
@@ -83,35 +89,43 @@ export async function runPipeline(settings: Settings, repo: RepoReader, options:
   const paths = selectShard(discovery.paths, shard);
   const models: ModelResult[] = [];
   const loaded: Descriptor[] = [];
-  for (const path of paths) {
-    try {
-      loaded.push(await loadDescriptor(repo, path, file));
-    } catch (error) {
-      if (!(error instanceof InputError)) throw error;
-      const failed = errorResult(path, path, error);
-      models.push(options.onModel ? options.onModel(failed) : failed);
+  const keepWhole = wholeModelKeeper(options.handoff, options.onModel);
+  // Workers start now when the number of descriptors alone pays for them, and share the reading.
+  const threads = { jobs: options.jobs, root: options.root, exactJobs: options.exactJobs };
+  const pool = openModelThreads(paths.length, file, threads);
+  try {
+    for (const entry of await loadDescriptors(repo, paths, file, pool)) {
+      if ('descriptor' in entry) loaded.push(entry.descriptor);
+      else models.push(keepWhole(entry.failed));
     }
+    checkUniqueNames(loaded);
+    options.onDescriptors?.(loaded);
+    const notes = [settingsNote(file, settings.config), ...(options.notes ?? []), ...(file.notes ?? []), ...discovery.notes];
+    let base: BaseInput | undefined;
+    if (options.baseline) {
+      const matching = matchBase(loaded, [...options.baseline.values()], options.baselineData ?? new Map());
+      base = { matches: matching.matches, commit: options.baseCommit ?? '' };
+      // A shard checks part of the models, so the base models of the other shards match nothing here.
+      if (shard === null) for (const m of matching.unmatched) notes.push(removedNote(m));
+    }
+    for (const model of await evaluateModels(repo, loaded, file, {
+      ...threads,
+      pool,
+      onModel: options.onModel,
+      handoff: options.handoff,
+      base,
+      models: paths.length,
+    }))
+      models.push(model);
+    return finishRun(models, notes, shard, paths.length);
+  } finally {
+    pool?.close();
   }
-  checkUniqueNames(loaded);
-  options.onDescriptors?.(loaded);
-  const notes = [settingsNote(file, settings.config), ...(options.notes ?? []), ...(file.notes ?? []), ...discovery.notes];
-  let base: BaseInput | undefined;
-  if (options.baseline) {
-    const matching = matchBase(loaded, [...options.baseline.values()], options.baselineData ?? new Map());
-    base = { matches: matching.matches, commit: options.baseCommit ?? '' };
-    // A shard checks part of the models, so the base models of the other shards match nothing here.
-    if (shard === null) for (const m of matching.unmatched) notes.push(removedNote(m));
-  }
-  for (const model of await evaluateModels(repo, loaded, file, {
-    jobs: options.jobs,
-    root: options.root,
-    exactJobs: options.exactJobs,
-    onModel: options.onModel,
-    base,
-    models: paths.length,
-  }))
-    models.push(model);
-  if (shard) notes.push(`shard ${formatShard(shard)}: ${paths.length} model${paths.length === 1 ? '' : 's'} of this run's share`);
+}
+
+/** The Result of a run from its models' outcomes and notes: the shard's note, the kernels' note, the summary. */
+function finishRun(models: ModelResult[], notes: string[], shard: Shard | null, count: number): Result {
+  if (shard) notes.push(`shard ${formatShard(shard)}: ${count} model${count === 1 ? '' : 's'} of this run's share`);
   // The row kernels' note when they had to fall back to JavaScript (here or on a worker thread).
   for (const note of kernelNotes()) if (!notes.includes(note)) notes.push(note);
   const result = summarise(models, VERSION, notes);

@@ -1,16 +1,15 @@
 /**
  * The worker pool's guess of each model's work, made before any model is planned (its rows are
  * not known yet: only its descriptor and the sizes of its data files), and the number of worker
- * threads that work pays for. A worker costs a fixed start (loading the bundle, compiling the code
- * again in its own isolate) and memory of its own; a run whose whole work is a fraction of a
- * second is faster on the main thread alone.
+ * threads that work pays for beside the main thread (which evaluates models too). A worker takes
+ * a while to start (it loads the bundle and compiles the code again in its own isolate), during
+ * which the main thread works alone, and memory of its own; a run whose whole work is a fraction
+ * of a second is faster on the main thread alone.
  *
  * The unit is the operation of cost.ts. The constants are rough and were measured on the
  * development machine (2 cores, Node.js 20) with whole runs: the bundled examples (6 models of
- * a few kilobytes) take about 0.35 s on one thread and more with two workers; 1,000 models of
- * 1,000 rows (about 45 kB of CSV each) take about 6 ms a model, and about 3 ms more each on a
- * worker ({@link MODEL_TRANSFER_OPERATIONS}), so they run on the main thread; the benchmark's
- * workload L (139 MB, 25 columns) about 10 s.
+ * a few kilobytes) take about 0.35 s on one thread; 1,000 models of 1,000 rows (about 45 kB of
+ * CSV each) about 6 ms a model; the benchmark's workload L (139 MB, 25 columns) about 10 s.
  */
 import type { Descriptor } from '../config/types.js';
 import type { RepoReader } from '../repo/types.js';
@@ -28,24 +27,22 @@ export const BYTE_COLUMNS = 25;
 export const WORKER_OPERATIONS = 2.5e8;
 
 /**
- * Operations a model costs on a worker thread beyond its own work, about 3 ms: its task and its
- * Result cloned across the threads (a Result is bounded by the run's chart data,
- * result/chart-types.ts) and taken in by the main thread, code warmed up and garbage collected in
- * one more isolate. Measured with whole runs: two workers took 3.7 s more CPU time than the main
- * thread alone for 1,000 models of 1,000 rows, 1.7 s more for 200 models of 2,000 rows.
+ * Operations a model costs the main thread when a worker evaluated it, about 0.5 ms: its task and
+ * its outcome (or the outcome's rendered copy and text, run/model-handoff.ts) cloned across the
+ * threads and taken in.
  */
-export const MODEL_TRANSFER_OPERATIONS = 1.5e6;
-
-/** Operations a worker thread costs to start, about 0.4 s: it loads the bundle and compiles the code again in its own isolate. */
-export const WORKER_START_OPERATIONS = 2e8;
-
+export const MODEL_TRANSFER_OPERATIONS = 2.5e5;
+/**
+ * Operations the main thread does alone while a worker starts, about 0.3 s: the worker loads the
+ * bundle and compiles the code again in its own isolate before it takes its first model.
+ */
+export const WORKER_START_OPERATIONS = 1.5e8;
 /**
  * Workers start only when their run is guessed to take at most this fraction of the serial run's
- * time: a margin for what the guess cannot see (the main thread writing the reports meanwhile,
- * cores shared with other processes).
+ * time: a margin for what the guess cannot see (cores shared with other processes, the code
+ * warming up and collecting garbage in one more isolate).
  */
 export const POOL_PAY_RATIO = 0.8;
-
 /**
  * Design columns guessed from the descriptor alone: 1 for the intercept, then per term its
  * `degree` (polynomial), the count of its inputs (linear), or 4 for any other kind (knots,
@@ -91,13 +88,30 @@ export async function dataBytes(repo: RepoReader, descriptor: Descriptor): Promi
 }
 
 /**
- * Worker threads that the guessed work pays for: W = one per {@link WORKER_OPERATIONS} of the
- * total, at most `jobs` and at most one per model, then fewer while the guessed time of W workers,
- * max(largest model, (total + models x {@link MODEL_TRANSFER_OPERATIONS}) / W) +
- * {@link WORKER_START_OPERATIONS}, is more than {@link POOL_PAY_RATIO} of the total (the serial
- * run); 0 or 1 means the main thread alone.
+ * The guessed time of a run on the main thread and `workers` workers, in operations: the main
+ * thread works alone for {@link WORKER_START_OPERATIONS} while the workers start, then the rest and
+ * the transfer of the models the workers take ({@link MODEL_TRANSFER_OPERATIONS} each, a share
+ * workers / (workers + 1) of the models) are shared by the workers + 1 threads; never less than
+ * the largest model. With no worker, the total.
+ * @param total guessed work of all models
+ * @param largest guessed work of the largest model
+ * @param models number of models
+ * @param workers worker threads beside the main thread (>= 0)
+ */
+export function guessedWall(total: number, largest: number, models: number, workers: number): number {
+  if (workers <= 0 || total <= WORKER_START_OPERATIONS) return total;
+  const threads = workers + 1;
+  const moved = (models * workers) / threads;
+  return Math.max(largest, WORKER_START_OPERATIONS + (total - WORKER_START_OPERATIONS + moved * MODEL_TRANSFER_OPERATIONS) / threads);
+}
+
+/**
+ * Worker threads that the guessed work pays for beside the main thread: at most `jobs` - 1, one
+ * per model beyond the first and one per {@link WORKER_OPERATIONS} of the total, the count with
+ * the least {@link guessedWall} provided that is at most {@link POOL_PAY_RATIO} of the total (the
+ * main thread alone); 0 means the main thread alone.
  * @param works guessed work of each model ({@link guessWork})
- * @param jobs largest number of workers allowed (>= 1)
+ * @param jobs threads allowed in all, the main thread included (>= 1)
  */
 export function workersThatPay(works: readonly number[], jobs: number): number {
   let total = 0;
@@ -106,11 +120,17 @@ export function workersThatPay(works: readonly number[], jobs: number): number {
     total += w;
     largest = Math.max(largest, w);
   }
-  const moved = total + works.length * MODEL_TRANSFER_OPERATIONS;
-  let workers = Math.max(0, Math.min(Math.floor(jobs), works.length, Math.floor(total / WORKER_OPERATIONS)));
-  while (workers >= 2 && Math.max(largest + MODEL_TRANSFER_OPERATIONS, moved / workers) + WORKER_START_OPERATIONS > POOL_PAY_RATIO * total)
-    workers--;
-  return workers;
+  const most = Math.max(0, Math.min(Math.floor(jobs) - 1, works.length - 1, Math.floor(total / WORKER_OPERATIONS)));
+  let best = 0;
+  let bestWall = POOL_PAY_RATIO * total;
+  for (let w = 1; w <= most; w++) {
+    const wall = guessedWall(total, largest, works.length, w);
+    if (wall <= bestWall) {
+      best = w;
+      bestWall = wall;
+    }
+  }
+  return best;
 }
 
 /**

@@ -176,6 +176,7 @@ describe('the spool file beside the report', () => {
           written++;
           return copy;
         },
+        handoff: spool.handoff,
         text: spool.text,
         close: spool.close,
       });

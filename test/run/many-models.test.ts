@@ -29,6 +29,7 @@ import {
   POOL_PAY_RATIO,
   WORKER_OPERATIONS,
   WORKER_START_OPERATIONS,
+  guessedWall,
   workersThatPay,
 } from '../../src/run/work-guess.js';
 
@@ -168,32 +169,38 @@ describe('the pool sizes itself by guessed work', () => {
     expect(guessWork(d, 2 * bytes) - guessWork(d, bytes)).toBeCloseTo(guessWork(d, bytes) - guessWork(d, 0), 6);
   });
 
-  it('starts no worker for small work, one per WORKER_OPERATIONS of work, never more than jobs or models', () => {
+  it('starts no worker for small work, one per WORKER_OPERATIONS of work, never more than jobs - 1 or models - 1', () => {
     expect(workersThatPay([1e6, 1e6, 1e6], 2)).toBe(0);
-    expect(workersThatPay(Array(1000).fill(WORKER_OPERATIONS / 20), 2)).toBe(2);
-    expect(workersThatPay(Array(1000).fill(WORKER_OPERATIONS / 20), 8)).toBe(8);
-    expect(workersThatPay([WORKER_OPERATIONS * 10], 4)).toBe(1);
-    expect(workersThatPay([WORKER_OPERATIONS * 1.5], 4)).toBe(1);
+    expect(workersThatPay(Array(1000).fill(WORKER_OPERATIONS / 20), 2), 'the main thread and one worker').toBe(1);
+    expect(workersThatPay(Array(1000).fill(WORKER_OPERATIONS / 20), 8)).toBe(7);
+    expect(workersThatPay(Array(1000).fill(WORKER_OPERATIONS / 20), 1), 'jobs 1: the main thread alone').toBe(0);
+    expect(workersThatPay([WORKER_OPERATIONS * 10], 4), 'one model runs on the main thread').toBe(0);
+    expect(workersThatPay([WORKER_OPERATIONS * 10, WORKER_OPERATIONS * 10], 4)).toBe(1);
+    expect(workersThatPay(Array(4).fill(WORKER_OPERATIONS), 8), 'one worker per WORKER_OPERATIONS of the total').toBe(3);
   });
 
-  it('starts none when the models are so small that moving them to workers costs more than it saves', () => {
+  it('starts a worker for many small models once the main thread alone would take longer than the start, the transfer and the margin', () => {
     const cubic = { fit: { intercept: true }, terms: [{ kind: 'polynomial', degree: 3 }] } as unknown as Descriptor;
-    // 1,000 models of 1,250 rows (MONO1000, 35 kB of CSV each) and 200 of 2,500 rows (MONO200, 66 kB each): the main thread alone.
+    // 1,000 models of 1,250 rows (MONO1000, 35 kB of CSV each) and 200 of 2,500 rows (MONO200, 66 kB each): the main thread and one worker.
     expect(workersThatPay(Array(1000).fill(guessWork(cubic, 35_000)), 2)).toBe(1);
     expect(workersThatPay(Array(200).fill(guessWork(cubic, 66_000)), 2)).toBe(1);
-    // Two workers pay for 1,000 models of w each when 1,000 (w + transfer) / 2 + start <= 0.8 x 1,000 w.
-    const even = (MODEL_TRANSFER_OPERATIONS / 2 + WORKER_START_OPERATIONS / 1000) / (POOL_PAY_RATIO - 0.5);
-    expect(workersThatPay(Array(1000).fill(even * 1.01), 2)).toBe(2);
-    expect(workersThatPay(Array(1000).fill(even * 0.99), 2)).toBe(1);
+    // One worker pays for n models of w each when start + (n w - start + n/2 x transfer) / 2 <= ratio x n w.
+    const n = 1000;
+    const even = (WORKER_START_OPERATIONS / 2 + (n * MODEL_TRANSFER_OPERATIONS) / 4) / ((POOL_PAY_RATIO - 0.5) * n);
+    expect(guessedWall(n * even, even, n, 1)).toBeCloseTo(POOL_PAY_RATIO * n * even, 0);
+    expect(workersThatPay(Array(n).fill(even * 1.01), 2)).toBe(1);
+    expect(workersThatPay(Array(n).fill(even * 0.99), 2)).toBe(0);
+    // Work that ends before a worker could start: the main thread alone.
+    expect(guessedWall(WORKER_START_OPERATIONS, 1, 100, 1)).toBe(WORKER_START_OPERATIONS);
   });
 
-  it('still starts workers for a few large models (workload L: 139 MB, 25 columns, each)', () => {
+  it('still starts workers for a few large models (workload L: 139 MB, 25 columns, each), not for one large among small ones', () => {
     const wide = { fit: { intercept: true }, terms: [{ kind: 'linear', columns: Array(24).fill('x') }] } as unknown as Descriptor;
     const large = guessWork(wide, 139e6);
-    expect(workersThatPay([large, large], 2)).toBe(2);
-    expect(workersThatPay([large, large, large, large], 4)).toBe(4);
-    // One large model and many small ones: the large one bounds the pool's time.
-    expect(workersThatPay([large, ...Array(10).fill(1e7)], 2)).toBe(1);
+    expect(workersThatPay([large, large], 2)).toBe(1);
+    expect(workersThatPay([large, large, large, large], 4)).toBe(3);
+    // One large model and many small ones: the large one bounds the run's time whatever the threads.
+    expect(workersThatPay([large, ...Array(10).fill(1e7)], 2)).toBe(0);
   });
 
   it('hands out the largest guessed work first, ties in descriptor order', () => {

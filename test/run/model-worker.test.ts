@@ -1,6 +1,6 @@
 import { describe, it, expect, beforeAll, afterAll } from 'vitest';
 import { spawnSync } from 'node:child_process';
-import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { evaluateModels, workerScript } from '../../src/run/model-worker.js';
@@ -39,12 +39,12 @@ function cli(args: string[]): { status: number | null; stdout: string; workers: 
 }
 
 describe('models on worker threads', () => {
-  it('gives byte-identical reports and exit status with 1 and with 2 workers', () => {
+  it('gives byte-identical reports and exit status with 1 thread and with 3 (the main thread and 2 workers)', () => {
     for (const format of ['json', 'text']) {
       const serial = cli(['check', '--root', repo, '--jobs', '1', '--format', format]);
-      const parallel = cli(['check', '--root', repo, '--jobs', '2', '--format', format]);
+      const parallel = cli(['check', '--root', repo, '--jobs', '3', '--format', format]);
       expect(serial.workers, 'no worker with --jobs 1').toBe(0);
-      expect(parallel.workers, `workers started with --jobs 2 (${format})`).toBe(2);
+      expect(parallel.workers, `workers started with --jobs 3 (${format})`).toBe(2);
       expect(parallel.status).toBe(serial.status);
       expect(parallel.stdout, `${format} report`).toBe(serial.stdout);
     }
@@ -61,16 +61,39 @@ describe('models on worker threads', () => {
       });
     const serial = run('1');
     const parallel = run('2');
-    expect((parallel.stderr.match(/create new worker/g) ?? []).length, 'workers started').toBe(2);
+    expect((parallel.stderr.match(/create new worker/g) ?? []).length, 'workers started beside the main thread').toBe(1);
     expect(parallel.stdout).not.toContain('Usage:');
     expect(() => JSON.parse(parallel.stdout)).not.toThrow();
     expect(parallel.stdout).toBe(serial.stdout);
     expect(parallel.status).toBe(serial.status);
   });
 
+  it('through the bundle, the JSON report to a file (each model rendered on the thread that evaluated it): byte for byte the serial one', () => {
+    const bundle = path.join(process.cwd(), 'dist', 'cli', 'index.js');
+    const out = mkdtempSync(path.join(os.tmpdir(), 'fitgate-fleet-out-'));
+    try {
+      const run = (jobs: string) => {
+        const file = path.join(out, `report-${jobs}.json`);
+        const done = spawnSync(process.execPath, [bundle, 'check', '--root', repo, '--jobs', jobs, '--format', 'json', '--out', file], {
+          encoding: 'utf8',
+          env: { ...process.env, NODE_DEBUG: 'worker' },
+        });
+        return { status: done.status, workers: (done.stderr.match(/create new worker/g) ?? []).length, text: readFileSync(file, 'utf8') };
+      };
+      const serial = run('1');
+      const parallel = run('3');
+      expect(parallel.workers, 'the main thread and 2 workers').toBe(2);
+      expect(parallel.text).toBe(serial.text);
+      expect(parallel.status).toBe(serial.status);
+      expect(readdirSync(out).sort(), 'no spool file left behind').toEqual(['report-1.json', 'report-3.json']);
+    } finally {
+      rmSync(out, { recursive: true, force: true });
+    }
+  });
+
   it('matches the in-process serial pipeline, error models included, in descriptor order', async () => {
-    const parallel = cli(['check', '--root', repo, '--jobs', '3', '--format', 'json']);
-    expect(parallel.workers).toBe(3);
+    const parallel = cli(['check', '--root', repo, '--jobs', '4', '--format', 'json']);
+    expect(parallel.workers, 'the main thread and 3 workers').toBe(3);
     const inProcess = await runPipeline(defaultSettings(repo), createMemoryRepository(files), { jobs: 4, root: repo });
     const report = JSON.parse(parallel.stdout) as typeof inProcess;
     expect(report).toEqual(JSON.parse(JSON.stringify(inProcess)));

@@ -5,12 +5,21 @@ import { transpileSources } from './transpile.js';
 
 type Task = { n: number; delayMs?: number; fail?: 'input' | 'error'; spin?: boolean };
 type Reply = { n: number; square: number; thread: number };
+type RunOptions = { order?: number[]; local?: (task: Task) => Promise<Reply>; onResult?: (value: Reply, index: number) => Reply };
+type Limit = { ms: number; onTimeLimit: (task: Task, elapsedMs: number) => Reply };
+type ThreadPool = {
+  run: (tasks: Task[], options?: RunOptions, limit?: Limit) => Promise<Reply[]>;
+  grow: (n: number) => void;
+  size: number;
+  close: () => void;
+};
 type PoolModule = {
   runPool: (
     tasks: Task[],
-    options: { jobs: number; script: string | URL; workerData?: unknown; order?: number[] },
-    limit?: { ms: number; onTimeLimit: (task: Task, elapsedMs: number) => Reply },
+    options: { jobs: number; script: string | URL; workerData?: unknown } & RunOptions,
+    limit?: Limit,
   ) => Promise<Reply[]>;
+  openPool: (start: { jobs: number; script: string | URL; workerData?: unknown }) => ThreadPool;
   defaultJobs: () => number;
 };
 type ErrorsModule = { InputError: new (...args: never[]) => Error & { code: string; location: Record<string, unknown> } };
@@ -137,5 +146,62 @@ describe('runPool', () => {
     const tasks: Task[] = [{ n: 0 }, { n: 1 }];
     for (const order of [[0], [0, 0], [0, 2], [1, -1]])
       await expect(pool.runPool(tasks, { jobs: 1, script, workerData, order }), JSON.stringify(order)).rejects.toThrow(RangeError);
+  });
+
+  it('runs tasks on this thread too (from the far end of the order) and hands each value over as it comes', async () => {
+    const tasks: Task[] = Array.from({ length: 100 }, (_, n) => ({ n, delayMs: 10 }));
+    const seen: number[] = [];
+    const results = await pool.runPool(tasks, {
+      jobs: 1,
+      script,
+      workerData,
+      // This thread's lane: thread 0, and a value the handover can tell apart.
+      local: async (task) => {
+        await new Promise((resolve) => setTimeout(resolve, 10));
+        return { n: task.n, square: task.n * task.n, thread: 0 };
+      },
+      onResult: (value, index) => {
+        seen.push(index);
+        return { ...value, square: -value.square };
+      },
+    });
+    expect(
+      results.map((r) => r.n),
+      'results in task order',
+    ).toEqual(tasks.map((t) => t.n));
+    expect(
+      results.map((r) => r.square),
+      'what onResult returned is kept',
+    ).toEqual(tasks.map((t) => -t.n * t.n));
+    expect(
+      [...seen].sort((a, b) => a - b),
+      'onResult once per task',
+    ).toEqual(tasks.map((_, i) => i));
+    const here = results.filter((r) => r.thread === 0).map((r) => r.n);
+    const there = results.filter((r) => r.thread !== 0).map((r) => r.n);
+    expect(here.length, 'this thread took some tasks').toBeGreaterThan(0);
+    expect(there.length, 'the worker took some tasks').toBeGreaterThan(0);
+    // The worker takes from the front, this thread from the back: every task here comes after every task there.
+    expect(Math.min(...here)).toBeGreaterThan(Math.max(...there));
+  });
+
+  it('keeps its workers between runs, grows on demand and refuses runs once closed', async () => {
+    const threads = pool.openPool({ jobs: 1, script, workerData });
+    try {
+      const first = await threads.run(Array.from({ length: 4 }, (_, n) => ({ n })));
+      const second = await threads.run(Array.from({ length: 4 }, (_, n) => ({ n: n + 10 })));
+      expect(second.map((r) => r.square)).toEqual([100, 121, 144, 169]);
+      expect(new Set([...first, ...second].map((r) => r.thread)).size, 'the same worker served both runs').toBe(1);
+      threads.grow(3);
+      expect(threads.size).toBe(3);
+      threads.grow(2);
+      expect(threads.size, 'grow never shrinks').toBe(3);
+      const third = await threads.run(Array.from({ length: 30 }, (_, n) => ({ n, delayMs: 10 })));
+      expect(new Set(third.map((r) => r.thread)).size, 'the grown pool spreads a run').toBeGreaterThan(1);
+    } finally {
+      threads.close();
+    }
+    await expect(threads.run([{ n: 1 }])).rejects.toThrow('closed');
+    expect(threads.size).toBe(0);
   });
 });
