@@ -259,9 +259,10 @@ export function openPool(start: PoolStart): ThreadPool {
           // Ended from outside: its exit and anything it still sends are ignored from here on.
           workers.delete(w);
           void w.thread.terminate();
-          const [index, ...waiting] = w.held;
+          // The task over its limit, then the ones it held but had not started: those go first to the others.
+          const index = w.held[0];
+          for (let k = w.held.length - 1; k >= 1; k--) returned.unshift(w.held[k]);
           w.held.length = 0;
-          returned.unshift(...waiting);
           if (!finishTask(index, limit.onTimeLimit(tasks[index], performance.now() - w.since)) && left()) spawn();
         };
         active = {
