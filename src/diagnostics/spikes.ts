@@ -25,6 +25,7 @@ import { columnMedian } from './column-median.js';
 import type { Rows } from './cross-validation.js';
 import { inputGrid, type InsideCurve } from './swing.js';
 import { inverseTarget, type TargetTransformKind } from '../data/target-transform.js';
+import { borrowDoubles, returnDoubles } from '../core/scratch.js';
 
 /** One input's figures. */
 export interface SpikeFigures {
@@ -132,7 +133,14 @@ function totalVariation(v: Float64Array, m: number): number {
 /** Total variation of the (weighted) mean target over the input's distinct values in ascending order. */
 function targetVariation(x: Float64Array, y: Float64Array, n: number, weights?: Float64Array, distinct?: Float64Array): number {
   const { means } = meanTargets(x, y, n, weights, distinct);
-  return totalVariation(Float64Array.from(means), means.length);
+  return meanVariation(means);
+}
+
+/** sum |means[j+1] - means[j]|: {@link totalVariation} of a plain array (one loop). */
+function meanVariation(means: readonly number[]): number {
+  let s = 0;
+  for (let j = 1; j < means.length; j++) s += Math.abs(means[j] - means[j - 1]);
+  return s;
 }
 
 /** One interval between neighbouring distinct training values where the curve spikes (see {@link spikeIntervals}). */
@@ -215,7 +223,9 @@ export function spikeIntervals(
  * summed in row order (as a stable sort of the rows by value visits them): the sampled values are
  * sorted once (a native typed-array sort), and each row finds its value's slot by binary search.
  * `distinct`, when given, must be those distinct values of every row (n <= SPIKE_MAX_ROWS), as
- * the sort and packing here make them: they are taken instead of sorting again.
+ * the sort and packing here make them: they are taken instead of sorting again. The working
+ * arrays are lent (core/scratch.ts); each loop is a function of its own (see DEVELOPERS.md,
+ * "Writing hot loops").
  */
 function meanTargets(
   x: Float64Array,
@@ -225,24 +235,59 @@ function meanTargets(
   distinct?: Float64Array,
 ): { values: number[]; means: number[] } {
   const m = Math.min(n, SPIKE_MAX_ROWS);
-  const rows = new Int32Array(m);
-  for (let t = 0; t < m; t++) rows[t] = m === n ? t : Math.floor((t * n) / m);
-  let sorted: Float64Array;
-  let count = 0;
-  if (distinct !== undefined && m === n) {
-    sorted = distinct;
-    count = distinct.length;
-  } else {
-    sorted = new Float64Array(m);
-    for (let t = 0; t < m; t++) sorted[t] = x[rows[t]];
-    sorted.sort();
-    // Distinct values to the front (-0 and +0 are one value, as to `===`).
-    for (let i = 0; i < m; i++) if (count === 0 || sorted[i] !== sorted[count - 1]) sorted[count++] = sorted[i];
+  const own = distinct !== undefined && m === n ? null : borrowDoubles(m);
+  try {
+    let sorted: Float64Array;
+    if (own === null) sorted = distinct as Float64Array;
+    else {
+      sampleRows(x, n, m, own);
+      own.sort();
+      sorted = own.subarray(0, packDistinct(own, m));
+    }
+    const sums = borrowDoubles(sorted.length);
+    const totals = borrowDoubles(sorted.length);
+    try {
+      sumBySlot(x, y, n, m, weights, sorted, sums, totals);
+      return meansOfSlots(sorted, sums, totals);
+    } finally {
+      returnDoubles(totals);
+      returnDoubles(sums);
+    }
+  } finally {
+    if (own !== null) returnDoubles(own);
   }
-  const sums = new Float64Array(count);
-  const totals = new Float64Array(count);
+}
+
+/** out[t] = x[row t] for the m rows {@link meanTargets} reads: every row when m = n, else row floor(t n / m). */
+function sampleRows(x: Float64Array, n: number, m: number, out: Float64Array): void {
+  for (let t = 0; t < m; t++) out[t] = x[m === n ? t : Math.floor((t * n) / m)];
+}
+
+/** Packs the distinct values of the ascending a[0..n) to its front (-0 and +0 are one value, as to `===`); returns how many. */
+function packDistinct(a: Float64Array, n: number): number {
+  let count = 0;
+  for (let i = 0; i < n; i++) if (count === 0 || a[i] !== a[count - 1]) a[count++] = a[i];
+  return count;
+}
+
+/**
+ * Adds each read row's target (times its weight) to sums[j] and its weight (1 without weights) to
+ * totals[j], j the first slot of the ascending `sorted` not below the row's value (binary search),
+ * rows in file order.
+ */
+function sumBySlot(
+  x: Float64Array,
+  y: Float64Array,
+  n: number,
+  m: number,
+  weights: Float64Array | undefined,
+  sorted: Float64Array,
+  sums: Float64Array,
+  totals: Float64Array,
+): void {
+  const count = sorted.length;
   for (let t = 0; t < m; t++) {
-    const r = rows[t];
+    const r = m === n ? t : Math.floor((t * n) / m);
     const v = x[r];
     let lo = 0;
     let hi = count - 1;
@@ -255,9 +300,13 @@ function meanTargets(
     sums[lo] += weights === undefined ? y[r] : w * y[r];
     totals[lo] += w;
   }
+}
+
+/** The finite values of `sorted` whose total weight is above 0, and their means sums / totals. */
+function meansOfSlots(sorted: Float64Array, sums: Float64Array, totals: Float64Array): { values: number[]; means: number[] } {
   const values: number[] = [];
   const means: number[] = [];
-  for (let j = 0; j < count; j++) {
+  for (let j = 0; j < sorted.length; j++) {
     if (Number.isFinite(sorted[j]) && totals[j] > 0) {
       values.push(sorted[j]);
       means.push(sums[j] / totals[j]);

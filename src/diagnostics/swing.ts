@@ -12,6 +12,7 @@ import { sortFloat64 } from './radix-sort.js';
 import { nearestPairs } from './nearest-neighbours.js';
 import { checkDeadline } from '../core/deadline.js';
 import { inverseTarget, type TargetTransformKind } from '../data/target-transform.js';
+import { borrowDoubles, returnDoubles } from '../core/scratch.js';
 
 /** Options of {@link measureSwing}; every field has a default. */
 export interface SwingOptions {
@@ -183,11 +184,18 @@ function gridFromSorted(
   const width = hi - lo;
   const gaps = widestGaps(distinct, maxGaps, work);
   const per = Math.max(1, Math.min(perGap, Math.floor((maxGaps * perGap) / gaps.length)));
+  // The gap points go behind room for the uniform points, which wait in a lent buffer: the two
+  // runs are merged into the one array.
   const inside = new Float64Array(uniform + gaps.length * per);
-  fillUniform(inside, uniform, lo, hi);
-  const w = fillGaps(inside, uniform, distinct, gaps, per);
-  const beyond = marginGrid(lo, hi, margin * width, marginPoints);
-  return { inside: uniqueOfRuns(inside, uniform, w), beyond: unique(beyond, beyond.length), gaps: count - 1 };
+  const even = borrowDoubles(uniform);
+  try {
+    fillUniform(even, uniform, lo, hi);
+    const w = fillGaps(inside, uniform, distinct, gaps, per);
+    const beyond = marginGrid(lo, hi, margin * width, marginPoints);
+    return { inside: uniqueOfRuns(even, inside, uniform, w), beyond: unique(beyond, beyond.length), gaps: count - 1 };
+  } finally {
+    returnDoubles(even);
+  }
 }
 
 // The loops of the grid are functions of their own, each a loop and its return (see
@@ -201,14 +209,17 @@ function packDistinct(a: Float64Array, n: number): number {
 }
 
 /**
- * {@link unique} of xs[0..length) when xs[0..split) and xs[split..length) are each ascending (the
- * uniform points and the gap points): one linear merge instead of a sort, with the sort's result
- * (-0 before +0). Falls back to {@link unique} when a run is out of order or holds a NaN.
+ * {@link unique} of the points first[0..split) and xs[split..length) when each run is ascending
+ * (the uniform points and the gap points), written to the front of `xs` (returned as its
+ * subarray): one linear merge instead of a sort, with the sort's result (-0 before +0). Falls back
+ * to {@link unique} when a run is out of order or holds a NaN.
  */
-function uniqueOfRuns(xs: Float64Array, split: number, length: number): Float64Array {
-  if (!ascending(xs, 0, split) || !ascending(xs, split, length)) return unique(xs, length);
-  const out = new Float64Array(length);
-  return out.subarray(0, mergeRuns(xs, split, length, out));
+function uniqueOfRuns(first: Float64Array, xs: Float64Array, split: number, length: number): Float64Array {
+  if (!ascending(first, 0, split) || !ascending(xs, split, length)) {
+    xs.set(first.subarray(0, split));
+    return unique(xs, length);
+  }
+  return xs.subarray(0, mergeRuns(first, xs, split, length));
 }
 
 /** True when xs[from..to) holds no NaN and is ascending in the order of the built-in sort. */
@@ -221,17 +232,19 @@ function ascending(xs: Float64Array, from: number, to: number): boolean {
 }
 
 /**
- * Writes to `out` the distinct values of the merge of the ascending runs xs[0..split) and
+ * Writes to xs[0..) the distinct values of the merge of the ascending runs first[0..split) and
  * xs[split..length) (equal values: the first run's first; of values equal to `===`, -0 and +0,
- * the first is kept, as {@link packDistinct} keeps it) and returns how many.
+ * the first is kept, as {@link packDistinct} keeps it) and returns how many. In place: a value
+ * taken from `first` is written below the next unread one of `xs` (fewer than `split` taken from
+ * `first` so far), and one taken from `xs` at or below where it was read.
  */
-function mergeRuns(xs: Float64Array, split: number, length: number, out: Float64Array): number {
+function mergeRuns(first: Float64Array, xs: Float64Array, split: number, length: number): number {
   let i = 0;
   let j = split;
   let w = 0;
   for (let k = 0; k < length; k++) {
-    const v = j >= length || (i < split && !sortsBefore(xs[j], xs[i])) ? xs[i++] : xs[j++];
-    if (w === 0 || v !== out[w - 1]) out[w++] = v;
+    const v = j >= length || (i < split && !sortsBefore(xs[j], first[i])) ? first[i++] : xs[j++];
+    if (w === 0 || v !== xs[w - 1]) xs[w++] = v;
   }
   return w;
 }
@@ -400,16 +413,12 @@ function predictorAlong(
 ): (xs: Float64Array) => Float64Array {
   const name = design.inputs[c];
   const varying = design.terms.map((t) => t.inputs.includes(name));
-  const constantColumns = (n: number): Float64Array[] => design.inputs.map((_, k) => new Float64Array(n).fill(fixed[k]));
-  if (readByEveryTerm(design, c)) {
-    return (xs) => {
-      const columns = constantColumns(xs.length);
-      columns[c] = xs;
-      return predictRows(design, { inputs: columns, rows: xs.length }, coefficients);
-    };
-  }
+  // Column c is `xs` itself; only the other inputs get a column of their fixed value.
+  const columnsAt = (xs: Float64Array): Float64Array[] =>
+    design.inputs.map((_, k) => (k === c ? xs : new Float64Array(xs.length).fill(fixed[k])));
+  if (readByEveryTerm(design, c)) return (xs) => predictRows(design, { inputs: columnsAt(xs), rows: xs.length }, coefficients);
   // The fixed part: intercept plus every term that does not read input c, at the fixed values.
-  const row = design.fill(constantColumns(1), 0, 1);
+  const row = design.fill(columnsAt(Float64Array.of(fixed[c])), 0, 1);
   let base = design.intercept ? coefficients[0] : 0;
   const sub: number[] = [];
   design.terms.forEach((t, i) => {
@@ -653,39 +662,48 @@ export function planSwing(design: Design, train: Rows, options: SwingOptions = {
   const n = train.rows;
   const d = design.inputs.length;
   const [ylo, yhi] = range(train.y, n);
-  // One scratch buffer for every input: selection for the medians, then a typed sort for the grid.
-  const scratch = new Float64Array(n);
-  const medians = train.inputs.map((col) => columnMedian(col, n, scratch));
-  const radixScratch = new Uint32Array(2 * n);
+  // One scratch buffer for every input: selection for the medians, then a typed sort for the
+  // grid; a second one for the sort's and the widest gaps' work. Both are lent (core/scratch.ts):
+  // nothing kept in the plan reads them.
+  const scratch = borrowDoubles(n);
+  const work = borrowDoubles(n);
+  const radixScratch = new Uint32Array(work.buffer, work.byteOffset, 2 * n);
   const grids: SwingGrid[] = [];
-  const gridOptions: SwingOptions = { ...options, maxGaps: Math.ceil((options.maxGaps ?? SWING_DEFAULTS.maxGaps) / Math.max(1, d)) };
-  for (let c = 0; c < d; c++) {
-    // A category input takes only its level codes: scanned level by level, no margins.
-    const discrete = design.terms.find((t) => t.discreteValues !== undefined && t.inputs.includes(design.inputs[c]))?.discreteValues;
-    if (discrete !== undefined) {
-      if (discrete.length >= 2) grids.push({ input: c, inside: Float64Array.from(discrete), beyond: new Float64Array(0) });
-      continue;
+  let medians: number[];
+  try {
+    medians = train.inputs.map((col) => columnMedian(col, n, scratch));
+    const gridOptions: SwingOptions = { ...options, maxGaps: Math.ceil((options.maxGaps ?? SWING_DEFAULTS.maxGaps) / Math.max(1, d)) };
+    for (let c = 0; c < d; c++) {
+      // A category input takes only its level codes: scanned level by level, no margins.
+      const discrete = design.terms.find((t) => t.discreteValues !== undefined && t.inputs.includes(design.inputs[c]))?.discreteValues;
+      if (discrete !== undefined) {
+        if (discrete.length >= 2) grids.push({ input: c, inside: Float64Array.from(discrete), beyond: new Float64Array(0) });
+        continue;
+      }
+      const len = gridSample(train.inputs[c], n, options.maxGridRows ?? SWING_DEFAULTS.maxGridRows, scratch);
+      const sample = scratch.subarray(0, len);
+      // An input every term reads on one transformed scale (log x ...) is scanned on that scale.
+      const onScale = inputScaleOf(design, c);
+      if (onScale !== null) for (let i = 0; i < len; i++) sample[i] = onScale.forward(sample[i]);
+      const grid = gridFromSorted(sortFloat64(sample, radixScratch), len, gridOptions, work.subarray(0, len));
+      if (onScale !== null) {
+        grid.inside = grid.inside.map(onScale.inverse);
+        grid.beyond = grid.beyond.map(onScale.inverse);
+      }
+      const whole = len === n && onScale === null && defaultInsideGrid(options, gridOptions, grid.gaps);
+      if (grid.inside.length > 0) {
+        const beyond = admitted(design, c, grid.beyond);
+        // The grid packed the distinct values to the front of the sorted sample (every row here).
+        grids.push(
+          whole
+            ? { input: c, inside: grid.inside, beyond, whole, distinct: sample.slice(0, grid.gaps + 1) }
+            : { input: c, inside: grid.inside, beyond, whole },
+        );
+      }
     }
-    const len = gridSample(train.inputs[c], n, options.maxGridRows ?? SWING_DEFAULTS.maxGridRows, scratch);
-    const sample = scratch.subarray(0, len);
-    // An input every term reads on one transformed scale (log x ...) is scanned on that scale.
-    const onScale = inputScaleOf(design, c);
-    if (onScale !== null) for (let i = 0; i < len; i++) sample[i] = onScale.forward(sample[i]);
-    const grid = gridFromSorted(sortFloat64(sample, radixScratch), len, gridOptions, new Float64Array(radixScratch.buffer, 0, len));
-    if (onScale !== null) {
-      grid.inside = grid.inside.map(onScale.inverse);
-      grid.beyond = grid.beyond.map(onScale.inverse);
-    }
-    const whole = len === n && onScale === null && defaultInsideGrid(options, gridOptions, grid.gaps);
-    if (grid.inside.length > 0) {
-      const beyond = admitted(design, c, grid.beyond);
-      // The grid packed the distinct values to the front of the sorted sample (every row here).
-      grids.push(
-        whole
-          ? { input: c, inside: grid.inside, beyond, whole, distinct: sample.slice(0, grid.gaps + 1) }
-          : { input: c, inside: grid.inside, beyond, whole },
-      );
-    }
+  } finally {
+    returnDoubles(work);
+    returnDoubles(scratch);
   }
 
   // Several inputs: segments between sampled rows and their nearest neighbours.
