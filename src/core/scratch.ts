@@ -11,8 +11,13 @@
  * it back only when nothing reads or writes it any more (in a `finally`), and must not keep it.
  */
 
-/** Buffers the pool keeps at most. */
-export const SCRATCH_KEPT = 4;
+/**
+ * Buffers the pool keeps at most (8 MiB in all at worst). A model's diagnostics hold up to five
+ * at once, of several sizes (the swing scan: its grid, the predictions there and a design block;
+ * planSwing's two row-sized work arrays and the grid's uniform points), so that fewer would let
+ * the small ones crowd out a size asked for again by the next model.
+ */
+export const SCRATCH_KEPT = 8;
 
 /** Largest buffer the pool keeps (1 MiB: a design block is about 512 KiB, design/blocks.ts). */
 export const SCRATCH_MAX_BYTES = 1 << 20;

@@ -40,9 +40,17 @@ export function forEachBlock(
   }
 }
 
-/** Predictions Phi w for every row of `data`, block by block (length `data.rows`). */
-export function predictRows(design: Design, data: Pick<ModelData, 'inputs' | 'rows'>, w: ArrayLike<number>): Float64Array {
-  const out = new Float64Array(data.rows);
+/**
+ * Predictions Phi w for every row of `data`, block by block (length `data.rows`).
+ * @param out where to write them: all zeros, of length `data.rows` (e.g. lent by core/scratch.ts);
+ *   default a new array
+ */
+export function predictRows(
+  design: Design,
+  data: Pick<ModelData, 'inputs' | 'rows'>,
+  w: ArrayLike<number>,
+  out: Float64Array = new Float64Array(data.rows),
+): Float64Array {
   forEachBlock(design, data, (X, start, m) => addProducts(out, start, X, m, w, design.p));
   return out;
 }

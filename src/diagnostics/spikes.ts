@@ -23,7 +23,7 @@ import type { Design } from '../design/design-matrix.js';
 import { predictRows } from '../design/blocks.js';
 import { columnMedian } from './column-median.js';
 import type { Rows } from './cross-validation.js';
-import { inputGrid, type InsideCurve } from './swing.js';
+import { inputGrid, totalVariation, type InsideCurve } from './swing.js';
 import { inverseTarget, type TargetTransformKind } from '../data/target-transform.js';
 import { borrowDoubles, returnDoubles } from '../core/scratch.js';
 
@@ -58,8 +58,8 @@ export const SPIKE_MAX_ROWS = 20_000;
  *   curve is back-transformed) and the training targets as written (the data variation is theirs);
  *   default none (the fit's own scale)
  * @param known curves along inputs that the swing scan already predicted on the same design, rows
- *   and coefficients (swing.ts {@link InsideCurve}): one whose back transform is that of
- *   `original` is taken instead of predicting the same points again; default none
+ *   and coefficients (swing.ts {@link InsideCurve}): the length and variation of one whose back
+ *   transform is that of `original` are taken instead of predicting the same points again; default none
  */
 export function measureSpikes(
   design: Design,
@@ -81,11 +81,16 @@ export function measureSpikes(
   design.inputs.forEach((name, c) => {
     // Category inputs have no order between their levels: no variation along them to compare.
     if (design.terms.some((t) => t.discreteValues !== undefined && t.inputs.includes(name))) return;
-    const curve =
-      known.find((k) => k.input === c && k.backTransform === original?.kind)?.prediction ??
-      curveAlong(design, train, coefficients, c, mediansOnce(), original);
-    if (curve.length < 2) return;
-    const curveVariation = totalVariation(curve, curve.length);
+    const scanned = known.find((k) => k.input === c && k.backTransform === original?.kind);
+    let points: number;
+    let curveVariation: number;
+    if (scanned !== undefined) ({ points, variation: curveVariation } = scanned);
+    else {
+      const curve = curveAlong(design, train, coefficients, c, mediansOnce(), original);
+      points = curve.length;
+      curveVariation = totalVariation(curve, curve.length);
+    }
+    if (points < 2) return;
     // The swing scan sorted every row's value of this input already: its distinct values serve
     // when the data variation reads every row too (at most SPIKE_MAX_ROWS).
     const distinct = n <= SPIKE_MAX_ROWS ? known.find((k) => k.input === c && k.distinct !== undefined)?.distinct : undefined;
@@ -121,13 +126,6 @@ function curveAlong(
   const curve = predictRows(design, { inputs: columns, rows: grid.length }, coefficients);
   if (original !== undefined) for (let i = 0; i < curve.length; i++) curve[i] = inverseTarget(original.kind, curve[i]);
   return curve;
-}
-
-/** sum |v[k+1] - v[k]| over the first m values (one loop; see DEVELOPERS.md, "Writing hot loops"). */
-function totalVariation(v: Float64Array, m: number): number {
-  let s = 0;
-  for (let k = 1; k < m; k++) s += Math.abs(v[k] - v[k - 1]);
-  return s;
 }
 
 /** Total variation of the (weighted) mean target over the input's distinct values in ascending order. */

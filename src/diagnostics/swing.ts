@@ -158,12 +158,15 @@ export function excursion(prediction: ArrayLike<number>, lo: number, hi: number)
 export function inputGrid(values: ArrayLike<number>, options: SwingOptions = {}): { inside: Float64Array; beyond: Float64Array } {
   const sorted = sortFloat64(Float64Array.from(values));
   const { inside, beyond } = gridFromSorted(sorted, sorted.length, options);
-  return { inside, beyond };
+  const own = inside.slice();
+  returnDoubles(inside);
+  return { inside: own, beyond };
 }
 
 /**
  * {@link inputGrid} from the input's values already sorted ascending in `sorted[0..n)`; the
- * array is overwritten (its distinct values are packed to the front).
+ * array is overwritten (its distinct values are packed to the front). `inside` is lent
+ * (core/scratch.ts): the caller gives it back with `returnDoubles` once nothing reads it.
  */
 function gridFromSorted(
   sorted: Float64Array,
@@ -184,9 +187,9 @@ function gridFromSorted(
   const width = hi - lo;
   const gaps = widestGaps(distinct, maxGaps, work);
   const per = Math.max(1, Math.min(perGap, Math.floor((maxGaps * perGap) / gaps.length)));
-  // The gap points go behind room for the uniform points, which wait in a lent buffer: the two
-  // runs are merged into the one array.
-  const inside = new Float64Array(uniform + gaps.length * per);
+  // The gap points go behind room for the uniform points, which wait in a second lent buffer: the
+  // two runs are merged into the one array.
+  const inside = borrowDoubles(uniform + gaps.length * per);
   const even = borrowDoubles(uniform);
   try {
     fillUniform(even, uniform, lo, hi);
@@ -254,10 +257,10 @@ function sortsBefore(a: number, b: number): boolean {
   return a < b || (a === 0 && b === 0 && Object.is(a, -0) && !Object.is(b, -0));
 }
 
-/** The distinct values of xs[0..length), ascending (xs is reordered). */
+/** The distinct values of xs[0..length), ascending, as a subarray of xs (xs is reordered). */
 function unique(xs: Float64Array, length: number): Float64Array {
   const u = sortFloat64(xs.subarray(0, length));
-  return u.slice(0, packDistinct(u, u.length));
+  return u.subarray(0, packDistinct(u, u.length));
 }
 
 /** out[0..count): count evenly spaced points from lo to hi, both included (hi exactly). */
@@ -403,20 +406,21 @@ function withKept(even: number[], kept: readonly number[]): number[] {
  * @param coefficients fitted coefficients (length p)
  * @param c index of the varying input in `design.inputs`
  * @param fixed value of every input (entry c is ignored)
- * @returns predict(xs): predictions at the points xs of input c
+ * @returns predict(xs, out): predictions at the points xs of input c, written to `out` when given
+ *   (all zeros, of length xs.length)
  */
 function predictorAlong(
   design: Design,
   coefficients: ArrayLike<number>,
   c: number,
   fixed: readonly number[],
-): (xs: Float64Array) => Float64Array {
+): (xs: Float64Array, out?: Float64Array) => Float64Array {
   const name = design.inputs[c];
   const varying = design.terms.map((t) => t.inputs.includes(name));
   // Column c is `xs` itself; only the other inputs get a column of their fixed value.
   const columnsAt = (xs: Float64Array): Float64Array[] =>
     design.inputs.map((_, k) => (k === c ? xs : new Float64Array(xs.length).fill(fixed[k])));
-  if (readByEveryTerm(design, c)) return (xs) => predictRows(design, { inputs: columnsAt(xs), rows: xs.length }, coefficients);
+  if (readByEveryTerm(design, c)) return (xs, out) => predictRows(design, { inputs: columnsAt(xs), rows: xs.length }, coefficients, out);
   // The fixed part: intercept plus every term that does not read input c, at the fixed values.
   const row = design.fill(columnsAt(Float64Array.of(fixed[c])), 0, 1);
   let base = design.intercept ? coefficients[0] : 0;
@@ -434,13 +438,13 @@ function predictorAlong(
     false,
   );
   const fixedByName = new Map(design.inputs.map((input, k) => [input, fixed[k]]));
-  return (xs) => {
+  return (xs, out) => {
     const columns = partial.inputs.map((input) =>
       input === name ? xs : new Float64Array(xs.length).fill(fixedByName.get(input) ?? Number.NaN),
     );
-    const out = predictRows(partial, { inputs: columns, rows: xs.length }, sub);
-    for (let i = 0; i < out.length; i++) out[i] += base;
-    return out;
+    const pred = predictRows(partial, { inputs: columns, rows: xs.length }, sub, out);
+    for (let i = 0; i < pred.length; i++) pred[i] += base;
+    return pred;
   };
 }
 
@@ -607,6 +611,11 @@ export interface SwingPlan {
   maxCurves: number;
   /** {@link SwingOptions.backTransform}, or absent. */
   backTransform?: TargetTransformKind;
+  /**
+   * The grids' arrays lent by core/scratch.ts ({@link measureSwing} gives them back once the plan
+   * is scored: nothing in the {@link Swing} or the {@link InsideCurve}s reads them); default none.
+   */
+  lent?: Float64Array[];
 }
 
 /**
@@ -669,6 +678,7 @@ export function planSwing(design: Design, train: Rows, options: SwingOptions = {
   const work = borrowDoubles(n);
   const radixScratch = new Uint32Array(work.buffer, work.byteOffset, 2 * n);
   const grids: SwingGrid[] = [];
+  const lent: Float64Array[] = [];
   let medians: number[];
   try {
     medians = train.inputs.map((col) => columnMedian(col, n, scratch));
@@ -687,9 +697,11 @@ export function planSwing(design: Design, train: Rows, options: SwingOptions = {
       if (onScale !== null) for (let i = 0; i < len; i++) sample[i] = onScale.forward(sample[i]);
       const grid = gridFromSorted(sortFloat64(sample, radixScratch), len, gridOptions, work.subarray(0, len));
       if (onScale !== null) {
-        grid.inside = grid.inside.map(onScale.inverse);
+        const onInput = grid.inside.map(onScale.inverse);
+        returnDoubles(grid.inside);
+        grid.inside = onInput;
         grid.beyond = grid.beyond.map(onScale.inverse);
-      }
+      } else lent.push(grid.inside);
       const whole = len === n && onScale === null && defaultInsideGrid(options, gridOptions, grid.gaps);
       if (grid.inside.length > 0) {
         const beyond = admitted(design, c, grid.beyond);
@@ -740,6 +752,7 @@ export function planSwing(design: Design, train: Rows, options: SwingOptions = {
     maxCurvePoints,
     maxCurves,
     ...(back !== undefined ? { backTransform: back } : {}),
+    lent,
   };
 }
 
@@ -786,17 +799,34 @@ function admitted(design: Design, c: number, points: Float64Array): Float64Array
 }
 
 /**
- * The predictions along one input at the points of its whole grid ({@link SwingGrid.whole}), the
- * other inputs at their training medians, predicted with the whole design: what the spike figure
- * computes along that input (diagnostics/spikes.ts), kept so that it is computed once.
+ * Total variation of a sampled curve: sum |v[k+1] - v[k]| over its first m values (Jordan 1881;
+ * of a sampled curve, the sum of absolute increments). One loop (see DEVELOPERS.md, "Writing hot
+ * loops").
+ * @param v the curve's values in order
+ * @param m values read (m <= v.length)
+ */
+export function totalVariation(v: Float64Array, m: number): number {
+  let s = 0;
+  for (let k = 1; k < m; k++) s += Math.abs(v[k] - v[k - 1]);
+  return s;
+}
+
+/**
+ * The curve of predictions along one input at the points of its whole grid
+ * ({@link SwingGrid.whole}), the other inputs at their training medians, predicted with the whole
+ * design: what the spike figure measures along that input (diagnostics/spikes.ts), kept as its
+ * length and total variation so that it is computed once (the predictions themselves are not kept).
  */
 export interface InsideCurve {
   /** Index of the input in `design.inputs`. */
   input: number;
-  /** The grid's inside points, ascending. */
-  grid: Float64Array;
-  /** The predictions at `grid`, back-transformed under `backTransform`. */
-  prediction: Float64Array;
+  /** Points of the grid (inside the range, ascending). */
+  points: number;
+  /**
+   * {@link totalVariation} of the predictions at the grid's points in ascending order,
+   * back-transformed under `backTransform`.
+   */
+  variation: number;
   /** The plan's {@link SwingPlan.backTransform}, or absent. */
   backTransform?: TargetTransformKind;
   /** The input's distinct training values, ascending ({@link SwingGrid.distinct}), or absent. */
@@ -861,34 +891,40 @@ export function scoreSwing(plan: SwingPlan, design: Design, coefficients: ArrayL
     const c = grid.input;
     const along = (xs: Float64Array): Float64Array[] => design.inputs.map((_, k) => (k === c ? xs : constant(k, xs.length)));
     const predict = predictorAlong(design, coefficients, c, medians);
-    const pin = score(along(grid.inside), grid.inside.length, 'inside', predict(grid.inside));
-    const pout = score(along(grid.beyond), grid.beyond.length, 'beyond', predict(grid.beyond));
-    if (insideCurves !== undefined && grid.whole === true && readByEveryTerm(design, c)) {
-      insideCurves.push({
-        input: c,
-        grid: grid.inside,
-        prediction: pin,
-        ...(plan.backTransform !== undefined ? { backTransform: plan.backTransform } : {}),
-        ...(grid.distinct !== undefined ? { distinct: grid.distinct } : {}),
+    // The inside predictions are lent (core/scratch.ts): only figures and copies leave the loop.
+    const pin = borrowDoubles(grid.inside.length);
+    try {
+      score(along(grid.inside), grid.inside.length, 'inside', predict(grid.inside, pin));
+      const pout = score(along(grid.beyond), grid.beyond.length, 'beyond', predict(grid.beyond));
+      if (insideCurves !== undefined && grid.whole === true && readByEveryTerm(design, c)) {
+        insideCurves.push({
+          input: c,
+          points: pin.length,
+          variation: totalVariation(pin, pin.length),
+          ...(plan.backTransform !== undefined ? { backTransform: plan.backTransform } : {}),
+          ...(grid.distinct !== undefined ? { distinct: grid.distinct } : {}),
+        });
+      }
+      if (curves.length >= plan.maxCurves) continue;
+      // Curve for charts: all points ascending (inside and margins merged), thinned with the
+      // extremes kept; only the kept points are read out of the merged order.
+      const place = mergedPlaces(grid.inside, grid.beyond);
+      const [imin, imax] = mergedExtremes(pin, pout, place);
+      const keep = thinIndices(grid.inside.length + grid.beyond.length, maxCurvePoints, [imax, imin]);
+      const others: Record<string, number> = Object.create(null);
+      design.inputs.forEach((name, k) => {
+        if (k !== c) others[name] = medians[k];
       });
+      curves.push({
+        input: design.inputs[c],
+        others,
+        range: [grid.inside[0], grid.inside[grid.inside.length - 1]],
+        x: mergedValues(grid.inside, grid.beyond, place, keep),
+        prediction: mergedValues(pin, pout, place, keep),
+      });
+    } finally {
+      returnDoubles(pin);
     }
-    if (curves.length >= plan.maxCurves) continue;
-    // Curve for charts: all points ascending (inside and margins merged), thinned with the
-    // extremes kept; only the kept points are read out of the merged order.
-    const place = mergedPlaces(grid.inside, grid.beyond);
-    const [imin, imax] = mergedExtremes(pin, pout, place);
-    const keep = thinIndices(grid.inside.length + grid.beyond.length, maxCurvePoints, [imax, imin]);
-    const others: Record<string, number> = Object.create(null);
-    design.inputs.forEach((name, k) => {
-      if (k !== c) others[name] = medians[k];
-    });
-    curves.push({
-      input: design.inputs[c],
-      others,
-      range: [grid.inside[0], grid.inside[grid.inside.length - 1]],
-      x: mergedValues(grid.inside, grid.beyond, place, keep),
-      prediction: mergedValues(pin, pout, place, keep),
-    });
   }
   if (plan.segmentColumns !== null) score(plan.segmentColumns, plan.segmentColumns[0].length, 'inside');
 
@@ -930,5 +966,10 @@ export function measureSwing(
   options: SwingOptions = {},
   insideCurves?: InsideCurve[],
 ): Swing {
-  return scoreSwing(planSwing(design, train, options), design, coefficients, insideCurves);
+  const plan = planSwing(design, train, options);
+  try {
+    return scoreSwing(plan, design, coefficients, insideCurves);
+  } finally {
+    for (const array of plan.lent ?? []) returnDoubles(array);
+  }
 }
