@@ -51,12 +51,34 @@ export function borrowDoubles(length: number): Float64Array {
 }
 
 /**
+ * A zero-filled array of `length` 32-bit integers, lent from the same pool as
+ * {@link borrowDoubles} (its buffer may be larger); give it back with {@link returnInts}.
+ * @param length integers wanted (a non-negative integer)
+ */
+export function borrowInts(length: number): Int32Array {
+  const doubles = borrowDoubles(Math.ceil(length / 2));
+  return new Int32Array(doubles.buffer, doubles.byteOffset, length);
+}
+
+/**
+ * Gives an array from {@link borrowInts} back to the pool, as {@link returnDoubles} does.
+ * @param array the borrowed array
+ */
+export function returnInts(array: Int32Array): void {
+  keep(array.buffer);
+}
+
+/**
  * Gives an array from {@link borrowDoubles} back to the pool (kept when there is room and it is not
  * too large; given twice, it is kept once). The caller must not use it afterwards.
  * @param array the borrowed array
  */
 export function returnDoubles(array: Float64Array): void {
-  const buffer = array.buffer;
+  keep(array.buffer);
+}
+
+/** Keeps a lent buffer for the next borrower, when it is of a kept size and there is room. */
+function keep(buffer: ArrayBufferLike): void {
   if (!(buffer instanceof ArrayBuffer) || buffer.byteLength > SCRATCH_MAX_BYTES || buffer.byteLength < SCRATCH_MIN_BYTES) return;
   if (spare.length >= SCRATCH_KEPT || spare.includes(buffer)) return;
   spare.push(buffer);

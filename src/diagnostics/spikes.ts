@@ -25,7 +25,7 @@ import { columnMedian } from './column-median.js';
 import type { Rows } from './cross-validation.js';
 import { inputGrid, totalVariation, type InsideCurve } from './swing.js';
 import { inverseTarget, type TargetTransformKind } from '../data/target-transform.js';
-import { borrowDoubles, returnDoubles } from '../core/scratch.js';
+import { borrowDoubles, borrowInts, returnDoubles, returnInts } from '../core/scratch.js';
 
 /** One input's figures. */
 export interface SpikeFigures {
@@ -219,7 +219,8 @@ export function spikeIntervals(
  * and the mean y at each: the plain mean, or with row weights the weighted mean sum w y / sum w (a
  * value whose rows all weigh 0 is left out: it takes no part in the fit). Each value's targets are
  * summed in row order (as a stable sort of the rows by value visits them): the sampled values are
- * sorted once (a native typed-array sort), and each row finds its value's slot by binary search.
+ * sorted once (a native typed-array sort), and each row finds its value's slot through equal-width
+ * buckets of the range ({@link SlotBuckets}) or by binary search.
  * `distinct`, when given, must be those distinct values of every row (n <= SPIKE_MAX_ROWS), as
  * the sort and packing here make them: they are taken instead of sorting again. The working
  * arrays are lent (core/scratch.ts); each loop is a function of its own (see DEVELOPERS.md,
@@ -244,10 +245,13 @@ function meanTargets(
     }
     const sums = borrowDoubles(sorted.length);
     const totals = borrowDoubles(sorted.length);
+    const buckets = borrowInts(sorted.length);
     try {
-      sumBySlot(x, y, n, m, weights, sorted, sums, totals);
+      const found = slotBuckets(sorted, buckets);
+      sumBySlot(x, y, n, m, weights, sorted, found, sums, totals);
       return meansOfSlots(sorted, sums, totals);
     } finally {
+      returnInts(buckets);
       returnDoubles(totals);
       returnDoubles(sums);
     }
@@ -269,9 +273,52 @@ function packDistinct(a: Float64Array, n: number): number {
 }
 
 /**
+ * Equal-width buckets over the range of the ascending `sorted` (all finite, at least two values),
+ * to find a value's slot without a binary search: bucket b of value v is
+ * min(B - 1, floor((v - lo) * B / (hi - lo))), B = table.length, and table[b] the first slot whose
+ * value's bucket is b or later. The bucket never falls as the value rises (each operation rounds
+ * monotonically), so every slot before table[b] holds a value below every value of bucket b: the
+ * slot of v is found by stepping up from table[bucket of v] (a step or two for spread values).
+ */
+interface SlotBuckets {
+  table: Int32Array;
+  lo: number;
+  hi: number;
+  scale: number;
+}
+
+/** {@link SlotBuckets} of `sorted` in `table` (of sorted.length entries), or null when its ends are not finite or the range has no usable width. */
+function slotBuckets(sorted: Float64Array, table: Int32Array): SlotBuckets | null {
+  const count = sorted.length;
+  if (count < 2) return null;
+  const lo = sorted[0];
+  const hi = sorted[count - 1];
+  const scale = count / (hi - lo);
+  if (!Number.isFinite(lo) || !Number.isFinite(hi) || !Number.isFinite(scale) || !(scale > 0)) return null;
+  fillBuckets(sorted, lo, scale, table);
+  return { table, lo, hi, scale };
+}
+
+/** table[b] = the first slot of `sorted` whose bucket is b or later (the last slot when none is). */
+function fillBuckets(sorted: Float64Array, lo: number, scale: number, table: Int32Array): void {
+  const last = table.length - 1;
+  let b = 0;
+  for (let j = 0; j < sorted.length; j++) {
+    const bucket = Math.min(last, Math.floor((sorted[j] - lo) * scale));
+    while (b <= bucket) table[b++] = j;
+  }
+  while (b <= last) table[b++] = sorted.length - 1;
+}
+
+/** Steps up from a value's bucket before {@link sumBySlot} goes on by binary search (values bunched into few buckets). */
+const BUCKET_STEPS = 8;
+
+/**
  * Adds each read row's target (times its weight) to sums[j] and its weight (1 without weights) to
- * totals[j], j the first slot of the ascending `sorted` not below the row's value (binary search),
- * rows in file order.
+ * totals[j], j the first slot of the ascending `sorted` not below the row's value (the last slot
+ * when none is), rows in file order. The slot is found from `found` for a value in its range (at
+ * most {@link BUCKET_STEPS} steps up from its bucket's first slot), then, when not yet reached,
+ * by binary search above: the same slot a binary search over every slot gives.
  */
 function sumBySlot(
   x: Float64Array,
@@ -280,19 +327,33 @@ function sumBySlot(
   m: number,
   weights: Float64Array | undefined,
   sorted: Float64Array,
+  found: SlotBuckets | null,
   sums: Float64Array,
   totals: Float64Array,
 ): void {
   const count = sorted.length;
+  const table = found?.table;
+  const last = count - 1;
+  const from = found?.lo ?? Number.NaN;
+  const to = found?.hi ?? Number.NaN;
+  const scale = found?.scale ?? Number.NaN;
   for (let t = 0; t < m; t++) {
     const r = m === n ? t : Math.floor((t * n) / m);
     const v = x[r];
     let lo = 0;
-    let hi = count - 1;
-    while (lo < hi) {
-      const mid = (lo + hi) >> 1;
-      if (sorted[mid] < v) lo = mid + 1;
-      else hi = mid;
+    if (table !== undefined && v >= from && v <= to) {
+      lo = table[Math.min(last, Math.floor((v - from) * scale))];
+      for (let step = 0; step < BUCKET_STEPS && sorted[lo] < v; step++) lo++;
+    }
+    // Binary search above `lo` when its value is still below v (every slot before it is too).
+    if (lo < last && sorted[lo] < v) {
+      let hi = last;
+      lo++;
+      while (lo < hi) {
+        const mid = (lo + hi) >> 1;
+        if (sorted[mid] < v) lo = mid + 1;
+        else hi = mid;
+      }
     }
     const w = weights === undefined ? 1 : weights[r];
     sums[lo] += weights === undefined ? y[r] : w * y[r];

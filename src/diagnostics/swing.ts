@@ -218,11 +218,53 @@ function packDistinct(a: Float64Array, n: number): number {
  * to {@link unique} when a run is out of order or holds a NaN.
  */
 function uniqueOfRuns(first: Float64Array, xs: Float64Array, split: number, length: number): Float64Array {
+  if (ascending(first, 0, split) && increasing(xs, split, length)) return xs.subarray(0, mergeBlocks(first, xs, split, length));
   if (!ascending(first, 0, split) || !ascending(xs, split, length)) {
     xs.set(first.subarray(0, split));
     return unique(xs, length);
   }
   return xs.subarray(0, mergeRuns(first, xs, split, length));
+}
+
+/** True when xs[from..to) holds no NaN and each value is below the next (no two equal, not even -0 and +0). */
+function increasing(xs: Float64Array, from: number, to: number): boolean {
+  if (to > from && Number.isNaN(xs[from])) return false;
+  for (let i = from + 1; i < to; i++) if (!(xs[i - 1] < xs[i])) return false;
+  return true;
+}
+
+/**
+ * {@link mergeRuns} when the run xs[split..length) is {@link increasing} (the usual grid): the
+ * values of `xs` between two values of `first` are moved as one block (`copyWithin`), found by
+ * binary search; of a block only its first value can equal the value written before it.
+ */
+function mergeBlocks(first: Float64Array, xs: Float64Array, split: number, length: number): number {
+  let j = split;
+  let w = 0;
+  for (let i = 0; i <= split; i++) {
+    // The block xs[j..end): the values that sort before first[i] (every one left after the last).
+    const end = i < split ? blockEnd(xs, j, length, first[i]) : length;
+    if (end > j && w > 0 && xs[j] === xs[w - 1]) j++;
+    if (end > j) {
+      xs.copyWithin(w, j, end);
+      w += end - j;
+      j = end;
+    }
+    if (i < split && (w === 0 || first[i] !== xs[w - 1])) xs[w++] = first[i];
+  }
+  return w;
+}
+
+/** The first index t in [from, to) with !sortsBefore(xs[t], v), or `to` (xs[from..to) ascending; binary search). */
+function blockEnd(xs: Float64Array, from: number, to: number, v: number): number {
+  let lo = from;
+  let hi = to;
+  while (lo < hi) {
+    const mid = (lo + hi) >>> 1;
+    if (sortsBefore(xs[mid], v)) lo = mid + 1;
+    else hi = mid;
+  }
+  return lo;
 }
 
 /** True when xs[from..to) holds no NaN and is ascending in the order of the built-in sort. */
@@ -470,11 +512,19 @@ function mergedPlaces(ax: Float64Array, bx: Float64Array): Int32Array {
   return place;
 }
 
-/** The first index i >= from of xs with !(xs[i] <= v), or xs.length: how far a merge takes xs before v. */
+/**
+ * The first index i >= from of the ascending xs (any NaN at its end) with !(xs[i] <= v), or
+ * xs.length: how far a merge takes xs before v. Binary search (xs[i] <= v holds for a prefix).
+ */
 function firstAfter(xs: Float64Array, from: number, v: number): number {
-  let i = from;
-  while (i < xs.length && xs[i] <= v) i++;
-  return i;
+  let lo = from;
+  let hi = xs.length;
+  while (lo < hi) {
+    const mid = (lo + hi) >>> 1;
+    if (xs[mid] <= v) lo = mid + 1;
+    else hi = mid;
+  }
+  return lo;
 }
 
 /** The values at the merged indices `indices` (ascending) of `a` and `b` merged with `b` at `place` (see {@link mergedPlaces}). */

@@ -1,7 +1,7 @@
 // Scratch arrays lent and given back (core/scratch.ts): zero-filled like new ones, the same buffer
 // lent again after it came back, and the pool bounded in count and size.
 import { describe, expect, it } from 'vitest';
-import { borrowDoubles, returnDoubles, SCRATCH_KEPT, SCRATCH_MAX_BYTES } from '../../src/core/scratch.js';
+import { borrowDoubles, borrowInts, returnDoubles, returnInts, SCRATCH_KEPT, SCRATCH_MAX_BYTES } from '../../src/core/scratch.js';
 
 describe('scratch arrays of doubles', () => {
   it('lends a zero-filled array of the length asked, and the same buffer again once it is back', () => {
@@ -19,6 +19,24 @@ describe('scratch arrays of doubles', () => {
     expect(c.buffer).not.toBe(b.buffer);
     returnDoubles(b);
     returnDoubles(c);
+  });
+
+  it('lends zero-filled 32-bit integers from the same pool (an odd length too)', () => {
+    // A size no earlier test left in the pool (512 KiB).
+    const a = borrowInts(100_001);
+    expect(a).toBeInstanceOf(Int32Array);
+    expect(a.length).toBe(100_001);
+    expect(a.every((v) => v === 0)).toBe(true);
+    a.fill(-1);
+    returnInts(a);
+    const b = borrowDoubles(50_001);
+    expect(b.buffer).toBe(a.buffer);
+    expect(b.every((v) => v === 0)).toBe(true);
+    returnDoubles(b);
+    const c = borrowInts(100_001);
+    expect(c.buffer).toBe(a.buffer);
+    expect(c.every((v) => v === 0)).toBe(true);
+    returnInts(c);
   });
 
   it('lends the smallest kept buffer that is large enough', () => {

@@ -48,6 +48,8 @@ describe('grid across an input', () => {
       Array.from({ length: 500 }, () => Math.round(random() * 40) / 4 - 5),
       Array.from({ length: 900 }, () => 1e-300 * random()),
       Array.from({ length: 700 }, () => (random() < 0.5 ? -1 : 1) * 10 ** (20 * random() - 10)),
+      // Uniform points 9 t equal to gap points 81 k + 9 t (all exact): repeats across the two runs.
+      Array.from({ length: 23 }, (_, k) => 81 * k).concat([1800]),
     ];
     for (const values of cases) {
       const got = inputGrid(values).inside;
