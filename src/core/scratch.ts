@@ -13,9 +13,10 @@
 
 /**
  * Buffers the pool keeps at most (8 MiB in all at worst). A model's diagnostics hold up to five
- * at once, of several sizes (the swing scan: its grid, the predictions there and a design block;
- * planSwing's two row-sized work arrays and the grid's uniform points), so that fewer would let
- * the small ones crowd out a size asked for again by the next model.
+ * at once, of several sizes (the swing plan: two row-sized work arrays, the grid, its uniform
+ * points and its gap indices; the swing scores: the grid, the predictions there and a design
+ * block; the leakage scan: three), so that fewer would let the small ones crowd out a size asked
+ * for again by the next model.
  */
 export const SCRATCH_KEPT = 8;
 

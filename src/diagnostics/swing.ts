@@ -12,7 +12,7 @@ import { sortFloat64 } from './radix-sort.js';
 import { nearestPairs } from './nearest-neighbours.js';
 import { checkDeadline } from '../core/deadline.js';
 import { inverseTarget, type TargetTransformKind } from '../data/target-transform.js';
-import { borrowDoubles, returnDoubles } from '../core/scratch.js';
+import { borrowDoubles, borrowInts, returnDoubles, returnInts } from '../core/scratch.js';
 
 /** Options of {@link measureSwing}; every field has a default. */
 export interface SwingOptions {
@@ -198,6 +198,7 @@ function gridFromSorted(
     return { inside: uniqueOfRuns(even, inside, uniform, w), beyond: unique(beyond, beyond.length), gaps: count - 1 };
   } finally {
     returnDoubles(even);
+    returnInts(gaps);
   }
 }
 
@@ -336,7 +337,8 @@ function marginGrid(lo: number, hi: number, reach: number, count: number): Float
 /**
  * Indices g of the `maxGaps` widest gaps distinct[g + 1] - distinct[g] (ties: lower g first), in
  * ascending g; all gaps when there are no more than `maxGaps`. Linear time: the threshold width
- * is found by selection ({@link select}) on one typed array of the widths.
+ * is found by selection ({@link select}) on one typed array of the widths. The array is lent
+ * (core/scratch.ts): the caller gives it back with `returnInts`.
  */
 function widestGaps(distinct: Float64Array, maxGaps: number, work?: Float64Array): Int32Array {
   const count = distinct.length - 1;
@@ -344,16 +346,16 @@ function widestGaps(distinct: Float64Array, maxGaps: number, work?: Float64Array
   const widths = work !== undefined && work.length >= count ? work.subarray(0, count) : new Float64Array(count);
   gapWidths(distinct, count, widths);
   const threshold = selectKth(widths, count - maxGaps);
-  const out = new Int32Array(maxGaps);
+  const out = borrowInts(maxGaps);
   pickGaps(distinct, count, threshold, maxGaps - gapsWiderThan(distinct, count, threshold), out);
   return out;
 }
 
 // One loop per function (see DEVELOPERS.md, "Writing hot loops").
 
-/** 0, 1, ..., count - 1. */
+/** 0, 1, ..., count - 1, in a lent array (core/scratch.ts). */
 function allGaps(count: number): Int32Array {
-  const out = new Int32Array(count);
+  const out = borrowInts(count);
   for (let g = 0; g < count; g++) out[g] = g;
   return out;
 }
