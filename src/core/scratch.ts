@@ -8,7 +8,9 @@
  * The pool belongs to the thread (each worker thread has its own copy of this module) and holds at
  * most {@link SCRATCH_KEPT} buffers of at most {@link SCRATCH_MAX_BYTES} each; a larger request is
  * made and dropped as before. A lent array is all zeros, as a new one is. Whoever borrows must give
- * it back only when nothing reads or writes it any more (in a `finally`), and must not keep it.
+ * it back only when nothing reads or writes it any more (in a `finally`, or after its last use: one
+ * not given back, say when an error ends the call, is only dropped as a new one would be), and
+ * must not keep it.
  */
 
 /**

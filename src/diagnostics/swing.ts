@@ -724,51 +724,48 @@ export function planSwing(design: Design, train: Rows, options: SwingOptions = {
   const d = design.inputs.length;
   const [ylo, yhi] = range(train.y, n);
   // One scratch buffer for every input: selection for the medians, then a typed sort for the
-  // grid; a second one for the sort's and the widest gaps' work. Both are lent (core/scratch.ts):
-  // nothing kept in the plan reads them.
+  // grid; a second one for the sort's and the widest gaps' work. Both are lent (core/scratch.ts)
+  // and given back after the loop (nothing kept in the plan reads them; should the loop throw,
+  // they are dropped as new arrays would be).
   const scratch = borrowDoubles(n);
   const work = borrowDoubles(n);
+  const medians = train.inputs.map((col) => columnMedian(col, n, scratch));
   const radixScratch = new Uint32Array(work.buffer, work.byteOffset, 2 * n);
   const grids: SwingGrid[] = [];
   const lent: Float64Array[] = [];
-  let medians: number[];
-  try {
-    medians = train.inputs.map((col) => columnMedian(col, n, scratch));
-    const gridOptions: SwingOptions = { ...options, maxGaps: Math.ceil((options.maxGaps ?? SWING_DEFAULTS.maxGaps) / Math.max(1, d)) };
-    for (let c = 0; c < d; c++) {
-      // A category input takes only its level codes: scanned level by level, no margins.
-      const discrete = design.terms.find((t) => t.discreteValues !== undefined && t.inputs.includes(design.inputs[c]))?.discreteValues;
-      if (discrete !== undefined) {
-        if (discrete.length >= 2) grids.push({ input: c, inside: Float64Array.from(discrete), beyond: new Float64Array(0) });
-        continue;
-      }
-      const len = gridSample(train.inputs[c], n, options.maxGridRows ?? SWING_DEFAULTS.maxGridRows, scratch);
-      const sample = scratch.subarray(0, len);
-      // An input every term reads on one transformed scale (log x ...) is scanned on that scale.
-      const onScale = inputScaleOf(design, c);
-      if (onScale !== null) for (let i = 0; i < len; i++) sample[i] = onScale.forward(sample[i]);
-      const grid = gridFromSorted(sortFloat64(sample, radixScratch), len, gridOptions, work.subarray(0, len));
-      if (onScale !== null) {
-        const onInput = grid.inside.map(onScale.inverse);
-        returnDoubles(grid.inside);
-        grid.inside = onInput;
-        grid.beyond = grid.beyond.map(onScale.inverse);
-      } else lent.push(grid.inside);
-      const whole = len === n && onScale === null && defaultInsideGrid(options, gridOptions, grid.gaps);
-      if (grid.inside.length > 0) {
-        const beyond = admitted(design, c, grid.beyond);
-        // The grid packed the distinct values to the front of the sorted sample (every row here).
-        grids.push(
-          whole
-            ? { input: c, inside: grid.inside, beyond, whole, distinct: sample.slice(0, grid.gaps + 1) }
-            : { input: c, inside: grid.inside, beyond, whole },
-        );
-      }
+  const gridOptions: SwingOptions = { ...options, maxGaps: Math.ceil((options.maxGaps ?? SWING_DEFAULTS.maxGaps) / Math.max(1, d)) };
+  for (let c = 0; c < d; c++) {
+    // A category input takes only its level codes: scanned level by level, no margins.
+    const discrete = design.terms.find((t) => t.discreteValues !== undefined && t.inputs.includes(design.inputs[c]))?.discreteValues;
+    if (discrete !== undefined) {
+      if (discrete.length >= 2) grids.push({ input: c, inside: Float64Array.from(discrete), beyond: new Float64Array(0) });
+      continue;
     }
-  } finally {
-    returnDoubles(work);
-    returnDoubles(scratch);
+    const len = gridSample(train.inputs[c], n, options.maxGridRows ?? SWING_DEFAULTS.maxGridRows, scratch);
+    const sample = scratch.subarray(0, len);
+    // An input every term reads on one transformed scale (log x ...) is scanned on that scale.
+    const onScale = inputScaleOf(design, c);
+    if (onScale !== null) for (let i = 0; i < len; i++) sample[i] = onScale.forward(sample[i]);
+    const grid = gridFromSorted(sortFloat64(sample, radixScratch), len, gridOptions, work.subarray(0, len));
+    if (onScale !== null) {
+      const onInput = grid.inside.map(onScale.inverse);
+      returnDoubles(grid.inside);
+      grid.inside = onInput;
+      grid.beyond = grid.beyond.map(onScale.inverse);
+    } else lent.push(grid.inside);
+    const whole = len === n && onScale === null && defaultInsideGrid(options, gridOptions, grid.gaps);
+    if (grid.inside.length > 0) {
+      const beyond = admitted(design, c, grid.beyond);
+      // The grid packed the distinct values to the front of the sorted sample (every row here).
+      grids.push(
+        whole
+          ? { input: c, inside: grid.inside, beyond, whole, distinct: sample.slice(0, grid.gaps + 1) }
+          : { input: c, inside: grid.inside, beyond, whole },
+      );
+    }
   }
+  returnDoubles(work);
+  returnDoubles(scratch);
 
   // Several inputs: segments between sampled rows and their nearest neighbours.
   let segments: Swing['segments'] = null;
@@ -943,40 +940,40 @@ export function scoreSwing(plan: SwingPlan, design: Design, coefficients: ArrayL
     const c = grid.input;
     const along = (xs: Float64Array): Float64Array[] => design.inputs.map((_, k) => (k === c ? xs : constant(k, xs.length)));
     const predict = predictorAlong(design, coefficients, c, medians);
-    // The inside predictions are lent (core/scratch.ts): only figures and copies leave the loop.
-    const pin = borrowDoubles(grid.inside.length);
-    try {
-      score(along(grid.inside), grid.inside.length, 'inside', predict(grid.inside, pin));
-      const pout = score(along(grid.beyond), grid.beyond.length, 'beyond', predict(grid.beyond));
-      if (insideCurves !== undefined && grid.whole === true && readByEveryTerm(design, c)) {
-        insideCurves.push({
-          input: c,
-          points: pin.length,
-          variation: totalVariation(pin, pin.length),
-          ...(plan.backTransform !== undefined ? { backTransform: plan.backTransform } : {}),
-          ...(grid.distinct !== undefined ? { distinct: grid.distinct } : {}),
-        });
-      }
-      if (curves.length >= plan.maxCurves) continue;
-      // Curve for charts: all points ascending (inside and margins merged), thinned with the
-      // extremes kept; only the kept points are read out of the merged order.
-      const place = mergedPlaces(grid.inside, grid.beyond);
-      const [imin, imax] = mergedExtremes(pin, pout, place);
-      const keep = thinIndices(grid.inside.length + grid.beyond.length, maxCurvePoints, [imax, imin]);
-      const others: Record<string, number> = Object.create(null);
-      design.inputs.forEach((name, k) => {
-        if (k !== c) others[name] = medians[k];
+    // The inside predictions are lent (core/scratch.ts) and given back before the next input:
+    // only figures and copies of them are kept.
+    const pin = score(along(grid.inside), grid.inside.length, 'inside', predict(grid.inside, borrowDoubles(grid.inside.length)));
+    const pout = score(along(grid.beyond), grid.beyond.length, 'beyond', predict(grid.beyond));
+    if (insideCurves !== undefined && grid.whole === true && readByEveryTerm(design, c)) {
+      insideCurves.push({
+        input: c,
+        points: pin.length,
+        variation: totalVariation(pin, pin.length),
+        ...(plan.backTransform !== undefined ? { backTransform: plan.backTransform } : {}),
+        ...(grid.distinct !== undefined ? { distinct: grid.distinct } : {}),
       });
-      curves.push({
-        input: design.inputs[c],
-        others,
-        range: [grid.inside[0], grid.inside[grid.inside.length - 1]],
-        x: mergedValues(grid.inside, grid.beyond, place, keep),
-        prediction: mergedValues(pin, pout, place, keep),
-      });
-    } finally {
-      returnDoubles(pin);
     }
+    if (curves.length >= plan.maxCurves) {
+      returnDoubles(pin);
+      continue;
+    }
+    // Curve for charts: all points ascending (inside and margins merged), thinned with the
+    // extremes kept; only the kept points are read out of the merged order.
+    const place = mergedPlaces(grid.inside, grid.beyond);
+    const [imin, imax] = mergedExtremes(pin, pout, place);
+    const keep = thinIndices(grid.inside.length + grid.beyond.length, maxCurvePoints, [imax, imin]);
+    const others: Record<string, number> = Object.create(null);
+    design.inputs.forEach((name, k) => {
+      if (k !== c) others[name] = medians[k];
+    });
+    curves.push({
+      input: design.inputs[c],
+      others,
+      range: [grid.inside[0], grid.inside[grid.inside.length - 1]],
+      x: mergedValues(grid.inside, grid.beyond, place, keep),
+      prediction: mergedValues(pin, pout, place, keep),
+    });
+    returnDoubles(pin);
   }
   if (plan.segmentColumns !== null) score(plan.segmentColumns, plan.segmentColumns[0].length, 'inside');
 
