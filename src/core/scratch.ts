@@ -36,6 +36,21 @@ const spare: ArrayBuffer[] = [];
  * @param length doubles wanted (a non-negative integer)
  */
 export function borrowDoubles(length: number): Float64Array {
+  return lend(length, true);
+}
+
+/**
+ * {@link borrowDoubles} for a caller that writes every element before it reads any (a design
+ * block: design/blocks.ts): a kept buffer is not cleared first, so the array may hold what its
+ * last borrower left there (zeros when new).
+ * @param length doubles wanted (a non-negative integer)
+ */
+export function borrowDoublesToOverwrite(length: number): Float64Array {
+  return lend(length, false);
+}
+
+/** The array of {@link borrowDoubles}; a kept buffer is cleared only when `clear` is true. */
+function lend(length: number, clear: boolean): Float64Array {
   const bytes = length * Float64Array.BYTES_PER_ELEMENT;
   let best = -1;
   for (let i = 0; i < spare.length; i++) {
@@ -44,7 +59,7 @@ export function borrowDoubles(length: number): Float64Array {
   if (best >= 0) {
     const [buffer] = spare.splice(best, 1);
     const array = new Float64Array(buffer, 0, length);
-    array.fill(0);
+    if (clear) array.fill(0);
     return array;
   }
   if (bytes > SCRATCH_MAX_BYTES) return new Float64Array(length);

@@ -5,7 +5,7 @@
 import type { ModelData } from '../data/model-data.js';
 import type { Design } from './design-matrix.js';
 import { addProducts } from '../kernels/index.js';
-import { borrowDoubles, returnDoubles } from '../core/scratch.js';
+import { borrowDoublesToOverwrite, returnDoubles } from '../core/scratch.js';
 
 /**
  * Rows per block for a design of p columns: about 64 K doubles (512 KiB), at least 64 rows. Small
@@ -28,7 +28,8 @@ export function forEachBlock(
   visit: (X: Float64Array, start: number, m: number) => void,
 ): void {
   const size = blockRows(design.p);
-  const buffer = borrowDoubles(Math.min(size, Math.max(1, data.rows)) * design.p);
+  // Not cleared first: design.fill writes every entry of each block (terms/types.ts, Term.fill).
+  const buffer = borrowDoublesToOverwrite(Math.min(size, Math.max(1, data.rows)) * design.p);
   try {
     for (let start = 0; start < data.rows; start += size) {
       const m = Math.min(size, data.rows - start);
