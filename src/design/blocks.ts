@@ -5,7 +5,7 @@
 import type { ModelData } from '../data/model-data.js';
 import type { Design } from './design-matrix.js';
 import { addProducts } from '../kernels/index.js';
-import { borrowDoubles, returnDoubles } from '../core/scratch.js';
+import { borrowDoublesToOverwrite, returnDoubles } from '../core/scratch.js';
 
 /**
  * Rows per block for a design of p columns: about 64 K doubles (512 KiB), at least 64 rows. Small
@@ -28,7 +28,8 @@ export function forEachBlock(
   visit: (X: Float64Array, start: number, m: number) => void,
 ): void {
   const size = blockRows(design.p);
-  const buffer = borrowDoubles(Math.min(size, Math.max(1, data.rows)) * design.p);
+  // Not cleared first: design.fill writes every entry of each block (terms/types.ts, Term.fill).
+  const buffer = borrowDoublesToOverwrite(Math.min(size, Math.max(1, data.rows)) * design.p);
   try {
     for (let start = 0; start < data.rows; start += size) {
       const m = Math.min(size, data.rows - start);
@@ -40,9 +41,17 @@ export function forEachBlock(
   }
 }
 
-/** Predictions Phi w for every row of `data`, block by block (length `data.rows`). */
-export function predictRows(design: Design, data: Pick<ModelData, 'inputs' | 'rows'>, w: ArrayLike<number>): Float64Array {
-  const out = new Float64Array(data.rows);
+/**
+ * Predictions Phi w for every row of `data`, block by block (length `data.rows`).
+ * @param out where to write them: all zeros, of length `data.rows` (e.g. lent by core/scratch.ts);
+ *   default a new array
+ */
+export function predictRows(
+  design: Design,
+  data: Pick<ModelData, 'inputs' | 'rows'>,
+  w: ArrayLike<number>,
+  out: Float64Array = new Float64Array(data.rows),
+): Float64Array {
   forEachBlock(design, data, (X, start, m) => addProducts(out, start, X, m, w, design.p));
   return out;
 }

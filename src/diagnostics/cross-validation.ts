@@ -10,6 +10,7 @@ import { forEachBlock } from '../design/blocks.js';
 import { addProducts, outOfFoldRows } from '../kernels/index.js';
 import { foldIdsOf, type Folds } from './folds.js';
 import { checkDeadline } from '../core/deadline.js';
+import { borrowDoubles, returnDoubles } from '../core/scratch.js';
 
 /** The rows a diagnostic reads: input columns in `design.inputs` order and the target. */
 export type Rows = Pick<ModelData, 'inputs' | 'y' | 'rows'>;
@@ -27,8 +28,6 @@ export class FoldFactorBuilder {
   readonly factors: QrAccumulator[];
   readonly #folds: Folds;
   readonly #p: number;
-  #sub = new Float64Array(0);
-  #subY = new Float64Array(0);
   readonly #counts: Int32Array;
 
   /**
@@ -60,27 +59,29 @@ export class FoldFactorBuilder {
       this.factors[first].addRows(X, y.subarray(start, start + m), m);
       return;
     }
-    if (this.#sub.length < m * p) {
-      this.#sub = new Float64Array(m * p);
-      this.#subY = new Float64Array(m);
-    }
-    const sub = this.#sub;
-    const subY = this.#subY;
-    const counts = this.#counts;
-    counts.fill(0);
-    for (let i = 0; i < m; i++) counts[foldOf[start + i]]++;
-    for (let f = 0; f < k; f++) {
-      const mf = counts[f];
-      if (mf === 0) continue;
-      // Gather the block's rows of fold f into a column-major mf x p block.
-      let r = 0;
-      for (let i = 0; i < m; i++) {
-        if (foldOf[start + i] !== f) continue;
-        for (let j = 0; j < p; j++) sub[j * mf + r] = X[j * m + i];
-        subY[r] = y[start + i];
-        r++;
+    // The gathered rows go to arrays lent for this block (core/scratch.ts).
+    const sub = borrowDoubles(m * p);
+    const subY = borrowDoubles(m);
+    try {
+      const counts = this.#counts;
+      counts.fill(0);
+      for (let i = 0; i < m; i++) counts[foldOf[start + i]]++;
+      for (let f = 0; f < k; f++) {
+        const mf = counts[f];
+        if (mf === 0) continue;
+        // Gather the block's rows of fold f into a column-major mf x p block.
+        let r = 0;
+        for (let i = 0; i < m; i++) {
+          if (foldOf[start + i] !== f) continue;
+          for (let j = 0; j < p; j++) sub[j * mf + r] = X[j * m + i];
+          subY[r] = y[start + i];
+          r++;
+        }
+        this.factors[f].addRows(sub, subY, mf);
       }
-      this.factors[f].addRows(sub, subY, mf);
+    } finally {
+      returnDoubles(subY);
+      returnDoubles(sub);
     }
   }
 }
@@ -401,8 +402,6 @@ export class CrossValidationScorer {
   #leverageSum = 0;
   #maxLeverage = 0;
   #rowsWithLeverageOne = 0;
-  #h = new Float64Array(0);
-  #pred = new Float64Array(0);
   #ids = new Int32Array(0);
   #rows = 0;
 
@@ -436,15 +435,9 @@ export class CrossValidationScorer {
     const first = this.#rows;
     if (this.#ids.length < data.rows && this.#folds.streamed === true) this.#ids = new Int32Array(data.rows);
     const foldOf = foldIdsOf(this.#folds, first, data.rows, this.#ids);
-    const visit = (X: Float64Array, start: number, m: number): void => {
-      if (this.#h.length < m) {
-        this.#h = new Float64Array(m);
-        this.#pred = new Float64Array(m);
-      }
-      const h = this.#h;
-      const pred = this.#pred;
+    // One block's rows: the full fit's leverages h and predictions pred (arrays of m zeros), then its sums.
+    const scoreBlock = (X: Float64Array, start: number, m: number, h: Float64Array, pred: Float64Array): void => {
       leveragesInto(fit, X, m, h);
-      pred.fill(0, 0, m);
       addProducts(pred, 0, X, m, w, p);
       if (predictions !== undefined) predictions.set(pred.subarray(0, m), start);
       // The sums run in locals and are stored once per block: the same additions in the same order,
@@ -474,6 +467,17 @@ export class CrossValidationScorer {
       this.#leverageSum = blockLeverageSum;
       this.#maxLeverage = blockMaxLeverage;
       this.#rowsWithLeverageOne = blockOnes;
+    };
+    const visit = (X: Float64Array, start: number, m: number): void => {
+      // The block's leverages and predictions go to arrays of zeros lent for the block (core/scratch.ts).
+      const h = borrowDoubles(m);
+      const pred = borrowDoubles(m);
+      try {
+        scoreBlock(X, start, m, h, pred);
+      } finally {
+        returnDoubles(pred);
+        returnDoubles(h);
+      }
     };
     outOfFoldErrors(this.#design, data, this.#folds, this.#coefficients, visit, { foldOf, sse: this.#sse });
     this.#rows += data.rows;

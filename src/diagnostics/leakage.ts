@@ -4,6 +4,7 @@
  */
 import type { ModelData } from '../data/model-data.js';
 import { mix32 } from './random.js';
+import { borrowInts, returnInts } from '../core/scratch.js';
 
 /** How many line numbers of each file to report. */
 export const LEAKAGE_EXAMPLE_LINES = 5;
@@ -79,19 +80,28 @@ interface RowTable {
   filterBits: number;
 }
 
-function newTable(rows: number): RowTable {
+/**
+ * An empty table for `rows` rows: its arrays are consecutive pieces of one array lent by
+ * core/scratch.ts, added to `lent`.
+ */
+function newTable(rows: number, lent: Int32Array[]): RowTable {
   let size = 1024;
   while (size < 2 * rows) size *= 2;
   // size >= 2 rows, so 8 size bits are at least 16 per row: 2^13 .. 2^32 bits (32 at most).
   const filterBits = Math.min(32, Math.log2(size) + 3);
+  const words = 2 ** (filterBits - 5);
+  const all = borrowInts(words + 2 * size + 2 * rows);
+  lent.push(all);
+  const piece = (from: number, length: number): Int32Array => all.subarray(from, from + length);
+  const unsigned = (from: number, length: number): Uint32Array => new Uint32Array(all.buffer, all.byteOffset + 4 * from, length);
   return {
-    filter: new Uint32Array(2 ** (filterBits - 5)),
+    filter: unsigned(0, words),
     filterBits,
     mask: size - 1,
-    slotHash: new Uint32Array(size),
-    slotHead: new Int32Array(size).fill(-1),
-    next: new Int32Array(rows).fill(-1),
-    repOf: new Int32Array(rows),
+    slotHash: unsigned(words, size),
+    slotHead: piece(words + size, size).fill(-1),
+    next: piece(words + 2 * size, rows).fill(-1),
+    repOf: piece(words + 2 * size + rows, rows),
   };
 }
 
@@ -206,6 +216,9 @@ export class LeakageScan {
   readonly #byRow: RowTable;
   readonly #firstMatch: Int32Array;
   readonly #targetToo: Uint8Array;
+  /** The tables' arrays, lent by core/scratch.ts until {@link finish}. */
+  readonly #lent: Int32Array[] = [];
+  #result: Leakage | undefined;
 
   /** @param holdout hold-out rows (inputs in the model's order) */
   constructor(holdout: Pick<ModelData, 'inputs' | 'y' | 'rows' | 'lines'>) {
@@ -213,20 +226,33 @@ export class LeakageScan {
     // stream past them in file order, so each hold-out row's first match is the earliest training row.
     const h = holdout.rows;
     this.#holdout = holdout;
-    this.#byInputs = newTable(h);
-    this.#byRow = newTable(h);
+    this.#byInputs = newTable(h, this.#lent);
+    this.#byRow = newTable(h, this.#lent);
     indexRows(this.#byInputs, this.#byRow, holdout);
-    this.#firstMatch = new Int32Array(h).fill(-1);
-    this.#targetToo = new Uint8Array(h);
+    // firstMatch (h integers) and targetToo (h bytes) share one lent array.
+    const marks = borrowInts(h + Math.ceil(h / 4));
+    this.#lent.push(marks);
+    this.#firstMatch = marks.subarray(0, h).fill(-1);
+    this.#targetToo = new Uint8Array(marks.buffer, marks.byteOffset + 4 * h, h);
   }
 
-  /** Streams the next training rows (in file order) past the hold-out rows. */
+  /** Streams the next training rows (in file order) past the hold-out rows; not after {@link finish}. */
   add(train: Pick<ModelData, 'inputs' | 'y' | 'rows' | 'lines'>): void {
+    if (this.#result !== undefined) throw new Error('LeakageScan: rows added after finish()');
     if (this.#holdout.rows > 0) matchRows(this.#byInputs, this.#byRow, this.#holdout, train, this.#firstMatch, this.#targetToo);
   }
 
-  /** The figures over every training row added. */
+  /** The figures over every training row added (the same object when called again); gives the tables back. */
   finish(): Leakage {
+    if (this.#result === undefined) {
+      this.#result = this.#figures();
+      for (const array of this.#lent) returnInts(array);
+    }
+    return this.#result;
+  }
+
+  /** The figures, read from the tables. */
+  #figures(): Leakage {
     const holdout = this.#holdout;
     const h = holdout.rows;
     let inputMatches = 0;

@@ -23,8 +23,9 @@ import type { Design } from '../design/design-matrix.js';
 import { predictRows } from '../design/blocks.js';
 import { columnMedian } from './column-median.js';
 import type { Rows } from './cross-validation.js';
-import { inputGrid, type InsideCurve } from './swing.js';
+import { inputGrid, totalVariation, type InsideCurve } from './swing.js';
 import { inverseTarget, type TargetTransformKind } from '../data/target-transform.js';
+import { borrowDoubles, borrowInts, returnDoubles, returnInts } from '../core/scratch.js';
 
 /** One input's figures. */
 export interface SpikeFigures {
@@ -57,8 +58,8 @@ export const SPIKE_MAX_ROWS = 20_000;
  *   curve is back-transformed) and the training targets as written (the data variation is theirs);
  *   default none (the fit's own scale)
  * @param known curves along inputs that the swing scan already predicted on the same design, rows
- *   and coefficients (swing.ts {@link InsideCurve}): one whose back transform is that of
- *   `original` is taken instead of predicting the same points again; default none
+ *   and coefficients (swing.ts {@link InsideCurve}): the length and variation of one whose back
+ *   transform is that of `original` are taken instead of predicting the same points again; default none
  */
 export function measureSpikes(
   design: Design,
@@ -80,11 +81,16 @@ export function measureSpikes(
   design.inputs.forEach((name, c) => {
     // Category inputs have no order between their levels: no variation along them to compare.
     if (design.terms.some((t) => t.discreteValues !== undefined && t.inputs.includes(name))) return;
-    const curve =
-      known.find((k) => k.input === c && k.backTransform === original?.kind)?.prediction ??
-      curveAlong(design, train, coefficients, c, mediansOnce(), original);
-    if (curve.length < 2) return;
-    const curveVariation = totalVariation(curve, curve.length);
+    const scanned = known.find((k) => k.input === c && k.backTransform === original?.kind);
+    let points: number;
+    let curveVariation: number;
+    if (scanned !== undefined) ({ points, variation: curveVariation } = scanned);
+    else {
+      const curve = curveAlong(design, train, coefficients, c, mediansOnce(), original);
+      points = curve.length;
+      curveVariation = totalVariation(curve, curve.length);
+    }
+    if (points < 2) return;
     // The swing scan sorted every row's value of this input already: its distinct values serve
     // when the data variation reads every row too (at most SPIKE_MAX_ROWS).
     const distinct = n <= SPIKE_MAX_ROWS ? known.find((k) => k.input === c && k.distinct !== undefined)?.distinct : undefined;
@@ -122,17 +128,17 @@ function curveAlong(
   return curve;
 }
 
-/** sum |v[k+1] - v[k]| over the first m values (one loop; see DEVELOPERS.md, "Writing hot loops"). */
-function totalVariation(v: Float64Array, m: number): number {
-  let s = 0;
-  for (let k = 1; k < m; k++) s += Math.abs(v[k] - v[k - 1]);
-  return s;
-}
-
 /** Total variation of the (weighted) mean target over the input's distinct values in ascending order. */
 function targetVariation(x: Float64Array, y: Float64Array, n: number, weights?: Float64Array, distinct?: Float64Array): number {
   const { means } = meanTargets(x, y, n, weights, distinct);
-  return totalVariation(Float64Array.from(means), means.length);
+  return meanVariation(means);
+}
+
+/** sum |means[j+1] - means[j]|: {@link totalVariation} of a plain array (one loop). */
+function meanVariation(means: readonly number[]): number {
+  let s = 0;
+  for (let j = 1; j < means.length; j++) s += Math.abs(means[j] - means[j - 1]);
+  return s;
 }
 
 /** One interval between neighbouring distinct training values where the curve spikes (see {@link spikeIntervals}). */
@@ -213,9 +219,12 @@ export function spikeIntervals(
  * and the mean y at each: the plain mean, or with row weights the weighted mean sum w y / sum w (a
  * value whose rows all weigh 0 is left out: it takes no part in the fit). Each value's targets are
  * summed in row order (as a stable sort of the rows by value visits them): the sampled values are
- * sorted once (a native typed-array sort), and each row finds its value's slot by binary search.
+ * sorted once (a native typed-array sort), and each row finds its value's slot through equal-width
+ * buckets of the range ({@link SlotBuckets}) or by binary search.
  * `distinct`, when given, must be those distinct values of every row (n <= SPIKE_MAX_ROWS), as
- * the sort and packing here make them: they are taken instead of sorting again.
+ * the sort and packing here make them: they are taken instead of sorting again. The working
+ * arrays are lent (core/scratch.ts); each loop is a function of its own (see DEVELOPERS.md,
+ * "Writing hot loops").
  */
 function meanTargets(
   x: Float64Array,
@@ -225,39 +234,138 @@ function meanTargets(
   distinct?: Float64Array,
 ): { values: number[]; means: number[] } {
   const m = Math.min(n, SPIKE_MAX_ROWS);
-  const rows = new Int32Array(m);
-  for (let t = 0; t < m; t++) rows[t] = m === n ? t : Math.floor((t * n) / m);
-  let sorted: Float64Array;
-  let count = 0;
-  if (distinct !== undefined && m === n) {
-    sorted = distinct;
-    count = distinct.length;
-  } else {
-    sorted = new Float64Array(m);
-    for (let t = 0; t < m; t++) sorted[t] = x[rows[t]];
-    sorted.sort();
-    // Distinct values to the front (-0 and +0 are one value, as to `===`).
-    for (let i = 0; i < m; i++) if (count === 0 || sorted[i] !== sorted[count - 1]) sorted[count++] = sorted[i];
+  const own = distinct !== undefined && m === n ? null : borrowDoubles(m);
+  try {
+    let sorted: Float64Array;
+    if (own === null) sorted = distinct as Float64Array;
+    else {
+      sampleRows(x, n, m, own);
+      own.sort();
+      sorted = own.subarray(0, packDistinct(own, m));
+    }
+    const sums = borrowDoubles(sorted.length);
+    const totals = borrowDoubles(sorted.length);
+    const buckets = borrowInts(sorted.length);
+    try {
+      const found = slotBuckets(sorted, buckets);
+      sumBySlot(x, y, n, m, weights, sorted, found, sums, totals);
+      return meansOfSlots(sorted, sums, totals);
+    } finally {
+      returnInts(buckets);
+      returnDoubles(totals);
+      returnDoubles(sums);
+    }
+  } finally {
+    if (own !== null) returnDoubles(own);
   }
-  const sums = new Float64Array(count);
-  const totals = new Float64Array(count);
+}
+
+/** out[t] = x[row t] for the m rows {@link meanTargets} reads: every row when m = n, else row floor(t n / m). */
+function sampleRows(x: Float64Array, n: number, m: number, out: Float64Array): void {
+  for (let t = 0; t < m; t++) out[t] = x[m === n ? t : Math.floor((t * n) / m)];
+}
+
+/** Packs the distinct values of the ascending a[0..n) to its front (-0 and +0 are one value, as to `===`); returns how many. */
+function packDistinct(a: Float64Array, n: number): number {
+  let count = 0;
+  for (let i = 0; i < n; i++) if (count === 0 || a[i] !== a[count - 1]) a[count++] = a[i];
+  return count;
+}
+
+/**
+ * Equal-width buckets over the range of the ascending `sorted` (all finite, at least two values),
+ * to find a value's slot without a binary search: bucket b of value v is
+ * min(B - 1, floor((v - lo) * B / (hi - lo))), B = table.length, and table[b] the first slot whose
+ * value's bucket is b or later. The bucket never falls as the value rises (each operation rounds
+ * monotonically), so every slot before table[b] holds a value below every value of bucket b: the
+ * slot of v is found by stepping up from table[bucket of v] (a step or two for spread values).
+ */
+interface SlotBuckets {
+  table: Int32Array;
+  lo: number;
+  hi: number;
+  scale: number;
+}
+
+/** {@link SlotBuckets} of `sorted` in `table` (of sorted.length entries), or null when its ends are not finite or the range has no usable width. */
+function slotBuckets(sorted: Float64Array, table: Int32Array): SlotBuckets | null {
+  const count = sorted.length;
+  if (count < 2) return null;
+  const lo = sorted[0];
+  const hi = sorted[count - 1];
+  const scale = count / (hi - lo);
+  if (!Number.isFinite(lo) || !Number.isFinite(hi) || !Number.isFinite(scale) || !(scale > 0)) return null;
+  fillBuckets(sorted, lo, scale, table);
+  return { table, lo, hi, scale };
+}
+
+/** table[b] = the first slot of `sorted` whose bucket is b or later (the last slot when none is). */
+function fillBuckets(sorted: Float64Array, lo: number, scale: number, table: Int32Array): void {
+  const last = table.length - 1;
+  let b = 0;
+  for (let j = 0; j < sorted.length; j++) {
+    const bucket = Math.min(last, Math.floor((sorted[j] - lo) * scale));
+    while (b <= bucket) table[b++] = j;
+  }
+  while (b <= last) table[b++] = sorted.length - 1;
+}
+
+/** Steps up from a value's bucket before {@link sumBySlot} goes on by binary search (values bunched into few buckets). */
+const BUCKET_STEPS = 8;
+
+/**
+ * Adds each read row's target (times its weight) to sums[j] and its weight (1 without weights) to
+ * totals[j], j the first slot of the ascending `sorted` not below the row's value (the last slot
+ * when none is), rows in file order. The slot is found from `found` for a value in its range (at
+ * most {@link BUCKET_STEPS} steps up from its bucket's first slot), then, when not yet reached,
+ * by binary search above: the same slot a binary search over every slot gives.
+ */
+function sumBySlot(
+  x: Float64Array,
+  y: Float64Array,
+  n: number,
+  m: number,
+  weights: Float64Array | undefined,
+  sorted: Float64Array,
+  found: SlotBuckets | null,
+  sums: Float64Array,
+  totals: Float64Array,
+): void {
+  const count = sorted.length;
+  const table = found?.table;
+  const last = count - 1;
+  const from = found?.lo ?? Number.NaN;
+  const to = found?.hi ?? Number.NaN;
+  const scale = found?.scale ?? Number.NaN;
   for (let t = 0; t < m; t++) {
-    const r = rows[t];
+    const r = m === n ? t : Math.floor((t * n) / m);
     const v = x[r];
     let lo = 0;
-    let hi = count - 1;
-    while (lo < hi) {
-      const mid = (lo + hi) >> 1;
-      if (sorted[mid] < v) lo = mid + 1;
-      else hi = mid;
+    if (table !== undefined && v >= from && v <= to) {
+      lo = table[Math.min(last, Math.floor((v - from) * scale))];
+      for (let step = 0; step < BUCKET_STEPS && sorted[lo] < v; step++) lo++;
+    }
+    // Binary search above `lo` when its value is still below v (every slot before it is too).
+    if (lo < last && sorted[lo] < v) {
+      let hi = last;
+      lo++;
+      while (lo < hi) {
+        const mid = (lo + hi) >> 1;
+        if (sorted[mid] < v) lo = mid + 1;
+        else hi = mid;
+      }
     }
     const w = weights === undefined ? 1 : weights[r];
     sums[lo] += weights === undefined ? y[r] : w * y[r];
     totals[lo] += w;
   }
+}
+
+/** The finite values of `sorted` whose total weight is above 0, and their means sums / totals. */
+function meansOfSlots(sorted: Float64Array, sums: Float64Array, totals: Float64Array): { values: number[]; means: number[] } {
   const values: number[] = [];
   const means: number[] = [];
-  for (let j = 0; j < count; j++) {
+  for (let j = 0; j < sorted.length; j++) {
     if (Number.isFinite(sorted[j]) && totals[j] > 0) {
       values.push(sorted[j]);
       means.push(sums[j] / totals[j]);

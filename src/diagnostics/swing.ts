@@ -12,6 +12,7 @@ import { sortFloat64 } from './radix-sort.js';
 import { nearestPairs } from './nearest-neighbours.js';
 import { checkDeadline } from '../core/deadline.js';
 import { inverseTarget, type TargetTransformKind } from '../data/target-transform.js';
+import { borrowDoubles, borrowInts, returnDoubles, returnInts } from '../core/scratch.js';
 
 /** Options of {@link measureSwing}; every field has a default. */
 export interface SwingOptions {
@@ -157,12 +158,15 @@ export function excursion(prediction: ArrayLike<number>, lo: number, hi: number)
 export function inputGrid(values: ArrayLike<number>, options: SwingOptions = {}): { inside: Float64Array; beyond: Float64Array } {
   const sorted = sortFloat64(Float64Array.from(values));
   const { inside, beyond } = gridFromSorted(sorted, sorted.length, options);
-  return { inside, beyond };
+  const own = inside.slice();
+  returnDoubles(inside);
+  return { inside: own, beyond };
 }
 
 /**
  * {@link inputGrid} from the input's values already sorted ascending in `sorted[0..n)`; the
- * array is overwritten (its distinct values are packed to the front).
+ * array is overwritten (its distinct values are packed to the front). `inside` is lent
+ * (core/scratch.ts): the caller gives it back with `returnDoubles` once nothing reads it.
  */
 function gridFromSorted(
   sorted: Float64Array,
@@ -183,11 +187,19 @@ function gridFromSorted(
   const width = hi - lo;
   const gaps = widestGaps(distinct, maxGaps, work);
   const per = Math.max(1, Math.min(perGap, Math.floor((maxGaps * perGap) / gaps.length)));
-  const inside = new Float64Array(uniform + gaps.length * per);
-  fillUniform(inside, uniform, lo, hi);
-  const w = fillGaps(inside, uniform, distinct, gaps, per);
-  const beyond = marginGrid(lo, hi, margin * width, marginPoints);
-  return { inside: uniqueOfRuns(inside, uniform, w), beyond: unique(beyond, beyond.length), gaps: count - 1 };
+  // The gap points go behind room for the uniform points, which wait in a second lent buffer: the
+  // two runs are merged into the one array.
+  const inside = borrowDoubles(uniform + gaps.length * per);
+  const even = borrowDoubles(uniform);
+  try {
+    fillUniform(even, uniform, lo, hi);
+    const w = fillGaps(inside, uniform, distinct, gaps, per);
+    const beyond = marginGrid(lo, hi, margin * width, marginPoints);
+    return { inside: uniqueOfRuns(even, inside, uniform, w), beyond: unique(beyond, beyond.length), gaps: count - 1 };
+  } finally {
+    returnDoubles(even);
+    returnInts(gaps);
+  }
 }
 
 // The loops of the grid are functions of their own, each a loop and its return (see
@@ -201,14 +213,59 @@ function packDistinct(a: Float64Array, n: number): number {
 }
 
 /**
- * {@link unique} of xs[0..length) when xs[0..split) and xs[split..length) are each ascending (the
- * uniform points and the gap points): one linear merge instead of a sort, with the sort's result
- * (-0 before +0). Falls back to {@link unique} when a run is out of order or holds a NaN.
+ * {@link unique} of the points first[0..split) and xs[split..length) when each run is ascending
+ * (the uniform points and the gap points), written to the front of `xs` (returned as its
+ * subarray): one linear merge instead of a sort, with the sort's result (-0 before +0). Falls back
+ * to {@link unique} when a run is out of order or holds a NaN.
  */
-function uniqueOfRuns(xs: Float64Array, split: number, length: number): Float64Array {
-  if (!ascending(xs, 0, split) || !ascending(xs, split, length)) return unique(xs, length);
-  const out = new Float64Array(length);
-  return out.subarray(0, mergeRuns(xs, split, length, out));
+function uniqueOfRuns(first: Float64Array, xs: Float64Array, split: number, length: number): Float64Array {
+  if (ascending(first, 0, split) && increasing(xs, split, length)) return xs.subarray(0, mergeBlocks(first, xs, split, length));
+  if (!ascending(first, 0, split) || !ascending(xs, split, length)) {
+    xs.set(first.subarray(0, split));
+    return unique(xs, length);
+  }
+  return xs.subarray(0, mergeRuns(first, xs, split, length));
+}
+
+/** True when xs[from..to) holds no NaN and each value is below the next (no two equal, not even -0 and +0). */
+function increasing(xs: Float64Array, from: number, to: number): boolean {
+  if (to > from && Number.isNaN(xs[from])) return false;
+  for (let i = from + 1; i < to; i++) if (!(xs[i - 1] < xs[i])) return false;
+  return true;
+}
+
+/**
+ * {@link mergeRuns} when the run xs[split..length) is {@link increasing} (the usual grid): the
+ * values of `xs` between two values of `first` are moved as one block (`copyWithin`), found by
+ * binary search; of a block only its first value can equal the value written before it.
+ */
+function mergeBlocks(first: Float64Array, xs: Float64Array, split: number, length: number): number {
+  let j = split;
+  let w = 0;
+  for (let i = 0; i <= split; i++) {
+    // The block xs[j..end): the values that sort before first[i] (every one left after the last).
+    const end = i < split ? blockEnd(xs, j, length, first[i]) : length;
+    if (end > j && w > 0 && xs[j] === xs[w - 1]) j++;
+    if (end > j) {
+      xs.copyWithin(w, j, end);
+      w += end - j;
+      j = end;
+    }
+    if (i < split && (w === 0 || first[i] !== xs[w - 1])) xs[w++] = first[i];
+  }
+  return w;
+}
+
+/** The first index t in [from, to) with !sortsBefore(xs[t], v), or `to` (xs[from..to) ascending; binary search). */
+function blockEnd(xs: Float64Array, from: number, to: number, v: number): number {
+  let lo = from;
+  let hi = to;
+  while (lo < hi) {
+    const mid = (lo + hi) >>> 1;
+    if (sortsBefore(xs[mid], v)) lo = mid + 1;
+    else hi = mid;
+  }
+  return lo;
 }
 
 /** True when xs[from..to) holds no NaN and is ascending in the order of the built-in sort. */
@@ -221,17 +278,19 @@ function ascending(xs: Float64Array, from: number, to: number): boolean {
 }
 
 /**
- * Writes to `out` the distinct values of the merge of the ascending runs xs[0..split) and
+ * Writes to xs[0..) the distinct values of the merge of the ascending runs first[0..split) and
  * xs[split..length) (equal values: the first run's first; of values equal to `===`, -0 and +0,
- * the first is kept, as {@link packDistinct} keeps it) and returns how many.
+ * the first is kept, as {@link packDistinct} keeps it) and returns how many. In place: a value
+ * taken from `first` is written below the next unread one of `xs` (fewer than `split` taken from
+ * `first` so far), and one taken from `xs` at or below where it was read.
  */
-function mergeRuns(xs: Float64Array, split: number, length: number, out: Float64Array): number {
+function mergeRuns(first: Float64Array, xs: Float64Array, split: number, length: number): number {
   let i = 0;
   let j = split;
   let w = 0;
   for (let k = 0; k < length; k++) {
-    const v = j >= length || (i < split && !sortsBefore(xs[j], xs[i])) ? xs[i++] : xs[j++];
-    if (w === 0 || v !== out[w - 1]) out[w++] = v;
+    const v = j >= length || (i < split && !sortsBefore(xs[j], first[i])) ? first[i++] : xs[j++];
+    if (w === 0 || v !== xs[w - 1]) xs[w++] = v;
   }
   return w;
 }
@@ -241,10 +300,10 @@ function sortsBefore(a: number, b: number): boolean {
   return a < b || (a === 0 && b === 0 && Object.is(a, -0) && !Object.is(b, -0));
 }
 
-/** The distinct values of xs[0..length), ascending (xs is reordered). */
+/** The distinct values of xs[0..length), ascending, as a subarray of xs (xs is reordered). */
 function unique(xs: Float64Array, length: number): Float64Array {
   const u = sortFloat64(xs.subarray(0, length));
-  return u.slice(0, packDistinct(u, u.length));
+  return u.subarray(0, packDistinct(u, u.length));
 }
 
 /** out[0..count): count evenly spaced points from lo to hi, both included (hi exactly). */
@@ -278,7 +337,8 @@ function marginGrid(lo: number, hi: number, reach: number, count: number): Float
 /**
  * Indices g of the `maxGaps` widest gaps distinct[g + 1] - distinct[g] (ties: lower g first), in
  * ascending g; all gaps when there are no more than `maxGaps`. Linear time: the threshold width
- * is found by selection ({@link select}) on one typed array of the widths.
+ * is found by selection ({@link select}) on one typed array of the widths. The array is lent
+ * (core/scratch.ts): the caller gives it back with `returnInts`.
  */
 function widestGaps(distinct: Float64Array, maxGaps: number, work?: Float64Array): Int32Array {
   const count = distinct.length - 1;
@@ -286,16 +346,16 @@ function widestGaps(distinct: Float64Array, maxGaps: number, work?: Float64Array
   const widths = work !== undefined && work.length >= count ? work.subarray(0, count) : new Float64Array(count);
   gapWidths(distinct, count, widths);
   const threshold = selectKth(widths, count - maxGaps);
-  const out = new Int32Array(maxGaps);
+  const out = borrowInts(maxGaps);
   pickGaps(distinct, count, threshold, maxGaps - gapsWiderThan(distinct, count, threshold), out);
   return out;
 }
 
 // One loop per function (see DEVELOPERS.md, "Writing hot loops").
 
-/** 0, 1, ..., count - 1. */
+/** 0, 1, ..., count - 1, in a lent array (core/scratch.ts). */
 function allGaps(count: number): Int32Array {
-  const out = new Int32Array(count);
+  const out = borrowInts(count);
   for (let g = 0; g < count; g++) out[g] = g;
   return out;
 }
@@ -390,26 +450,23 @@ function withKept(even: number[], kept: readonly number[]): number[] {
  * @param coefficients fitted coefficients (length p)
  * @param c index of the varying input in `design.inputs`
  * @param fixed value of every input (entry c is ignored)
- * @returns predict(xs): predictions at the points xs of input c
+ * @returns predict(xs, out): predictions at the points xs of input c, written to `out` when given
+ *   (all zeros, of length xs.length)
  */
 function predictorAlong(
   design: Design,
   coefficients: ArrayLike<number>,
   c: number,
   fixed: readonly number[],
-): (xs: Float64Array) => Float64Array {
+): (xs: Float64Array, out?: Float64Array) => Float64Array {
   const name = design.inputs[c];
   const varying = design.terms.map((t) => t.inputs.includes(name));
-  const constantColumns = (n: number): Float64Array[] => design.inputs.map((_, k) => new Float64Array(n).fill(fixed[k]));
-  if (readByEveryTerm(design, c)) {
-    return (xs) => {
-      const columns = constantColumns(xs.length);
-      columns[c] = xs;
-      return predictRows(design, { inputs: columns, rows: xs.length }, coefficients);
-    };
-  }
+  // Column c is `xs` itself; only the other inputs get a column of their fixed value.
+  const columnsAt = (xs: Float64Array): Float64Array[] =>
+    design.inputs.map((_, k) => (k === c ? xs : new Float64Array(xs.length).fill(fixed[k])));
+  if (readByEveryTerm(design, c)) return (xs, out) => predictRows(design, { inputs: columnsAt(xs), rows: xs.length }, coefficients, out);
   // The fixed part: intercept plus every term that does not read input c, at the fixed values.
-  const row = design.fill(constantColumns(1), 0, 1);
+  const row = design.fill(columnsAt(Float64Array.of(fixed[c])), 0, 1);
   let base = design.intercept ? coefficients[0] : 0;
   const sub: number[] = [];
   design.terms.forEach((t, i) => {
@@ -425,13 +482,13 @@ function predictorAlong(
     false,
   );
   const fixedByName = new Map(design.inputs.map((input, k) => [input, fixed[k]]));
-  return (xs) => {
+  return (xs, out) => {
     const columns = partial.inputs.map((input) =>
       input === name ? xs : new Float64Array(xs.length).fill(fixedByName.get(input) ?? Number.NaN),
     );
-    const out = predictRows(partial, { inputs: columns, rows: xs.length }, sub);
-    for (let i = 0; i < out.length; i++) out[i] += base;
-    return out;
+    const pred = predictRows(partial, { inputs: columns, rows: xs.length }, sub, out);
+    for (let i = 0; i < pred.length; i++) pred[i] += base;
+    return pred;
   };
 }
 
@@ -457,11 +514,19 @@ function mergedPlaces(ax: Float64Array, bx: Float64Array): Int32Array {
   return place;
 }
 
-/** The first index i >= from of xs with !(xs[i] <= v), or xs.length: how far a merge takes xs before v. */
+/**
+ * The first index i >= from of the ascending xs (any NaN at its end) with !(xs[i] <= v), or
+ * xs.length: how far a merge takes xs before v. Binary search (xs[i] <= v holds for a prefix).
+ */
 function firstAfter(xs: Float64Array, from: number, v: number): number {
-  let i = from;
-  while (i < xs.length && xs[i] <= v) i++;
-  return i;
+  let lo = from;
+  let hi = xs.length;
+  while (lo < hi) {
+    const mid = (lo + hi) >>> 1;
+    if (xs[mid] <= v) lo = mid + 1;
+    else hi = mid;
+  }
+  return lo;
 }
 
 /** The values at the merged indices `indices` (ascending) of `a` and `b` merged with `b` at `place` (see {@link mergedPlaces}). */
@@ -598,6 +663,11 @@ export interface SwingPlan {
   maxCurves: number;
   /** {@link SwingOptions.backTransform}, or absent. */
   backTransform?: TargetTransformKind;
+  /**
+   * The grids' arrays lent by core/scratch.ts ({@link measureSwing} gives them back once the plan
+   * is scored: nothing in the {@link Swing} or the {@link InsideCurve}s reads them); default none.
+   */
+  lent?: Float64Array[];
 }
 
 /**
@@ -653,11 +723,16 @@ export function planSwing(design: Design, train: Rows, options: SwingOptions = {
   const n = train.rows;
   const d = design.inputs.length;
   const [ylo, yhi] = range(train.y, n);
-  // One scratch buffer for every input: selection for the medians, then a typed sort for the grid.
-  const scratch = new Float64Array(n);
+  // One scratch buffer for every input: selection for the medians, then a typed sort for the
+  // grid; a second one for the sort's and the widest gaps' work. Both are lent (core/scratch.ts)
+  // and given back after the loop (nothing kept in the plan reads them; should the loop throw,
+  // they are dropped as new arrays would be).
+  const scratch = borrowDoubles(n);
+  const work = borrowDoubles(n);
   const medians = train.inputs.map((col) => columnMedian(col, n, scratch));
-  const radixScratch = new Uint32Array(2 * n);
+  const radixScratch = new Uint32Array(work.buffer, work.byteOffset, 2 * n);
   const grids: SwingGrid[] = [];
+  const lent: Float64Array[] = [];
   const gridOptions: SwingOptions = { ...options, maxGaps: Math.ceil((options.maxGaps ?? SWING_DEFAULTS.maxGaps) / Math.max(1, d)) };
   for (let c = 0; c < d; c++) {
     // A category input takes only its level codes: scanned level by level, no margins.
@@ -671,11 +746,13 @@ export function planSwing(design: Design, train: Rows, options: SwingOptions = {
     // An input every term reads on one transformed scale (log x ...) is scanned on that scale.
     const onScale = inputScaleOf(design, c);
     if (onScale !== null) for (let i = 0; i < len; i++) sample[i] = onScale.forward(sample[i]);
-    const grid = gridFromSorted(sortFloat64(sample, radixScratch), len, gridOptions, new Float64Array(radixScratch.buffer, 0, len));
+    const grid = gridFromSorted(sortFloat64(sample, radixScratch), len, gridOptions, work.subarray(0, len));
     if (onScale !== null) {
-      grid.inside = grid.inside.map(onScale.inverse);
+      const onInput = grid.inside.map(onScale.inverse);
+      returnDoubles(grid.inside);
+      grid.inside = onInput;
       grid.beyond = grid.beyond.map(onScale.inverse);
-    }
+    } else lent.push(grid.inside);
     const whole = len === n && onScale === null && defaultInsideGrid(options, gridOptions, grid.gaps);
     if (grid.inside.length > 0) {
       const beyond = admitted(design, c, grid.beyond);
@@ -687,6 +764,8 @@ export function planSwing(design: Design, train: Rows, options: SwingOptions = {
       );
     }
   }
+  returnDoubles(work);
+  returnDoubles(scratch);
 
   // Several inputs: segments between sampled rows and their nearest neighbours.
   let segments: Swing['segments'] = null;
@@ -722,6 +801,7 @@ export function planSwing(design: Design, train: Rows, options: SwingOptions = {
     maxCurvePoints,
     maxCurves,
     ...(back !== undefined ? { backTransform: back } : {}),
+    lent,
   };
 }
 
@@ -768,17 +848,34 @@ function admitted(design: Design, c: number, points: Float64Array): Float64Array
 }
 
 /**
- * The predictions along one input at the points of its whole grid ({@link SwingGrid.whole}), the
- * other inputs at their training medians, predicted with the whole design: what the spike figure
- * computes along that input (diagnostics/spikes.ts), kept so that it is computed once.
+ * Total variation of a sampled curve: sum |v[k+1] - v[k]| over its first m values (Jordan 1881;
+ * of a sampled curve, the sum of absolute increments). One loop (see DEVELOPERS.md, "Writing hot
+ * loops").
+ * @param v the curve's values in order
+ * @param m values read (m <= v.length)
+ */
+export function totalVariation(v: Float64Array, m: number): number {
+  let s = 0;
+  for (let k = 1; k < m; k++) s += Math.abs(v[k] - v[k - 1]);
+  return s;
+}
+
+/**
+ * The curve of predictions along one input at the points of its whole grid
+ * ({@link SwingGrid.whole}), the other inputs at their training medians, predicted with the whole
+ * design: what the spike figure measures along that input (diagnostics/spikes.ts), kept as its
+ * length and total variation so that it is computed once (the predictions themselves are not kept).
  */
 export interface InsideCurve {
   /** Index of the input in `design.inputs`. */
   input: number;
-  /** The grid's inside points, ascending. */
-  grid: Float64Array;
-  /** The predictions at `grid`, back-transformed under `backTransform`. */
-  prediction: Float64Array;
+  /** Points of the grid (inside the range, ascending). */
+  points: number;
+  /**
+   * {@link totalVariation} of the predictions at the grid's points in ascending order,
+   * back-transformed under `backTransform`.
+   */
+  variation: number;
   /** The plan's {@link SwingPlan.backTransform}, or absent. */
   backTransform?: TargetTransformKind;
   /** The input's distinct training values, ascending ({@link SwingGrid.distinct}), or absent. */
@@ -843,18 +940,23 @@ export function scoreSwing(plan: SwingPlan, design: Design, coefficients: ArrayL
     const c = grid.input;
     const along = (xs: Float64Array): Float64Array[] => design.inputs.map((_, k) => (k === c ? xs : constant(k, xs.length)));
     const predict = predictorAlong(design, coefficients, c, medians);
-    const pin = score(along(grid.inside), grid.inside.length, 'inside', predict(grid.inside));
+    // The inside predictions are lent (core/scratch.ts) and given back before the next input:
+    // only figures and copies of them are kept.
+    const pin = score(along(grid.inside), grid.inside.length, 'inside', predict(grid.inside, borrowDoubles(grid.inside.length)));
     const pout = score(along(grid.beyond), grid.beyond.length, 'beyond', predict(grid.beyond));
     if (insideCurves !== undefined && grid.whole === true && readByEveryTerm(design, c)) {
       insideCurves.push({
         input: c,
-        grid: grid.inside,
-        prediction: pin,
+        points: pin.length,
+        variation: totalVariation(pin, pin.length),
         ...(plan.backTransform !== undefined ? { backTransform: plan.backTransform } : {}),
         ...(grid.distinct !== undefined ? { distinct: grid.distinct } : {}),
       });
     }
-    if (curves.length >= plan.maxCurves) continue;
+    if (curves.length >= plan.maxCurves) {
+      returnDoubles(pin);
+      continue;
+    }
     // Curve for charts: all points ascending (inside and margins merged), thinned with the
     // extremes kept; only the kept points are read out of the merged order.
     const place = mergedPlaces(grid.inside, grid.beyond);
@@ -871,6 +973,7 @@ export function scoreSwing(plan: SwingPlan, design: Design, coefficients: ArrayL
       x: mergedValues(grid.inside, grid.beyond, place, keep),
       prediction: mergedValues(pin, pout, place, keep),
     });
+    returnDoubles(pin);
   }
   if (plan.segmentColumns !== null) score(plan.segmentColumns, plan.segmentColumns[0].length, 'inside');
 
@@ -912,5 +1015,10 @@ export function measureSwing(
   options: SwingOptions = {},
   insideCurves?: InsideCurve[],
 ): Swing {
-  return scoreSwing(planSwing(design, train, options), design, coefficients, insideCurves);
+  const plan = planSwing(design, train, options);
+  try {
+    return scoreSwing(plan, design, coefficients, insideCurves);
+  } finally {
+    for (const array of plan.lent ?? []) returnDoubles(array);
+  }
 }

@@ -1,7 +1,15 @@
 // Scratch arrays lent and given back (core/scratch.ts): zero-filled like new ones, the same buffer
 // lent again after it came back, and the pool bounded in count and size.
 import { describe, expect, it } from 'vitest';
-import { borrowDoubles, returnDoubles, SCRATCH_KEPT, SCRATCH_MAX_BYTES } from '../../src/core/scratch.js';
+import {
+  borrowDoubles,
+  borrowDoublesToOverwrite,
+  borrowInts,
+  returnDoubles,
+  returnInts,
+  SCRATCH_KEPT,
+  SCRATCH_MAX_BYTES,
+} from '../../src/core/scratch.js';
 
 describe('scratch arrays of doubles', () => {
   it('lends a zero-filled array of the length asked, and the same buffer again once it is back', () => {
@@ -19,6 +27,42 @@ describe('scratch arrays of doubles', () => {
     expect(c.buffer).not.toBe(b.buffer);
     returnDoubles(b);
     returnDoubles(c);
+  });
+
+  it('lends zero-filled 32-bit integers from the same pool (an odd length too)', () => {
+    // A size no earlier test left in the pool (512 KiB).
+    const a = borrowInts(100_001);
+    expect(a).toBeInstanceOf(Int32Array);
+    expect(a.length).toBe(100_001);
+    expect(a.every((v) => v === 0)).toBe(true);
+    a.fill(-1);
+    returnInts(a);
+    const b = borrowDoubles(50_001);
+    expect(b.buffer).toBe(a.buffer);
+    expect(b.every((v) => v === 0)).toBe(true);
+    returnDoubles(b);
+    const c = borrowInts(100_001);
+    expect(c.buffer).toBe(a.buffer);
+    expect(c.every((v) => v === 0)).toBe(true);
+    returnInts(c);
+  });
+
+  it('lends a kept buffer as it was left to a caller that overwrites it, and a new one as zeros', () => {
+    const fresh = borrowDoublesToOverwrite(100_001);
+    expect(fresh.length).toBe(100_001);
+    expect(fresh.every((v) => v === 0)).toBe(true);
+    fresh.fill(3);
+    returnDoubles(fresh);
+    const again = borrowDoublesToOverwrite(80_000);
+    expect(again.buffer).toBe(fresh.buffer);
+    expect(again.length).toBe(80_000);
+    expect(again[0]).toBe(3);
+    returnDoubles(again);
+    // borrowDoubles clears the same buffer.
+    const cleared = borrowDoubles(80_000);
+    expect(cleared.buffer).toBe(fresh.buffer);
+    expect(cleared.every((v) => v === 0)).toBe(true);
+    returnDoubles(cleared);
   });
 
   it('lends the smallest kept buffer that is large enough', () => {

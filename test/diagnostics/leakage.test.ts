@@ -128,4 +128,26 @@ describe('leakage: hold-out rows equal to a training row', () => {
     expect([leak.inputMatches, leak.fullMatches]).toEqual([inputs, full]);
     expect(leak.fullMatches).toBeLessThan(leak.inputMatches);
   });
+
+  it('gives its lent tables back once: finish() again gives the same figures, rows after it are refused, and scans in turn agree', () => {
+    const train = data([
+      [1, 2, 10],
+      [3, 4, 20],
+    ]);
+    const holdout = data([
+      [3, 4, 20],
+      [1, 2, 11],
+      [7, 8, 9],
+    ]);
+    const scan = new LeakageScan(holdout);
+    scan.add(train);
+    const first = scan.finish();
+    // Another scan borrows the same buffers from the pool and overwrites them.
+    const other = findLeakage(data([[7, 8, 9]]), data([[7, 8, 9]]));
+    expect(other.fullMatches).toBe(1);
+    expect(scan.finish()).toBe(first);
+    expect(first).toEqual({ inputMatches: 2, fullMatches: 1, holdoutLines: [2, 3], trainLines: [3, 2], holdoutRows: 3, columns: 2 });
+    expect(() => scan.add(train)).toThrow(/after finish/);
+    expect(findLeakage(train, holdout)).toEqual(first);
+  });
 });

@@ -46,13 +46,15 @@ function random(seed: number): () => number {
   };
 }
 
-function figures(n: number, seed: number, options: { weights?: boolean; levels?: number } = {}) {
+function figures(n: number, seed: number, options: { weights?: boolean; levels?: number; value?: (u: number, i: number) => number } = {}) {
   const next = random(seed);
   const levels = options.levels ?? 0;
+  const value = options.value;
   // Values on a coarse lattice repeat (several rows per value); -0 and +0 both occur.
-  const x = Float64Array.from(
-    { length: n },
-    (_, i) => (levels > 0 ? Math.floor(next() * levels) - levels / 2 : next() * 10 - 5) * (i % 7 === 0 ? -1 : 1),
+  const x = Float64Array.from({ length: n }, (_, i) =>
+    value !== undefined
+      ? value(next(), i)
+      : (levels > 0 ? Math.floor(next() * levels) - levels / 2 : next() * 10 - 5) * (i % 7 === 0 ? -1 : 1),
   );
   const y = Float64Array.from(x, (v) => Math.sin(v) + next());
   const weights = options.weights ? Float64Array.from({ length: n }, (_, i) => (i % 11 === 0 ? 0 : 0.5 + next())) : undefined;
@@ -90,6 +92,16 @@ describe('spike data variation', () => {
       expect(known[0].distinct?.length).toBeGreaterThan(50);
       expect(shared.perInput[0]?.dataVariation).toBe(want);
       expect(shared).toEqual(spikes);
+    }
+  });
+
+  it('equals it with values bunched at one end (many to a bucket of the slot table) and over 600 orders of magnitude', () => {
+    for (const value of [(u: number) => u ** 12, (u: number, i: number) => (i % 2 === 0 ? -1 : 1) * 10 ** (600 * u - 300)]) {
+      for (const weights of [false, true]) {
+        const { got, want, shared } = figures(2500, 17, { weights, value });
+        expect(got).toBe(want);
+        expect(shared.perInput[0]?.dataVariation).toBe(want);
+      }
     }
   });
 

@@ -1,5 +1,14 @@
 import { describe, expect, it } from 'vitest';
-import { excursion, inputGrid, measureSwing, scoreSwing, type SwingPlan } from '../../src/diagnostics/swing.js';
+import {
+  excursion,
+  inputGrid,
+  measureSwing,
+  scoreSwing,
+  totalVariation,
+  type InsideCurve,
+  type SwingPlan,
+} from '../../src/diagnostics/swing.js';
+import { borrowDoubles, returnDoubles, SCRATCH_KEPT } from '../../src/core/scratch.js';
 import { predictRows } from '../../src/design/blocks.js';
 import { fitRows, linearDesign } from './helpers.js';
 
@@ -39,6 +48,8 @@ describe('grid across an input', () => {
       Array.from({ length: 500 }, () => Math.round(random() * 40) / 4 - 5),
       Array.from({ length: 900 }, () => 1e-300 * random()),
       Array.from({ length: 700 }, () => (random() < 0.5 ? -1 : 1) * 10 ** (20 * random() - 10)),
+      // Uniform points 9 t equal to gap points 81 k + 9 t (all exact): repeats across the two runs.
+      Array.from({ length: 23 }, (_, k) => 81 * k).concat([1800]),
     ];
     for (const values of cases) {
       const got = inputGrid(values).inside;
@@ -98,6 +109,45 @@ describe('swing of a fitted model', () => {
     expect(swing.curves.map((c) => c.input)).toEqual(['x1', 'x2']);
     for (const c of swing.curves) expect(c.x.length).toBeLessThanOrEqual(400);
     expect(swing.inside).toBeLessThan(1e-9);
+  });
+
+  it('keeps none of the arrays it borrows: the result and the inside curves stay the same when the pool lends them again', () => {
+    for (const q of [1, 2]) {
+      const design = linearDesign(q);
+      const n = 1500;
+      const inputs = Array.from({ length: q }, (_, c) => Float64Array.from({ length: n }, (_, i) => ((i * (7919 + c * 104)) % 1009) / 7));
+      const rows = { inputs, y: Float64Array.from(inputs[0], (v, i) => Math.sin(v) + i / n), rows: n };
+      const known: InsideCurve[] = [];
+      const swing = measureSwing(design, rows, fitRows(design, rows).coefficients, {}, known);
+      expect(known.length).toBe(q);
+      const before = structuredClone({ swing, known });
+      // Every buffer the pool keeps, lent out again and overwritten.
+      const lent = Array.from({ length: SCRATCH_KEPT }, () => borrowDoubles(1));
+      for (const a of lent) new Float64Array(a.buffer).fill(Number.NaN);
+      expect({ swing, known }).toEqual(before);
+      for (const a of lent) returnDoubles(a);
+      // The same scan again gives the same figures.
+      const again: InsideCurve[] = [];
+      expect(measureSwing(design, rows, fitRows(design, rows).coefficients, {}, again)).toEqual(swing);
+      expect(again).toEqual(known);
+    }
+  });
+
+  it("records each whole grid's curve as its length and total variation (the predictions at inputGrid's points)", () => {
+    const design = linearDesign(1);
+    const x = Float64Array.from({ length: 400 }, (_, i) => ((i * 37) % 101) / 3);
+    const rows = { inputs: [x], y: Float64Array.from(x, (v) => v * v), rows: x.length };
+    const { coefficients } = fitRows(design, rows);
+    const known: InsideCurve[] = [];
+    measureSwing(design, rows, coefficients, {}, known);
+    const grid = inputGrid(x).inside;
+    const curve = predictRows(design, { inputs: [grid], rows: grid.length }, coefficients);
+    let variation = 0;
+    for (let k = 1; k < curve.length; k++) variation += Math.abs(curve[k] - curve[k - 1]);
+    expect(known).toHaveLength(1);
+    expect(known[0].points).toBe(grid.length);
+    expect(known[0].variation).toBe(variation);
+    expect(totalVariation(curve, curve.length)).toBe(variation);
   });
 });
 

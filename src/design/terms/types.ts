@@ -14,7 +14,8 @@ export interface Term {
   /** Parameters fixed from the training data, for the report (shift, scale, centres...). */
   readonly fixed: Record<string, number | number[]>;
   /**
-   * Fills this term's design columns for a block of rows.
+   * Fills this term's design columns for a block of rows: every entry of them, zeros included
+   * (the block's buffer is reused and holds whatever was there before: design/blocks.ts).
    * @param inputs one Float64Array per entry of `inputs`, each holding at least `m` rows
    * @param m rows in the block
    * @param out column-major design block with `m` rows (`out[j * m + i]`)
