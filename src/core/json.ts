@@ -25,8 +25,9 @@ export type JsonValue = number | string | boolean | null | JsonValue[] | { [key:
 
 /**
  * Converts a value for the JSON report (numbers through `jsonNumber`, typed arrays to arrays,
- * `undefined` fields dropped). Objects come out without a prototype (their keys may be column
- * names such as `__proto__`); `JSON.stringify` writes them as any object.
+ * `undefined` fields dropped). Objects come out as plain objects whose every key is an own
+ * property, `__proto__` too (keys may be column names): as `JSON.parse` gives them back, and
+ * nothing is ever set on a prototype.
  *
  * @param value numbers, strings, booleans, null, arrays, typed arrays and plain objects of them
  */
@@ -50,12 +51,17 @@ export function jsonSafe(value: unknown): JsonValue {
     return out;
   }
   if (typeof value === 'object' && value !== undefined) {
-    // Keys may be column names (user text): no prototype, so `__proto__` is a name like any other.
-    const out: { [key: string]: JsonValue } = Object.create(null);
+    // Keys may be column names (user text): `__proto__` is defined as an own property (an
+    // assignment would set the prototype), every other key is assigned. A plain object, not one
+    // without a prototype: V8 keeps those in dictionary mode, slower to build and to stringify.
+    const out: { [key: string]: JsonValue } = {};
     const record = value as Record<string, unknown>;
     for (const k of Object.keys(record)) {
       const v = record[k];
-      if (v !== undefined) out[k] = typeof v === 'number' ? jsonNumber(v) : jsonSafe(v);
+      if (v === undefined) continue;
+      const safe = typeof v === 'number' ? jsonNumber(v) : jsonSafe(v);
+      if (k === '__proto__') Object.defineProperty(out, k, { value: safe, enumerable: true, writable: true, configurable: true });
+      else out[k] = safe;
     }
     return out;
   }

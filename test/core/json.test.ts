@@ -27,12 +27,17 @@ describe('jsonSafe', () => {
     expect(jsonSafe(() => 1)).toBeNull();
   });
 
-  it('keeps user-named keys such as __proto__ as plain keys, in their order', () => {
-    const record = JSON.parse('{"z": 1, "__proto__": {"polluted": 1}, "a": [-0]}') as Record<string, unknown>;
+  it('keeps user-named keys such as __proto__ as own keys, in their order, and sets no prototype', () => {
+    const record = JSON.parse('{"z": 1, "__proto__": {"polluted": 1}, "constructor": 2, "1": 3, "a": [-0]}') as Record<string, unknown>;
     const safe = jsonRecord(record);
-    expect(Object.getPrototypeOf(safe)).toBeNull();
-    expect(JSON.stringify(safe)).toBe('{"z":1,"__proto__":{"polluted":1},"a":[0]}');
+    expect(Object.getPrototypeOf(safe)).toBe(Object.prototype);
+    expect(Object.keys(safe)).toEqual(['1', 'z', '__proto__', 'constructor', 'a']);
+    expect(Object.getOwnPropertyDescriptor(safe, '__proto__')?.value).toEqual({ polluted: 1 });
+    expect((safe as Record<string, unknown>).polluted).toBeUndefined();
     expect(({} as Record<string, unknown>).polluted).toBeUndefined();
+    // The same text as JSON.stringify of the record as JSON.parse gave it.
+    expect(JSON.stringify(safe)).toBe('{"1":3,"z":1,"__proto__":{"polluted":1},"constructor":2,"a":[0]}');
+    expect(JSON.stringify(safe, null, 2)).toBe(JSON.stringify(record, null, 2).replace('-0', '0'));
   });
 
   it('gives the same text as converting each element one at a time', () => {
