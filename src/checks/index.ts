@@ -182,22 +182,26 @@ function judgeCheck(
   const status = judge(measured.value, effective);
   const reason = measured.reason ?? (status === 'skipped' && effective.off ? 'off' : status);
   const comparison = measured.value === null ? '' : `; ${describeLimit(status, measured.value, effective)}`;
-  const outcome: CheckResult = {
-    id: check.id,
-    code: `${check.id}/${reason}`,
-    status,
-    value: measured.value === null ? null : jsonNumber(measured.value),
-    limitKey: check.limitKey,
-    limit: effective.off ? null : effective.fail,
-    warn: effective.off ? null : effective.warn,
-    ...(!effective.off && (effective.warnBelow !== null || effective.failBelow !== null)
-      ? { floor: { warn: effective.warnBelow, fail: effective.failBelow } }
-      : {}),
-    line: line ?? measured.line ?? check.line(context.descriptor),
-    message: `${measured.message}${comparison}`,
-    advice: status === 'fail' || status === 'warn' ? (measured.advice ?? check.advice) : '',
-    ...(measured.detail ? { detail: measured.detail } : {}),
-    ...(measured.suggestion ? { suggestion: measured.suggestion } : {}),
-  };
+  // Two literals of the one key order (with and without `floor`), the optional tail assigned in
+  // order: no spread of a temporary object per key (every model makes one outcome per check).
+  const id = check.id;
+  const code = `${id}/${reason}`;
+  const value = measured.value === null ? null : jsonNumber(measured.value);
+  const limitKey = check.limitKey;
+  const failAt = effective.off ? null : effective.fail;
+  const warnAt = effective.off ? null : effective.warn;
+  const floor =
+    !effective.off && (effective.warnBelow !== null || effective.failBelow !== null)
+      ? { warn: effective.warnBelow, fail: effective.failBelow }
+      : null;
+  const at = line ?? measured.line ?? check.line(context.descriptor);
+  const message = `${measured.message}${comparison}`;
+  const advice = status === 'fail' || status === 'warn' ? (measured.advice ?? check.advice) : '';
+  const outcome: CheckResult =
+    floor === null
+      ? { id, code, status, value, limitKey, limit: failAt, warn: warnAt, line: at, message, advice }
+      : { id, code, status, value, limitKey, limit: failAt, warn: warnAt, floor, line: at, message, advice };
+  if (measured.detail) outcome.detail = measured.detail;
+  if (measured.suggestion) outcome.suggestion = measured.suggestion;
   return { outcome, figures: measured.metrics };
 }

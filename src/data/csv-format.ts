@@ -77,6 +77,9 @@ export function separatorOfHeader(line: string): Separator {
   return ',';
 }
 
+/** Decodes one whole line at a time (no `stream` option, so no state is kept between calls): shared by every read. */
+const LINE_DECODER = new TextDecoder('utf-8');
+
 /**
  * Reads pieces of a file until its first line that is not blank has ended (within the header's
  * 1 MiB bound: past it the readers report the long header), finds that line's separator by
@@ -96,7 +99,7 @@ export async function peekSeparator(
   let line = 1;
   let found: Separator | null = null;
   let done = false;
-  const decoder = new TextDecoder('utf-8');
+  const decoder = LINE_DECODER;
   const lineText = (): string => {
     const total = segments.reduce((n, s) => n + s.length, 0);
     const bytes = new Uint8Array(total);

@@ -12,7 +12,7 @@
  * millisecond.
  */
 
-import { closeSync, fstatSync, lstatSync, openSync, readFileSync, readSync, realpathSync, statSync, type Stats } from 'node:fs';
+import { closeSync, lstatSync, openSync, readFileSync, readSync, realpathSync, statSync, type Stats } from 'node:fs';
 import * as nodePath from 'node:path';
 import { InputError, quoteValue, type ErrorLocation } from '../core/errors.js';
 import { FILE_MISSING, joinRepoPath, normaliseRepoPath, notAFileError, PATH_OUTSIDE, unreadableError } from './repo-path.js';
@@ -136,7 +136,7 @@ export function createFsRepository(root: string): RepoReader {
       }
     },
     async *stream(path, chunkBytes = 1024 * 1024) {
-      const { real } = await requireFile(path);
+      const { real, info } = await requireFile(path);
       let fd: number;
       try {
         fd = openSync(real, 'r');
@@ -144,20 +144,33 @@ export function createFsRepository(root: string): RepoReader {
         throw unreadableError(error, { file: path });
       }
       try {
-        // Pieces of chunkBytes, no bigger than the file needs (a file that grows meanwhile is
-        // still read to its end, in pieces of at least 64 KiB); each piece is a fresh buffer,
-        // so a reader may keep a previous one.
-        const size = Math.max(1, Math.min(Math.floor(chunkBytes), Math.max(65_536, fstatSync(fd).size + 1)));
+        // Pieces of chunkBytes, the first no bigger than the file needs (its size as just found
+        // for the checks above, plus one byte), the rest of at least 64 KiB (a file that grows
+        // meanwhile is still read to its end). Each piece is a fresh buffer, so a reader may
+        // keep a previous one; a piece is filled until it is full or a read finds the end, so a
+        // small file is one buffer and the read that finds its end goes into that buffer's room.
+        const most = Math.max(1, Math.floor(chunkBytes));
+        let size = Math.min(most, info.size + 1);
         for (;;) {
           const piece = Buffer.allocUnsafe(size);
-          let n: number;
-          try {
-            n = readSync(fd, piece, 0, size, null);
-          } catch (error) {
-            throw unreadableError(error, { file: path });
+          let filled = 0;
+          let ended = false;
+          while (filled < size) {
+            let n: number;
+            try {
+              n = readSync(fd, piece, filled, size - filled, null);
+            } catch (error) {
+              throw unreadableError(error, { file: path });
+            }
+            if (n === 0) {
+              ended = true;
+              break;
+            }
+            filled += n;
           }
-          if (n === 0) return;
-          yield n === size ? piece : piece.subarray(0, n);
+          if (filled > 0) yield filled === size ? piece : piece.subarray(0, filled);
+          if (ended) return;
+          size = Math.min(most, Math.max(65_536, info.size + 1));
         }
       } finally {
         closeSync(fd);

@@ -66,13 +66,17 @@ export function neutraliseLog(text: string): string {
  * digit, never with `::`.
  */
 export function neutraliseJson(json: string): string {
-  // Most pieces (numbers, plain names) hold none of the characters either pattern needs: one scan.
-  if (!NEEDS_NEUTRALISING.test(json)) return json;
+  // Most pieces (numbers, plain names) hold none of the characters either pattern needs. Four
+  // `indexOf` scans of single characters are an order of magnitude faster than one scan by a
+  // character-class pattern (and a text of one-byte characters cannot hold U+2028 or U+2029).
+  if (!needsNeutralising(json)) return json;
   return json.replace(LEGACY, '#$1#$2\\u005b').replace(/[\u0085\u2028\u2029]/g, codeEscape);
 }
 
-/** A character without which {@link neutraliseJson} changes nothing: `#` (of `##[`) or a raw line separator. */
-const NEEDS_NEUTRALISING = /[#\u0085\u2028\u2029]/;
+/** True when `text` holds a character without which {@link neutraliseJson} changes nothing: `#` (of `##[`) or a raw line separator. */
+function needsNeutralising(text: string): boolean {
+  return text.includes('#') || text.includes('\u0085') || text.includes('\u2028') || text.includes('\u2029');
+}
 
 /**
  * Text an API server sent back (an error message, a library's warning about a response), made

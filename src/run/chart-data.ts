@@ -74,8 +74,12 @@ export function chartNumber(x: number): number | null {
  * floor(t n / max), t = 0 .. max-1 (deterministic: the same file always gives the same points).
  */
 export function thinRows(n: number, max = MAX_CHART_POINTS): Int32Array {
-  if (n <= max) return Int32Array.from({ length: n }, (_, i) => i);
-  return Int32Array.from({ length: max }, (_, t) => Math.floor((t * n) / max));
+  // Plain loops: `Int32Array.from` with a mapping function takes the builtins' slow generic path.
+  const m = Math.max(0, Math.trunc(Math.min(n, max)));
+  const keep = new Int32Array(m);
+  if (n <= max) for (let i = 0; i < m; i++) keep[i] = i;
+  else for (let t = 0; t < m; t++) keep[t] = Math.floor((t * n) / max);
+  return keep;
 }
 
 /**
@@ -91,24 +95,38 @@ function partIndex(data: ModelData, keep: Int32Array): { files?: string[]; file_
   const parts = data.parts;
   if (parts === undefined) return {};
   const index = new Map(parts.map((p, k) => [p.file, k]));
-  return { files: parts.map((p) => p.file), file_index: Array.from(keep, (i) => index.get(placeOfLine(data, data.lines[i]).file) ?? 0) };
+  const fileIndex: number[] = [];
+  for (let t = 0; t < keep.length; t++) fileIndex.push(index.get(placeOfLine(data, data.lines[keep[t]]).file) ?? 0);
+  return { files: parts.map((p) => p.file), file_index: fileIndex };
+}
+
+/** {@link chartNumber} of the kept rows of a column, in the order of `keep`. */
+function pickRows(col: ArrayLike<number>, keep: Int32Array): (number | null)[] {
+  const out: (number | null)[] = [];
+  for (let t = 0; t < keep.length; t++) out.push(chartNumber(col[keep[t]]));
+  return out;
 }
 
 function series(data: ModelData, predictions: Float64Array, max: number, numbers: number): PointSeries {
   const keep = thinRows(data.rows, seriesPoints(data.inputs.length, max, numbers));
   const thinned = keep.length < data.rows;
-  const pick = (col: ArrayLike<number>): (number | null)[] => Array.from(keep, (i) => chartNumber(col[i]));
+  // Plain loops over the kept rows (`Array.from` with a mapping function is several times slower).
+  const lines: number[] = [];
+  const residual: (number | null)[] = [];
+  if (data.parts === undefined || data.parts.length === 0) for (let t = 0; t < keep.length; t++) lines.push(data.lines[keep[t]]);
+  else for (let t = 0; t < keep.length; t++) lines.push(placeOfLine(data, data.lines[keep[t]]).line);
+  for (let t = 0; t < keep.length; t++) residual.push(chartNumber(data.y[keep[t]] - predictions[keep[t]]));
   return {
     rows: data.rows,
     shown: keep.length,
     thinned,
     thinning: thinned ? `${keep.length} of ${data.rows} rows, evenly spaced through the file` : '',
-    lines: Array.from(keep, (i) => placeOfLine(data, data.lines[i]).line),
+    lines,
     ...partIndex(data, keep),
-    x: data.inputs.map(pick),
-    actual: pick(data.y),
-    fitted: pick(predictions),
-    residual: Array.from(keep, (i) => chartNumber(data.y[i] - predictions[i])),
+    x: data.inputs.map((col) => pickRows(col, keep)),
+    actual: pickRows(data.y, keep),
+    fitted: pickRows(predictions, keep),
+    residual,
   };
 }
 

@@ -85,6 +85,15 @@ describe('neutraliseJson', () => {
     expect(json).not.toMatch(/[\u0085\u2028\u2029]/);
     expect(json).toContain('"m ##\\u005berror]forged"');
   });
+
+  it('escapes each line separator alone, in one-byte and two-byte text, and leaves other text as it is', () => {
+    expect(neutraliseJson('"a\u0085b"')).toBe('"a\\u0085b"');
+    expect(neutraliseJson('"a\u2028b"')).toBe('"a\\u2028b"');
+    expect(neutraliseJson('"é\u2029b"')).toBe('"é\\u2029b"');
+    expect(neutraliseJson('"x ##[y"')).toBe('"x ##\\u005by"');
+    const plain = JSON.stringify({ name: 'm # one', values: [1.5, -2, null], note: 'é ✓' }, null, 2);
+    expect(neutraliseJson(plain)).toBe(plain);
+  });
 });
 
 describe('quoteServerText', () => {
