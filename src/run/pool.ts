@@ -58,10 +58,10 @@ export interface PoolRun<T, R> {
 export interface PoolOptions<T = unknown, R = unknown> extends PoolStart, PoolRun<T, R> {}
 
 /**
- * Tasks a worker holds at a time: the one it runs and the next, so that it never waits for this
- * thread (busy with its own task) to hand it more.
+ * Tasks a worker holds at a time: the one it runs and three more, so that it does not wait for
+ * this thread (busy with its own task, a model of a few milliseconds) to hand it more.
  */
-export const TASKS_IN_FLIGHT = 2;
+export const TASKS_IN_FLIGHT = 4;
 
 /** A per-task time limit of a run. */
 export interface PoolTimeLimit<T, R> {

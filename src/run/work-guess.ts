@@ -27,11 +27,17 @@ export const BYTE_COLUMNS = 25;
 export const WORKER_OPERATIONS = 2.5e8;
 
 /**
- * Operations a model costs the main thread when a worker evaluated it, about 0.5 ms: its task and
- * its outcome (or the outcome's rendered copy and text, run/model-handoff.ts) cloned across the
- * threads and taken in.
+ * Operations a model costs the run beyond its own work when a worker evaluates it, about 8 ms: its
+ * task and outcome (or the outcome's rendered copy and text, run/model-handoff.ts) cloned across the
+ * threads and taken in, the code warmed up and the garbage collected in one more isolate, and the
+ * engine's own threads (its collector and optimising compiler keep about 0.3 of a second core busy
+ * beside each busy thread) sharing the cores. Measured with whole runs on 2 cores, the main thread
+ * beside one worker against the main thread alone, in turns: 1,000 models of 1,000 rows 4.7 s
+ * against 5.2 s, 200 models of 2,000 rows 2.0 s against 2.1 s, with about 35 MiB more memory; with
+ * this value neither pays for the worker there (more cores leave room for more workers and for the
+ * engine's threads).
  */
-export const MODEL_TRANSFER_OPERATIONS = 2.5e5;
+export const MODEL_TRANSFER_OPERATIONS = 4e6;
 /**
  * Operations the main thread does alone while a worker starts, about 0.3 s: the worker loads the
  * bundle and compiles the code again in its own isolate before it takes its first model.
