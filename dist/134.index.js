@@ -497,8 +497,8 @@ __webpack_require__.d(__webpack_exports__, {
 
 // UNUSED EXPORTS: LOGISTIC_MAX_ITERATIONS, LOGISTIC_TOLERANCE
 
-// EXTERNAL MODULE: ./src/design/blocks.ts + 1 modules
-var blocks = __webpack_require__(1619);
+// EXTERNAL MODULE: ./src/design/blocks.ts
+var blocks = __webpack_require__(7254);
 // EXTERNAL MODULE: ./src/kernels/index.ts + 11 modules
 var kernels = __webpack_require__(4733);
 ;// CONCATENATED MODULE: ./src/fit/gram-step.ts
@@ -1278,8 +1278,8 @@ var result = __webpack_require__(1628);
 var base_comparison = __webpack_require__(5148);
 // EXTERNAL MODULE: ./src/run/run-checks.ts
 var run_checks = __webpack_require__(6580);
-// EXTERNAL MODULE: ./src/design/blocks.ts + 1 modules
-var blocks = __webpack_require__(1619);
+// EXTERNAL MODULE: ./src/design/blocks.ts
+var blocks = __webpack_require__(7254);
 // EXTERNAL MODULE: ./src/design/stats.ts
 var stats = __webpack_require__(6801);
 // EXTERNAL MODULE: ./src/diagnostics/column-median.ts

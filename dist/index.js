@@ -31735,23 +31735,27 @@ function judgeCheck(check, descriptor, measure) {
     const status = judge(measured.value, effective);
     const reason = measured.reason ?? (status === 'skipped' && effective.off ? 'off' : status);
     const comparison = measured.value === null ? '' : `; ${describeLimit(status, measured.value, effective)}`;
-    const outcome = {
-        id: check.id,
-        code: `${check.id}/${reason}`,
-        status,
-        value: measured.value === null ? null : (0,result/* jsonNumber */.qj)(measured.value),
-        limitKey: check.limitKey,
-        limit: effective.off ? null : effective.fail,
-        warn: effective.off ? null : effective.warn,
-        ...(!effective.off && (effective.warnBelow !== null || effective.failBelow !== null)
-            ? { floor: { warn: effective.warnBelow, fail: effective.failBelow } }
-            : {}),
-        line: line ?? measured.line ?? check.line(context.descriptor),
-        message: `${measured.message}${comparison}`,
-        advice: status === 'fail' || status === 'warn' ? (measured.advice ?? check.advice) : '',
-        ...(measured.detail ? { detail: measured.detail } : {}),
-        ...(measured.suggestion ? { suggestion: measured.suggestion } : {}),
-    };
+    // Two literals of the one key order (with and without `floor`), the optional tail assigned in
+    // order: no spread of a temporary object per key (every model makes one outcome per check).
+    const id = check.id;
+    const code = `${id}/${reason}`;
+    const value = measured.value === null ? null : (0,result/* jsonNumber */.qj)(measured.value);
+    const limitKey = check.limitKey;
+    const failAt = effective.off ? null : effective.fail;
+    const warnAt = effective.off ? null : effective.warn;
+    const floor = !effective.off && (effective.warnBelow !== null || effective.failBelow !== null)
+        ? { warn: effective.warnBelow, fail: effective.failBelow }
+        : null;
+    const at = line ?? measured.line ?? check.line(context.descriptor);
+    const message = `${measured.message}${comparison}`;
+    const advice = status === 'fail' || status === 'warn' ? (measured.advice ?? check.advice) : '';
+    const outcome = floor === null
+        ? { id, code, status, value, limitKey, limit: failAt, warn: warnAt, line: at, message, advice }
+        : { id, code, status, value, limitKey, limit: failAt, warn: warnAt, floor, line: at, message, advice };
+    if (measured.detail)
+        outcome.detail = measured.detail;
+    if (measured.suggestion)
+        outcome.suggestion = measured.suggestion;
     return { outcome, figures: measured.metrics };
 }
 
@@ -32672,15 +32676,32 @@ function formatNumber(x, digits = 4) {
     if (x === 0)
         return '0';
     const a = Math.abs(x);
-    if (a < 1e-3 || a >= 1e6)
-        return x
-            .toExponential(digits - 1)
-            .replace(/\.?0+e/, 'e')
-            .replace('e+', 'e');
+    if (a < 1e-3 || a >= 1e6) {
+        // `1.200e+7` -> `1.2e7`: the mantissa's trailing zeros (and a bare point) go, and the `+`.
+        const text = x.toExponential(digits - 1);
+        const e = text.indexOf('e');
+        const exponent = text.charCodeAt(e + 1) === 0x2b ? text.slice(e + 2) : text.slice(e + 1);
+        return `${withoutTrailingZeros(text.slice(0, e))}e${exponent}`;
+    }
     if (a >= 10 ** digits)
         return String(Math.round(x));
     const text = x.toPrecision(digits);
-    return text.includes('.') && !text.includes('e') ? text.replace(/\.?0+$/, '') : text;
+    return text.includes('e') ? text : withoutTrailingZeros(text);
+}
+/**
+ * A decimal numeral without the zeros that end its fraction, and without its point when nothing
+ * of the fraction is left (`1.2500` -> `1.25`, `3.000` -> `3`); a numeral without a point as it is.
+ * The same as replacing the pattern `\.?0+$` in a numeral that has a point, without a pattern.
+ */
+function withoutTrailingZeros(text) {
+    if (!text.includes('.'))
+        return text;
+    let end = text.length;
+    while (text.charCodeAt(end - 1) === 0x30)
+        end--;
+    if (text.charCodeAt(end - 1) === 0x2e)
+        end--;
+    return end === text.length ? text : text.slice(0, end);
 }
 
 
@@ -32832,8 +32853,9 @@ function fromJsonNumber(x) {
 }
 /**
  * Converts a value for the JSON report (numbers through `jsonNumber`, typed arrays to arrays,
- * `undefined` fields dropped). Objects come out without a prototype (their keys may be column
- * names such as `__proto__`); `JSON.stringify` writes them as any object.
+ * `undefined` fields dropped). Objects come out as plain objects whose every key is an own
+ * property, `__proto__` too (keys may be column names): as `JSON.parse` gives them back, and
+ * nothing is ever set on a prototype.
  *
  * @param value numbers, strings, booleans, null, arrays, typed arrays and plain objects of them
  */
@@ -32842,16 +32864,39 @@ function jsonSafe(value) {
         return jsonNumber(value);
     if (typeof value === 'string' || typeof value === 'boolean' || value === null)
         return value;
-    if (ArrayBuffer.isView(value) && !(value instanceof DataView))
-        return Array.from(value, jsonNumber);
-    if (Array.isArray(value))
-        return value.map(jsonSafe);
+    // Plain loops (figures hold arrays of thousands of numbers: `Array.from` and `map` with a
+    // function are several times slower), numbers converted without the recursive call.
+    if (ArrayBuffer.isView(value) && !(value instanceof DataView)) {
+        const typed = value;
+        const out = [];
+        for (let i = 0; i < typed.length; i++)
+            out.push(jsonNumber(typed[i]));
+        return out;
+    }
+    if (Array.isArray(value)) {
+        const out = [];
+        for (let i = 0; i < value.length; i++) {
+            const v = value[i];
+            out.push(typeof v === 'number' ? jsonNumber(v) : jsonSafe(v));
+        }
+        return out;
+    }
     if (typeof value === 'object' && value !== undefined) {
-        // Keys may be column names (user text): no prototype, so `__proto__` is a name like any other.
-        const out = Object.create(null);
-        for (const [k, v] of Object.entries(value))
-            if (v !== undefined)
-                out[k] = jsonSafe(v);
+        // Keys may be column names (user text): `__proto__` is defined as an own property (an
+        // assignment would set the prototype), every other key is assigned. A plain object, not one
+        // without a prototype: V8 keeps those in dictionary mode, slower to build and to stringify.
+        const out = {};
+        const record = value;
+        for (const k of Object.keys(record)) {
+            const v = record[k];
+            if (v === undefined)
+                continue;
+            const safe = typeof v === 'number' ? jsonNumber(v) : jsonSafe(v);
+            if (k === '__proto__')
+                Object.defineProperty(out, k, { value: safe, enumerable: true, writable: true, configurable: true });
+            else
+                out[k] = safe;
+        }
         return out;
     }
     return null;
@@ -32893,6 +32938,119 @@ function mix32(z) {
     z = Math.imul(z, 0x846ca68b);
     z ^= z >>> 16;
     return z >>> 0;
+}
+
+
+/***/ }),
+
+/***/ 9746:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   TI: () => (/* binding */ returnDoubles),
+/* harmony export */   _1: () => (/* binding */ borrowInts),
+/* harmony export */   an: () => (/* binding */ borrowDoubles),
+/* harmony export */   qo: () => (/* binding */ borrowDoublesToOverwrite),
+/* harmony export */   vb: () => (/* binding */ returnInts)
+/* harmony export */ });
+/* unused harmony exports SCRATCH_KEPT, SCRATCH_MAX_BYTES */
+/**
+ * Scratch arrays of doubles lent for the length of one call and given back: a run of many small
+ * models asks for the same few working buffers (a design block per pass) over and over, and
+ * lending them from a small pool keeps that memory from being made and dropped per model (memory
+ * outside the JavaScript heap that is freed only when the garbage collector gets to it, and that
+ * the process's allocator does not always give back to the system).
+ *
+ * The pool belongs to the thread (each worker thread has its own copy of this module) and holds at
+ * most {@link SCRATCH_KEPT} buffers of at most {@link SCRATCH_MAX_BYTES} each; a larger request is
+ * made and dropped as before. A lent array is all zeros, as a new one is. Whoever borrows must give
+ * it back only when nothing reads or writes it any more (in a `finally`, or after its last use: one
+ * not given back, say when an error ends the call, is only dropped as a new one would be), and
+ * must not keep it.
+ */
+/**
+ * Buffers the pool keeps at most (8 MiB in all at worst). A model's diagnostics hold up to five
+ * at once, of several sizes (the swing plan: two row-sized work arrays, the grid, its uniform
+ * points and its gap indices; the swing scores: the grid, the predictions there and a design
+ * block; the leakage scan: three), so that fewer would let the small ones crowd out a size asked
+ * for again by the next model.
+ */
+const SCRATCH_KEPT = 8;
+/** Largest buffer the pool keeps (1 MiB: a design block is about 512 KiB, design/blocks.ts). */
+const SCRATCH_MAX_BYTES = 1 << 20;
+/** Smallest buffer made for the pool (sizes are rounded up to a power of two from here). */
+const SCRATCH_MIN_BYTES = 1 << 12;
+const spare = [];
+/**
+ * A zero-filled array of `length` doubles, from the pool when a kept buffer is large enough (the
+ * smallest such), else new. Its `buffer` may be larger than `length` doubles.
+ * @param length doubles wanted (a non-negative integer)
+ */
+function borrowDoubles(length) {
+    return lend(length, true);
+}
+/**
+ * {@link borrowDoubles} for a caller that writes every element before it reads any (a design
+ * block: design/blocks.ts): a kept buffer is not cleared first, so the array may hold what its
+ * last borrower left there (zeros when new).
+ * @param length doubles wanted (a non-negative integer)
+ */
+function borrowDoublesToOverwrite(length) {
+    return lend(length, false);
+}
+/** The array of {@link borrowDoubles}; a kept buffer is cleared only when `clear` is true. */
+function lend(length, clear) {
+    const bytes = length * Float64Array.BYTES_PER_ELEMENT;
+    let best = -1;
+    for (let i = 0; i < spare.length; i++) {
+        if (spare[i].byteLength >= bytes && (best < 0 || spare[i].byteLength < spare[best].byteLength))
+            best = i;
+    }
+    if (best >= 0) {
+        const [buffer] = spare.splice(best, 1);
+        const array = new Float64Array(buffer, 0, length);
+        if (clear)
+            array.fill(0);
+        return array;
+    }
+    if (bytes > SCRATCH_MAX_BYTES)
+        return new Float64Array(length);
+    let size = SCRATCH_MIN_BYTES;
+    while (size < bytes)
+        size *= 2;
+    return new Float64Array(new ArrayBuffer(size), 0, length);
+}
+/**
+ * A zero-filled array of `length` 32-bit integers, lent from the same pool as
+ * {@link borrowDoubles} (its buffer may be larger); give it back with {@link returnInts}.
+ * @param length integers wanted (a non-negative integer)
+ */
+function borrowInts(length) {
+    const doubles = borrowDoubles(Math.ceil(length / 2));
+    return new Int32Array(doubles.buffer, doubles.byteOffset, length);
+}
+/**
+ * Gives an array from {@link borrowInts} back to the pool, as {@link returnDoubles} does.
+ * @param array the borrowed array
+ */
+function returnInts(array) {
+    keep(array.buffer);
+}
+/**
+ * Gives an array from {@link borrowDoubles} back to the pool (kept when there is room and it is not
+ * too large; given twice, it is kept once). The caller must not use it afterwards.
+ * @param array the borrowed array
+ */
+function returnDoubles(array) {
+    keep(array.buffer);
+}
+/** Keeps a lent buffer for the next borrower, when it is of a kept size and there is room. */
+function keep(buffer) {
+    if (!(buffer instanceof ArrayBuffer) || buffer.byteLength > SCRATCH_MAX_BYTES || buffer.byteLength < SCRATCH_MIN_BYTES)
+        return;
+    if (spare.length >= SCRATCH_KEPT || spare.includes(buffer))
+        return;
+    spare.push(buffer);
 }
 
 
@@ -32981,6 +33139,8 @@ function separatorOfHeader(line) {
         return '\t';
     return ',';
 }
+/** Decodes one whole line at a time (no `stream` option, so no state is kept between calls): shared by every read. */
+const LINE_DECODER = new TextDecoder('utf-8');
 /**
  * Reads pieces of a file until its first line that is not blank has ended (within the header's
  * 1 MiB bound: past it the readers report the long header), finds that line's separator by
@@ -32998,7 +33158,7 @@ async function peekSeparator(pieces) {
     let line = 1;
     let found = null;
     let done = false;
-    const decoder = new TextDecoder('utf-8');
+    const decoder = LINE_DECODER;
     const lineText = () => {
         const total = segments.reduce((n, s) => n + s.length, 0);
         const bytes = new Uint8Array(total);
@@ -35344,79 +35504,16 @@ function transformTables(tables, kind, target) {
 
 /***/ }),
 
-/***/ 1619:
+/***/ 7254:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
-
-// EXPORTS
-__nccwpck_require__.d(__webpack_exports__, {
-  h1: () => (/* binding */ blockRows),
-  aN: () => (/* binding */ forEachBlock),
-  tp: () => (/* binding */ predictRows)
-});
-
-// EXTERNAL MODULE: ./src/kernels/index.ts + 11 modules
-var kernels = __nccwpck_require__(4733);
-;// CONCATENATED MODULE: ./src/core/scratch.ts
-/**
- * Scratch arrays of doubles lent for the length of one call and given back: a run of many small
- * models asks for the same few working buffers (a design block per pass) over and over, and
- * lending them from a small pool keeps that memory from being made and dropped per model (memory
- * outside the JavaScript heap that is freed only when the garbage collector gets to it, and that
- * the process's allocator does not always give back to the system).
- *
- * The pool belongs to the thread (each worker thread has its own copy of this module) and holds at
- * most {@link SCRATCH_KEPT} buffers of at most {@link SCRATCH_MAX_BYTES} each; a larger request is
- * made and dropped as before. A lent array is all zeros, as a new one is. Whoever borrows must give
- * it back only when nothing reads or writes it any more (in a `finally`), and must not keep it.
- */
-/** Buffers the pool keeps at most. */
-const SCRATCH_KEPT = 4;
-/** Largest buffer the pool keeps (1 MiB: a design block is about 512 KiB, design/blocks.ts). */
-const SCRATCH_MAX_BYTES = 1 << 20;
-/** Smallest buffer made for the pool (sizes are rounded up to a power of two from here). */
-const SCRATCH_MIN_BYTES = 1 << 12;
-const spare = [];
-/**
- * A zero-filled array of `length` doubles, from the pool when a kept buffer is large enough (the
- * smallest such), else new. Its `buffer` may be larger than `length` doubles.
- * @param length doubles wanted (a non-negative integer)
- */
-function borrowDoubles(length) {
-    const bytes = length * Float64Array.BYTES_PER_ELEMENT;
-    let best = -1;
-    for (let i = 0; i < spare.length; i++) {
-        if (spare[i].byteLength >= bytes && (best < 0 || spare[i].byteLength < spare[best].byteLength))
-            best = i;
-    }
-    if (best >= 0) {
-        const [buffer] = spare.splice(best, 1);
-        const array = new Float64Array(buffer, 0, length);
-        array.fill(0);
-        return array;
-    }
-    if (bytes > SCRATCH_MAX_BYTES)
-        return new Float64Array(length);
-    let size = SCRATCH_MIN_BYTES;
-    while (size < bytes)
-        size *= 2;
-    return new Float64Array(new ArrayBuffer(size), 0, length);
-}
-/**
- * Gives an array from {@link borrowDoubles} back to the pool (kept when there is room and it is not
- * too large; given twice, it is kept once). The caller must not use it afterwards.
- * @param array the borrowed array
- */
-function returnDoubles(array) {
-    const buffer = array.buffer;
-    if (!(buffer instanceof ArrayBuffer) || buffer.byteLength > SCRATCH_MAX_BYTES || buffer.byteLength < SCRATCH_MIN_BYTES)
-        return;
-    if (spare.length >= SCRATCH_KEPT || spare.includes(buffer))
-        return;
-    spare.push(buffer);
-}
-
-;// CONCATENATED MODULE: ./src/design/blocks.ts
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   aN: () => (/* binding */ forEachBlock),
+/* harmony export */   h1: () => (/* binding */ blockRows),
+/* harmony export */   tp: () => (/* binding */ predictRows)
+/* harmony export */ });
+/* harmony import */ var _kernels_index_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(4733);
+/* harmony import */ var _core_scratch_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(9746);
 
 
 /**
@@ -35435,7 +35532,8 @@ function blockRows(p) {
  */
 function forEachBlock(design, data, visit) {
     const size = blockRows(design.p);
-    const buffer = borrowDoubles(Math.min(size, Math.max(1, data.rows)) * design.p);
+    // Not cleared first: design.fill writes every entry of each block (terms/types.ts, Term.fill).
+    const buffer = (0,_core_scratch_js__WEBPACK_IMPORTED_MODULE_1__/* .borrowDoublesToOverwrite */ .qo)(Math.min(size, Math.max(1, data.rows)) * design.p);
     try {
         for (let start = 0; start < data.rows; start += size) {
             const m = Math.min(size, data.rows - start);
@@ -35444,13 +35542,16 @@ function forEachBlock(design, data, visit) {
         }
     }
     finally {
-        returnDoubles(buffer);
+        (0,_core_scratch_js__WEBPACK_IMPORTED_MODULE_1__/* .returnDoubles */ .TI)(buffer);
     }
 }
-/** Predictions Phi w for every row of `data`, block by block (length `data.rows`). */
-function predictRows(design, data, w) {
-    const out = new Float64Array(data.rows);
-    forEachBlock(design, data, (X, start, m) => (0,kernels/* addProducts */.kD)(out, start, X, m, w, design.p));
+/**
+ * Predictions Phi w for every row of `data`, block by block (length `data.rows`).
+ * @param out where to write them: all zeros, of length `data.rows` (e.g. lent by core/scratch.ts);
+ *   default a new array
+ */
+function predictRows(design, data, w, out = new Float64Array(data.rows)) {
+    forEachBlock(design, data, (X, start, m) => (0,_kernels_index_js__WEBPACK_IMPORTED_MODULE_0__/* .addProducts */ .kD)(out, start, X, m, w, design.p));
     return out;
 }
 
@@ -37083,10 +37184,12 @@ function sweepComplexity(descriptor, design, train, fit, options = {}) {
 /* harmony export */ });
 /* unused harmony export LEVERAGE_ONE_TOLERANCE */
 /* harmony import */ var _fit_index_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(2450);
-/* harmony import */ var _design_blocks_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(1619);
+/* harmony import */ var _design_blocks_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(7254);
 /* harmony import */ var _kernels_index_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(4733);
-/* harmony import */ var _folds_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(7694);
+/* harmony import */ var _folds_js__WEBPACK_IMPORTED_MODULE_5__ = __nccwpck_require__(7694);
 /* harmony import */ var _core_deadline_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(6343);
+/* harmony import */ var _core_scratch_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(9746);
+
 
 
 
@@ -37104,8 +37207,6 @@ class FoldFactorBuilder {
     factors;
     #folds;
     #p;
-    #sub = new Float64Array(0);
-    #subY = new Float64Array(0);
     #counts;
     /**
      * @param p design columns
@@ -37136,31 +37237,34 @@ class FoldFactorBuilder {
             this.factors[first].addRows(X, y.subarray(start, start + m), m);
             return;
         }
-        if (this.#sub.length < m * p) {
-            this.#sub = new Float64Array(m * p);
-            this.#subY = new Float64Array(m);
-        }
-        const sub = this.#sub;
-        const subY = this.#subY;
-        const counts = this.#counts;
-        counts.fill(0);
-        for (let i = 0; i < m; i++)
-            counts[foldOf[start + i]]++;
-        for (let f = 0; f < k; f++) {
-            const mf = counts[f];
-            if (mf === 0)
-                continue;
-            // Gather the block's rows of fold f into a column-major mf x p block.
-            let r = 0;
-            for (let i = 0; i < m; i++) {
-                if (foldOf[start + i] !== f)
+        // The gathered rows go to arrays lent for this block (core/scratch.ts).
+        const sub = (0,_core_scratch_js__WEBPACK_IMPORTED_MODULE_4__/* .borrowDoubles */ .an)(m * p);
+        const subY = (0,_core_scratch_js__WEBPACK_IMPORTED_MODULE_4__/* .borrowDoubles */ .an)(m);
+        try {
+            const counts = this.#counts;
+            counts.fill(0);
+            for (let i = 0; i < m; i++)
+                counts[foldOf[start + i]]++;
+            for (let f = 0; f < k; f++) {
+                const mf = counts[f];
+                if (mf === 0)
                     continue;
-                for (let j = 0; j < p; j++)
-                    sub[j * mf + r] = X[j * m + i];
-                subY[r] = y[start + i];
-                r++;
+                // Gather the block's rows of fold f into a column-major mf x p block.
+                let r = 0;
+                for (let i = 0; i < m; i++) {
+                    if (foldOf[start + i] !== f)
+                        continue;
+                    for (let j = 0; j < p; j++)
+                        sub[j * mf + r] = X[j * m + i];
+                    subY[r] = y[start + i];
+                    r++;
+                }
+                this.factors[f].addRows(sub, subY, mf);
             }
-            this.factors[f].addRows(sub, subY, mf);
+        }
+        finally {
+            (0,_core_scratch_js__WEBPACK_IMPORTED_MODULE_4__/* .returnDoubles */ .TI)(subY);
+            (0,_core_scratch_js__WEBPACK_IMPORTED_MODULE_4__/* .returnDoubles */ .TI)(sub);
         }
     }
 }
@@ -37391,8 +37495,6 @@ class CrossValidationScorer {
     #leverageSum = 0;
     #maxLeverage = 0;
     #rowsWithLeverageOne = 0;
-    #h = new Float64Array(0);
-    #pred = new Float64Array(0);
     #ids = new Int32Array(0);
     #rows = 0;
     /**
@@ -37424,16 +37526,10 @@ class CrossValidationScorer {
         const first = this.#rows;
         if (this.#ids.length < data.rows && this.#folds.streamed === true)
             this.#ids = new Int32Array(data.rows);
-        const foldOf = (0,_folds_js__WEBPACK_IMPORTED_MODULE_4__/* .foldIdsOf */ .Fe)(this.#folds, first, data.rows, this.#ids);
-        const visit = (X, start, m) => {
-            if (this.#h.length < m) {
-                this.#h = new Float64Array(m);
-                this.#pred = new Float64Array(m);
-            }
-            const h = this.#h;
-            const pred = this.#pred;
+        const foldOf = (0,_folds_js__WEBPACK_IMPORTED_MODULE_5__/* .foldIdsOf */ .Fe)(this.#folds, first, data.rows, this.#ids);
+        // One block's rows: the full fit's leverages h and predictions pred (arrays of m zeros), then its sums.
+        const scoreBlock = (X, start, m, h, pred) => {
             (0,_fit_index_js__WEBPACK_IMPORTED_MODULE_0__/* .leveragesInto */ .lG)(fit, X, m, h);
-            pred.fill(0, 0, m);
             (0,_kernels_index_js__WEBPACK_IMPORTED_MODULE_2__/* .addProducts */ .kD)(pred, 0, X, m, w, p);
             if (predictions !== undefined)
                 predictions.set(pred.subarray(0, m), start);
@@ -37466,6 +37562,18 @@ class CrossValidationScorer {
             this.#leverageSum = blockLeverageSum;
             this.#maxLeverage = blockMaxLeverage;
             this.#rowsWithLeverageOne = blockOnes;
+        };
+        const visit = (X, start, m) => {
+            // The block's leverages and predictions go to arrays of zeros lent for the block (core/scratch.ts).
+            const h = (0,_core_scratch_js__WEBPACK_IMPORTED_MODULE_4__/* .borrowDoubles */ .an)(m);
+            const pred = (0,_core_scratch_js__WEBPACK_IMPORTED_MODULE_4__/* .borrowDoubles */ .an)(m);
+            try {
+                scoreBlock(X, start, m, h, pred);
+            }
+            finally {
+                (0,_core_scratch_js__WEBPACK_IMPORTED_MODULE_4__/* .returnDoubles */ .TI)(pred);
+                (0,_core_scratch_js__WEBPACK_IMPORTED_MODULE_4__/* .returnDoubles */ .TI)(h);
+            }
         };
         outOfFoldErrors(this.#design, data, this.#folds, this.#coefficients, visit, { foldOf, sse: this.#sse });
         this.#rows += data.rows;
@@ -37736,6 +37844,8 @@ function feistelIndex(x, n, half, mask, key) {
 /* harmony export */ });
 /* unused harmony export LEAKAGE_EXAMPLE_LINES */
 /* harmony import */ var _random_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(6736);
+/* harmony import */ var _core_scratch_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(9746);
+
 
 /** How many line numbers of each file to report. */
 const LEAKAGE_EXAMPLE_LINES = 5;
@@ -37768,20 +37878,29 @@ function rowTargetHash(inputHash, y, i) {
     f64[0] = y[i] + 0;
     return (0,_random_js__WEBPACK_IMPORTED_MODULE_0__/* .mix32 */ .Q)(Math.imul(Math.imul(inputHash ^ u32[0], 0x9e3779b1) ^ u32[1], 0x85ebca6b));
 }
-function newTable(rows) {
+/**
+ * An empty table for `rows` rows: its arrays are consecutive pieces of one array lent by
+ * core/scratch.ts, added to `lent`.
+ */
+function newTable(rows, lent) {
     let size = 1024;
     while (size < 2 * rows)
         size *= 2;
     // size >= 2 rows, so 8 size bits are at least 16 per row: 2^13 .. 2^32 bits (32 at most).
     const filterBits = Math.min(32, Math.log2(size) + 3);
+    const words = 2 ** (filterBits - 5);
+    const all = (0,_core_scratch_js__WEBPACK_IMPORTED_MODULE_1__/* .borrowInts */ ._1)(words + 2 * size + 2 * rows);
+    lent.push(all);
+    const piece = (from, length) => all.subarray(from, from + length);
+    const unsigned = (from, length) => new Uint32Array(all.buffer, all.byteOffset + 4 * from, length);
     return {
-        filter: new Uint32Array(2 ** (filterBits - 5)),
+        filter: unsigned(0, words),
         filterBits,
         mask: size - 1,
-        slotHash: new Uint32Array(size),
-        slotHead: new Int32Array(size).fill(-1),
-        next: new Int32Array(rows).fill(-1),
-        repOf: new Int32Array(rows),
+        slotHash: unsigned(words, size),
+        slotHead: piece(words + size, size).fill(-1),
+        next: piece(words + 2 * size, rows).fill(-1),
+        repOf: piece(words + 2 * size + rows, rows),
     };
 }
 /** Whether some row in the table may have this hash (false: certainly none). */
@@ -37889,25 +38008,42 @@ class LeakageScan {
     #byRow;
     #firstMatch;
     #targetToo;
+    /** The tables' arrays, lent by core/scratch.ts until {@link finish}. */
+    #lent = [];
+    #result;
     /** @param holdout hold-out rows (inputs in the model's order) */
     constructor(holdout) {
         // Tables of the distinct hold-out rows (the smaller file, usually); the training rows then
         // stream past them in file order, so each hold-out row's first match is the earliest training row.
         const h = holdout.rows;
         this.#holdout = holdout;
-        this.#byInputs = newTable(h);
-        this.#byRow = newTable(h);
+        this.#byInputs = newTable(h, this.#lent);
+        this.#byRow = newTable(h, this.#lent);
         indexRows(this.#byInputs, this.#byRow, holdout);
-        this.#firstMatch = new Int32Array(h).fill(-1);
-        this.#targetToo = new Uint8Array(h);
+        // firstMatch (h integers) and targetToo (h bytes) share one lent array.
+        const marks = (0,_core_scratch_js__WEBPACK_IMPORTED_MODULE_1__/* .borrowInts */ ._1)(h + Math.ceil(h / 4));
+        this.#lent.push(marks);
+        this.#firstMatch = marks.subarray(0, h).fill(-1);
+        this.#targetToo = new Uint8Array(marks.buffer, marks.byteOffset + 4 * h, h);
     }
-    /** Streams the next training rows (in file order) past the hold-out rows. */
+    /** Streams the next training rows (in file order) past the hold-out rows; not after {@link finish}. */
     add(train) {
+        if (this.#result !== undefined)
+            throw new Error('LeakageScan: rows added after finish()');
         if (this.#holdout.rows > 0)
             matchRows(this.#byInputs, this.#byRow, this.#holdout, train, this.#firstMatch, this.#targetToo);
     }
-    /** The figures over every training row added. */
+    /** The figures over every training row added (the same object when called again); gives the tables back. */
     finish() {
+        if (this.#result === undefined) {
+            this.#result = this.#figures();
+            for (const array of this.#lent)
+                (0,_core_scratch_js__WEBPACK_IMPORTED_MODULE_1__/* .returnInts */ .vb)(array);
+        }
+        return this.#result;
+    }
+    /** The figures, read from the tables. */
+    #figures() {
         const holdout = this.#holdout;
         const h = holdout.rows;
         let inputMatches = 0;
@@ -38204,10 +38340,12 @@ function pairedErrorFigures(train, holdout) {
 /* harmony export */   jN: () => (/* binding */ spikeIntervals)
 /* harmony export */ });
 /* unused harmony exports SPIKE_MAX_ROWS, SPIKE_MAX_GAPS, SPIKE_POINTS_PER_GAP */
-/* harmony import */ var _design_blocks_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(1619);
+/* harmony import */ var _design_blocks_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(7254);
 /* harmony import */ var _column_median_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(8455);
 /* harmony import */ var _swing_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(309);
 /* harmony import */ var _data_target_transform_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(1938);
+/* harmony import */ var _core_scratch_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(9746);
+
 
 
 
@@ -38224,8 +38362,8 @@ const SPIKE_MAX_ROWS = 20_000;
  *   curve is back-transformed) and the training targets as written (the data variation is theirs);
  *   default none (the fit's own scale)
  * @param known curves along inputs that the swing scan already predicted on the same design, rows
- *   and coefficients (swing.ts {@link InsideCurve}): one whose back transform is that of
- *   `original` is taken instead of predicting the same points again; default none
+ *   and coefficients (swing.ts {@link InsideCurve}): the length and variation of one whose back
+ *   transform is that of `original` are taken instead of predicting the same points again; default none
  */
 function measureSpikes(design, train, coefficients, original, known = []) {
     const n = train.rows;
@@ -38243,11 +38381,18 @@ function measureSpikes(design, train, coefficients, original, known = []) {
         // Category inputs have no order between their levels: no variation along them to compare.
         if (design.terms.some((t) => t.discreteValues !== undefined && t.inputs.includes(name)))
             return;
-        const curve = known.find((k) => k.input === c && k.backTransform === original?.kind)?.prediction ??
-            curveAlong(design, train, coefficients, c, mediansOnce(), original);
-        if (curve.length < 2)
+        const scanned = known.find((k) => k.input === c && k.backTransform === original?.kind);
+        let points;
+        let curveVariation;
+        if (scanned !== undefined)
+            ({ points, variation: curveVariation } = scanned);
+        else {
+            const curve = curveAlong(design, train, coefficients, c, mediansOnce(), original);
+            points = curve.length;
+            curveVariation = (0,_swing_js__WEBPACK_IMPORTED_MODULE_2__/* .totalVariation */ .IG)(curve, curve.length);
+        }
+        if (points < 2)
             return;
-        const curveVariation = totalVariation(curve, curve.length);
         // The swing scan sorted every row's value of this input already: its distinct values serve
         // when the data variation reads every row too (at most SPIKE_MAX_ROWS).
         const distinct = n <= SPIKE_MAX_ROWS ? known.find((k) => k.input === c && k.distinct !== undefined)?.distinct : undefined;
@@ -38273,17 +38418,17 @@ function curveAlong(design, train, coefficients, c, medians, original) {
             curve[i] = (0,_data_target_transform_js__WEBPACK_IMPORTED_MODULE_3__/* .inverseTarget */ .I)(original.kind, curve[i]);
     return curve;
 }
-/** sum |v[k+1] - v[k]| over the first m values (one loop; see DEVELOPERS.md, "Writing hot loops"). */
-function totalVariation(v, m) {
-    let s = 0;
-    for (let k = 1; k < m; k++)
-        s += Math.abs(v[k] - v[k - 1]);
-    return s;
-}
 /** Total variation of the (weighted) mean target over the input's distinct values in ascending order. */
 function targetVariation(x, y, n, weights, distinct) {
     const { means } = meanTargets(x, y, n, weights, distinct);
-    return totalVariation(Float64Array.from(means), means.length);
+    return meanVariation(means);
+}
+/** sum |means[j+1] - means[j]|: {@link totalVariation} of a plain array (one loop). */
+function meanVariation(means) {
+    let s = 0;
+    for (let j = 1; j < means.length; j++)
+        s += Math.abs(means[j] - means[j - 1]);
+    return s;
 }
 /** Most intervals {@link spikeIntervals} examines (the widest, when an input has more gaps). */
 const SPIKE_MAX_GAPS = 4000;
@@ -38336,7 +38481,7 @@ function spikeIntervals(design, train, coefficients, c, limit, original) {
             curve[i] = (0,_data_target_transform_js__WEBPACK_IMPORTED_MODULE_3__/* .inverseTarget */ .I)(original.kind, curve[i]);
     const out = [];
     chosen.forEach((j, q) => {
-        const variation = totalVariation(curve.subarray(q * per, (q + 1) * per), per);
+        const variation = (0,_swing_js__WEBPACK_IMPORTED_MODULE_2__/* .totalVariation */ .IG)(curve.subarray(q * per, (q + 1) * per), per);
         const net = Math.abs(curve[(q + 1) * per - 1] - curve[q * per]);
         const allowed = Math.max(net, Math.abs(means[j + 1] - means[j]), meanStep);
         if (variation > limit * allowed)
@@ -38349,52 +38494,129 @@ function spikeIntervals(design, train, coefficients, c, limit, original) {
  * and the mean y at each: the plain mean, or with row weights the weighted mean sum w y / sum w (a
  * value whose rows all weigh 0 is left out: it takes no part in the fit). Each value's targets are
  * summed in row order (as a stable sort of the rows by value visits them): the sampled values are
- * sorted once (a native typed-array sort), and each row finds its value's slot by binary search.
+ * sorted once (a native typed-array sort), and each row finds its value's slot through equal-width
+ * buckets of the range ({@link SlotBuckets}) or by binary search.
  * `distinct`, when given, must be those distinct values of every row (n <= SPIKE_MAX_ROWS), as
- * the sort and packing here make them: they are taken instead of sorting again.
+ * the sort and packing here make them: they are taken instead of sorting again. The working
+ * arrays are lent (core/scratch.ts); each loop is a function of its own (see DEVELOPERS.md,
+ * "Writing hot loops").
  */
 function meanTargets(x, y, n, weights, distinct) {
     const m = Math.min(n, SPIKE_MAX_ROWS);
-    const rows = new Int32Array(m);
+    const own = distinct !== undefined && m === n ? null : (0,_core_scratch_js__WEBPACK_IMPORTED_MODULE_4__/* .borrowDoubles */ .an)(m);
+    try {
+        let sorted;
+        if (own === null)
+            sorted = distinct;
+        else {
+            sampleRows(x, n, m, own);
+            own.sort();
+            sorted = own.subarray(0, packDistinct(own, m));
+        }
+        const sums = (0,_core_scratch_js__WEBPACK_IMPORTED_MODULE_4__/* .borrowDoubles */ .an)(sorted.length);
+        const totals = (0,_core_scratch_js__WEBPACK_IMPORTED_MODULE_4__/* .borrowDoubles */ .an)(sorted.length);
+        const buckets = (0,_core_scratch_js__WEBPACK_IMPORTED_MODULE_4__/* .borrowInts */ ._1)(sorted.length);
+        try {
+            const found = slotBuckets(sorted, buckets);
+            sumBySlot(x, y, n, m, weights, sorted, found, sums, totals);
+            return meansOfSlots(sorted, sums, totals);
+        }
+        finally {
+            (0,_core_scratch_js__WEBPACK_IMPORTED_MODULE_4__/* .returnInts */ .vb)(buckets);
+            (0,_core_scratch_js__WEBPACK_IMPORTED_MODULE_4__/* .returnDoubles */ .TI)(totals);
+            (0,_core_scratch_js__WEBPACK_IMPORTED_MODULE_4__/* .returnDoubles */ .TI)(sums);
+        }
+    }
+    finally {
+        if (own !== null)
+            (0,_core_scratch_js__WEBPACK_IMPORTED_MODULE_4__/* .returnDoubles */ .TI)(own);
+    }
+}
+/** out[t] = x[row t] for the m rows {@link meanTargets} reads: every row when m = n, else row floor(t n / m). */
+function sampleRows(x, n, m, out) {
     for (let t = 0; t < m; t++)
-        rows[t] = m === n ? t : Math.floor((t * n) / m);
-    let sorted;
+        out[t] = x[m === n ? t : Math.floor((t * n) / m)];
+}
+/** Packs the distinct values of the ascending a[0..n) to its front (-0 and +0 are one value, as to `===`); returns how many. */
+function packDistinct(a, n) {
     let count = 0;
-    if (distinct !== undefined && m === n) {
-        sorted = distinct;
-        count = distinct.length;
+    for (let i = 0; i < n; i++)
+        if (count === 0 || a[i] !== a[count - 1])
+            a[count++] = a[i];
+    return count;
+}
+/** {@link SlotBuckets} of `sorted` in `table` (of sorted.length entries), or null when its ends are not finite or the range has no usable width. */
+function slotBuckets(sorted, table) {
+    const count = sorted.length;
+    if (count < 2)
+        return null;
+    const lo = sorted[0];
+    const hi = sorted[count - 1];
+    const scale = count / (hi - lo);
+    if (!Number.isFinite(lo) || !Number.isFinite(hi) || !Number.isFinite(scale) || !(scale > 0))
+        return null;
+    fillBuckets(sorted, lo, scale, table);
+    return { table, lo, hi, scale };
+}
+/** table[b] = the first slot of `sorted` whose bucket is b or later (the last slot when none is). */
+function fillBuckets(sorted, lo, scale, table) {
+    const last = table.length - 1;
+    let b = 0;
+    for (let j = 0; j < sorted.length; j++) {
+        const bucket = Math.min(last, Math.floor((sorted[j] - lo) * scale));
+        while (b <= bucket)
+            table[b++] = j;
     }
-    else {
-        sorted = new Float64Array(m);
-        for (let t = 0; t < m; t++)
-            sorted[t] = x[rows[t]];
-        sorted.sort();
-        // Distinct values to the front (-0 and +0 are one value, as to `===`).
-        for (let i = 0; i < m; i++)
-            if (count === 0 || sorted[i] !== sorted[count - 1])
-                sorted[count++] = sorted[i];
-    }
-    const sums = new Float64Array(count);
-    const totals = new Float64Array(count);
+    while (b <= last)
+        table[b++] = sorted.length - 1;
+}
+/** Steps up from a value's bucket before {@link sumBySlot} goes on by binary search (values bunched into few buckets). */
+const BUCKET_STEPS = 8;
+/**
+ * Adds each read row's target (times its weight) to sums[j] and its weight (1 without weights) to
+ * totals[j], j the first slot of the ascending `sorted` not below the row's value (the last slot
+ * when none is), rows in file order. The slot is found from `found` for a value in its range (at
+ * most {@link BUCKET_STEPS} steps up from its bucket's first slot), then, when not yet reached,
+ * by binary search above: the same slot a binary search over every slot gives.
+ */
+function sumBySlot(x, y, n, m, weights, sorted, found, sums, totals) {
+    const count = sorted.length;
+    const table = found?.table;
+    const last = count - 1;
+    const from = found?.lo ?? Number.NaN;
+    const to = found?.hi ?? Number.NaN;
+    const scale = found?.scale ?? Number.NaN;
     for (let t = 0; t < m; t++) {
-        const r = rows[t];
+        const r = m === n ? t : Math.floor((t * n) / m);
         const v = x[r];
         let lo = 0;
-        let hi = count - 1;
-        while (lo < hi) {
-            const mid = (lo + hi) >> 1;
-            if (sorted[mid] < v)
-                lo = mid + 1;
-            else
-                hi = mid;
+        if (table !== undefined && v >= from && v <= to) {
+            lo = table[Math.min(last, Math.floor((v - from) * scale))];
+            for (let step = 0; step < BUCKET_STEPS && sorted[lo] < v; step++)
+                lo++;
+        }
+        // Binary search above `lo` when its value is still below v (every slot before it is too).
+        if (lo < last && sorted[lo] < v) {
+            let hi = last;
+            lo++;
+            while (lo < hi) {
+                const mid = (lo + hi) >> 1;
+                if (sorted[mid] < v)
+                    lo = mid + 1;
+                else
+                    hi = mid;
+            }
         }
         const w = weights === undefined ? 1 : weights[r];
         sums[lo] += weights === undefined ? y[r] : w * y[r];
         totals[lo] += w;
     }
+}
+/** The finite values of `sorted` whose total weight is above 0, and their means sums / totals. */
+function meansOfSlots(sorted, sums, totals) {
     const values = [];
     const means = [];
-    for (let j = 0; j < count; j++) {
+    for (let j = 0; j < sorted.length; j++) {
         if (Number.isFinite(sorted[j]) && totals[j] > 0) {
             values.push(sorted[j]);
             means.push(sums[j] / totals[j]);
@@ -38424,15 +38646,16 @@ function widestGapIndices(values, max) {
 __nccwpck_require__.d(__webpack_exports__, {
   qk: () => (/* binding */ SWING_DEFAULTS),
   ll: () => (/* binding */ inputGrid),
-  Fj: () => (/* binding */ measureSwing)
+  Fj: () => (/* binding */ measureSwing),
+  IG: () => (/* binding */ totalVariation)
 });
 
 // UNUSED EXPORTS: SWING_CURVE_NUMBERS, SWING_MIN_CURVE_POINTS, SWING_SHARED_MIN_CURVE_POINTS, excursion, planSwing, scoreSwing
 
 // EXTERNAL MODULE: ./src/design/design-matrix.ts
 var design_matrix = __nccwpck_require__(6566);
-// EXTERNAL MODULE: ./src/design/blocks.ts + 1 modules
-var blocks = __nccwpck_require__(1619);
+// EXTERNAL MODULE: ./src/design/blocks.ts
+var blocks = __nccwpck_require__(7254);
 // EXTERNAL MODULE: ./src/diagnostics/column-median.ts
 var column_median = __nccwpck_require__(8455);
 // EXTERNAL MODULE: ./src/design/stats.ts
@@ -38629,11 +38852,14 @@ function considerNeighbour(flat, d, a, b, kk, best, bestIdx) {
 var deadline = __nccwpck_require__(6343);
 // EXTERNAL MODULE: ./src/data/target-transform.ts
 var target_transform = __nccwpck_require__(1938);
+// EXTERNAL MODULE: ./src/core/scratch.ts
+var core_scratch = __nccwpck_require__(9746);
 ;// CONCATENATED MODULE: ./src/diagnostics/swing.ts
 /**
  * Swing between and beyond samples: how far a model's predictions leave the band of observed
  * training targets on inputs between the training rows and just past their range.
  */
+
 
 
 
@@ -38690,11 +38916,14 @@ function excursion(prediction, lo, hi) {
 function inputGrid(values, options = {}) {
     const sorted = (0,radix_sort/* sortFloat64 */.f)(Float64Array.from(values));
     const { inside, beyond } = gridFromSorted(sorted, sorted.length, options);
-    return { inside, beyond };
+    const own = inside.slice();
+    (0,core_scratch/* returnDoubles */.TI)(inside);
+    return { inside: own, beyond };
 }
 /**
  * {@link inputGrid} from the input's values already sorted ascending in `sorted[0..n)`; the
- * array is overwritten (its distinct values are packed to the front).
+ * array is overwritten (its distinct values are packed to the front). `inside` is lent
+ * (core/scratch.ts): the caller gives it back with `returnDoubles` once nothing reads it.
  */
 function gridFromSorted(sorted, n, options, work) {
     const perGap = options.perGap ?? SWING_DEFAULTS.perGap;
@@ -38711,11 +38940,20 @@ function gridFromSorted(sorted, n, options, work) {
     const width = hi - lo;
     const gaps = widestGaps(distinct, maxGaps, work);
     const per = Math.max(1, Math.min(perGap, Math.floor((maxGaps * perGap) / gaps.length)));
-    const inside = new Float64Array(uniform + gaps.length * per);
-    fillUniform(inside, uniform, lo, hi);
-    const w = fillGaps(inside, uniform, distinct, gaps, per);
-    const beyond = marginGrid(lo, hi, margin * width, marginPoints);
-    return { inside: uniqueOfRuns(inside, uniform, w), beyond: unique(beyond, beyond.length), gaps: count - 1 };
+    // The gap points go behind room for the uniform points, which wait in a second lent buffer: the
+    // two runs are merged into the one array.
+    const inside = (0,core_scratch/* borrowDoubles */.an)(uniform + gaps.length * per);
+    const even = (0,core_scratch/* borrowDoubles */.an)(uniform);
+    try {
+        fillUniform(even, uniform, lo, hi);
+        const w = fillGaps(inside, uniform, distinct, gaps, per);
+        const beyond = marginGrid(lo, hi, margin * width, marginPoints);
+        return { inside: uniqueOfRuns(even, inside, uniform, w), beyond: unique(beyond, beyond.length), gaps: count - 1 };
+    }
+    finally {
+        (0,core_scratch/* returnDoubles */.TI)(even);
+        (0,core_scratch/* returnInts */.vb)(gaps);
+    }
 }
 // The loops of the grid are functions of their own, each a loop and its return (see
 // DEVELOPERS.md, "Writing hot loops").
@@ -38728,15 +38966,64 @@ function packDistinct(a, n) {
     return count;
 }
 /**
- * {@link unique} of xs[0..length) when xs[0..split) and xs[split..length) are each ascending (the
- * uniform points and the gap points): one linear merge instead of a sort, with the sort's result
- * (-0 before +0). Falls back to {@link unique} when a run is out of order or holds a NaN.
+ * {@link unique} of the points first[0..split) and xs[split..length) when each run is ascending
+ * (the uniform points and the gap points), written to the front of `xs` (returned as its
+ * subarray): one linear merge instead of a sort, with the sort's result (-0 before +0). Falls back
+ * to {@link unique} when a run is out of order or holds a NaN.
  */
-function uniqueOfRuns(xs, split, length) {
-    if (!ascending(xs, 0, split) || !ascending(xs, split, length))
+function uniqueOfRuns(first, xs, split, length) {
+    if (ascending(first, 0, split) && increasing(xs, split, length))
+        return xs.subarray(0, mergeBlocks(first, xs, split, length));
+    if (!ascending(first, 0, split) || !ascending(xs, split, length)) {
+        xs.set(first.subarray(0, split));
         return unique(xs, length);
-    const out = new Float64Array(length);
-    return out.subarray(0, mergeRuns(xs, split, length, out));
+    }
+    return xs.subarray(0, mergeRuns(first, xs, split, length));
+}
+/** True when xs[from..to) holds no NaN and each value is below the next (no two equal, not even -0 and +0). */
+function increasing(xs, from, to) {
+    if (to > from && Number.isNaN(xs[from]))
+        return false;
+    for (let i = from + 1; i < to; i++)
+        if (!(xs[i - 1] < xs[i]))
+            return false;
+    return true;
+}
+/**
+ * {@link mergeRuns} when the run xs[split..length) is {@link increasing} (the usual grid): the
+ * values of `xs` between two values of `first` are moved as one block (`copyWithin`), found by
+ * binary search; of a block only its first value can equal the value written before it.
+ */
+function mergeBlocks(first, xs, split, length) {
+    let j = split;
+    let w = 0;
+    for (let i = 0; i <= split; i++) {
+        // The block xs[j..end): the values that sort before first[i] (every one left after the last).
+        const end = i < split ? blockEnd(xs, j, length, first[i]) : length;
+        if (end > j && w > 0 && xs[j] === xs[w - 1])
+            j++;
+        if (end > j) {
+            xs.copyWithin(w, j, end);
+            w += end - j;
+            j = end;
+        }
+        if (i < split && (w === 0 || first[i] !== xs[w - 1]))
+            xs[w++] = first[i];
+    }
+    return w;
+}
+/** The first index t in [from, to) with !sortsBefore(xs[t], v), or `to` (xs[from..to) ascending; binary search). */
+function blockEnd(xs, from, to, v) {
+    let lo = from;
+    let hi = to;
+    while (lo < hi) {
+        const mid = (lo + hi) >>> 1;
+        if (sortsBefore(xs[mid], v))
+            lo = mid + 1;
+        else
+            hi = mid;
+    }
+    return lo;
 }
 /** True when xs[from..to) holds no NaN and is ascending in the order of the built-in sort. */
 function ascending(xs, from, to) {
@@ -38748,18 +39035,20 @@ function ascending(xs, from, to) {
     return true;
 }
 /**
- * Writes to `out` the distinct values of the merge of the ascending runs xs[0..split) and
+ * Writes to xs[0..) the distinct values of the merge of the ascending runs first[0..split) and
  * xs[split..length) (equal values: the first run's first; of values equal to `===`, -0 and +0,
- * the first is kept, as {@link packDistinct} keeps it) and returns how many.
+ * the first is kept, as {@link packDistinct} keeps it) and returns how many. In place: a value
+ * taken from `first` is written below the next unread one of `xs` (fewer than `split` taken from
+ * `first` so far), and one taken from `xs` at or below where it was read.
  */
-function mergeRuns(xs, split, length, out) {
+function mergeRuns(first, xs, split, length) {
     let i = 0;
     let j = split;
     let w = 0;
     for (let k = 0; k < length; k++) {
-        const v = j >= length || (i < split && !sortsBefore(xs[j], xs[i])) ? xs[i++] : xs[j++];
-        if (w === 0 || v !== out[w - 1])
-            out[w++] = v;
+        const v = j >= length || (i < split && !sortsBefore(xs[j], first[i])) ? first[i++] : xs[j++];
+        if (w === 0 || v !== xs[w - 1])
+            xs[w++] = v;
     }
     return w;
 }
@@ -38767,10 +39056,10 @@ function mergeRuns(xs, split, length, out) {
 function sortsBefore(a, b) {
     return a < b || (a === 0 && b === 0 && Object.is(a, -0) && !Object.is(b, -0));
 }
-/** The distinct values of xs[0..length), ascending (xs is reordered). */
+/** The distinct values of xs[0..length), ascending, as a subarray of xs (xs is reordered). */
 function unique(xs, length) {
     const u = (0,radix_sort/* sortFloat64 */.f)(xs.subarray(0, length));
-    return u.slice(0, packDistinct(u, u.length));
+    return u.subarray(0, packDistinct(u, u.length));
 }
 /** out[0..count): count evenly spaced points from lo to hi, both included (hi exactly). */
 function fillUniform(out, count, lo, hi) {
@@ -38802,7 +39091,8 @@ function marginGrid(lo, hi, reach, count) {
 /**
  * Indices g of the `maxGaps` widest gaps distinct[g + 1] - distinct[g] (ties: lower g first), in
  * ascending g; all gaps when there are no more than `maxGaps`. Linear time: the threshold width
- * is found by selection ({@link select}) on one typed array of the widths.
+ * is found by selection ({@link select}) on one typed array of the widths. The array is lent
+ * (core/scratch.ts): the caller gives it back with `returnInts`.
  */
 function widestGaps(distinct, maxGaps, work) {
     const count = distinct.length - 1;
@@ -38811,14 +39101,14 @@ function widestGaps(distinct, maxGaps, work) {
     const widths = work !== undefined && work.length >= count ? work.subarray(0, count) : new Float64Array(count);
     gapWidths(distinct, count, widths);
     const threshold = (0,column_median/* selectKth */.I)(widths, count - maxGaps);
-    const out = new Int32Array(maxGaps);
+    const out = (0,core_scratch/* borrowInts */._1)(maxGaps);
     pickGaps(distinct, count, threshold, maxGaps - gapsWiderThan(distinct, count, threshold), out);
     return out;
 }
 // One loop per function (see DEVELOPERS.md, "Writing hot loops").
-/** 0, 1, ..., count - 1. */
+/** 0, 1, ..., count - 1, in a lent array (core/scratch.ts). */
 function allGaps(count) {
-    const out = new Int32Array(count);
+    const out = (0,core_scratch/* borrowInts */._1)(count);
     for (let g = 0; g < count; g++)
         out[g] = g;
     return out;
@@ -38915,21 +39205,18 @@ function withKept(even, kept) {
  * @param coefficients fitted coefficients (length p)
  * @param c index of the varying input in `design.inputs`
  * @param fixed value of every input (entry c is ignored)
- * @returns predict(xs): predictions at the points xs of input c
+ * @returns predict(xs, out): predictions at the points xs of input c, written to `out` when given
+ *   (all zeros, of length xs.length)
  */
 function predictorAlong(design, coefficients, c, fixed) {
     const name = design.inputs[c];
     const varying = design.terms.map((t) => t.inputs.includes(name));
-    const constantColumns = (n) => design.inputs.map((_, k) => new Float64Array(n).fill(fixed[k]));
-    if (readByEveryTerm(design, c)) {
-        return (xs) => {
-            const columns = constantColumns(xs.length);
-            columns[c] = xs;
-            return (0,blocks/* predictRows */.tp)(design, { inputs: columns, rows: xs.length }, coefficients);
-        };
-    }
+    // Column c is `xs` itself; only the other inputs get a column of their fixed value.
+    const columnsAt = (xs) => design.inputs.map((_, k) => (k === c ? xs : new Float64Array(xs.length).fill(fixed[k])));
+    if (readByEveryTerm(design, c))
+        return (xs, out) => (0,blocks/* predictRows */.tp)(design, { inputs: columnsAt(xs), rows: xs.length }, coefficients, out);
     // The fixed part: intercept plus every term that does not read input c, at the fixed values.
-    const row = design.fill(constantColumns(1), 0, 1);
+    const row = design.fill(columnsAt(Float64Array.of(fixed[c])), 0, 1);
     let base = design.intercept ? coefficients[0] : 0;
     const sub = [];
     design.terms.forEach((t, i) => {
@@ -38944,12 +39231,12 @@ function predictorAlong(design, coefficients, c, fixed) {
     });
     const partial = (0,design_matrix/* createDesign */.x)(design.terms.filter((_, i) => varying[i]), false);
     const fixedByName = new Map(design.inputs.map((input, k) => [input, fixed[k]]));
-    return (xs) => {
+    return (xs, out) => {
         const columns = partial.inputs.map((input) => input === name ? xs : new Float64Array(xs.length).fill(fixedByName.get(input) ?? Number.NaN));
-        const out = (0,blocks/* predictRows */.tp)(partial, { inputs: columns, rows: xs.length }, sub);
-        for (let i = 0; i < out.length; i++)
-            out[i] += base;
-        return out;
+        const pred = (0,blocks/* predictRows */.tp)(partial, { inputs: columns, rows: xs.length }, sub, out);
+        for (let i = 0; i < pred.length; i++)
+            pred[i] += base;
+        return pred;
     };
 }
 /** True when every term of the design reads input c (its predictions along c take the whole design). */
@@ -38972,12 +39259,21 @@ function mergedPlaces(ax, bx) {
     }
     return place;
 }
-/** The first index i >= from of xs with !(xs[i] <= v), or xs.length: how far a merge takes xs before v. */
+/**
+ * The first index i >= from of the ascending xs (any NaN at its end) with !(xs[i] <= v), or
+ * xs.length: how far a merge takes xs before v. Binary search (xs[i] <= v holds for a prefix).
+ */
 function firstAfter(xs, from, v) {
-    let i = from;
-    while (i < xs.length && xs[i] <= v)
-        i++;
-    return i;
+    let lo = from;
+    let hi = xs.length;
+    while (lo < hi) {
+        const mid = (lo + hi) >>> 1;
+        if (xs[mid] <= v)
+            lo = mid + 1;
+        else
+            hi = mid;
+    }
+    return lo;
 }
 /** The values at the merged indices `indices` (ascending) of `a` and `b` merged with `b` at `place` (see {@link mergedPlaces}). */
 function mergedValues(a, b, place, indices) {
@@ -39123,11 +39419,16 @@ function planSwing(design, train, options = {}) {
     const n = train.rows;
     const d = design.inputs.length;
     const [ylo, yhi] = (0,stats/* range */.y1)(train.y, n);
-    // One scratch buffer for every input: selection for the medians, then a typed sort for the grid.
-    const scratch = new Float64Array(n);
+    // One scratch buffer for every input: selection for the medians, then a typed sort for the
+    // grid; a second one for the sort's and the widest gaps' work. Both are lent (core/scratch.ts)
+    // and given back after the loop (nothing kept in the plan reads them; should the loop throw,
+    // they are dropped as new arrays would be).
+    const scratch = (0,core_scratch/* borrowDoubles */.an)(n);
+    const work = (0,core_scratch/* borrowDoubles */.an)(n);
     const medians = train.inputs.map((col) => (0,column_median/* columnMedian */.z)(col, n, scratch));
-    const radixScratch = new Uint32Array(2 * n);
+    const radixScratch = new Uint32Array(work.buffer, work.byteOffset, 2 * n);
     const grids = [];
+    const lent = [];
     const gridOptions = { ...options, maxGaps: Math.ceil((options.maxGaps ?? SWING_DEFAULTS.maxGaps) / Math.max(1, d)) };
     for (let c = 0; c < d; c++) {
         // A category input takes only its level codes: scanned level by level, no margins.
@@ -39144,11 +39445,15 @@ function planSwing(design, train, options = {}) {
         if (onScale !== null)
             for (let i = 0; i < len; i++)
                 sample[i] = onScale.forward(sample[i]);
-        const grid = gridFromSorted((0,radix_sort/* sortFloat64 */.f)(sample, radixScratch), len, gridOptions, new Float64Array(radixScratch.buffer, 0, len));
+        const grid = gridFromSorted((0,radix_sort/* sortFloat64 */.f)(sample, radixScratch), len, gridOptions, work.subarray(0, len));
         if (onScale !== null) {
-            grid.inside = grid.inside.map(onScale.inverse);
+            const onInput = grid.inside.map(onScale.inverse);
+            (0,core_scratch/* returnDoubles */.TI)(grid.inside);
+            grid.inside = onInput;
             grid.beyond = grid.beyond.map(onScale.inverse);
         }
+        else
+            lent.push(grid.inside);
         const whole = len === n && onScale === null && defaultInsideGrid(options, gridOptions, grid.gaps);
         if (grid.inside.length > 0) {
             const beyond = admitted(design, c, grid.beyond);
@@ -39158,6 +39463,8 @@ function planSwing(design, train, options = {}) {
                 : { input: c, inside: grid.inside, beyond, whole });
         }
     }
+    (0,core_scratch/* returnDoubles */.TI)(work);
+    (0,core_scratch/* returnDoubles */.TI)(scratch);
     // Several inputs: segments between sampled rows and their nearest neighbours.
     let segments = null;
     let segmentColumns = null;
@@ -39189,6 +39496,7 @@ function planSwing(design, train, options = {}) {
         maxCurvePoints,
         maxCurves,
         ...(back !== undefined ? { backTransform: back } : {}),
+        lent,
     };
 }
 /**
@@ -39230,6 +39538,19 @@ function admitted(design, c, points) {
     if (checks.length === 0)
         return points;
     return points.filter((v) => checks.every((t) => t.admits?.(name, v) ?? true));
+}
+/**
+ * Total variation of a sampled curve: sum |v[k+1] - v[k]| over its first m values (Jordan 1881;
+ * of a sampled curve, the sum of absolute increments). One loop (see DEVELOPERS.md, "Writing hot
+ * loops").
+ * @param v the curve's values in order
+ * @param m values read (m <= v.length)
+ */
+function totalVariation(v, m) {
+    let s = 0;
+    for (let k = 1; k < m; k++)
+        s += Math.abs(v[k] - v[k - 1]);
+    return s;
 }
 /**
  * Scores a {@link SwingPlan} under the fitted coefficients: the swing figures and curves.
@@ -39293,19 +39614,23 @@ function scoreSwing(plan, design, coefficients, insideCurves) {
         const c = grid.input;
         const along = (xs) => design.inputs.map((_, k) => (k === c ? xs : constant(k, xs.length)));
         const predict = predictorAlong(design, coefficients, c, medians);
-        const pin = score(along(grid.inside), grid.inside.length, 'inside', predict(grid.inside));
+        // The inside predictions are lent (core/scratch.ts) and given back before the next input:
+        // only figures and copies of them are kept.
+        const pin = score(along(grid.inside), grid.inside.length, 'inside', predict(grid.inside, (0,core_scratch/* borrowDoubles */.an)(grid.inside.length)));
         const pout = score(along(grid.beyond), grid.beyond.length, 'beyond', predict(grid.beyond));
         if (insideCurves !== undefined && grid.whole === true && readByEveryTerm(design, c)) {
             insideCurves.push({
                 input: c,
-                grid: grid.inside,
-                prediction: pin,
+                points: pin.length,
+                variation: totalVariation(pin, pin.length),
                 ...(plan.backTransform !== undefined ? { backTransform: plan.backTransform } : {}),
                 ...(grid.distinct !== undefined ? { distinct: grid.distinct } : {}),
             });
         }
-        if (curves.length >= plan.maxCurves)
+        if (curves.length >= plan.maxCurves) {
+            (0,core_scratch/* returnDoubles */.TI)(pin);
             continue;
+        }
         // Curve for charts: all points ascending (inside and margins merged), thinned with the
         // extremes kept; only the kept points are read out of the merged order.
         const place = mergedPlaces(grid.inside, grid.beyond);
@@ -39323,6 +39648,7 @@ function scoreSwing(plan, design, coefficients, insideCurves) {
             x: mergedValues(grid.inside, grid.beyond, place, keep),
             prediction: mergedValues(pin, pout, place, keep),
         });
+        (0,core_scratch/* returnDoubles */.TI)(pin);
     }
     if (plan.segmentColumns !== null)
         score(plan.segmentColumns, plan.segmentColumns[0].length, 'inside');
@@ -39357,7 +39683,14 @@ function scoreSwing(plan, design, coefficients, insideCurves) {
  * @param insideCurves as in {@link scoreSwing}; default none
  */
 function measureSwing(design, train, coefficients, options = {}, insideCurves) {
-    return scoreSwing(planSwing(design, train, options), design, coefficients, insideCurves);
+    const plan = planSwing(design, train, options);
+    try {
+        return scoreSwing(plan, design, coefficients, insideCurves);
+    }
+    finally {
+        for (const array of plan.lent ?? [])
+            (0,core_scratch/* returnDoubles */.TI)(array);
+    }
 }
 
 
@@ -39456,7 +39789,7 @@ function chiSquareSum(y, yhat, sigma, n) {
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
 /* harmony export */   k: () => (/* binding */ runCheck)
 /* harmony export */ });
-/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(1063);
+/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(5834);
 /* harmony import */ var _run_pool_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(2499);
 /* harmony import */ var _repo_fs_repository_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(4526);
 
@@ -39484,6 +39817,7 @@ async function runCheck(settings, options) {
         jobs: options.jobs ?? (0,_run_pool_js__WEBPACK_IMPORTED_MODULE_1__/* .defaultJobs */ .yV)(),
         exactJobs: options.jobs !== null,
         onModel: options.onModel,
+        handoff: options.handoff,
         root: settings.root,
     });
 }
@@ -44187,7 +44521,7 @@ function createFsRepository(root) {
             }
         },
         async *stream(path, chunkBytes = 1024 * 1024) {
-            const { real } = await requireFile(path);
+            const { real, info } = await requireFile(path);
             let fd;
             try {
                 fd = (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.openSync)(real, 'r');
@@ -44196,22 +44530,36 @@ function createFsRepository(root) {
                 throw (0,_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .unreadableError */ .Sw)(error, { file: path });
             }
             try {
-                // Pieces of chunkBytes, no bigger than the file needs (a file that grows meanwhile is
-                // still read to its end, in pieces of at least 64 KiB); each piece is a fresh buffer,
-                // so a reader may keep a previous one.
-                const size = Math.max(1, Math.min(Math.floor(chunkBytes), Math.max(65_536, (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.fstatSync)(fd).size + 1)));
+                // Pieces of chunkBytes, the first no bigger than the file needs (its size as just found
+                // for the checks above, plus one byte), the rest of at least 64 KiB (a file that grows
+                // meanwhile is still read to its end). Each piece is a fresh buffer, so a reader may
+                // keep a previous one; a piece is filled until it is full or a read finds the end, so a
+                // small file is one buffer and the read that finds its end goes into that buffer's room.
+                const most = Math.max(1, Math.floor(chunkBytes));
+                let size = Math.min(most, info.size + 1);
                 for (;;) {
                     const piece = Buffer.allocUnsafe(size);
-                    let n;
-                    try {
-                        n = (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.readSync)(fd, piece, 0, size, null);
+                    let filled = 0;
+                    let ended = false;
+                    while (filled < size) {
+                        let n;
+                        try {
+                            n = (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.readSync)(fd, piece, filled, size - filled, null);
+                        }
+                        catch (error) {
+                            throw (0,_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .unreadableError */ .Sw)(error, { file: path });
+                        }
+                        if (n === 0) {
+                            ended = true;
+                            break;
+                        }
+                        filled += n;
                     }
-                    catch (error) {
-                        throw (0,_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .unreadableError */ .Sw)(error, { file: path });
-                    }
-                    if (n === 0)
+                    if (filled > 0)
+                        yield filled === size ? piece : piece.subarray(0, filled);
+                    if (ended)
                         return;
-                    yield n === size ? piece : piece.subarray(0, n);
+                    size = Math.min(most, Math.max(65_536, info.size + 1));
                 }
             }
             finally {
@@ -45548,13 +45896,17 @@ function neutraliseLog(text) {
  * digit, never with `::`.
  */
 function neutraliseJson(json) {
-    // Most pieces (numbers, plain names) hold none of the characters either pattern needs: one scan.
-    if (!NEEDS_NEUTRALISING.test(json))
+    // Most pieces (numbers, plain names) hold none of the characters either pattern needs. Four
+    // `indexOf` scans of single characters are an order of magnitude faster than one scan by a
+    // character-class pattern (and a text of one-byte characters cannot hold U+2028 or U+2029).
+    if (!needsNeutralising(json))
         return json;
     return json.replace(LEGACY, '#$1#$2\\u005b').replace(/[\u0085\u2028\u2029]/g, codeEscape);
 }
-/** A character without which {@link neutraliseJson} changes nothing: `#` (of `##[`) or a raw line separator. */
-const NEEDS_NEUTRALISING = /[#\u0085\u2028\u2029]/;
+/** True when `text` holds a character without which {@link neutraliseJson} changes nothing: `#` (of `##[`) or a raw line separator. */
+function needsNeutralising(text) {
+    return text.includes('#') || text.includes('\u0085') || text.includes('\u2028') || text.includes('\u2029');
+}
 /**
  * Text an API server sent back (an error message, a library's warning about a response), made
  * fit to print: on one line, control and format characters shown as `\u001b` style escapes,
@@ -46580,7 +46932,7 @@ function logLossComparison(metrics, base) {
 /* harmony export */ });
 /* unused harmony export bandRegions */
 /* harmony import */ var _data_data_parts_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(6837);
-/* harmony import */ var _design_blocks_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(1619);
+/* harmony import */ var _design_blocks_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(7254);
 /* harmony import */ var _result_result_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(1628);
 /* harmony import */ var _diagnostics_column_median_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(8455);
 /* harmony import */ var _design_stats_js__WEBPACK_IMPORTED_MODULE_7__ = __nccwpck_require__(6801);
@@ -46632,9 +46984,16 @@ function chartNumber(x) {
  * floor(t n / max), t = 0 .. max-1 (deterministic: the same file always gives the same points).
  */
 function thinRows(n, max = _result_chart_types_js__WEBPACK_IMPORTED_MODULE_6__/* .MAX_CHART_POINTS */ .Q5) {
+    // Plain loops: `Int32Array.from` with a mapping function takes the builtins' slow generic path.
+    const m = Math.max(0, Math.trunc(Math.min(n, max)));
+    const keep = new Int32Array(m);
     if (n <= max)
-        return Int32Array.from({ length: n }, (_, i) => i);
-    return Int32Array.from({ length: max }, (_, t) => Math.floor((t * n) / max));
+        for (let i = 0; i < m; i++)
+            keep[i] = i;
+    else
+        for (let t = 0; t < m; t++)
+            keep[t] = Math.floor((t * n) / max);
+    return keep;
 }
 /**
  * Rows a series of a model with this many inputs keeps at most: `numbers` / (inputs + 4), at most `max`.
@@ -46649,23 +47008,43 @@ function partIndex(data, keep) {
     if (parts === undefined)
         return {};
     const index = new Map(parts.map((p, k) => [p.file, k]));
-    return { files: parts.map((p) => p.file), file_index: Array.from(keep, (i) => index.get((0,_data_data_parts_js__WEBPACK_IMPORTED_MODULE_0__/* .placeOfLine */ .xX)(data, data.lines[i]).file) ?? 0) };
+    const fileIndex = [];
+    for (let t = 0; t < keep.length; t++)
+        fileIndex.push(index.get((0,_data_data_parts_js__WEBPACK_IMPORTED_MODULE_0__/* .placeOfLine */ .xX)(data, data.lines[keep[t]]).file) ?? 0);
+    return { files: parts.map((p) => p.file), file_index: fileIndex };
+}
+/** {@link chartNumber} of the kept rows of a column, in the order of `keep`. */
+function pickRows(col, keep) {
+    const out = [];
+    for (let t = 0; t < keep.length; t++)
+        out.push(chartNumber(col[keep[t]]));
+    return out;
 }
 function series(data, predictions, max, numbers) {
     const keep = thinRows(data.rows, seriesPoints(data.inputs.length, max, numbers));
     const thinned = keep.length < data.rows;
-    const pick = (col) => Array.from(keep, (i) => chartNumber(col[i]));
+    // Plain loops over the kept rows (`Array.from` with a mapping function is several times slower).
+    const lines = [];
+    const residual = [];
+    if (data.parts === undefined || data.parts.length === 0)
+        for (let t = 0; t < keep.length; t++)
+            lines.push(data.lines[keep[t]]);
+    else
+        for (let t = 0; t < keep.length; t++)
+            lines.push((0,_data_data_parts_js__WEBPACK_IMPORTED_MODULE_0__/* .placeOfLine */ .xX)(data, data.lines[keep[t]]).line);
+    for (let t = 0; t < keep.length; t++)
+        residual.push(chartNumber(data.y[keep[t]] - predictions[keep[t]]));
     return {
         rows: data.rows,
         shown: keep.length,
         thinned,
         thinning: thinned ? `${keep.length} of ${data.rows} rows, evenly spaced through the file` : '',
-        lines: Array.from(keep, (i) => (0,_data_data_parts_js__WEBPACK_IMPORTED_MODULE_0__/* .placeOfLine */ .xX)(data, data.lines[i]).line),
+        lines,
         ...partIndex(data, keep),
-        x: data.inputs.map(pick),
-        actual: pick(data.y),
-        fitted: pick(predictions),
-        residual: Array.from(keep, (i) => chartNumber(data.y[i] - predictions[i])),
+        x: data.inputs.map((col) => pickRows(col, keep)),
+        actual: pickRows(data.y, keep),
+        fitted: pickRows(predictions, keep),
+        residual,
     };
 }
 /** A series that draws none of its rows (the run's chart data went to other models): counts and why. */
@@ -46983,7 +47362,7 @@ function coefficientData(model, checks) {
 
 /***/ }),
 
-/***/ 1063:
+/***/ 5834:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -52840,53 +53219,31 @@ function checkDataForm(doc, file, data) {
 var kernels = __nccwpck_require__(4733);
 // EXTERNAL MODULE: ./src/run/base-comparison.ts
 var base_comparison = __nccwpck_require__(5148);
-;// CONCATENATED MODULE: ./src/run/error-result.ts
+;// CONCATENATED MODULE: ./src/run/model-handoff.ts
+const renders = new Map();
 /**
- * The outcome of a model that could not be checked: verdict `error` with the file, line and code.
+ * Registers a render under a name, on this thread (call it at the top level of the module that
+ * defines the render, so that every thread that loads the module has it). A second registration
+ * of the same name replaces the first.
  */
-
-/** Error code of a model that failed through a fault in fitgate rather than in its files. */
-const INTERNAL_ERROR = 'internal-error';
-/**
- * The outcome of a model that could not be checked. The message starts with the key path
- * (`` `terms[0].polynomial.degree`: ``) when the error has one, as {@link InputError.describe}
- * does, since the result keeps only the file and line of the location.
- */
-function errorResult(name, descriptor, error) {
-    const key = error.location.key;
-    return {
-        name,
-        descriptor,
-        verdict: 'error',
-        rows: { train: 0, holdout: 0 },
-        parameters: 0,
-        columns: [],
-        metrics: null,
-        coefficients: [],
-        shipped: null,
-        checks: [],
-        error: {
-            message: key !== undefined && key !== '' ? `\`${(0,errors/* clip */.$Q)(key)}\`: ${error.message}` : error.message,
-            file: error.location.file ?? null,
-            line: error.location.line ?? null,
-            ...(error.location.column !== undefined ? { column: error.location.column } : {}),
-            code: error.code,
-        },
-    };
+function registerModelRender(name, render) {
+    renders.set(name, render);
 }
-/** Error code of a model stopped at its time limit (`caps.max_model_seconds`). */
-const TIME_LIMIT = 'time-limit';
+/** The render registered under `name` on this thread, or undefined. */
+function modelRender(name) {
+    return renders.get(name);
+}
 /**
- * The error of a model stopped at its time limit, at the descriptor's `terms` line.
- * @param descriptor the model
- * @param limitSeconds the limit (`caps.max_model_seconds`)
- * @param elapsedMs time spent when it was stopped
- * @param stage what was running (a stage of the run), or null when the model's thread was ended from outside
- * @param settingsFile path of the settings file, or null when there is none
+ * What the main thread does with a whole outcome: the handoff's render and take when the render is
+ * registered here, else `onModel`, else nothing (the Result keeps the outcome whole).
+ * @param handoff the run's handoff, if any
+ * @param onModel the run's callback for whole outcomes, if any
  */
-function timeLimitError(descriptor, limitSeconds, elapsedMs, stage, settingsFile) {
-    const where = stage === null ? 'its worker thread was stopped' : `stopped in the ${stage}`;
-    return new errors/* InputError */.dz(TIME_LIMIT, `did not finish within the time limit of ${limitSeconds} s per model (${where} after ${(elapsedMs / 1000).toFixed(1)} s); raise caps.max_model_seconds in ${settingsFile ?? 'the settings file (fitgate.yml)'} to allow more time, or make the model smaller (fewer rows, columns, folds or sweep settings)`, { file: descriptor.file, line: descriptor.termsLine });
+function wholeModelKeeper(handoff, onModel) {
+    const render = handoff === undefined ? undefined : modelRender(handoff.render);
+    if (handoff !== undefined && render !== undefined)
+        return (model) => handoff.take(render(model));
+    return onModel ?? ((model) => model);
 }
 
 // EXTERNAL MODULE: external "node:url"
@@ -53035,10 +53392,59 @@ function withBaseCurves(charts, head, baseline, commit) {
 var chart_data = __nccwpck_require__(2834);
 // EXTERNAL MODULE: ./src/run/run-checks.ts
 var run_checks = __nccwpck_require__(6580);
+;// CONCATENATED MODULE: ./src/run/error-result.ts
+/**
+ * The outcome of a model that could not be checked: verdict `error` with the file, line and code.
+ */
+
+/** Error code of a model that failed through a fault in fitgate rather than in its files. */
+const INTERNAL_ERROR = 'internal-error';
+/**
+ * The outcome of a model that could not be checked. The message starts with the key path
+ * (`` `terms[0].polynomial.degree`: ``) when the error has one, as {@link InputError.describe}
+ * does, since the result keeps only the file and line of the location.
+ */
+function errorResult(name, descriptor, error) {
+    const key = error.location.key;
+    return {
+        name,
+        descriptor,
+        verdict: 'error',
+        rows: { train: 0, holdout: 0 },
+        parameters: 0,
+        columns: [],
+        metrics: null,
+        coefficients: [],
+        shipped: null,
+        checks: [],
+        error: {
+            message: key !== undefined && key !== '' ? `\`${(0,errors/* clip */.$Q)(key)}\`: ${error.message}` : error.message,
+            file: error.location.file ?? null,
+            line: error.location.line ?? null,
+            ...(error.location.column !== undefined ? { column: error.location.column } : {}),
+            code: error.code,
+        },
+    };
+}
+/** Error code of a model stopped at its time limit (`caps.max_model_seconds`). */
+const TIME_LIMIT = 'time-limit';
+/**
+ * The error of a model stopped at its time limit, at the descriptor's `terms` line.
+ * @param descriptor the model
+ * @param limitSeconds the limit (`caps.max_model_seconds`)
+ * @param elapsedMs time spent when it was stopped
+ * @param stage what was running (a stage of the run), or null when the model's thread was ended from outside
+ * @param settingsFile path of the settings file, or null when there is none
+ */
+function timeLimitError(descriptor, limitSeconds, elapsedMs, stage, settingsFile) {
+    const where = stage === null ? 'its worker thread was stopped' : `stopped in the ${stage}`;
+    return new errors/* InputError */.dz(TIME_LIMIT, `did not finish within the time limit of ${limitSeconds} s per model (${where} after ${(elapsedMs / 1000).toFixed(1)} s); raise caps.max_model_seconds in ${settingsFile ?? 'the settings file (fitgate.yml)'} to allow more time, or make the model smaller (fewer rows, columns, folds or sweep settings)`, { file: descriptor.file, line: descriptor.termsLine });
+}
+
 // EXTERNAL MODULE: ./src/data/data-parts.ts
 var data_parts = __nccwpck_require__(6837);
-// EXTERNAL MODULE: ./src/design/blocks.ts + 1 modules
-var blocks = __nccwpck_require__(1619);
+// EXTERNAL MODULE: ./src/design/blocks.ts
+var blocks = __nccwpck_require__(7254);
 // EXTERNAL MODULE: ./src/design/stats.ts
 var stats = __nccwpck_require__(6801);
 // EXTERNAL MODULE: ./src/diagnostics/regression-metrics.ts
@@ -53861,7 +54267,7 @@ async function evaluateWithin(repo, descriptor, settings, share, base, scale) {
 // EXTERNAL MODULE: ./src/repo/fs-repository.ts
 var fs_repository = __nccwpck_require__(4526);
 // EXTERNAL MODULE: ./src/run/pool.ts
-var pool = __nccwpck_require__(2499);
+var run_pool = __nccwpck_require__(2499);
 // EXTERNAL MODULE: ./src/run/worker-role.ts
 var worker_role = __nccwpck_require__(5280);
 ;// CONCATENATED MODULE: ./src/run/work-guess.ts
@@ -53874,19 +54280,26 @@ const BYTE_COLUMNS = 25;
 /** Operations a model must be guessed at, in total, for each worker thread the run starts (about 0.5 s of work each). */
 const WORKER_OPERATIONS = 2.5e8;
 /**
- * Operations a model costs on a worker thread beyond its own work, about 3 ms: its task and its
- * Result cloned across the threads (a Result is bounded by the run's chart data,
- * result/chart-types.ts) and taken in by the main thread, code warmed up and garbage collected in
- * one more isolate. Measured with whole runs: two workers took 3.7 s more CPU time than the main
- * thread alone for 1,000 models of 1,000 rows, 1.7 s more for 200 models of 2,000 rows.
+ * Operations a model costs the run beyond its own work when a worker evaluates it, about 8 ms: its
+ * task and outcome (or the outcome's rendered copy and text, run/model-handoff.ts) cloned across the
+ * threads and taken in, the code warmed up and the garbage collected in one more isolate, and the
+ * engine's own threads (its collector and optimising compiler keep about 0.3 of a second core busy
+ * beside each busy thread) sharing the cores. Measured with whole runs on 2 cores, the main thread
+ * beside one worker against the main thread alone, in turns: 1,000 models of 1,000 rows 4.7 s
+ * against 5.2 s, 200 models of 2,000 rows 2.0 s against 2.1 s, with about 35 MiB more memory; with
+ * this value neither pays for the worker there (more cores leave room for more workers and for the
+ * engine's threads).
  */
-const MODEL_TRANSFER_OPERATIONS = 1.5e6;
-/** Operations a worker thread costs to start, about 0.4 s: it loads the bundle and compiles the code again in its own isolate. */
-const WORKER_START_OPERATIONS = 2e8;
+const MODEL_TRANSFER_OPERATIONS = 4e6;
+/**
+ * Operations the main thread does alone while a worker starts, about 0.3 s: the worker loads the
+ * bundle and compiles the code again in its own isolate before it takes its first model.
+ */
+const WORKER_START_OPERATIONS = 1.5e8;
 /**
  * Workers start only when their run is guessed to take at most this fraction of the serial run's
- * time: a margin for what the guess cannot see (the main thread writing the reports meanwhile,
- * cores shared with other processes).
+ * time: a margin for what the guess cannot see (cores shared with other processes, the code
+ * warming up and collecting garbage in one more isolate).
  */
 const POOL_PAY_RATIO = 0.8;
 /**
@@ -53935,13 +54348,30 @@ async function dataBytes(repo, descriptor) {
     return bytes;
 }
 /**
- * Worker threads that the guessed work pays for: W = one per {@link WORKER_OPERATIONS} of the
- * total, at most `jobs` and at most one per model, then fewer while the guessed time of W workers,
- * max(largest model, (total + models x {@link MODEL_TRANSFER_OPERATIONS}) / W) +
- * {@link WORKER_START_OPERATIONS}, is more than {@link POOL_PAY_RATIO} of the total (the serial
- * run); 0 or 1 means the main thread alone.
+ * The guessed time of a run on the main thread and `workers` workers, in operations: the main
+ * thread works alone for {@link WORKER_START_OPERATIONS} while the workers start, then the rest and
+ * the transfer of the models the workers take ({@link MODEL_TRANSFER_OPERATIONS} each, a share
+ * workers / (workers + 1) of the models) are shared by the workers + 1 threads; never less than
+ * the largest model. With no worker, the total.
+ * @param total guessed work of all models
+ * @param largest guessed work of the largest model
+ * @param models number of models
+ * @param workers worker threads beside the main thread (>= 0)
+ */
+function guessedWall(total, largest, models, workers) {
+    if (workers <= 0 || total <= WORKER_START_OPERATIONS)
+        return total;
+    const threads = workers + 1;
+    const moved = (models * workers) / threads;
+    return Math.max(largest, WORKER_START_OPERATIONS + (total - WORKER_START_OPERATIONS + moved * MODEL_TRANSFER_OPERATIONS) / threads);
+}
+/**
+ * Worker threads that the guessed work pays for beside the main thread: at most `jobs` - 1, one
+ * per model beyond the first and one per {@link WORKER_OPERATIONS} of the total, the count with
+ * the least {@link guessedWall} provided that is at most {@link POOL_PAY_RATIO} of the total (the
+ * main thread alone); 0 means the main thread alone.
  * @param works guessed work of each model ({@link guessWork})
- * @param jobs largest number of workers allowed (>= 1)
+ * @param jobs threads allowed in all, the main thread included (>= 1)
  */
 function workersThatPay(works, jobs) {
     let total = 0;
@@ -53950,11 +54380,17 @@ function workersThatPay(works, jobs) {
         total += w;
         largest = Math.max(largest, w);
     }
-    const moved = total + works.length * MODEL_TRANSFER_OPERATIONS;
-    let workers = Math.max(0, Math.min(Math.floor(jobs), works.length, Math.floor(total / WORKER_OPERATIONS)));
-    while (workers >= 2 && Math.max(largest + MODEL_TRANSFER_OPERATIONS, moved / workers) + WORKER_START_OPERATIONS > POOL_PAY_RATIO * total)
-        workers--;
-    return workers;
+    const most = Math.max(0, Math.min(Math.floor(jobs) - 1, works.length - 1, Math.floor(total / WORKER_OPERATIONS)));
+    let best = 0;
+    let bestWall = POOL_PAY_RATIO * total;
+    for (let w = 1; w <= most; w++) {
+        const wall = guessedWall(total, largest, works.length, w);
+        if (wall <= bestWall) {
+            best = w;
+            bestWall = wall;
+        }
+    }
+    return best;
 }
 /**
  * The order to hand models to workers: largest guessed work first (so that no large model starts
@@ -53968,11 +54404,17 @@ function largestFirst(works) {
 
 ;// CONCATENATED MODULE: ./src/run/model-worker.ts
 /**
- * Models on worker threads: the main thread sends each model's descriptor (with the settings
- * file and, when comparing with a base commit, that model's base outcome) as plain data; a
- * worker reads the model's files from the same repository root, fits it, runs its checks and
- * sends the ModelResult back, with its thread's kernel notes. Results come back in descriptor
- * order, identical to a serial run.
+ * Models on worker threads beside the main thread, in two rounds on the same threads. First the
+ * descriptors: each thread loads some of them ({@link loadDescriptors}), so that the workers,
+ * started as soon as the number of descriptors alone pays for them ({@link openModelThreads}),
+ * have work while the rest is read. Then the models: the main thread sends each model's descriptor
+ * (with the settings file and, when comparing with a base commit, that model's base outcome) as
+ * plain data; a worker reads the model's files from the same repository root, fits it, runs its
+ * checks and sends the ModelResult back (or, when the run asks for a handoff, its rendered copy
+ * and text: model-handoff.ts), with its thread's kernel notes. The main thread evaluates models
+ * too, from the small end of the list while the workers take the large end. Each outcome is
+ * handed over as soon as it is final; the list comes back in descriptor order, identical to a
+ * serial run.
  *
  * The worker runs this very module's file. The CLI is bundled into one file, so there the
  * worker loads the whole bundle: the bundle's entry must not start its own work in a worker
@@ -53990,6 +54432,62 @@ function largestFirst(works) {
 
 
 
+
+
+
+/**
+ * Starts the workers for a run of `count` descriptors when their number alone pays for at least
+ * one (each model's fixed work, work-guess.ts `MODEL_FIXED_OPERATIONS`, a lower bound of its
+ * guessed work), or when `exactJobs`; null otherwise (one model, `jobs` 1, no disk root, a module
+ * that is not JavaScript, or too little fixed work: {@link evaluateModels} may still start workers
+ * once the data sizes are known). The workers load their script while this thread reads the
+ * descriptors. The caller must close the pool.
+ * @param count descriptors the run found
+ * @param settings the settings file (every worker gets it)
+ * @param options threads allowed and the repository root
+ */
+function openModelThreads(count, settings, options) {
+    const jobs = Math.min(options.jobs ?? 1, count);
+    const script = workerScript();
+    if (jobs <= 1 || options.root === undefined || script === null)
+        return null;
+    const workers = options.exactJobs === true ? jobs - 1 : workersThatPay(new Array(count).fill(MODEL_FIXED_OPERATIONS), jobs);
+    if (workers < 1)
+        return null;
+    const data = { [worker_role/* WORKER_FLAG */.o]: true, root: options.root, settings };
+    return (0,run_pool/* openPool */.x5)({ jobs: workers, script, workerData: data });
+}
+/**
+ * Loads every descriptor, on the pool's workers and this thread together when a pool is given
+ * ({@link openModelThreads}), else here one after another. A descriptor that cannot be loaded
+ * (an InputError) becomes its model's error outcome; any other error is thrown.
+ * @param repo the repository reader (used on this thread)
+ * @param paths repository-relative descriptor paths
+ * @param settings the settings file
+ * @param pool the run's workers, or null
+ * @returns one entry per path, in the same order
+ */
+async function loadDescriptors(repo, paths, settings, pool) {
+    if (pool === null || paths.length < 2) {
+        const loaded = [];
+        for (const path of paths)
+            loaded.push(await loadOne(repo, path, settings));
+        return loaded;
+    }
+    const tasks = paths.map((path) => ({ kind: 'load', path }));
+    return pool.run(tasks, { local: (task) => loadOne(repo, task.path, settings) });
+}
+/** One descriptor loaded, or its model's error outcome when its file is bad (an InputError). */
+async function loadOne(repo, path, settings) {
+    try {
+        return { descriptor: await loadDescriptor(repo, path, settings) };
+    }
+    catch (error) {
+        if (!(error instanceof errors/* InputError */.dz))
+            throw error;
+        return { failed: errorResult(path, path, error) };
+    }
+}
 /** True in a model worker thread started by {@link evaluateModels} (the only kind of fitgate worker). */
 function isModelWorker() {
     return (0,worker_role/* isFitgateWorker */.$)();
@@ -54005,68 +54503,100 @@ function workerScript() {
     return (0,external_node_url_.fileURLToPath)(url);
 }
 /**
- * Evaluates models, on worker threads when that is possible and worth it (more than one model,
- * `jobs` > 1, a disk root, a JavaScript module file, and guessed work that pays for the workers:
- * work-guess.ts, unless `exactJobs`), serially otherwise. Workers get the models largest guessed work first.
- * @param repo the repository reader (used by the serial path)
+ * Evaluates models, on worker threads beside this one when that is possible and worth it (more
+ * than one model, `jobs` > 1, a disk root, a JavaScript module file, and guessed work that pays
+ * for the workers: work-guess.ts, unless `exactJobs`), serially otherwise. Workers take the models
+ * largest guessed work first, this thread the smallest first.
+ * @param repo the repository reader (used on this thread)
  * @param descriptors the models, in report order
  * @param settings the settings file
- * @param options workers and base comparison; default serial, no comparison
- * @returns one ModelResult per descriptor, in the same order
+ * @param options threads, handover and base comparison; default serial, outcomes kept whole, no comparison
+ * @returns one ModelResult per descriptor (what the handover kept), in the same order
  */
 async function evaluateModels(repo, descriptors, settings, options = {}) {
     const jobs = Math.min(options.jobs ?? 1, descriptors.length);
     const script = workerScript();
     const models = options.models ?? descriptors.length;
-    const keep = options.onModel ?? ((model) => model);
+    const keep = wholeModelKeeper(options.handoff, options.onModel);
+    const here = (i) => evaluateModel(repo, descriptors[i], settings, options.base, undefined, (0,chart_types/* chartShare */.c_)(models, i));
     const serial = async () => {
         const results = [];
         for (let i = 0; i < descriptors.length; i++)
-            results.push(keep(await evaluateModel(repo, descriptors[i], settings, options.base, undefined, (0,chart_types/* chartShare */.c_)(models, i))));
+            results.push(keep(await here(i)));
         return results;
     };
+    const given = options.pool ?? null;
     if (jobs <= 1 || options.root === undefined || script === null)
         return serial();
     const works = [];
     for (const descriptor of descriptors)
         works.push(guessWork(descriptor, await dataBytes(repo, descriptor)));
-    const workers = options.exactJobs === true ? jobs : workersThatPay(works, jobs);
-    if (workers <= 1)
+    const workers = options.exactJobs === true ? jobs - 1 : workersThatPay(works, jobs);
+    if (workers < 1 && given === null)
         return serial();
+    const pool = given ??
+        (0,run_pool/* openPool */.x5)({ jobs: workers, script, workerData: { [worker_role/* WORKER_FLAG */.o]: true, root: options.root, settings } });
+    pool.grow(workers);
+    try {
+        return await evaluateOnPool(pool, descriptors, works, settings, options, here, keep);
+    }
+    finally {
+        if (given === null)
+            pool.close();
+    }
+}
+/** The second round of {@link evaluateModels} on a pool: models largest first on the workers, smallest first here. */
+async function evaluateOnPool(pool, descriptors, works, settings, options, here, keep) {
+    const models = options.models ?? descriptors.length;
     const base = options.base;
-    const tasks = descriptors.map((descriptor, i) => base
-        ? { descriptor, baseline: base.matches.get(descriptor.file) ?? null, commit: base.commit, share: (0,chart_types/* chartShare */.c_)(models, i) }
-        : { descriptor, share: (0,chart_types/* chartShare */.c_)(models, i) });
-    const data = { [worker_role/* WORKER_FLAG */.o]: true, root: options.root, settings };
+    const render = options.handoff?.render;
+    const tasks = descriptors.map((descriptor, i) => ({
+        kind: 'evaluate',
+        descriptor,
+        share: (0,chart_types/* chartShare */.c_)(models, i),
+        ...(base ? { baseline: base.matches.get(descriptor.file) ?? null, commit: base.commit } : {}),
+        ...(render === undefined ? {} : { render }),
+    }));
+    const indexOf = new Map(tasks.map((task, i) => [task, i]));
+    const handoff = options.handoff;
     // The worker checks the model's time limit itself between stages; a model still running
     // HARD_STOP_GRACE_MS later is stuck in one step, and its thread is ended from here.
     const limitSeconds = settings.caps.maxModelSeconds;
-    const replies = await (0,pool/* runPool */.kD)(tasks, { jobs: workers, script, workerData: data, order: largestFirst(works) }, {
+    const kept = await pool.run(tasks, {
+        order: largestFirst(works),
+        local: async (task) => ({ result: await here(indexOf.get(task) ?? -1), kernelNotes: [] }),
+        onResult: (reply) => {
+            (0,kernels/* recordKernelNotes */.YK)(reply.kernelNotes);
+            const result = 'rendered' in reply && handoff !== undefined ? handoff.take(reply.rendered) : keep(reply.result);
+            return { result, kernelNotes: [] };
+        },
+    }, {
         ms: limitSeconds * 1000 + HARD_STOP_GRACE_MS,
         onTimeLimit: (task, elapsedMs) => ({
             result: errorResult(task.descriptor.name, task.descriptor.file, timeLimitError(task.descriptor, limitSeconds, elapsedMs, null, settings.file)),
             kernelNotes: [],
         }),
     });
-    for (const reply of replies)
-        (0,kernels/* recordKernelNotes */.YK)(reply.kernelNotes);
-    return replies.map((reply) => keep(reply.result));
+    return kept.map((reply) => reply.result);
 }
 /**
  * Milliseconds past a model's time limit after which its worker thread is ended from outside:
  * the model's own checks stop it at the limit unless one step runs longer than this.
  */
 const HARD_STOP_GRACE_MS = 2000;
-/** The worker loop: evaluate each model task sent by the pool. */
+/** The worker loop: load each descriptor and evaluate each model the pool sends. */
 function startModelWorker() {
     const data = external_node_worker_threads_.workerData;
     const repo = (0,fs_repository/* createFsRepository */.E)(data.root);
-    (0,pool/* serveTasks */.aJ)(async (task) => {
+    (0,run_pool/* serveTasks */.aJ)(async (task) => {
+        if (task.kind === 'load')
+            return loadOne(repo, task.path, data.settings);
         const base = task.baseline === undefined
             ? undefined
             : { matches: new Map(task.baseline === null ? [] : [[task.descriptor.file, task.baseline]]), commit: task.commit ?? '' };
         const result = await evaluateModel(repo, task.descriptor, data.settings, base, undefined, task.share);
-        return { result, kernelNotes: (0,kernels/* kernelNotes */.TJ)() };
+        const render = task.render === undefined ? undefined : modelRender(task.render);
+        return render === undefined ? { result, kernelNotes: (0,kernels/* kernelNotes */.TJ)() } : { rendered: render(result), kernelNotes: (0,kernels/* kernelNotes */.TJ)() };
     });
 }
 if (isModelWorker())
@@ -54081,7 +54611,6 @@ var version = __nccwpck_require__(3323);
  * The whole run: settings file -> descriptors -> one outcome per model -> Result.
  * No output of its own: reporters format the Result; the entry points decide the exit status.
  */
-
 
 
 
@@ -54118,40 +54647,48 @@ async function runPipeline(settings, repo, options = {}) {
     const paths = (0,run_shard/* selectShard */.Xm)(discovery.paths, shard);
     const models = [];
     const loaded = [];
-    for (const path of paths) {
-        try {
-            loaded.push(await loadDescriptor(repo, path, file));
+    const keepWhole = wholeModelKeeper(options.handoff, options.onModel);
+    // Workers start now when the number of descriptors alone pays for them, and share the reading.
+    const threads = { jobs: options.jobs, root: options.root, exactJobs: options.exactJobs };
+    const pool = openModelThreads(paths.length, file, threads);
+    try {
+        for (const entry of await loadDescriptors(repo, paths, file, pool)) {
+            if ('descriptor' in entry)
+                loaded.push(entry.descriptor);
+            else
+                models.push(keepWhole(entry.failed));
         }
-        catch (error) {
-            if (!(error instanceof errors/* InputError */.dz))
-                throw error;
-            const failed = errorResult(path, path, error);
-            models.push(options.onModel ? options.onModel(failed) : failed);
+        checkUniqueNames(loaded);
+        options.onDescriptors?.(loaded);
+        const notes = [settingsNote(file, settings.config), ...(options.notes ?? []), ...(file.notes ?? []), ...discovery.notes];
+        let base;
+        if (options.baseline) {
+            const matching = (0,base_comparison/* matchBase */.rq)(loaded, [...options.baseline.values()], options.baselineData ?? new Map());
+            base = { matches: matching.matches, commit: options.baseCommit ?? '' };
+            // A shard checks part of the models, so the base models of the other shards match nothing here.
+            if (shard === null)
+                for (const m of matching.unmatched)
+                    notes.push(removedNote(m));
         }
+        for (const model of await evaluateModels(repo, loaded, file, {
+            ...threads,
+            pool,
+            onModel: options.onModel,
+            handoff: options.handoff,
+            base,
+            models: paths.length,
+        }))
+            models.push(model);
+        return finishRun(models, notes, shard, paths.length);
     }
-    checkUniqueNames(loaded);
-    options.onDescriptors?.(loaded);
-    const notes = [settingsNote(file, settings.config), ...(options.notes ?? []), ...(file.notes ?? []), ...discovery.notes];
-    let base;
-    if (options.baseline) {
-        const matching = (0,base_comparison/* matchBase */.rq)(loaded, [...options.baseline.values()], options.baselineData ?? new Map());
-        base = { matches: matching.matches, commit: options.baseCommit ?? '' };
-        // A shard checks part of the models, so the base models of the other shards match nothing here.
-        if (shard === null)
-            for (const m of matching.unmatched)
-                notes.push(removedNote(m));
+    finally {
+        pool?.close();
     }
-    for (const model of await evaluateModels(repo, loaded, file, {
-        jobs: options.jobs,
-        root: options.root,
-        exactJobs: options.exactJobs,
-        onModel: options.onModel,
-        base,
-        models: paths.length,
-    }))
-        models.push(model);
+}
+/** The Result of a run from its models' outcomes and notes: the shard's note, the kernels' note, the summary. */
+function finishRun(models, notes, shard, count) {
     if (shard)
-        notes.push(`shard ${(0,run_shard/* formatShard */._D)(shard)}: ${paths.length} model${paths.length === 1 ? '' : 's'} of this run's share`);
+        notes.push(`shard ${(0,run_shard/* formatShard */._D)(shard)}: ${count} model${count === 1 ? '' : 's'} of this run's share`);
     // The row kernels' note when they had to fall back to JavaScript (here or on a worker thread).
     for (const note of (0,kernels/* kernelNotes */.TJ)())
         if (!notes.includes(note))
@@ -54527,9 +55064,10 @@ function checkTargetRange(descriptor, data) {
 
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
 /* harmony export */   aJ: () => (/* binding */ serveTasks),
-/* harmony export */   kD: () => (/* binding */ runPool),
+/* harmony export */   x5: () => (/* binding */ openPool),
 /* harmony export */   yV: () => (/* binding */ defaultJobs)
 /* harmony export */ });
+/* unused harmony exports TASKS_IN_FLIGHT, runPool */
 /* harmony import */ var node_os__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(8161);
 /* harmony import */ var node_os__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_os__WEBPACK_IMPORTED_MODULE_0__);
 /* harmony import */ var node_worker_threads__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(5919);
@@ -54546,14 +55084,23 @@ function checkTargetRange(descriptor, data) {
  * other error comes back as an Error with the worker's message and stack. The first error
  * stops the pool (the other workers are terminated) and rejects the run.
  *
+ * A worker holds up to {@link TASKS_IN_FLIGHT} tasks at a time and runs them one after another.
+ * With `local`, this thread runs tasks too, from the other end of the order. With `onResult`, each
+ * value is handed over as soon as it is final (a caller keeps a smaller copy instead of the whole).
+ *
  * With a time limit, a task still running that long after its worker started it (a new worker
  * first loads its script, which does not count) has that worker ended (`Worker.terminate`, which
- * stops even a loop that never yields) and gets the result `onTimeLimit` makes for it; a new
- * worker takes over the tasks left.
+ * stops even a loop that never yields) and gets the result `onTimeLimit` makes for it; the tasks
+ * that worker held but had not started go back to the others, and a new worker takes over.
  */
 
 
 
+/**
+ * Tasks a worker holds at a time: the one it runs and three more, so that it does not wait for
+ * this thread (busy with its own task, a model of a few milliseconds) to hand it more.
+ */
+const TASKS_IN_FLIGHT = 4;
 /** The number of workers to use by default: the cores Node may use (os.availableParallelism()). */
 function defaultJobs() {
     return Math.max(1, (0,node_os__WEBPACK_IMPORTED_MODULE_0__.availableParallelism)());
@@ -54578,105 +55125,211 @@ function revive(data) {
     return error;
 }
 /**
- * Runs every task on a pool of worker threads.
- * @param tasks plain-data tasks, each handed to one worker
- * @param options number of workers, worker script and its data
- * @param limit a per-task time limit; default none
+ * Opens a pool and starts `start.jobs` workers at once (they load their script while this thread
+ * goes on).
+ * @param start number of workers, worker script and its data
+ */
+function openPool(start) {
+    const workers = new Set();
+    let active = null;
+    // A worker that failed or exited while no run was on: the next run fails with it.
+    let broken = null;
+    let closed = false;
+    const fail = (error) => {
+        if (active !== null)
+            active.fail(error);
+        else
+            broken ??= error;
+    };
+    const spawn = () => {
+        const w = { thread: new node_worker_threads__WEBPACK_IMPORTED_MODULE_1__.Worker(start.script, { workerData: start.workerData }), held: [], since: 0, timer: undefined };
+        workers.add(w);
+        w.thread.on('message', (message) => {
+            if (workers.has(w) && active !== null)
+                active.reply(w, message);
+        });
+        w.thread.on('error', (error) => {
+            if (workers.has(w))
+                fail(error instanceof Error ? error : new Error(String(error)));
+        });
+        w.thread.on('exit', (code) => {
+            clearTimeout(w.timer);
+            if (workers.has(w) && !closed)
+                fail(new Error(`a worker thread exited (code ${code}) before the pool finished its tasks`));
+        });
+        active?.feed(w);
+    };
+    const pool = {
+        get size() {
+            return workers.size;
+        },
+        grow(count) {
+            while (!closed && workers.size < Math.floor(count))
+                spawn();
+        },
+        close() {
+            if (closed)
+                return;
+            closed = true;
+            for (const w of workers) {
+                clearTimeout(w.timer);
+                void w.thread.terminate();
+            }
+            workers.clear();
+        },
+        run(tasks, options = {}, limit) {
+            const results = new Array(tasks.length);
+            if (tasks.length === 0)
+                return Promise.resolve(results);
+            if (closed)
+                return Promise.reject(new Error('runPool: the pool is closed'));
+            if (active !== null)
+                return Promise.reject(new Error('runPool: one run at a time'));
+            if (broken !== null)
+                return Promise.reject(broken);
+            const given = options.order;
+            if (given !== undefined &&
+                (given.length !== tasks.length || new Set(given).size !== tasks.length || !given.every((i) => i >= 0 && i < tasks.length)))
+                return Promise.reject(new RangeError('runPool: `order` must list every task index once'));
+            const order = given ?? tasks.map((_, i) => i);
+            const keep = options.onResult ?? ((value) => value);
+            return new Promise((resolve, reject) => {
+                // Tasks not handed out: order[front..back); tasks taken back from an ended worker go first.
+                let front = 0;
+                let back = order.length;
+                const returned = [];
+                let done = 0;
+                let settled = false;
+                const left = () => returned.length > 0 || front < back;
+                const takeFront = () => returned.shift() ?? (front < back ? order[front++] : -1);
+                const takeBack = () => returned.shift() ?? (front < back ? order[--back] : -1);
+                const end = () => {
+                    settled = true;
+                    active = null;
+                    for (const w of workers) {
+                        clearTimeout(w.timer);
+                        w.held.length = 0;
+                    }
+                };
+                const failWith = (error) => {
+                    if (settled)
+                        return;
+                    end();
+                    // The workers may still be running tasks of this run: they cannot serve another.
+                    pool.close();
+                    reject(error);
+                };
+                /** Records a task's value; true when the run is over (the last task, or a failure). */
+                const finishTask = (index, value) => {
+                    try {
+                        results[index] = keep(value, index);
+                    }
+                    catch (error) {
+                        failWith(error instanceof Error ? error : new Error(String(error)));
+                        return true;
+                    }
+                    done++;
+                    if (done < tasks.length)
+                        return false;
+                    end();
+                    resolve(results);
+                    return true;
+                };
+                const feed = (w) => {
+                    while (!settled && w.held.length < TASKS_IN_FLIGHT) {
+                        const index = takeFront();
+                        if (index < 0)
+                            return;
+                        w.held.push(index);
+                        const message = { index, task: tasks[index] };
+                        w.thread.postMessage(message);
+                    }
+                };
+                const expire = (w) => {
+                    if (settled || limit === undefined || w.held.length === 0 || !workers.has(w))
+                        return;
+                    // Ended from outside: its exit and anything it still sends are ignored from here on.
+                    workers.delete(w);
+                    void w.thread.terminate();
+                    // The task over its limit, then the ones it held but had not started: those go first to the others.
+                    const index = w.held[0];
+                    for (let k = w.held.length - 1; k >= 1; k--)
+                        returned.unshift(w.held[k]);
+                    w.held.length = 0;
+                    if (!finishTask(index, limit.onTimeLimit(tasks[index], performance.now() - w.since)) && left())
+                        spawn();
+                };
+                active = {
+                    feed,
+                    fail: failWith,
+                    reply(w, message) {
+                        const reply = message;
+                        if (settled || reply.index !== w.held[0])
+                            return;
+                        if ('started' in reply) {
+                            w.since = performance.now();
+                            // Unreferenced: a timer alone never keeps the process running (its worker does, while busy).
+                            if (limit !== undefined)
+                                w.timer = setTimeout(() => expire(w), limit.ms).unref();
+                            return;
+                        }
+                        clearTimeout(w.timer);
+                        w.held.shift();
+                        if (!reply.ok)
+                            return failWith(revive(reply.error));
+                        if (!finishTask(reply.index, reply.value))
+                            feed(w);
+                    },
+                };
+                for (const w of workers)
+                    feed(w);
+                const local = options.local;
+                if (local !== undefined) {
+                    const lane = async () => {
+                        // Each round finishes one task or stops, so this ends after at most tasks.length rounds.
+                        while (!settled) {
+                            // A turn of the event loop first: the workers' replies (and their next tasks) are taken in.
+                            await new Promise((next) => setImmediate(next));
+                            if (settled)
+                                return;
+                            const index = takeBack();
+                            if (index < 0)
+                                return;
+                            const value = await local(tasks[index]);
+                            if (settled)
+                                return;
+                            finishTask(index, value);
+                        }
+                    };
+                    lane().catch((error) => failWith(error instanceof Error ? error : new Error(String(error))));
+                }
+                else if (workers.size === 0)
+                    failWith(new Error('runPool: no worker and no local lane'));
+            });
+        },
+    };
+    pool.grow(start.jobs);
+    return pool;
+}
+/**
+ * Runs every task on a pool of worker threads started for this run alone (and on this thread too
+ * with `options.local`), then ends them.
+ * @param tasks plain-data tasks, each handed to one worker (or run here)
+ * @param options number of workers, worker script and its data, order, this thread's lane
+ * @param limit a per-task time limit on the workers; default none
  * @returns one result per task, in task order
  * @throws the first task error (InputErrors stay InputErrors), or an Error when a worker exits early
  */
-function runPool(tasks, options, limit) {
-    const size = Math.min(Math.max(1, Math.floor(options.jobs)), tasks.length);
-    const results = new Array(tasks.length);
+async function runPool(tasks, options, limit) {
     if (tasks.length === 0)
-        return Promise.resolve(results);
-    const order = options.order;
-    if (order !== undefined &&
-        (order.length !== tasks.length || new Set(order).size !== tasks.length || !order.every((i) => i >= 0 && i < tasks.length)))
-        return Promise.reject(new RangeError('runPool: `order` must list every task index once'));
-    return new Promise((resolve, reject) => {
-        const workers = new Set();
-        let next = 0;
-        let done = 0;
-        let settled = false;
-        const stop = () => {
-            for (const w of workers)
-                void w.terminate();
-        };
-        const failWith = (error) => {
-            if (settled)
-                return;
-            settled = true;
-            stop();
-            reject(error);
-        };
-        const finishTask = (index, value) => {
-            results[index] = value;
-            done++;
-            if (done < tasks.length)
-                return false;
-            settled = true;
-            stop();
-            resolve(results);
-            return true;
-        };
-        const start = () => {
-            const worker = new node_worker_threads__WEBPACK_IMPORTED_MODULE_1__.Worker(options.script, { workerData: options.workerData });
-            workers.add(worker);
-            // The task this worker is on, when it was handed over, and its time-limit timer.
-            let current = -1;
-            let since = 0;
-            let timer;
-            const feed = () => {
-                if (next >= tasks.length)
-                    return;
-                current = order === undefined ? next : order[next];
-                next++;
-                const message = { index: current, task: tasks[current] };
-                worker.postMessage(message);
-            };
-            const expire = () => {
-                if (settled || limit === undefined || current < 0)
-                    return;
-                // Ended from outside: its exit and anything it still sends are ignored from here on.
-                workers.delete(worker);
-                void worker.terminate();
-                const index = current;
-                current = -1;
-                if (!finishTask(index, limit.onTimeLimit(tasks[index], performance.now() - since)) && next < tasks.length)
-                    start();
-            };
-            worker.on('message', (reply) => {
-                if (settled || !workers.has(worker) || reply.index !== current)
-                    return;
-                if ('started' in reply) {
-                    since = performance.now();
-                    // Unreferenced: a timer alone never keeps the process running (its worker does, while busy).
-                    if (limit !== undefined)
-                        timer = setTimeout(expire, limit.ms).unref();
-                    return;
-                }
-                clearTimeout(timer);
-                current = -1;
-                if (!reply.ok)
-                    return failWith(revive(reply.error));
-                if (!finishTask(reply.index, reply.value))
-                    feed();
-            });
-            worker.on('error', (error) => {
-                if (workers.has(worker))
-                    failWith(error instanceof Error ? error : new Error(String(error)));
-            });
-            worker.on('exit', (code) => {
-                clearTimeout(timer);
-                if (!settled && workers.has(worker))
-                    failWith(new Error(`a worker thread exited (code ${code}) before the pool finished its tasks`));
-            });
-            feed();
-        };
-        for (let w = 0; w < size; w++)
-            start();
-    });
+        return [];
+    const pool = openPool({ ...options, jobs: Math.min(Math.max(1, Math.floor(options.jobs)), tasks.length) });
+    try {
+        return await pool.run(tasks, options, limit);
+    }
+    finally {
+        pool.close();
+    }
 }
 /**
  * The worker side: answers every task the pool sends with `handle(task)`. Call once, at the top
@@ -54687,12 +55340,16 @@ function serveTasks(handle) {
     if (node_worker_threads__WEBPACK_IMPORTED_MODULE_1__.isMainThread || node_worker_threads__WEBPACK_IMPORTED_MODULE_1__.parentPort === null)
         return;
     const port = node_worker_threads__WEBPACK_IMPORTED_MODULE_1__.parentPort;
+    // Tasks run one after another in the order they came (the pool sends the next before this one ends).
+    let queue = Promise.resolve();
     port.on('message', (message) => {
-        // Posted before the task runs, so the pool's clock starts even if the task never yields.
-        port.postMessage({ index: message.index, started: true });
-        Promise.resolve()
-            .then(() => handle(message.task))
-            .then((value) => port.postMessage({ index: message.index, ok: true, value }), (error) => port.postMessage({ index: message.index, ok: false, error: errorData(error) }));
+        queue = queue.then(() => {
+            // Posted as the task starts, so the pool's clock starts even if the task never yields.
+            port.postMessage({ index: message.index, started: true });
+            return Promise.resolve()
+                .then(() => handle(message.task))
+                .then((value) => port.postMessage({ index: message.index, ok: true, value }), (error) => port.postMessage({ index: message.index, ok: false, error: errorData(error) }));
+        });
     });
 }
 
