@@ -3,7 +3,8 @@
  * (`degree: 9` becomes `degree: 3`), the rest of the line stays byte for byte: indentation,
  * flow-mapping style (`{ of: x, degree: 9 }`), spacing and trailing comments.
  */
-import { isMap, isPair, isScalar, LineCounter, parseDocument, visit, type Pair, type Scalar } from 'yaml';
+import { isMap, isPair, isScalar, LineCounter, visit, type Pair, type Scalar } from 'yaml';
+import { parseYamlDocument } from '../config/yaml-parse.js';
 
 /** What to change: a key and its new number. */
 export interface SettingChange {
@@ -55,7 +56,7 @@ function numericValue(pair: Pair, key: string): Scalar | null {
 export function rewriteSetting(text: string, line: number, change: SettingChange): RewrittenLine | null {
   if (!Number.isFinite(change.value)) return null;
   const counter = new LineCounter();
-  const doc = parseDocument(text, { ...PARSE, lineCounter: counter });
+  const doc = parseYamlDocument(text, { ...PARSE, lineCounter: counter });
   if (doc.errors.length > 0) return null;
 
   // Every pair `key: <number>` that is on the line or inside a mapping whose key is on the line.
@@ -82,7 +83,7 @@ export function rewriteSetting(text: string, line: number, change: SettingChange
 
   // The new file must parse, and hold the new number where the old one was.
   const changed = [...lines.slice(0, at - 1), after, ...lines.slice(at)].join('\n');
-  const again = parseDocument(changed, PARSE);
+  const again = parseYamlDocument(changed, PARSE);
   if (again.errors.length > 0) return null;
   let same = false;
   visit(again, {

@@ -7,7 +7,8 @@
  * (flow `[a, b]` or block `- a` lines at its indentation). A descriptor without the key gets
  * `coefficients: [...]` appended as a last top-level key.
  */
-import { isMap, isScalar, isSeq, parseDocument, type Scalar, type YAMLSeq } from 'yaml';
+import { isMap, isScalar, isSeq, type Scalar, type YAMLSeq } from 'yaml';
+import { parseYamlDocument } from './yaml-parse.js';
 import { InputError } from '../core/errors.js';
 
 /** Code of the error for a descriptor whose `coefficients` cannot be rewritten in place. */
@@ -34,7 +35,7 @@ export function yamlNumber(x: number): string {
  */
 export function withCoefficients(text: string, values: readonly number[], file: string): string {
   const written = values.map(yamlNumber);
-  const doc = parseDocument(text, { version: '1.2', schema: 'core', uniqueKeys: false });
+  const doc = parseYamlDocument(text, { version: '1.2', schema: 'core', uniqueKeys: false });
   if (doc.errors.length > 0 || !isMap(doc.contents)) {
     throw new InputError(COEFFICIENTS_TEXT_ERROR, 'cannot be rewritten: expected one YAML document whose top level is a mapping', { file });
   }
@@ -80,7 +81,7 @@ function replaceList(text: string, seq: YAMLSeq, written: string[]): string {
  * null when it has none or they are not a list of finite numbers (the schema refuses those).
  */
 export function shippedCoefficients(text: string): number[] | null {
-  const doc = parseDocument(text, { version: '1.2', schema: 'core', uniqueKeys: false });
+  const doc = parseYamlDocument(text, { version: '1.2', schema: 'core', uniqueKeys: false });
   if (doc.errors.length > 0 || !isMap(doc.contents)) return null;
   const value = doc.contents.get('coefficients');
   if (!isSeq(value)) return null;
@@ -120,7 +121,7 @@ export function compareCoefficients(
  * unchanged when it has no such key or is not one mapping.
  */
 export function blankCoefficients(text: string): string {
-  const doc = parseDocument(text, { version: '1.2', schema: 'core', uniqueKeys: false });
+  const doc = parseYamlDocument(text, { version: '1.2', schema: 'core', uniqueKeys: false });
   if (doc.errors.length > 0 || !isMap(doc.contents)) return text;
   const pair = doc.contents.items.find((p) => isScalar(p.key) && (p.key as Scalar).value === 'coefficients');
   const key = pair?.key as Scalar | undefined;
@@ -133,6 +134,6 @@ export function blankCoefficients(text: string): string {
 
 /** True when a descriptor text says `fit: { refit: false }` (its shipped coefficients are the model). */
 export function scoresAsShipped(text: string): boolean {
-  const doc = parseDocument(text, { version: '1.2', schema: 'core', uniqueKeys: false });
+  const doc = parseYamlDocument(text, { version: '1.2', schema: 'core', uniqueKeys: false });
   return doc.errors.length === 0 && isMap(doc.contents) && doc.getIn(['fit', 'refit']) === false;
 }

@@ -5,7 +5,8 @@
  * naming the file, line and column.
  */
 
-import { isAlias, isMap, isPair, isScalar, isSeq, LineCounter, parseDocument } from 'yaml';
+import { isAlias, isMap, isPair, isScalar, isSeq, LineCounter } from 'yaml';
+import { parseYamlDocument } from './yaml-parse.js';
 import type { Document, Node as YamlNode, YAMLMap, YAMLSeq } from 'yaml';
 import { InputError, clip } from '../core/errors.js';
 import type { RepoReader } from '../repo/types.js';
@@ -112,7 +113,7 @@ export function parseYaml(text: string, file: string): YamlDocument {
   }
 
   const lineCounter = new LineCounter();
-  const doc = parseDocument(text, { lineCounter, prettyErrors: false, uniqueKeys: false, version: '1.2', schema: 'core' });
+  const doc = parseYamlDocument(text, { lineCounter, prettyErrors: false, uniqueKeys: false, version: '1.2', schema: 'core' });
   const at = (offset: number): Position => {
     const { line, col } = lineCounter.linePos(offset);
     return { line, column: col };

@@ -639,7 +639,9 @@ describe('whole runs in child processes (src/ transpiled to JavaScript)', () => 
         const b = JSON.parse(low.stdout) as { notes: string[] };
         expect(b.notes).toEqual([...a.notes, KERNEL_FALLBACK_NOTE]);
         expect(JSON.stringify({ ...b, notes: a.notes }) === JSON.stringify(a), 'the reports differ beyond the note').toBe(true);
-        expect((low.stderr.match(/create new worker/g) ?? []).length, 'worker threads started beside the main thread').toBe(jobs === '2' ? 1 : 0);
+        expect((low.stderr.match(/create new worker/g) ?? []).length, 'worker threads started beside the main thread').toBe(
+          jobs === '2' ? 1 : 0,
+        );
       }, 60_000);
     }
 
