@@ -29618,12 +29618,15 @@ function diffLines(patch) {
 
 // EXTERNAL MODULE: ./node_modules/yaml/dist/index.js
 var dist = __nccwpck_require__(8815);
+// EXTERNAL MODULE: ./src/config/yaml-parse.ts
+var yaml_parse = __nccwpck_require__(3317);
 ;// CONCATENATED MODULE: ./src/action/suggested-line.ts
 /**
  * The descriptor line a suggestion replaces, rewritten: only the value of one key changes
  * (`degree: 9` becomes `degree: 3`), the rest of the line stays byte for byte: indentation,
  * flow-mapping style (`{ of: x, degree: 9 }`), spacing and trailing comments.
  */
+
 
 /** Options of the YAML parser, as the descriptor loader reads descriptors (YAML 1.2, core schema). */
 const PARSE = { prettyErrors: false, uniqueKeys: false, version: '1.2', schema: 'core' };
@@ -29657,7 +29660,7 @@ function rewriteSetting(text, line, change) {
     if (!Number.isFinite(change.value))
         return null;
     const counter = new dist/* LineCounter */.HN();
-    const doc = (0,dist/* parseDocument */.Tp)(text, { ...PARSE, lineCounter: counter });
+    const doc = (0,yaml_parse/* parseYamlDocument */.I)(text, { ...PARSE, lineCounter: counter });
     if (doc.errors.length > 0)
         return null;
     // Every pair `key: <number>` that is on the line or inside a mapping whose key is on the line.
@@ -29685,7 +29688,7 @@ function rewriteSetting(text, line, change) {
     const after = before.slice(0, start - lineStart) + newValue + before.slice(end - lineStart);
     // The new file must parse, and hold the new number where the old one was.
     const changed = [...lines.slice(0, at - 1), after, ...lines.slice(at)].join('\n');
-    const again = (0,dist/* parseDocument */.Tp)(changed, PARSE);
+    const again = (0,yaml_parse/* parseYamlDocument */.I)(changed, PARSE);
     if (again.errors.length > 0)
         return null;
     let same = false;
@@ -32396,6 +32399,44 @@ function boundsText(schema) {
     if (schema.exclusiveMaximum !== undefined)
         parts.push(`< ${schema.exclusiveMaximum}`);
     return `${what} ${parts.join(' and ')}`;
+}
+
+
+/***/ }),
+
+/***/ 3317:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   I: () => (/* binding */ parseYamlDocument)
+/* harmony export */ });
+/* harmony import */ var yaml__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(8815);
+/**
+ * The one way fitgate parses YAML text into a document: `parseDocument` of the `yaml` library with
+ * the library's debugging switches out of reach. That library prints every token (environment
+ * variable `LOG_TOKENS`) or every composed node (`LOG_STREAM`) to standard output through
+ * `console.log` when they are set, which would break a report written to standard output, and it
+ * reads `process.env.LOG_TOKENS` once per token: a lookup in the process's environment (a call
+ * into the runtime each time) that is most of the parser's own time per token. During the parse,
+ * which is synchronous (no other code of this thread runs meanwhile), `process.env` is an empty
+ * object; the real one is back before this returns or throws.
+ */
+
+/**
+ * Parses YAML text into a document, as the `yaml` library's `parseDocument(text, options)` does,
+ * with the environment hidden from the library while it parses (see the module comment).
+ * @param text the YAML text
+ * @param options the library's parse, document and schema options
+ */
+function parseYamlDocument(text, options) {
+    const environment = process.env;
+    process.env = {};
+    try {
+        return (0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .parseDocument */ .Tp)(text, options);
+    }
+    finally {
+        process.env = environment;
+    }
 }
 
 
@@ -52201,6 +52242,8 @@ function run(validate, value) {
 var errors = __nccwpck_require__(4296);
 // EXTERNAL MODULE: ./node_modules/yaml/dist/index.js
 var dist = __nccwpck_require__(8815);
+// EXTERNAL MODULE: ./src/config/yaml-parse.ts
+var yaml_parse = __nccwpck_require__(3317);
 ;// CONCATENATED MODULE: ./src/config/yaml-source.ts
 /**
  * YAML text to a plain value plus the source position of any key path, with the guards a
@@ -52208,6 +52251,7 @@ var dist = __nccwpck_require__(8815);
  * refused, and non-UTF-8 or binary content refused. Every problem is an {@link InputError}
  * naming the file, line and column.
  */
+
 
 
 /** Guards applied to every YAML file fitgate reads. */
@@ -52286,7 +52330,7 @@ function parseYaml(text, file) {
         throw new errors/* InputError */.dz(YAML_ERROR.tooDeep, `is nested more than ${YAML_GUARDS.maxDepth} levels deep; expected a shallow settings or descriptor file`, { file, ...positionInText(text, rough.offset) });
     }
     const lineCounter = new dist/* LineCounter */.HN();
-    const doc = (0,dist/* parseDocument */.Tp)(text, { lineCounter, prettyErrors: false, uniqueKeys: false, version: '1.2', schema: 'core' });
+    const doc = (0,yaml_parse/* parseYamlDocument */.I)(text, { lineCounter, prettyErrors: false, uniqueKeys: false, version: '1.2', schema: 'core' });
     const at = (offset) => {
         const { line, col } = lineCounter.linePos(offset);
         return { line, column: col };

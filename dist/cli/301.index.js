@@ -13,6 +13,8 @@ __webpack_require__.d(__webpack_exports__, {
 
 // EXTERNAL MODULE: ./node_modules/yaml/dist/index.js
 var dist = __webpack_require__(8815);
+// EXTERNAL MODULE: ./src/config/yaml-parse.ts
+var yaml_parse = __webpack_require__(3317);
 // EXTERNAL MODULE: ./src/core/errors.ts
 var core_errors = __webpack_require__(4296);
 ;// CONCATENATED MODULE: ./src/config/coefficients-text.ts
@@ -25,6 +27,7 @@ var core_errors = __webpack_require__(4296);
  * (flow `[a, b]` or block `- a` lines at its indentation). A descriptor without the key gets
  * `coefficients: [...]` appended as a last top-level key.
  */
+
 
 
 /** Code of the error for a descriptor whose `coefficients` cannot be rewritten in place. */
@@ -50,7 +53,7 @@ function yamlNumber(x) {
  */
 function withCoefficients(text, values, file) {
     const written = values.map(yamlNumber);
-    const doc = (0,dist/* parseDocument */.Tp)(text, { version: '1.2', schema: 'core', uniqueKeys: false });
+    const doc = (0,yaml_parse/* parseYamlDocument */.I)(text, { version: '1.2', schema: 'core', uniqueKeys: false });
     if (doc.errors.length > 0 || !(0,dist/* isMap */.jh)(doc.contents)) {
         throw new core_errors/* InputError */.dz(COEFFICIENTS_TEXT_ERROR, 'cannot be rewritten: expected one YAML document whose top level is a mapping', { file });
     }
@@ -96,7 +99,7 @@ function replaceList(text, seq, written) {
  * null when it has none or they are not a list of finite numbers (the schema refuses those).
  */
 function shippedCoefficients(text) {
-    const doc = (0,dist/* parseDocument */.Tp)(text, { version: '1.2', schema: 'core', uniqueKeys: false });
+    const doc = (0,yaml_parse/* parseYamlDocument */.I)(text, { version: '1.2', schema: 'core', uniqueKeys: false });
     if (doc.errors.length > 0 || !(0,dist/* isMap */.jh)(doc.contents))
         return null;
     const value = doc.contents.get('coefficients');
@@ -134,7 +137,7 @@ function compareCoefficients(shipped, refit) {
  * unchanged when it has no such key or is not one mapping.
  */
 function blankCoefficients(text) {
-    const doc = (0,dist/* parseDocument */.Tp)(text, { version: '1.2', schema: 'core', uniqueKeys: false });
+    const doc = (0,yaml_parse/* parseYamlDocument */.I)(text, { version: '1.2', schema: 'core', uniqueKeys: false });
     if (doc.errors.length > 0 || !(0,dist/* isMap */.jh)(doc.contents))
         return text;
     const pair = doc.contents.items.find((p) => (0,dist/* isScalar */.jn)(p.key) && p.key.value === 'coefficients');
@@ -148,7 +151,7 @@ function blankCoefficients(text) {
 }
 /** True when a descriptor text says `fit: { refit: false }` (its shipped coefficients are the model). */
 function scoresAsShipped(text) {
-    const doc = (0,dist/* parseDocument */.Tp)(text, { version: '1.2', schema: 'core', uniqueKeys: false });
+    const doc = (0,yaml_parse/* parseYamlDocument */.I)(text, { version: '1.2', schema: 'core', uniqueKeys: false });
     return doc.errors.length === 0 && (0,dist/* isMap */.jh)(doc.contents) && doc.getIn(['fit', 'refit']) === false;
 }
 

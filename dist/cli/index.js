@@ -7601,6 +7601,44 @@ function readLimits(doc, file, limits, at) {
 
 /***/ }),
 
+/***/ 3317:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   I: () => (/* binding */ parseYamlDocument)
+/* harmony export */ });
+/* harmony import */ var yaml__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(8815);
+/**
+ * The one way fitgate parses YAML text into a document: `parseDocument` of the `yaml` library with
+ * the library's debugging switches out of reach. That library prints every token (environment
+ * variable `LOG_TOKENS`) or every composed node (`LOG_STREAM`) to standard output through
+ * `console.log` when they are set, which would break a report written to standard output, and it
+ * reads `process.env.LOG_TOKENS` once per token: a lookup in the process's environment (a call
+ * into the runtime each time) that is most of the parser's own time per token. During the parse,
+ * which is synchronous (no other code of this thread runs meanwhile), `process.env` is an empty
+ * object; the real one is back before this returns or throws.
+ */
+
+/**
+ * Parses YAML text into a document, as the `yaml` library's `parseDocument(text, options)` does,
+ * with the environment hidden from the library while it parses (see the module comment).
+ * @param text the YAML text
+ * @param options the library's parse, document and schema options
+ */
+function parseYamlDocument(text, options) {
+    const environment = process.env;
+    process.env = {};
+    try {
+        return (0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .parseDocument */ .Tp)(text, options);
+    }
+    finally {
+        process.env = environment;
+    }
+}
+
+
+/***/ }),
+
 /***/ 2865:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
@@ -7609,13 +7647,15 @@ function readLimits(doc, file, limits, at) {
 /* harmony export */ });
 /* unused harmony exports YAML_GUARDS, YAML_ERROR, decodeYamlBytes, parseYaml */
 /* harmony import */ var yaml__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(8815);
-/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(4296);
+/* harmony import */ var _yaml_parse_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(3317);
+/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(4296);
 /**
  * YAML text to a plain value plus the source position of any key path, with the guards a
  * file from a pull request needs: a size cap, a nesting cap, an alias cap, duplicate keys
  * refused, and non-UTF-8 or binary content refused. Every problem is an {@link InputError}
  * naming the file, line and column.
  */
+
 
 
 /** Guards applied to every YAML file fitgate reads. */
@@ -7653,11 +7693,11 @@ function decodeYamlBytes(bytes, file) {
     }
     catch {
         const at = firstInvalidUtf8(bytes);
-        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(YAML_ERROR.encoding, `is not UTF-8 text (invalid byte 0x${bytes[at].toString(16).padStart(2, '0')} at offset ${at}); expected a UTF-8 YAML file`, { file, ...positionInBytes(bytes, at) });
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(YAML_ERROR.encoding, `is not UTF-8 text (invalid byte 0x${bytes[at].toString(16).padStart(2, '0')} at offset ${at}); expected a UTF-8 YAML file`, { file, ...positionInBytes(bytes, at) });
     }
     const nul = text.indexOf('\u0000');
     if (nul >= 0) {
-        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(YAML_ERROR.encoding, 'contains a NUL character, so it looks binary; expected a UTF-8 YAML file', {
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(YAML_ERROR.encoding, 'contains a NUL character, so it looks binary; expected a UTF-8 YAML file', {
             file,
             ...positionInText(text, nul),
         });
@@ -7691,10 +7731,10 @@ function parseYaml(text, file) {
     // stack) on documents nested thousands deep, so refuse those before parsing.
     const rough = roughNesting(text);
     if (rough.depth > ROUGH_DEPTH_CAP) {
-        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(YAML_ERROR.tooDeep, `is nested more than ${YAML_GUARDS.maxDepth} levels deep; expected a shallow settings or descriptor file`, { file, ...positionInText(text, rough.offset) });
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(YAML_ERROR.tooDeep, `is nested more than ${YAML_GUARDS.maxDepth} levels deep; expected a shallow settings or descriptor file`, { file, ...positionInText(text, rough.offset) });
     }
     const lineCounter = new yaml__WEBPACK_IMPORTED_MODULE_0__/* .LineCounter */ .HN();
-    const doc = (0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .parseDocument */ .Tp)(text, { lineCounter, prettyErrors: false, uniqueKeys: false, version: '1.2', schema: 'core' });
+    const doc = (0,_yaml_parse_js__WEBPACK_IMPORTED_MODULE_1__/* .parseYamlDocument */ .I)(text, { lineCounter, prettyErrors: false, uniqueKeys: false, version: '1.2', schema: 'core' });
     const at = (offset) => {
         const { line, col } = lineCounter.linePos(offset);
         return { line, column: col };
@@ -7703,7 +7743,7 @@ function parseYaml(text, file) {
         const error = doc.errors[0];
         const stackOverflow = /call stack/i.test(error.message);
         const message = error.message.replace(/ at line \d+, column \d+:?[\s\S]*$/, '');
-        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(stackOverflow ? YAML_ERROR.tooDeep : YAML_ERROR.syntax, stackOverflow ? `is nested too deeply; expected at most ${YAML_GUARDS.maxDepth} levels` : `is not valid YAML: ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .clip */ .$Q)(message, 120)}`, { file, ...at(error.pos[0]) });
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(stackOverflow ? YAML_ERROR.tooDeep : YAML_ERROR.syntax, stackOverflow ? `is nested too deeply; expected at most ${YAML_GUARDS.maxDepth} levels` : `is not valid YAML: ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .clip */ .$Q)(message, 120)}`, { file, ...at(error.pos[0]) });
     }
     checkStructure(doc, text, file, at);
     let value;
@@ -7712,7 +7752,7 @@ function parseYaml(text, file) {
     }
     catch (error) {
         const first = firstAlias(doc.contents);
-        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(YAML_ERROR.aliases, `expands aliases (*name) more than ${YAML_GUARDS.maxAliasCount} times (${error instanceof Error ? error.message : String(error)}); expected few aliases`, { file, ...(first ? at(first) : {}) });
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(YAML_ERROR.aliases, `expands aliases (*name) more than ${YAML_GUARDS.maxAliasCount} times (${error instanceof Error ? error.message : String(error)}); expected few aliases`, { file, ...(first ? at(first) : {}) });
     }
     const locate = (path, wantValue) => {
         let node = doc.contents;
@@ -7809,7 +7849,7 @@ function checkStructure(doc, text, file, at) {
     const visit = (node, depth) => {
         if ((0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .isMap */ .jh)(node) || (0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .isSeq */ .oP)(node)) {
             if (depth > YAML_GUARDS.maxDepth) {
-                throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(YAML_ERROR.tooDeep, `is nested more than ${YAML_GUARDS.maxDepth} levels deep; expected a shallow settings or descriptor file`, {
+                throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(YAML_ERROR.tooDeep, `is nested more than ${YAML_GUARDS.maxDepth} levels deep; expected a shallow settings or descriptor file`, {
                     file,
                     ...(node.range ? at(node.range[0]) : {}),
                 });
@@ -7825,7 +7865,7 @@ function checkStructure(doc, text, file, at) {
                 if ((0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .isMap */ .jh)(keyNode) || (0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .isSeq */ .oP)(keyNode)) {
                     const range = pair.key?.range;
                     const written = range ? text.slice(range[0], range[1]).replace(/\s+/g, ' ').trim() : '';
-                    throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(YAML_ERROR.collectionKey, `a ${(0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .isMap */ .jh)(keyNode) ? 'mapping' : 'list'} used as a key (\`${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .clip */ .$Q)(written, 40)}\`); expected a plain name before the colon`, {
+                    throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(YAML_ERROR.collectionKey, `a ${(0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .isMap */ .jh)(keyNode) ? 'mapping' : 'list'} used as a key (\`${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .clip */ .$Q)(written, 40)}\`); expected a plain name before the colon`, {
                         file,
                         ...at(keyOffset),
                     });
@@ -7834,7 +7874,7 @@ function checkStructure(doc, text, file, at) {
                 const before = seen.get(key);
                 if (before !== undefined) {
                     const first = at(before);
-                    throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(YAML_ERROR.duplicateKey, `key \`${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .clip */ .$Q)(key)}\` appears twice in the same mapping (first at line ${first.line}); expected each key once`, {
+                    throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(YAML_ERROR.duplicateKey, `key \`${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .clip */ .$Q)(key)}\` appears twice in the same mapping (first at line ${first.line}); expected each key once`, {
                         file,
                         key,
                         ...at(keyOffset),
@@ -7896,7 +7936,7 @@ function firstAlias(root) {
 }
 function checkSize(bytes, file) {
     if (bytes > YAML_GUARDS.maxBytes) {
-        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(YAML_ERROR.tooLarge, `is ${bytes} bytes; expected a YAML file of at most ${YAML_GUARDS.maxBytes} bytes (1 MiB)`, {
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(YAML_ERROR.tooLarge, `is ${bytes} bytes; expected a YAML file of at most ${YAML_GUARDS.maxBytes} bytes (1 MiB)`, {
             file,
         });
     }
