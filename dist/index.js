@@ -54479,6 +54479,10 @@ function largestFirst(works) {
 
 
 
+/** What a model worker receives for a run over the repository at `root` (absolute) with these settings. */
+function workerDataFor(root, settings) {
+    return { [worker_role/* WORKER_FLAG */.o]: true, root, settings };
+}
 /**
  * Starts the workers for a run of `count` descriptors when their number alone pays for at least
  * one (each model's fixed work, work-guess.ts `MODEL_FIXED_OPERATIONS`, a lower bound of its
@@ -54498,8 +54502,7 @@ function openModelThreads(count, settings, options) {
     const workers = options.exactJobs === true ? jobs - 1 : workersThatPay(new Array(count).fill(MODEL_FIXED_OPERATIONS), jobs);
     if (workers < 1)
         return null;
-    const data = { [worker_role/* WORKER_FLAG */.o]: true, root: options.root, settings };
-    return (0,run_pool/* openPool */.x5)({ jobs: workers, script, workerData: data });
+    return (0,run_pool/* openPool */.x5)({ jobs: workers, script, workerData: workerDataFor(options.root, settings) });
 }
 /**
  * Loads every descriptor, on the pool's workers and this thread together when a pool is given
@@ -54578,8 +54581,7 @@ async function evaluateModels(repo, descriptors, settings, options = {}) {
     const workers = options.exactJobs === true ? jobs - 1 : workersThatPay(works, jobs);
     if (workers < 1 && given === null)
         return serial();
-    const pool = given ??
-        (0,run_pool/* openPool */.x5)({ jobs: workers, script, workerData: { [worker_role/* WORKER_FLAG */.o]: true, root: options.root, settings } });
+    const pool = given ?? (0,run_pool/* openPool */.x5)({ jobs: workers, script, workerData: workerDataFor(options.root, settings) });
     pool.grow(workers);
     try {
         return await evaluateOnPool(pool, descriptors, works, settings, options, here, keep);

@@ -43,6 +43,11 @@ interface ModelWorkerData {
   settings: SettingsFile;
 }
 
+/** What a model worker receives for a run over the repository at `root` (absolute) with these settings. */
+function workerDataFor(root: string, settings: SettingsFile): ModelWorkerData {
+  return { [WORKER_FLAG]: true, root, settings };
+}
+
 /** One descriptor to load (the first round). */
 interface LoadTask {
   kind: 'load';
@@ -102,8 +107,7 @@ export function openModelThreads(count: number, settings: SettingsFile, options:
   if (jobs <= 1 || options.root === undefined || script === null) return null;
   const workers = options.exactJobs === true ? jobs - 1 : workersThatPay(new Array<number>(count).fill(MODEL_FIXED_OPERATIONS), jobs);
   if (workers < 1) return null;
-  const data: ModelWorkerData = { [WORKER_FLAG]: true, root: options.root, settings };
-  return openPool({ jobs: workers, script, workerData: data });
+  return openPool({ jobs: workers, script, workerData: workerDataFor(options.root, settings) });
 }
 
 /**
@@ -217,9 +221,7 @@ export async function evaluateModels(
   for (const descriptor of descriptors) works.push(guessWork(descriptor, await dataBytes(repo, descriptor)));
   const workers = options.exactJobs === true ? jobs - 1 : workersThatPay(works, jobs);
   if (workers < 1 && given === null) return serial();
-  const pool =
-    given ??
-    openPool({ jobs: workers, script, workerData: { [WORKER_FLAG]: true, root: options.root, settings } satisfies ModelWorkerData });
+  const pool = given ?? openPool({ jobs: workers, script, workerData: workerDataFor(options.root, settings) });
   pool.grow(workers);
   try {
     return await evaluateOnPool(pool, descriptors, works, settings, options, here, keep);
