@@ -313,13 +313,18 @@ export class ChunkBuilder {
     this.handOut();
   }
 
-  /** Moves the rows gathered so far into a ready chunk; false when there were none. */
+  /**
+   * Moves the rows gathered so far into a ready chunk; false when there were none. A chunk that
+   * does not fill its buffers gets views of their first `rows` entries, not copies: the builder
+   * never writes those buffers again (they are not recycled, and the next rows go into fresh
+   * buffers), and they are at most twice the rows they hold.
+   */
   private handOut(): boolean {
     const rows = this.row;
     if (rows === 0) return false;
     const exact = rows === this.capacity;
-    const slots = exact ? this.slots : this.slots.map((s) => s.slice(0, rows));
-    const lines = exact ? this.lines : this.lines.slice(0, rows);
+    const slots = exact ? this.slots : this.slots.map((s) => s.subarray(0, rows));
+    const lines = exact ? this.lines : this.lines.subarray(0, rows);
     const chunk: Chunk = { rows, columns: this.request.slotOfColumn.map((slot) => slots[slot]), lines };
     if (exact) this.#buffersOf.set(chunk, { slots, lines });
     this.ready.push(chunk);

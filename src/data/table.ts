@@ -171,7 +171,7 @@ export async function readTable(repo: RepoReader, path: string | readonly string
   // First position of each distinct requested name (a repeated name shares one array).
   const firstOf = settings.columns.map((name) => settings.columns.indexOf(name));
   let columns: Float64Array[] = [];
-  let lines = new Int32Array(0);
+  let lines: Int32Array = new Int32Array(0);
   let rows = 0;
   const grow = (capacity: number): void => {
     columns = settings.columns.map((_, k) => {
@@ -190,7 +190,12 @@ export async function readTable(repo: RepoReader, path: string | readonly string
     typeof path === 'string'
       ? scan(counted, path, settings, (plan) => (header = plan.header), false, true, counts)
       : scanParts(repo, path, settings, (plan) => (header = plan.header), true, counts, count, parts);
-  for await (const chunk of chunks) {
+  // A chunk shorter than `chunkRows` is the last its reader hands out, and its buffers are never
+  // written again: the first such chunk is held as it is, and when nothing follows (a file of
+  // fewer rows than a chunk, as every file of a many-models run) its arrays become the table's
+  // columns without a copy.
+  let lone: TableChunk | null = null;
+  const take = (chunk: TableChunk): void => {
     const needed = rows + chunk.rows;
     if (needed > lines.length) {
       let capacity = Math.max(needed, Math.ceil(lines.length * 1.5));
@@ -206,6 +211,23 @@ export async function readTable(repo: RepoReader, path: string | readonly string
     });
     lines.set(chunk.lines, rows);
     rows = needed;
+  };
+  for await (const chunk of chunks) {
+    if (rows === 0 && lone === null && chunk.rows < settings.chunkRows) {
+      lone = chunk;
+      continue;
+    }
+    if (lone !== null) {
+      take(lone);
+      lone = null;
+    }
+    take(chunk);
+  }
+  if (lone !== null) {
+    const chunk: TableChunk = lone;
+    columns = settings.columns.map((_, k) => chunk.columns[firstOf[k]]);
+    lines = chunk.lines;
+    rows = chunk.rows;
   }
   const out = new Map<string, Float64Array>();
   settings.columns.forEach((name, k) => {

@@ -3,7 +3,8 @@
  * lexically (no absolute paths, no `..` above the root) and then through the file system
  * (the real path, with every symbolic link at any level followed, must stay inside the
  * root's real path) before anything is opened; the real path is what gets opened. A path's real
- * path, once found inside the root, is kept for the reader's life (one run).
+ * path, once found inside the root, and a regular file's size are kept for the reader's life (one
+ * run).
  *
  * The file system calls are synchronous behind the asynchronous interface: a run reads its files
  * one after another (models run in parallel on worker threads, each with its own reader), and a
@@ -81,10 +82,15 @@ export function createFsRepository(root: string): RepoReader {
     return real;
   };
 
+  // Sizes of regular files already found, by real path: a run asks for a data file's kind and
+  // size several times (planned, sized, read). The size checked against the limits is the one
+  // found first; a read still goes to the file's end as it is then.
+  const fileSize = new Map<string, number>();
+
   const check = async (path: string): Promise<string | null> => realInside(normaliseRepoPath(path), { file: path }, path);
 
-  /** What `path` names, and its real path and file information when something is there. */
-  const kindOf = async (path: string): Promise<{ kind: EntryKind; real: string | null; info?: Stats }> => {
+  /** What `path` names, and its real path when something is there (and its size when it is a file). */
+  const kindOf = async (path: string): Promise<{ kind: EntryKind; real: string | null; size?: number }> => {
     const real = await check(path);
     if (real === null) {
       // Nothing at the end of the links: a link that leads nowhere is not "missing".
@@ -97,17 +103,21 @@ export function createFsRepository(root: string): RepoReader {
         return { kind: 'missing', real: null };
       }
     }
+    const known = fileSize.get(real);
+    if (known !== undefined) return { kind: 'file', real, size: known };
     const info = await stat(real, { file: path });
-    return { kind: info.isFile() ? 'file' : info.isDirectory() ? 'folder' : 'special', real, info };
+    if (!info.isFile()) return { kind: info.isDirectory() ? 'folder' : 'special', real };
+    fileSize.set(real, info.size);
+    return { kind: 'file', real, size: info.size };
   };
 
-  /** The real path of a regular file and its information; InputError otherwise. */
-  const requireFile = async (path: string): Promise<{ real: string; info: Stats }> => {
-    const { kind, real, info } = await kindOf(path);
+  /** The real path of a regular file and its size; InputError otherwise. */
+  const requireFile = async (path: string): Promise<{ real: string; size: number }> => {
+    const { kind, real, size } = await kindOf(path);
     if (kind === 'missing')
       throw new InputError(FILE_MISSING, `no such file in ${rootAbsolute}; expected an existing file`, { file: path });
-    if (kind !== 'file' || real === null || info === undefined) throw notAFileError(kind === 'file' ? 'special' : kind, { file: path });
-    return { real, info };
+    if (kind !== 'file' || real === null || size === undefined) throw notAFileError(kind === 'file' ? 'special' : kind, { file: path });
+    return { real, size };
   };
 
   return {
@@ -125,7 +135,7 @@ export function createFsRepository(root: string): RepoReader {
       return (await kindOf(path)).kind;
     },
     async size(path) {
-      return (await requireFile(path)).info.size;
+      return (await requireFile(path)).size;
     },
     async read(path) {
       const { real } = await requireFile(path);
@@ -136,7 +146,7 @@ export function createFsRepository(root: string): RepoReader {
       }
     },
     async *stream(path, chunkBytes = 1024 * 1024) {
-      const { real, info } = await requireFile(path);
+      const { real, size: fileBytes } = await requireFile(path);
       let fd: number;
       try {
         fd = openSync(real, 'r');
@@ -150,7 +160,7 @@ export function createFsRepository(root: string): RepoReader {
         // keep a previous one; a piece is filled until it is full or a read finds the end, so a
         // small file is one buffer and the read that finds its end goes into that buffer's room.
         const most = Math.max(1, Math.floor(chunkBytes));
-        let size = Math.min(most, info.size + 1);
+        let size = Math.min(most, fileBytes + 1);
         for (;;) {
           const piece = Buffer.allocUnsafe(size);
           let filled = 0;
@@ -170,7 +180,7 @@ export function createFsRepository(root: string): RepoReader {
           }
           if (filled > 0) yield filled === size ? piece : piece.subarray(0, filled);
           if (ended) return;
-          size = Math.min(most, Math.max(65_536, info.size + 1));
+          size = Math.min(most, Math.max(65_536, fileBytes + 1));
         }
       } finally {
         closeSync(fd);
