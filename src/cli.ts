@@ -79,7 +79,7 @@ async function main(argv: string[]): Promise<number> {
     // Each format keeps runner commands out of its lines (the text and JSON reporters do it
     // themselves), so the report is safe to print in a CI step. The JSON report comes in pieces (one
     // model at a time), so that a run of any size is written without being one string.
-    const pieces: Iterable<string> =
+    const pieces: Iterable<string | Uint8Array> =
       parsed.format === 'json'
         ? jsonReport(result, spool === null ? {} : { modelText: spool.text })
         : parsed.format === 'markdown'

@@ -9,8 +9,11 @@
  * the re-indenting cannot touch their content.
  */
 
-/** Options of {@link jsonPieces}. */
-export interface JsonPiecesOptions {
+/**
+ * Options of {@link jsonPieces}. `P` is the type of the pieces a substitute gives: strings, or
+ * also bytes (UTF-8 text written earlier, passed through as it is).
+ */
+export interface JsonPiecesOptions<P extends string | Uint8Array = string> {
   /** Containers nested less deeply than this are walked; deeper values are stringified whole. Default 4. */
   depth?: number;
   /**
@@ -19,7 +22,7 @@ export interface JsonPiecesOptions {
    * {@link jsonPiecesAt} from a fuller copy of it), or undefined to walk the value itself.
    * Default none.
    */
-  substitute?: (value: unknown) => Iterable<string> | undefined;
+  substitute?: (value: unknown) => Iterable<P> | undefined;
 }
 
 const INDENT = '  ';
@@ -42,7 +45,10 @@ function isWritten(value: unknown): boolean {
  * @param value a JSON-compatible value (plain objects, arrays, strings, numbers, booleans, null)
  * @param options how deep to walk; default 4 levels
  */
-export function* jsonPieces(value: unknown, options: JsonPiecesOptions = {}): Generator<string> {
+export function* jsonPieces<P extends string | Uint8Array = string>(
+  value: unknown,
+  options: JsonPiecesOptions<P> = {},
+): Generator<string | P> {
   const v = prepared(value, '');
   if (!isWritten(v)) return;
   yield* piecesOf(v, 0, options.depth ?? 4, options.substitute);
@@ -55,7 +61,11 @@ export function* jsonPieces(value: unknown, options: JsonPiecesOptions = {}): Ge
  * @param level its nesting level (0: the top)
  * @param options how deep to walk, counted from the top; default 4 levels
  */
-export function* jsonPiecesAt(value: unknown, level: number, options: JsonPiecesOptions = {}): Generator<string> {
+export function* jsonPiecesAt<P extends string | Uint8Array = string>(
+  value: unknown,
+  level: number,
+  options: JsonPiecesOptions<P> = {},
+): Generator<string | P> {
   const v = prepared(value, '');
   yield* piecesOf(isWritten(v) ? v : null, level, options.depth ?? 4, options.substitute);
 }
@@ -80,7 +90,12 @@ function indented(value: unknown, level: number): string {
   return text.slice(head, text.length - tail);
 }
 
-function* piecesOf(value: unknown, level: number, depth: number, substitute: JsonPiecesOptions['substitute']): Generator<string> {
+function* piecesOf<P extends string | Uint8Array>(
+  value: unknown,
+  level: number,
+  depth: number,
+  substitute: JsonPiecesOptions<P>['substitute'],
+): Generator<string | P> {
   const given = substitute?.(value);
   if (given !== undefined) {
     yield* given;

@@ -19,7 +19,6 @@
  * problem, as without a spool. Without a target, the text is kept in memory.
  */
 import { closeSync, readSync, unlinkSync, writeSync } from 'node:fs';
-import { StringDecoder } from 'node:string_decoder';
 import { jsonModelReport } from '../report/json.js';
 import type { ModelResult } from '../result/result.js';
 import { registerModelRender, type ModelHandoff, type RenderedModel } from '../run/model-handoff.js';
@@ -35,10 +34,12 @@ export interface ModelSpool {
    */
   handoff: ModelHandoff;
   /**
-   * The text set aside for a copy {@link keep} returned, in pieces (read from the spool file as
-   * they are asked for), or undefined for any other model. A piece that cannot be read throws.
+   * The text set aside for a copy {@link keep} returned, in pieces, or undefined for any other
+   * model: one string when it was kept in memory; read from the spool file, its UTF-8 bytes as they
+   * are asked for, in one buffer used again for the next piece (so each piece is valid until the
+   * next is asked for). A piece that cannot be read throws.
    */
-  text(model: ModelResult): Iterable<string> | undefined;
+  text(model: ModelResult): Iterable<string | Uint8Array> | undefined;
   /** Drops every text, closes and removes the spool file (calling it again does nothing); {@link keep} then returns models whole. */
   close(): void;
 }
@@ -162,10 +163,9 @@ export function openModelSpool(target?: SpoolTarget, hooks: SpoolHooks = {}): Mo
     end += bytes.length;
     return true;
   };
-  // One buffer for every read of the run (a piece is a string made from it, so it is not kept).
+  // One buffer for every read of the run: the bytes go to the report as they are, never decoded.
   let buffer: Buffer | null = null;
-  const fileText = function* (spool: TempFile, extent: Extent): Generator<string> {
-    const decoder = new StringDecoder('utf8');
+  const fileText = function* (spool: TempFile, extent: Extent): Generator<Uint8Array> {
     buffer ??= Buffer.allocUnsafe(SPOOL_READ_BYTES);
     const chunk = buffer;
     // Each round reads at least one byte, so this ends after at most extent.bytes rounds.
@@ -173,10 +173,8 @@ export function openModelSpool(target?: SpoolTarget, hooks: SpoolHooks = {}): Mo
       const n = read(spool.fd, chunk, 0, Math.min(chunk.length, extent.bytes - done), extent.start + done);
       if (!(n > 0)) throw new Error('the model spool file ended early');
       done += n;
-      yield decoder.write(chunk.subarray(0, n));
+      yield chunk.subarray(0, n);
     }
-    const rest = decoder.end();
-    if (rest !== '') yield rest;
   };
 
   const take = ({ kept, text }: RenderedModel): ModelResult => {

@@ -9,11 +9,22 @@ import type { Writable } from 'node:stream';
 /** Bytes gathered before each write. */
 export const WRITE_BUFFER_BYTES = 1 << 20;
 
-/** Groups pieces into strings of about {@link WRITE_BUFFER_BYTES} UTF-16 units (one buffer each). */
-export function* batches(pieces: Iterable<string>): Generator<string> {
+/**
+ * Groups pieces into strings of about {@link WRITE_BUFFER_BYTES} UTF-16 units (one buffer each).
+ * A piece of bytes (UTF-8 text already) ends the batch before it and is handed on as a copy of
+ * its own (the source may use its buffer again for the next piece).
+ */
+export function* batches(pieces: Iterable<string | Uint8Array>): Generator<string | Uint8Array> {
   let parts: string[] = [];
   let size = 0;
   for (const piece of pieces) {
+    if (typeof piece !== 'string') {
+      if (size > 0) yield parts.join('');
+      parts = [];
+      size = 0;
+      if (piece.length > 0) yield Buffer.from(piece);
+      continue;
+    }
     parts.push(piece);
     size += piece.length;
     if (size >= WRITE_BUFFER_BYTES) {
@@ -31,7 +42,7 @@ export function* batches(pieces: Iterable<string>): Generator<string> {
  * @param stream where to write (`process.stdout`)
  * @param pieces the report's text in pieces
  */
-export async function writeReportStream(stream: Writable, pieces: Iterable<string>): Promise<void> {
+export async function writeReportStream(stream: Writable, pieces: Iterable<string | Uint8Array>): Promise<void> {
   for (const text of batches(pieces)) {
     // A closed pipe (`fitgate check | head`) takes nothing more; the run's outcome stands.
     if (stream.destroyed) return;

@@ -42,12 +42,26 @@ import { WRITE_BUFFER_BYTES } from './report-file.js';
  * one buffer that is used again for the next batch (the caller writes each batch before asking
  * for the next): a report of any size is written through one buffer, with no string or buffer
  * per batch left for the garbage collector. A piece that could need more than the whole buffer
- * (3 bytes per UTF-16 unit at most) is its own batch.
+ * (3 bytes per UTF-16 unit at most) is its own batch. A piece of bytes (UTF-8 text already) is
+ * copied in as it is, or is its own batch when larger than the buffer.
  */
-function* encodedBatches(pieces: Iterable<string>): Generator<Uint8Array> {
+function* encodedBatches(pieces: Iterable<string | Uint8Array>): Generator<Uint8Array> {
   const buffer = Buffer.allocUnsafe(WRITE_BUFFER_BYTES);
   let used = 0;
   for (const piece of pieces) {
+    if (typeof piece !== 'string') {
+      if (piece.length > buffer.length - used) {
+        if (used > 0) yield buffer.subarray(0, used);
+        used = 0;
+        if (piece.length > buffer.length) {
+          yield piece;
+          continue;
+        }
+      }
+      buffer.set(piece, used);
+      used += piece.length;
+      continue;
+    }
     const most = piece.length * 3;
     if (most > buffer.length - used) {
       if (used > 0) yield buffer.subarray(0, used);
@@ -113,7 +127,7 @@ function codeOf(error: unknown): string | undefined {
  */
 export function writeFileSafely(
   file: string,
-  data: string | Uint8Array | Iterable<string>,
+  data: string | Uint8Array | Iterable<string | Uint8Array>,
   place: WritePlace,
   hooks: WriteHooks = {},
 ): string {

@@ -10,9 +10,14 @@ import { neutraliseJson } from './runner-commands.js';
  * native `JSON.stringify`, its size bounded by the run's chart data), to write one after another:
  * joined, they are {@link formatJson}'s text. A run of any number of models is written without
  * ever being one string. Each piece is neutralised ({@link neutraliseJson});
- * a piece never splits a JSON string, so no `##[` can span two pieces.
+ * a piece never splits a JSON string, so no `##[` can span two pieces. The pieces of a model's text
+ * rendered earlier ({@link JsonReportOptions.modelText}: neutralised when rendered) pass as they
+ * are, strings or bytes.
  */
-export function* jsonReport(result: Result, options: JsonReportOptions = {}): Generator<string> {
+export function* jsonReport<P extends string | Uint8Array = string>(
+  result: Result,
+  options: JsonReportOptions<P> = {},
+): Generator<string | P> {
   const modelText = options.modelText;
   const models = new Set(result.models);
   // True while the pieces come from text rendered earlier, neutralised already.
@@ -20,7 +25,7 @@ export function* jsonReport(result: Result, options: JsonReportOptions = {}): Ge
   const substitute =
     modelText === undefined
       ? undefined
-      : (value: unknown): Iterable<string> | undefined => {
+      : (value: unknown): Iterable<P> | undefined => {
           // Only the models of the Result are looked up (by identity); everything else is walked.
           if (value === null || typeof value !== 'object' || !models.has(value as ModelResult)) return undefined;
           const text = modelText(value as ModelResult);
@@ -31,20 +36,24 @@ export function* jsonReport(result: Result, options: JsonReportOptions = {}): Ge
             written = false;
           })();
         };
-  for (const piece of jsonPieces(result, { depth: MODEL_DEPTH, substitute })) yield written ? piece : neutraliseJson(piece);
+  // Pieces of text written earlier pass as they are; the walk's own pieces are strings.
+  for (const piece of jsonPieces<P>(result, { depth: MODEL_DEPTH, substitute })) yield written ? piece : neutraliseJson(piece as string);
   yield '\n';
 }
 
 /** Depth the report's pieces are walked to: the Result, `models`, then each model whole (half the time of walking into each model). */
 const MODEL_DEPTH = 2;
 
-/** Options of {@link jsonReport}. */
-export interface JsonReportOptions {
+/**
+ * Options of {@link jsonReport}. `P`: the type of the pieces of text rendered earlier, strings or
+ * their UTF-8 bytes (which then pass into the report's pieces as they are).
+ */
+export interface JsonReportOptions<P extends string | Uint8Array = string> {
   /**
    * A model's text rendered earlier ({@link jsonModelReport} of the full model, while the Result
    * keeps a smaller copy), or undefined to format the model as it is in the Result. Default none.
    */
-  modelText?: (model: ModelResult) => Iterable<string> | undefined;
+  modelText?: (model: ModelResult) => Iterable<P> | undefined;
 }
 
 /**

@@ -104,6 +104,30 @@ describe('writeFileSafely writes', () => {
     expect(temps(c.ws)).toEqual([]);
   });
 
+  it('pieces of bytes among strings as they are: a buffer reused for the next piece, a character split across pieces, a piece larger than the buffer', () => {
+    const file = path.join(c.ws, 'bytes.txt');
+    const text = `{"name": "m€😀"}${'z'.repeat(50)}`;
+    const bytes = Buffer.from(text, 'utf8');
+    const big = Buffer.from('€'.repeat(400_000), 'utf8');
+    // The source fills one buffer again for each piece, as the model spool does.
+    const shared = Buffer.alloc(bytes.length);
+    function* pieces(): Generator<string | Uint8Array> {
+      yield 'head ';
+      for (const [from, to] of [
+        [0, 11],
+        [11, 13],
+        [13, bytes.length],
+      ]) {
+        shared.fill(0);
+        bytes.copy(shared, 0, from, to);
+        yield shared.subarray(0, to - from);
+      }
+      yield big;
+      yield ' tail';
+    }
+    writeFileSafely(file, pieces(), inside);
+    expect(readFileSync(file, 'utf8')).toBe(`head ${text}${'€'.repeat(400_000)} tail`);
+  });
   it('a path named outside every boundary as named (the CLI user named it), through links too', () => {
     symlinkSync(c.outside, path.join(top, `out-link-${n}`));
     const written = writeFileSafely(path.join(top, `out-link-${n}`, 'r.txt'), 'x', inside);
