@@ -161,8 +161,9 @@ function toPlain(node: FastNode): unknown {
   for (let i = 0; i < node.keys.length; i++) {
     const key = node.keys[i];
     const value = toPlain(node.values[i]);
-    // As the library does: an own property even where the prototype has the name (`__proto__`).
-    if (key in out) Object.defineProperty(out, key, { value, writable: true, enumerable: true, configurable: true });
+    // As the library does: an own property even for `__proto__` (other names a plain object
+    // inherits are data properties, which an assignment shadows the same way).
+    if (key === '__proto__') Object.defineProperty(out, key, { value, writable: true, enumerable: true, configurable: true });
     else out[key] = value;
   }
   return out;
@@ -450,6 +451,8 @@ function plainOk(source: string, inFlow: boolean): boolean {
   return true;
 }
 
+/** First characters a null, boolean or number of the core schema can start with. */
+const FIRST = /^[0-9+\-.~nNtTfF]/;
 const NULL = /^(?:~|[Nn]ull|NULL)?$/;
 const BOOL = /^(?:[Tt]rue|TRUE|[Ff]alse|FALSE)$/;
 const INT_OCT = /^0o[0-7]+$/;
@@ -464,6 +467,8 @@ const FLOAT = /^[-+]?(?:\.[0-9]+|[0-9]+\.[0-9]*)$/;
  * `yaml` library's core schema (node_modules/yaml/dist/schema/core), tried in the library's order.
  */
 export function resolvePlain(source: string): unknown {
+  // Every test below needs one of these first characters (or empty text): others are text at once.
+  if (source.length > 0 && !FIRST.test(source)) return source;
   if (NULL.test(source)) return null;
   if (BOOL.test(source)) return source[0] === 't' || source[0] === 'T';
   if (INT_OCT.test(source)) return parseInt(source.substring(2), 8);
