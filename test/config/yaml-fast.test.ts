@@ -359,7 +359,8 @@ describe('parseFastYaml: the same document as the library, or declined', () => {
         expect('doc' in lib ? 'parsed' : `library error ${String((lib as { error: unknown }).error)}`).toBe('parsed');
         if ('doc' in lib) expectSame(fast, lib.doc);
       }),
-      { numRuns: Number(process.env.H1_RUNS ?? 1500), seed: Number(process.env.H1_SEED ?? 20261204) },
+      // A fixed seed keeps the suite repeatable; YAML_FAST_RUNS and YAML_FAST_SEED explore further by hand.
+      { numRuns: Number(process.env.YAML_FAST_RUNS ?? 1500), seed: Number(process.env.YAML_FAST_SEED ?? 20261204) },
     );
     // The generator is meant to hit the subset often; a fast path that declined everything would pass vacuously.
     expect(accepted / runs).toBeGreaterThan(0.2);
