@@ -6,6 +6,7 @@
  */
 
 import { isAlias, isMap, isPair, isScalar, isSeq, LineCounter } from 'yaml';
+import { parseFastYaml } from './yaml-fast.js';
 import { parseYamlDocument } from './yaml-parse.js';
 import type { Document, Node as YamlNode, YAMLMap, YAMLSeq } from 'yaml';
 import { InputError, clip } from '../core/errors.js';
@@ -98,6 +99,24 @@ export async function readYamlFile(repo: RepoReader, path: string): Promise<Yaml
  *   expansions than {@link YAML_GUARDS}.maxAliasCount), `file-too-large`
  */
 export function parseYaml(text: string, file: string): YamlDocument {
+  checkSize(Buffer.byteLength(text, 'utf8'), file);
+  // The common shape of descriptors and settings files is read without the library when the text
+  // is inside the fast path's strict subset (same value, same positions: see yaml-fast.ts);
+  // anything else, and every error, goes to the library.
+  const fast = parseFastYaml(text.charCodeAt(0) === 0xfeff ? text.slice(1) : text);
+  if (fast !== null) return fast;
+  return parseYamlWithLibrary(text, file);
+}
+
+/**
+ * Parses YAML text with the `yaml` library only (no fast path), with every guard of
+ * {@link parseYaml}; the authority the fast path is tested against.
+ *
+ * @param text the YAML text
+ * @param file repository-relative path, for messages
+ * @throws InputError as {@link parseYaml}
+ */
+export function parseYamlWithLibrary(text: string, file: string): YamlDocument {
   checkSize(Buffer.byteLength(text, 'utf8'), file);
   if (text.charCodeAt(0) === 0xfeff) text = text.slice(1);
 
