@@ -48,11 +48,44 @@ export function createFsRepository(root: string): RepoReader {
   // one run. Only paths found inside are kept; a missing path is looked up again each time.
   const knownInside = new Map<string, string>();
 
+  // Sizes of regular files already found, by real path: a run asks for a data file's kind and
+  // size several times (planned, sized, read). The size checked against the limits is the one
+  // found first; a read still goes to the file's end as it is then.
+  const fileSize = new Map<string, number>();
+
+  /**
+   * The real path of `rel` when its folder's real path is known (found inside the root before, or
+   * found now the same way) and its last name is no link: that folder's real path joined with the
+   * name, one `lstat` instead of a `realpath` of the whole path (which reads every folder on the
+   * way again). Undefined when that does not apply (a link, nothing there, a folder not found): the
+   * caller then resolves the whole path. A regular file's size is kept as {@link kindOf} keeps it.
+   */
+  const plainChild = (rel: string, base: string, depth: number): string | undefined => {
+    if (rel === '' || depth > MAX_PLAIN_DEPTH) return undefined;
+    const slash = rel.lastIndexOf('/');
+    const folderRel = slash < 0 ? '' : rel.slice(0, slash);
+    const folder = folderRel === '' ? base : (knownInside.get(folderRel) ?? plainChild(folderRel, base, depth + 1));
+    if (folder === undefined) return undefined;
+    const candidate = nodePath.join(folder, rel.slice(slash + 1));
+    let info: Stats | undefined;
+    try {
+      info = lstatSync(candidate, { throwIfNoEntry: false });
+    } catch {
+      return undefined;
+    }
+    if (info === undefined || info.isSymbolicLink()) return undefined;
+    knownInside.set(rel, candidate);
+    if (info.isFile()) fileSize.set(candidate, info.size);
+    return candidate;
+  };
+
   /** The real path of a normalised repository-relative path, or null when nothing is there. */
   const realInside = async (rel: string, where: ErrorLocation, shown: string): Promise<string | null> => {
     const known = knownInside.get(rel);
     if (known !== undefined) return known;
     const base = await rootReal();
+    const plain = plainChild(rel, base, 0);
+    if (plain !== undefined) return plain;
     const full = rel === '' ? base : nodePath.join(base, rel);
     let real: string | null = null;
     try {
@@ -81,11 +114,6 @@ export function createFsRepository(root: string): RepoReader {
     knownInside.set(rel, real);
     return real;
   };
-
-  // Sizes of regular files already found, by real path: a run asks for a data file's kind and
-  // size several times (planned, sized, read). The size checked against the limits is the one
-  // found first; a read still goes to the file's end as it is then.
-  const fileSize = new Map<string, number>();
 
   const check = async (path: string): Promise<string | null> => realInside(normaliseRepoPath(path), { file: path }, path);
 
@@ -210,6 +238,9 @@ async function stat(path: string, where: ErrorLocation): Promise<Stats> {
     throw unreadableError(error, where);
   }
 }
+
+/** Folders above a path resolved one name at a time before the whole path is resolved at once. */
+const MAX_PLAIN_DEPTH = 64;
 
 function isInside(base: string, real: string): boolean {
   const rel = nodePath.relative(base, real);

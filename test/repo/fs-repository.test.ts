@@ -60,6 +60,21 @@ describe('createFsRepository: reading', () => {
     expect(new TextDecoder().decode(await repo.read('models/inside-link.csv')), 'a link inside the root is followed').toBe('x,y\n3,4\n');
   });
 
+  it('resolves a name under a folder it found before one name at a time, and still follows or refuses the links there', async () => {
+    const repo = createFsRepository(root);
+    // `models` is now known as a plain folder; the names below it are links of every kind.
+    expect(await repo.size('models/h.csv')).toBe(8);
+    await expectInputError(() => repo.read('models/out-link.csv'), { code: 'path-outside', file: 'models/out-link.csv' });
+    await expectInputError(() => repo.read('models/out-dir/secret.csv'), { code: 'path-outside', file: 'models/out-dir/secret.csv' });
+    expect(new TextDecoder().decode(await repo.read('models/inside-link.csv'))).toBe('x,y\n3,4\n');
+    expect(await repo.isFile('models/in-dir/b.model.yml')).toBe(true);
+    expect(await repo.entryKind('models/dangling.csv')).toBe('broken-link');
+    expect(await repo.entryKind('models/h.csv/x')).toBe('missing');
+    // Asked again, the answers are the same.
+    await expectInputError(() => repo.read('models/out-link.csv'), { code: 'path-outside', file: 'models/out-link.csv' });
+    expect(await repo.isFile('models/in-dir/b.model.yml')).toBe(true);
+  });
+
   it('streams a big file in fresh pieces of the size asked for, and an empty file as nothing', async () => {
     const bytes = new Uint8Array(200_000);
     for (let i = 0; i < bytes.length; i++) bytes[i] = (i * 7919) % 251;
