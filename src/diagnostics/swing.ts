@@ -5,6 +5,7 @@
 import { createDesign, type Design } from '../design/design-matrix.js';
 import type { Term } from '../design/terms/index.js';
 import { predictRows } from '../design/blocks.js';
+import { polynomialPredictor } from '../design/polynomial-predictions.js';
 import type { Rows } from './cross-validation.js';
 import { columnMedian, selectKth } from './column-median.js';
 import { range } from '../design/stats.js';
@@ -464,7 +465,12 @@ function predictorAlong(
   // Column c is `xs` itself; only the other inputs get a column of their fixed value.
   const columnsAt = (xs: Float64Array): Float64Array[] =>
     design.inputs.map((_, k) => (k === c ? xs : new Float64Array(xs.length).fill(fixed[k])));
-  if (readByEveryTerm(design, c)) return (xs, out) => predictRows(design, { inputs: columnsAt(xs), rows: xs.length }, coefficients, out);
+  if (readByEveryTerm(design, c)) {
+    // One polynomial term: the predictions in one pass, without a design block (the same bits).
+    const polynomial = polynomialPredictor(design, coefficients);
+    if (polynomial !== null) return (xs, out) => polynomial(xs, out ?? new Float64Array(xs.length));
+    return (xs, out) => predictRows(design, { inputs: columnsAt(xs), rows: xs.length }, coefficients, out);
+  }
   // The fixed part: intercept plus every term that does not read input c, at the fixed values.
   const row = design.fill(columnsAt(Float64Array.of(fixed[c])), 0, 1);
   let base = design.intercept ? coefficients[0] : 0;
@@ -623,6 +629,97 @@ function worstExcursionIndex(pred: Float64Array, m: number, lo: number, hi: numb
     }
   }
   return index;
+}
+
+/**
+ * What {@link scanCurve} finds in one pass over a curve's predictions, by index:
+ * [worst, variation, min, imin, max, imax] (see {@link scanCurve}).
+ */
+const SCAN_WORST = 0;
+const SCAN_VARIATION = 1;
+const SCAN_MIN = 2;
+const SCAN_IMIN = 3;
+const SCAN_MAX = 4;
+const SCAN_IMAX = 5;
+
+/**
+ * One pass over pred[0..m) (m >= 1) for three figures the inside grid needs, each as its own loop
+ * gives it: into[0] the index of {@link worstExcursionIndex}, into[1] the {@link totalVariation}
+ * (the same additions in the same order), and into[2..6) the smallest and largest value with the
+ * index of the first of each, as {@link extremesOfRun} finds them from pred[0] (a NaN pred[0]
+ * stays both, at index 0).
+ */
+function scanCurve(pred: Float64Array, m: number, lo: number, hi: number, into: Float64Array): void {
+  let value = -Infinity;
+  let index = 0;
+  let farthest = -Infinity;
+  let variation = 0;
+  let previous = pred[0];
+  let min = previous;
+  let max = previous;
+  let imin = 0;
+  let imax = 0;
+  for (let i = 0; i < m; i++) {
+    const v = pred[i];
+    const above = v - hi;
+    const below = lo - v;
+    const distance = Number.isNaN(v) ? Infinity : Math.max(0, above, below);
+    if (distance > farthest) {
+      farthest = distance;
+      const e = pointExcursion(v, lo, hi);
+      if (e > value) {
+        value = e;
+        index = i;
+      }
+    }
+    if (i > 0) variation += Math.abs(v - previous);
+    previous = v;
+    if (v < min) {
+      min = v;
+      imin = i;
+    }
+    if (v > max) {
+      max = v;
+      imax = i;
+    }
+  }
+  into[SCAN_WORST] = index;
+  into[SCAN_VARIATION] = variation;
+  into[SCAN_MIN] = min;
+  into[SCAN_IMIN] = imin;
+  into[SCAN_MAX] = max;
+  into[SCAN_IMAX] = imax;
+}
+
+/**
+ * {@link mergedExtremes} of the inside predictions `a` and the margin predictions `b` from the
+ * extremes {@link scanCurve} found over `a` (`scan`) and a short scan of `b`: the first extreme of
+ * each run, then of the two the more extreme value, the earlier in the merged order on a tie.
+ * Null when the plain scan must decide (a run that is empty or starts with a NaN).
+ */
+function extremesFromScan(a: Float64Array, b: Float64Array, place: Int32Array, scan: Float64Array): [number, number] | null {
+  if (a.length === 0 || Number.isNaN(a[0])) return null;
+  if (b.length === 0) return [scan[SCAN_IMIN], scan[SCAN_IMAX]];
+  if (Number.isNaN(b[0])) return null;
+  const best = { min: b[0], max: b[0], imin: 0, imax: 0 };
+  extremesOfRun(b, 0, b.length, 0, best);
+  // The merged index of a[i]: i plus the margin points before it (place[k] - k of them are inside points).
+  const iminA = scan[SCAN_IMIN] + marginPointsBefore(place, scan[SCAN_IMIN]);
+  const imaxA = scan[SCAN_IMAX] + marginPointsBefore(place, scan[SCAN_IMAX]);
+  const minA = scan[SCAN_MIN];
+  const maxA = scan[SCAN_MAX];
+  const iminB = place[best.imin];
+  const imaxB = place[best.imax];
+  const imin = best.min < minA || (!(minA < best.min) && iminB < iminA) ? iminB : iminA;
+  const imax = best.max > maxA || (!(maxA > best.max) && imaxB < imaxA) ? imaxB : imaxA;
+  return [imin, imax];
+}
+
+/** How many points of `b` come before a[i] in the merge of {@link mergedPlaces} (place[k] - k <= i). */
+function marginPointsBefore(place: Int32Array, i: number): number {
+  let count = 0;
+  for (let k = 0; k < place.length; k++) if (place[k] - k <= i) count++;
+  return count;
 }
 
 /** One input's scan: its grid inside the training range and in the margins. */
@@ -906,12 +1003,25 @@ export function scoreSwing(plan: SwingPlan, design: Design, coefficients: ArrayL
     design.inputs.forEach((name, c) => (inputs[name] = columns[c][i]));
     return { inputs, prediction };
   };
-  /** Scores points (predicted here unless their predictions are given); returns the predictions. */
-  const score = (columns: Float64Array[], m: number, where: 'inside' | 'beyond', given?: Float64Array): Float64Array => {
+  /**
+   * Scores points (predicted here unless their predictions are given); returns the predictions.
+   * With `scan`, the worst point comes from {@link scanCurve}, which fills `scan` too.
+   */
+  const score = (
+    columns: Float64Array[],
+    m: number,
+    where: 'inside' | 'beyond',
+    given?: Float64Array,
+    scan?: Float64Array,
+  ): Float64Array => {
     const pred = given ?? predictRows(design, { inputs: columns, rows: m }, coefficients);
     if (plan.backTransform !== undefined) backTransformInPlace(pred, m, plan.backTransform);
     if (m > 0) {
-      const index = worstExcursionIndex(pred, m, ylo, yhi);
+      let index: number;
+      if (scan !== undefined) {
+        scanCurve(pred, m, ylo, yhi, scan);
+        index = scan[SCAN_WORST];
+      } else index = worstExcursionIndex(pred, m, ylo, yhi);
       const value = pointExcursion(pred[index], ylo, yhi);
       if (where === 'inside') {
         if (worstInside === null || value > inside) {
@@ -935,6 +1045,7 @@ export function scoreSwing(plan: SwingPlan, design: Design, coefficients: ArrayL
     return constants[k].subarray(0, length);
   };
   const curves: SwingCurve[] = [];
+  const scan = new Float64Array(6);
   for (const grid of plan.grids) {
     checkDeadline('swing scan');
     const c = grid.input;
@@ -942,13 +1053,14 @@ export function scoreSwing(plan: SwingPlan, design: Design, coefficients: ArrayL
     const predict = predictorAlong(design, coefficients, c, medians);
     // The inside predictions are lent (core/scratch.ts) and given back before the next input:
     // only figures and copies of them are kept.
-    const pin = score(along(grid.inside), grid.inside.length, 'inside', predict(grid.inside, borrowDoubles(grid.inside.length)));
+    // One pass over the inside predictions finds the worst point, the variation and the extremes.
+    const pin = score(along(grid.inside), grid.inside.length, 'inside', predict(grid.inside, borrowDoubles(grid.inside.length)), scan);
     const pout = score(along(grid.beyond), grid.beyond.length, 'beyond', predict(grid.beyond));
     if (insideCurves !== undefined && grid.whole === true && readByEveryTerm(design, c)) {
       insideCurves.push({
         input: c,
         points: pin.length,
-        variation: totalVariation(pin, pin.length),
+        variation: pin.length > 0 ? scan[SCAN_VARIATION] : 0,
         ...(plan.backTransform !== undefined ? { backTransform: plan.backTransform } : {}),
         ...(grid.distinct !== undefined ? { distinct: grid.distinct } : {}),
       });
@@ -960,7 +1072,7 @@ export function scoreSwing(plan: SwingPlan, design: Design, coefficients: ArrayL
     // Curve for charts: all points ascending (inside and margins merged), thinned with the
     // extremes kept; only the kept points are read out of the merged order.
     const place = mergedPlaces(grid.inside, grid.beyond);
-    const [imin, imax] = mergedExtremes(pin, pout, place);
+    const [imin, imax] = extremesFromScan(pin, pout, place, scan) ?? mergedExtremes(pin, pout, place);
     const keep = thinIndices(grid.inside.length + grid.beyond.length, maxCurvePoints, [imax, imin]);
     const others: Record<string, number> = Object.create(null);
     design.inputs.forEach((name, k) => {
