@@ -194,8 +194,11 @@ function gridFromSorted(
   const even = borrowDoubles(uniform);
   try {
     fillUniform(even, uniform, lo, hi);
-    const w = fillGaps(inside, uniform, distinct, gaps, per);
     const beyond = marginGrid(lo, hi, margin * width, marginPoints);
+    // The usual grid: the gap points merged with the uniform ones as they are made (one pass).
+    const merged = ascending(even, 0, uniform) ? mergeGapPoints(even, uniform, distinct, gaps, per, inside) : -1;
+    if (merged >= 0) return { inside: inside.subarray(0, merged), beyond: unique(beyond, beyond.length), gaps: count - 1 };
+    const w = fillGaps(inside, uniform, distinct, gaps, per);
     return { inside: uniqueOfRuns(even, inside, uniform, w), beyond: unique(beyond, beyond.length), gaps: count - 1 };
   } finally {
     returnDoubles(even);
@@ -311,6 +314,48 @@ function unique(xs: Float64Array, length: number): Float64Array {
 function fillUniform(out: Float64Array, count: number, lo: number, hi: number): void {
   const width = hi - lo;
   for (let t = 0; t < count; t++) out[t] = t === count - 1 ? hi : lo + (width * t) / Math.max(1, count - 1);
+}
+
+/**
+ * {@link uniqueOfRuns} of the ascending uniform points first[0..split) and the points
+ * {@link fillGaps} makes, written to out[0..) as the gap points are made, without writing them
+ * first: before each gap point v the uniform points u with !sortsBefore(v, u) (as
+ * {@link mergeBlocks} orders them), and every value unless it equals (`===`) the one written
+ * before it. Returns how many were written, or -1 when the gap points are not
+ * {@link increasing} (the caller then takes the general path, which overwrites `out`).
+ */
+function mergeGapPoints(
+  first: Float64Array,
+  split: number,
+  distinct: Float64Array,
+  gaps: Int32Array,
+  per: number,
+  out: Float64Array,
+): number {
+  let i = 0;
+  let w = 0;
+  let made = 0;
+  let previous = 0;
+  for (let g = 0; g < gaps.length; g++) {
+    const a = distinct[gaps[g]];
+    const b = distinct[gaps[g] + 1];
+    for (let t = 1; t <= per; t++) {
+      const v = a + ((b - a) * t) / (per + 1);
+      if (made === 0 ? Number.isNaN(v) : !(previous < v)) return -1;
+      made++;
+      previous = v;
+      while (i < split && !sortsBefore(v, first[i])) {
+        const u = first[i++];
+        if (w === 0 || u !== out[w - 1]) out[w++] = u;
+      }
+      if (w === 0 || v !== out[w - 1]) out[w++] = v;
+    }
+  }
+  while (i < split) {
+    const u = first[i++];
+    if (w === 0 || u !== out[w - 1]) out[w++] = u;
+  }
+  return w;
 }
 
 /** Writes `per` points inside each listed gap of `distinct` from out[at]; returns the next free index. */
