@@ -7,7 +7,7 @@ import type { Term } from '../design/terms/index.js';
 import { predictRows } from '../design/blocks.js';
 import { polynomialPredictor } from '../design/polynomial-predictions.js';
 import type { Rows } from './cross-validation.js';
-import { columnMedian, selectKth } from './column-median.js';
+import { columnMedian, medianOfSorted, selectKth } from './column-median.js';
 import { range } from '../design/stats.js';
 import { sortFloat64 } from './radix-sort.js';
 import { nearestPairs } from './nearest-neighbours.js';
@@ -871,7 +871,10 @@ export function planSwing(design: Design, train: Rows, options: SwingOptions = {
   // they are dropped as new arrays would be).
   const scratch = borrowDoubles(n);
   const work = borrowDoubles(n);
-  const medians = train.inputs.map((col) => columnMedian(col, n, scratch));
+  // An input whose every row is sorted below takes its median from the sorted values; the
+  // others (categories, samples, transformed scales) by selection after the loop.
+  const medians: number[] = train.inputs.map(() => Number.NaN);
+  const fromSorted: boolean[] = train.inputs.map(() => false);
   const radixScratch = new Uint32Array(work.buffer, work.byteOffset, 2 * n);
   const grids: SwingGrid[] = [];
   const lent: Float64Array[] = [];
@@ -888,7 +891,12 @@ export function planSwing(design: Design, train: Rows, options: SwingOptions = {
     // An input every term reads on one transformed scale (log x ...) is scanned on that scale.
     const onScale = inputScaleOf(design, c);
     if (onScale !== null) for (let i = 0; i < len; i++) sample[i] = onScale.forward(sample[i]);
-    const grid = gridFromSorted(sortFloat64(sample, radixScratch), len, gridOptions, work.subarray(0, len));
+    sortFloat64(sample, radixScratch);
+    if (len === n && n > 0 && onScale === null) {
+      medians[c] = medianOfSorted(train.inputs[c], n, sample, work);
+      fromSorted[c] = true;
+    }
+    const grid = gridFromSorted(sample, len, gridOptions, work.subarray(0, len));
     if (onScale !== null) {
       const onInput = grid.inside.map(onScale.inverse);
       returnDoubles(grid.inside);
@@ -906,6 +914,7 @@ export function planSwing(design: Design, train: Rows, options: SwingOptions = {
       );
     }
   }
+  for (let c = 0; c < medians.length; c++) if (!fromSorted[c]) medians[c] = columnMedian(train.inputs[c], n, scratch);
   returnDoubles(work);
   returnDoubles(scratch);
 
