@@ -93,13 +93,14 @@ export function measureSpikes(
     if (points < 2) return;
     // The swing scan sorted every row's value of this input already: its distinct values serve
     // when the data variation reads every row too (at most SPIKE_MAX_ROWS).
-    const distinct = n <= SPIKE_MAX_ROWS ? known.find((k) => k.input === c && k.distinct !== undefined)?.distinct : undefined;
+    const sorted = n <= SPIKE_MAX_ROWS ? known.find((k) => k.input === c && k.distinct !== undefined) : undefined;
     const dataVariation = targetVariation(
       train.inputs[c],
       original?.y ?? train.y,
       n,
       original ? original.weights : train.weights,
-      distinct,
+      sorted?.distinct,
+      sorted?.slots,
     );
     const r = dataVariation > 0 ? curveVariation / dataVariation : Number.NaN;
     perInput.push({ input: name, curveVariation, dataVariation, ratio: r });
@@ -129,8 +130,15 @@ function curveAlong(
 }
 
 /** Total variation of the (weighted) mean target over the input's distinct values in ascending order. */
-function targetVariation(x: Float64Array, y: Float64Array, n: number, weights?: Float64Array, distinct?: Float64Array): number {
-  const { means } = meanTargets(x, y, n, weights, distinct);
+function targetVariation(
+  x: Float64Array,
+  y: Float64Array,
+  n: number,
+  weights?: Float64Array,
+  distinct?: Float64Array,
+  slots?: Int32Array,
+): number {
+  const { means } = meanTargets(x, y, n, weights, distinct, slots);
   return meanVariation(means);
 }
 
@@ -222,7 +230,9 @@ export function spikeIntervals(
  * sorted once (a native typed-array sort), and each row finds its value's slot through equal-width
  * buckets of the range ({@link SlotBuckets}) or by binary search.
  * `distinct`, when given, must be those distinct values of every row (n <= SPIKE_MAX_ROWS), as
- * the sort and packing here make them: they are taken instead of sorting again. The working
+ * the sort and packing here make them: they are taken instead of sorting again; `slots` with
+ * them, each row's index in them (swing.ts {@link InsideCurve}): the rows are summed into their
+ * slots without looking their values up (the same additions). The working
  * arrays are lent (core/scratch.ts); each loop is a function of its own (see DEVELOPERS.md,
  * "Writing hot loops").
  */
@@ -232,6 +242,7 @@ function meanTargets(
   n: number,
   weights?: Float64Array,
   distinct?: Float64Array,
+  slots?: Int32Array,
 ): { values: number[]; means: number[] } {
   const m = Math.min(n, SPIKE_MAX_ROWS);
   const own = distinct !== undefined && m === n ? null : borrowDoubles(m);
@@ -247,8 +258,8 @@ function meanTargets(
     const totals = borrowDoubles(sorted.length);
     const buckets = borrowInts(sorted.length);
     try {
-      const found = slotBuckets(sorted, buckets);
-      sumBySlot(x, y, n, m, weights, sorted, found, sums, totals);
+      if (own === null && slots !== undefined) sumInSlots(y, n, weights, slots, sums, totals);
+      else sumBySlot(x, y, n, m, weights, sorted, slotBuckets(sorted, buckets), sums, totals);
       return meansOfSlots(sorted, sums, totals);
     } finally {
       returnInts(buckets);
@@ -358,6 +369,27 @@ function sumBySlot(
     const w = weights === undefined ? 1 : weights[r];
     sums[lo] += weights === undefined ? y[r] : w * y[r];
     totals[lo] += w;
+  }
+}
+
+/**
+ * {@link sumBySlot} of every row (m = n) when each row's slot is known: slots[r] is the slot
+ * sumBySlot finds for row r (the index of its value among the distinct values). The same
+ * additions in the same order (rows in file order).
+ */
+function sumInSlots(
+  y: Float64Array,
+  n: number,
+  weights: Float64Array | undefined,
+  slots: Int32Array,
+  sums: Float64Array,
+  totals: Float64Array,
+): void {
+  for (let r = 0; r < n; r++) {
+    const slot = slots[r];
+    const w = weights === undefined ? 1 : weights[r];
+    sums[slot] += weights === undefined ? y[r] : w * y[r];
+    totals[slot] += w;
   }
 }
 

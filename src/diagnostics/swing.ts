@@ -10,6 +10,7 @@ import type { Rows } from './cross-validation.js';
 import { columnMedian, medianOfSorted, selectKth } from './column-median.js';
 import { range } from '../design/stats.js';
 import { sortFloat64 } from './radix-sort.js';
+import { sortWithSlots } from './sorted-slots.js';
 import { nearestPairs } from './nearest-neighbours.js';
 import { checkDeadline } from '../core/deadline.js';
 import { inverseTarget, type TargetTransformKind } from '../data/target-transform.js';
@@ -785,6 +786,11 @@ export interface SwingGrid {
    * the order of the built-in sort, -0 before +0), from which the grid was built.
    */
   distinct?: Float64Array;
+  /**
+   * With `distinct`, when the sort gave them (diagnostics/sorted-slots.ts): slots[r] is the index
+   * in `distinct` of training row r's value (equal to `===`); absent otherwise.
+   */
+  slots?: Int32Array;
 }
 
 /**
@@ -886,12 +892,21 @@ export function planSwing(design: Design, train: Rows, options: SwingOptions = {
       if (discrete.length >= 2) grids.push({ input: c, inside: Float64Array.from(discrete), beyond: new Float64Array(0) });
       continue;
     }
-    const len = gridSample(train.inputs[c], n, options.maxGridRows ?? SWING_DEFAULTS.maxGridRows, scratch);
-    const sample = scratch.subarray(0, len);
+    const maxGridRows = options.maxGridRows ?? SWING_DEFAULTS.maxGridRows;
     // An input every term reads on one transformed scale (log x ...) is scanned on that scale.
     const onScale = inputScaleOf(design, c);
-    if (onScale !== null) for (let i = 0; i < len; i++) sample[i] = onScale.forward(sample[i]);
-    sortFloat64(sample, radixScratch);
+    // Every row on the input's own scale: one sort gives the sorted values and each row's slot
+    // among the distinct values (for the spike figure); else (or when that sort declines) a copy
+    // of the rows (or of a sample of them) sorted.
+    let slots: Int32Array | null = n >= 2 && n <= maxGridRows && onScale === null ? new Int32Array(n) : null;
+    let len = n;
+    if (slots === null || !sortWithSlots(train.inputs[c], n, scratch, slots)) {
+      slots = null;
+      len = gridSample(train.inputs[c], n, maxGridRows, scratch);
+      if (onScale !== null) for (let i = 0; i < len; i++) scratch[i] = onScale.forward(scratch[i]);
+      sortFloat64(scratch.subarray(0, len), radixScratch);
+    }
+    const sample = scratch.subarray(0, len);
     if (len === n && n > 0 && onScale === null) {
       medians[c] = medianOfSorted(train.inputs[c], n, sample, work);
       fromSorted[c] = true;
@@ -909,7 +924,7 @@ export function planSwing(design: Design, train: Rows, options: SwingOptions = {
       // The grid packed the distinct values to the front of the sorted sample (every row here).
       grids.push(
         whole
-          ? { input: c, inside: grid.inside, beyond, whole, distinct: sample.slice(0, grid.gaps + 1) }
+          ? { input: c, inside: grid.inside, beyond, whole, distinct: sample.slice(0, grid.gaps + 1), ...(slots !== null ? { slots } : {}) }
           : { input: c, inside: grid.inside, beyond, whole },
       );
     }
@@ -1031,6 +1046,8 @@ export interface InsideCurve {
   backTransform?: TargetTransformKind;
   /** The input's distinct training values, ascending ({@link SwingGrid.distinct}), or absent. */
   distinct?: Float64Array;
+  /** With `distinct`: each training row's slot in it ({@link SwingGrid.slots}), or absent. */
+  slots?: Int32Array;
 }
 
 /**
@@ -1117,6 +1134,7 @@ export function scoreSwing(plan: SwingPlan, design: Design, coefficients: ArrayL
         variation: pin.length > 0 ? scan[SCAN_VARIATION] : 0,
         ...(plan.backTransform !== undefined ? { backTransform: plan.backTransform } : {}),
         ...(grid.distinct !== undefined ? { distinct: grid.distinct } : {}),
+        ...(grid.distinct !== undefined && grid.slots !== undefined ? { slots: grid.slots } : {}),
       });
     }
     if (curves.length >= plan.maxCurves) {
