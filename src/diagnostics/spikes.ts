@@ -138,14 +138,25 @@ function targetVariation(
   distinct?: Float64Array,
   slots?: Int32Array,
 ): number {
-  const { means } = meanTargets(x, y, n, weights, distinct, slots);
-  return meanVariation(means);
+  return slotSums(x, y, n, weights, distinct, slots, variationOfSlots);
 }
 
-/** sum |means[j+1] - means[j]|: {@link totalVariation} of a plain array (one loop). */
-function meanVariation(means: readonly number[]): number {
+/**
+ * sum |means[j+1] - means[j]| over the means {@link meansOfSlots} gives, without making them: the
+ * same means (sums / totals of the kept slots) and the same additions in the same order (one loop).
+ */
+function variationOfSlots(sorted: Float64Array, sums: Float64Array, totals: Float64Array): number {
   let s = 0;
-  for (let j = 1; j < means.length; j++) s += Math.abs(means[j] - means[j - 1]);
+  let previous = 0;
+  let kept = 0;
+  for (let j = 0; j < sorted.length; j++) {
+    if (Number.isFinite(sorted[j]) && totals[j] > 0) {
+      const mean = sums[j] / totals[j];
+      if (kept > 0) s += Math.abs(mean - previous);
+      previous = mean;
+      kept++;
+    }
+  }
   return s;
 }
 
@@ -244,6 +255,23 @@ function meanTargets(
   distinct?: Float64Array,
   slots?: Int32Array,
 ): { values: number[]; means: number[] } {
+  return slotSums(x, y, n, weights, distinct, slots, meansOfSlots);
+}
+
+/**
+ * The work of {@link meanTargets}: each slot's sum of (weighted) targets and total weight, handed
+ * to `read` (sorted distinct values, sums, totals; lent arrays it must not keep), whose result is
+ * returned.
+ */
+function slotSums<T>(
+  x: Float64Array,
+  y: Float64Array,
+  n: number,
+  weights: Float64Array | undefined,
+  distinct: Float64Array | undefined,
+  slots: Int32Array | undefined,
+  read: (sorted: Float64Array, sums: Float64Array, totals: Float64Array) => T,
+): T {
   const m = Math.min(n, SPIKE_MAX_ROWS);
   const own = distinct !== undefined && m === n ? null : borrowDoubles(m);
   try {
@@ -260,7 +288,7 @@ function meanTargets(
     try {
       if (own === null && slots !== undefined) sumInSlots(y, n, weights, slots, sums, totals);
       else sumBySlot(x, y, n, m, weights, sorted, slotBuckets(sorted, buckets), sums, totals);
-      return meansOfSlots(sorted, sums, totals);
+      return read(sorted, sums, totals);
     } finally {
       returnInts(buckets);
       returnDoubles(totals);
