@@ -197,8 +197,12 @@ function gridFromSorted(
     fillUniform(even, uniform, lo, hi);
     const beyond = marginGrid(lo, hi, margin * width, marginPoints);
     // The usual grid: the gap points merged with the uniform ones as they are made (one pass).
-    const merged = ascending(even, 0, uniform) ? mergeGapPoints(even, uniform, distinct, gaps, per, inside) : -1;
-    if (merged >= 0) return { inside: inside.subarray(0, merged), beyond: unique(beyond, beyond.length), gaps: count - 1 };
+    const taken = new Int32Array(1);
+    const merged = ascending(even, 0, uniform) ? mergeGapPoints(even, uniform, distinct, gaps, per, inside, taken) : -1;
+    if (merged >= 0) {
+      const all = appendUniform(even, taken[0], uniform, inside, merged);
+      return { inside: inside.subarray(0, all), beyond: unique(beyond, beyond.length), gaps: count - 1 };
+    }
     const w = fillGaps(inside, uniform, distinct, gaps, per);
     return { inside: uniqueOfRuns(even, inside, uniform, w), beyond: unique(beyond, beyond.length), gaps: count - 1 };
   } finally {
@@ -323,7 +327,9 @@ function fillUniform(out: Float64Array, count: number, lo: number, hi: number): 
  * first: before each gap point v the uniform points u with !sortsBefore(v, u) (as
  * {@link mergeBlocks} orders them), and every value unless it equals (`===`) the one written
  * before it. Returns how many were written, or -1 when the gap points are not
- * {@link increasing} (the caller then takes the general path, which overwrites `out`).
+ * {@link increasing} (the caller then takes the general path, which overwrites `out`); taken[0]
+ * is how many uniform points it wrote, the rest follow with {@link appendUniform} (nothing but the
+ * return after the loop: see DEVELOPERS.md, "Writing hot loops").
  */
 function mergeGapPoints(
   first: Float64Array,
@@ -332,10 +338,12 @@ function mergeGapPoints(
   gaps: Int32Array,
   per: number,
   out: Float64Array,
+  taken: Int32Array,
 ): number {
   let i = 0;
   let w = 0;
   let made = 0;
+  taken[0] = 0;
   let previous = 0;
   for (let g = 0; g < gaps.length; g++) {
     const a = distinct[gaps[g]];
@@ -347,16 +355,23 @@ function mergeGapPoints(
       previous = v;
       while (i < split && !sortsBefore(v, first[i])) {
         const u = first[i++];
+        taken[0] = i;
         if (w === 0 || u !== out[w - 1]) out[w++] = u;
       }
       if (w === 0 || v !== out[w - 1]) out[w++] = v;
     }
   }
-  while (i < split) {
-    const u = first[i++];
-    if (w === 0 || u !== out[w - 1]) out[w++] = u;
-  }
   return w;
+}
+
+/** Writes the uniform points first[from..split) after out[0..w) as {@link mergeGapPoints} does (each unless equal to the one before); returns the count. */
+function appendUniform(first: Float64Array, from: number, split: number, out: Float64Array, w: number): number {
+  let at = w;
+  for (let i = from; i < split; i++) {
+    const u = first[i];
+    if (at === 0 || u !== out[at - 1]) out[at++] = u;
+  }
+  return at;
 }
 
 /** Writes `per` points inside each listed gap of `distinct` from out[at]; returns the next free index. */
@@ -679,7 +694,7 @@ function worstExcursionIndex(pred: Float64Array, m: number, lo: number, hi: numb
 
 /**
  * What {@link scanCurve} finds in one pass over a curve's predictions, by index:
- * [worst, variation, min, imin, max, imax] (see {@link scanCurve}).
+ * [worst, variation, min, imin, max, imax] (see {@link scanCurve}; the variation is stored by its caller).
  */
 const SCAN_WORST = 0;
 const SCAN_VARIATION = 1;
@@ -690,21 +705,24 @@ const SCAN_IMAX = 5;
 
 /**
  * One pass over pred[0..m) (m >= 1) for three figures the inside grid needs, each as its own loop
- * gives it: into[0] the index of {@link worstExcursionIndex}, into[1] the {@link totalVariation}
- * (the same additions in the same order), and into[2..6) the smallest and largest value with the
+ * gives it: into[0] the index of {@link worstExcursionIndex}, the {@link totalVariation} (the same
+ * additions in the same order; returned), and into[2..6) the smallest and largest value with the
  * index of the first of each, as {@link extremesOfRun} finds them from pred[0] (a NaN pred[0]
- * stays both, at index 0).
+ * stays both, at index 0). `into` is written where a figure changes, so that nothing but the
+ * return follows the loop (see DEVELOPERS.md, "Writing hot loops").
  */
-function scanCurve(pred: Float64Array, m: number, lo: number, hi: number, into: Float64Array): void {
+function scanCurve(pred: Float64Array, m: number, lo: number, hi: number, into: Float64Array): number {
   let value = -Infinity;
-  let index = 0;
   let farthest = -Infinity;
   let variation = 0;
   let previous = pred[0];
   let min = previous;
   let max = previous;
-  let imin = 0;
-  let imax = 0;
+  into[SCAN_WORST] = 0;
+  into[SCAN_MIN] = min;
+  into[SCAN_IMIN] = 0;
+  into[SCAN_MAX] = max;
+  into[SCAN_IMAX] = 0;
   for (let i = 0; i < m; i++) {
     const v = pred[i];
     const above = v - hi;
@@ -715,26 +733,23 @@ function scanCurve(pred: Float64Array, m: number, lo: number, hi: number, into: 
       const e = pointExcursion(v, lo, hi);
       if (e > value) {
         value = e;
-        index = i;
+        into[SCAN_WORST] = i;
       }
     }
     if (i > 0) variation += Math.abs(v - previous);
     previous = v;
     if (v < min) {
       min = v;
-      imin = i;
+      into[SCAN_MIN] = v;
+      into[SCAN_IMIN] = i;
     }
     if (v > max) {
       max = v;
-      imax = i;
+      into[SCAN_MAX] = v;
+      into[SCAN_IMAX] = i;
     }
   }
-  into[SCAN_WORST] = index;
-  into[SCAN_VARIATION] = variation;
-  into[SCAN_MIN] = min;
-  into[SCAN_IMIN] = imin;
-  into[SCAN_MAX] = max;
-  into[SCAN_IMAX] = imax;
+  return variation;
 }
 
 /**
@@ -1090,7 +1105,7 @@ export function scoreSwing(plan: SwingPlan, design: Design, coefficients: ArrayL
     if (m > 0) {
       let index: number;
       if (scan !== undefined) {
-        scanCurve(pred, m, ylo, yhi, scan);
+        scan[SCAN_VARIATION] = scanCurve(pred, m, ylo, yhi, scan);
         index = scan[SCAN_WORST];
       } else index = worstExcursionIndex(pred, m, ylo, yhi);
       const value = pointExcursion(pred[index], ylo, yhi);
