@@ -6,8 +6,11 @@
  */
 import { borrowInts, returnInts } from '../core/scratch.js';
 
-/** Largest bucket sorted by insertion; a larger one declines the column (it is not spread evenly). */
-const MAX_BUCKET = 48;
+/**
+ * Most moves of the insertion sorts, per row: more declines the column (its distinct values are
+ * not spread evenly). Repeated values cost none (equal values stay in row order).
+ */
+const MOVES_PER_ROW = 16;
 
 /**
  * Sorts column[0..n) into out[0..n) ascending in the order of the built-in typed-array sort (-0
@@ -16,8 +19,9 @@ const MAX_BUCKET = 48;
  * distinct values keeps them). A distribution sort of the row indices (Knuth, The Art of Computer
  * Programming, vol. 3, 2nd ed., sec. 5.2.5: about n/4 buckets of equal width between the
  * extremes, insertion sort in each). Returns false, with `out` and `slots` untouched, when the
- * column holds a NaN, its extremes are equal or not finite, or a bucket would hold more than 48
- * rows; the caller then sorts another way.
+ * column holds a NaN, its extremes are equal or not finite, or the insertion sorts would move
+ * values more than 16 times per row (distinct values bunched in few buckets); the caller then
+ * sorts another way.
  *
  * @param column the values (not modified; length >= n)
  * @param n rows (n >= 1)
@@ -37,10 +41,10 @@ export function sortWithSlots(column: Float64Array, n: number, out: Float64Array
   const order = borrowInts(n);
   try {
     countBuckets(column, n, lo, scale, buckets - 1, start);
-    if (!prefixSums(start, buckets)) return false;
+    prefixSums(start, buckets);
     placeRows(column, n, lo, scale, buckets - 1, start, order);
     // placeRows advanced each bucket's start to the next one's: bucket b now runs from start[b - 1].
-    sortBuckets(column, order, start, buckets);
+    if (!sortBuckets(column, order, start, buckets, MOVES_PER_ROW * n)) return false;
     writeSorted(column, order, n, out, slots);
     return true;
   } finally {
@@ -71,13 +75,9 @@ function countBuckets(column: Float64Array, n: number, lo: number, scale: number
   for (let i = 0; i < n; i++) start[Math.min(last, Math.floor((column[i] - lo) * scale)) + 1]++;
 }
 
-/** Turns the counts of {@link countBuckets} into each bucket's first position; false when a bucket holds more than {@link MAX_BUCKET}. */
-function prefixSums(start: Int32Array, buckets: number): boolean {
-  for (let b = 0; b < buckets; b++) {
-    if (start[b + 1] > MAX_BUCKET) return false;
-    start[b + 1] += start[b];
-  }
-  return true;
+/** Turns the counts of {@link countBuckets} into each bucket's first position. */
+function prefixSums(start: Int32Array, buckets: number): void {
+  for (let b = 0; b < buckets; b++) start[b + 1] += start[b];
 }
 
 /** order[...] = the rows bucket by bucket, in row order within each; start[b] ends at bucket b's end. */
@@ -85,9 +85,13 @@ function placeRows(column: Float64Array, n: number, lo: number, scale: number, l
   for (let i = 0; i < n; i++) order[start[Math.min(last, Math.floor((column[i] - lo) * scale))]++] = i;
 }
 
-/** Insertion sort of each bucket's rows by value (bucket b at order[b > 0 ? start[b - 1] : 0 .. start[b])). */
-function sortBuckets(column: Float64Array, order: Int32Array, start: Int32Array, buckets: number): void {
+/**
+ * Insertion sort of each bucket's rows by value (bucket b at order[b > 0 ? start[b - 1] : 0 ..
+ * start[b])); false, leaving `order` part sorted, as soon as more than `budget` moves were made.
+ */
+function sortBuckets(column: Float64Array, order: Int32Array, start: Int32Array, buckets: number, budget: number): boolean {
   let from = 0;
+  let left = budget;
   for (let b = 0; b < buckets; b++) {
     const end = start[b];
     for (let i = from + 1; i < end; i++) {
@@ -95,6 +99,7 @@ function sortBuckets(column: Float64Array, order: Int32Array, start: Int32Array,
       const v = column[row];
       let j = i - 1;
       while (j >= from && sortsBefore(v, column[order[j]])) {
+        if (--left < 0) return false;
         order[j + 1] = order[j];
         j--;
       }
@@ -102,6 +107,7 @@ function sortBuckets(column: Float64Array, order: Int32Array, start: Int32Array,
     }
     from = end;
   }
+  return true;
 }
 
 /** a < b in the order of the built-in sort (-0 before +0). */
