@@ -70,7 +70,7 @@ const check: Check = {
       design,
       train,
       fit,
-      sampled ? { sampled: true } : { factors: () => context.analyses.foldFactors() },
+      sampled ? { sampled: true } : { factors: () => context.analyses.foldFactors(), folds: () => context.analyses.folds() },
     );
     if (sweep === null || sweep.chosen < 0 || sweep.current < 0) {
       return { value: null, reason: 'not-applicable', message: 'the model has no complexity setting to sweep, or too few rows' };

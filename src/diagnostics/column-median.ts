@@ -27,6 +27,28 @@ export function columnMedian(values: Float64Array, n: number, scratch?: Float64A
   return median;
 }
 
+/**
+ * {@link columnMedian} of the first n values of a column, read off the same values already sorted
+ * ascending (`sorted[0..n)`, the order of the built-in typed-array sort), and remembered as
+ * columnMedian remembers it. The median's value is fixed by the sorted values, so it equals the
+ * selection's except where the selection may return either of two equal values: a middle value of
+ * 0 (-0 or +0) or a NaN anywhere (sorted last); then it selects as columnMedian does.
+ *
+ * @param values the column (length >= n)
+ * @param n rows to take (n >= 1)
+ * @param sorted values[0..n) sorted ascending (length >= n)
+ * @param scratch optional work array for the selection (length >= n)
+ */
+export function medianOfSorted(values: Float64Array, n: number, sorted: Float64Array, scratch?: Float64Array): number {
+  const upper = n >> 1;
+  const high = sorted[upper];
+  const low = n % 2 === 1 ? high : sorted[upper - 1];
+  if (n < 1 || Number.isNaN(sorted[n - 1]) || high === 0 || low === 0) return columnMedian(values, n, scratch);
+  const median = n % 2 === 1 ? high : (low + high) / 2;
+  remembered.set(values, { n, median });
+  return median;
+}
+
 /** Columns of at least this many rows try {@link bracketedMedian} first. */
 const BRACKET_MIN_ROWS = 16384;
 /** Rows in the bracketing sample. */

@@ -111,6 +111,12 @@ export interface SweepOptions {
    * Default: a ridge sweep builds them in one pass.
    */
   factors?: () => FoldFactors;
+  /**
+   * With `factors`: the folds they were built on, when the caller has them (a ridge sweep reads
+   * only their count and sizes); taken when they are the folds {@link assignFolds} gives for the
+   * rows and the model's fold settings, else assigned here. Default: assigned here.
+   */
+  folds?: () => Folds;
   /** The rows given are a sample of a streamed training file (data/row-source.ts): the detail says `subsampled: true`. Default false. */
   sampled?: boolean;
 }
@@ -282,6 +288,19 @@ function sweepCoefficients(
   return coefficients;
 }
 
+/** True when `folds` are those {@link assignFolds}(n, fit.folds, fit.foldOrder, fit.seed) gives (in-memory folds of n rows under the same settings). */
+function sameFolds(folds: Folds, n: number, fit: Pick<Descriptor['fit'], 'folds' | 'foldOrder' | 'seed'>): boolean {
+  return (
+    folds.streamed !== true &&
+    folds.foldOf.length === n &&
+    Number.isInteger(fit.folds) &&
+    fit.folds >= 1 &&
+    folds.k === Math.max(1, Math.min(fit.folds, n)) &&
+    folds.order === fit.foldOrder &&
+    folds.seed === fit.seed
+  );
+}
+
 /**
  * Sweeps the model's main complexity setting and applies {@link oneStandardErrorRule} to the
  * k-fold errors (the same folds for every setting).
@@ -323,7 +342,11 @@ export function sweepComplexity(
   const thinned = target.kind !== 'ridge' && train.rows > maxRows;
   const rows = thinned ? subsample(train, maxRows) : train;
   const subsampled = thinned || options.sampled === true;
-  const folds: Folds = assignFolds(rows.rows, descriptor.fit.folds, descriptor.fit.foldOrder, descriptor.fit.seed);
+  const given = target.kind === 'ridge' && options.factors !== undefined ? options.folds?.() : undefined;
+  const folds: Folds =
+    given !== undefined && sameFolds(given, rows.rows, descriptor.fit)
+      ? given
+      : assignFolds(rows.rows, descriptor.fit.folds, descriptor.fit.foldOrder, descriptor.fit.seed);
   if (folds.k < 2) return null;
   const ridge = descriptor.fit.ridge;
   const curve: SweepPoint[] = [];

@@ -10,7 +10,7 @@ import { forEachBlock } from '../design/blocks.js';
 import { addProducts, outOfFoldRows } from '../kernels/index.js';
 import { foldIdsOf, type Folds } from './folds.js';
 import { checkDeadline } from '../core/deadline.js';
-import { borrowDoubles, returnDoubles } from '../core/scratch.js';
+import { borrowDoubles, borrowInts, returnDoubles, returnInts } from '../core/scratch.js';
 
 /** The rows a diagnostic reads: input columns in `design.inputs` order and the target. */
 export type Rows = Pick<ModelData, 'inputs' | 'y' | 'rows'>;
@@ -59,30 +59,106 @@ export class FoldFactorBuilder {
       this.factors[first].addRows(X, y.subarray(start, start + m), m);
       return;
     }
-    // The gathered rows go to arrays lent for this block (core/scratch.ts).
+    // The gathered rows go to arrays lent for this block (core/scratch.ts): fold f's rows, in file
+    // order, as a column-major block of its own at offsets[f] rows into them. Each row is read
+    // once: runs of consecutive rows of one fold (every fold's rows for `blocks` folds) are copied
+    // column by column, scattered rows one by one.
     const sub = borrowDoubles(m * p);
     const subY = borrowDoubles(m);
+    const offsets = borrowInts(2 * k);
     try {
       const counts = this.#counts;
       counts.fill(0);
-      for (let i = 0; i < m; i++) counts[foldOf[start + i]]++;
+      const runs = countRows(foldOf, start, m, counts);
+      let at = 0;
+      for (let f = 0; f < k; f++) {
+        offsets[f] = at;
+        offsets[k + f] = 0;
+        at += counts[f];
+      }
+      if (runs * 4 <= m) copyRuns(X, y, start, m, p, foldOf, counts, offsets, k, sub, subY);
+      else scatterRows(X, y, start, m, p, foldOf, counts, offsets, k, sub, subY);
       for (let f = 0; f < k; f++) {
         const mf = counts[f];
         if (mf === 0) continue;
-        // Gather the block's rows of fold f into a column-major mf x p block.
-        let r = 0;
-        for (let i = 0; i < m; i++) {
-          if (foldOf[start + i] !== f) continue;
-          for (let j = 0; j < p; j++) sub[j * mf + r] = X[j * m + i];
-          subY[r] = y[start + i];
-          r++;
-        }
-        this.factors[f].addRows(sub, subY, mf);
+        const from = offsets[f];
+        this.factors[f].addRows(sub.subarray(from * p, (from + mf) * p), subY.subarray(from, from + mf), mf);
       }
     } finally {
+      returnInts(offsets);
       returnDoubles(subY);
       returnDoubles(sub);
     }
+  }
+}
+
+// The row loops of FoldFactorBuilder.add, one loop each (see DEVELOPERS.md, "Writing hot loops").
+
+/** counts[f] += rows of fold f among rows start .. start+m-1; returns the number of runs of consecutive rows of one fold. */
+function countRows(foldOf: Int32Array, start: number, m: number, counts: Int32Array): number {
+  let runs = 0;
+  for (let i = 0; i < m; i++) {
+    const f = foldOf[start + i];
+    counts[f]++;
+    if (i === 0 || f !== foldOf[start + i - 1]) runs++;
+  }
+  return runs;
+}
+
+/**
+ * Copies each run of consecutive rows of one fold into its fold's block (see
+ * FoldFactorBuilder.add): its column segments and targets as whole pieces. offsets[k + f] counts
+ * fold f's rows written so far.
+ */
+function copyRuns(
+  X: Float64Array,
+  y: Float64Array,
+  start: number,
+  m: number,
+  p: number,
+  foldOf: Int32Array,
+  counts: Int32Array,
+  offsets: Int32Array,
+  k: number,
+  sub: Float64Array,
+  subY: Float64Array,
+): void {
+  let i = 0;
+  while (i < m) {
+    const f = foldOf[start + i];
+    let end = i + 1;
+    while (end < m && foldOf[start + end] === f) end++;
+    const mf = counts[f];
+    const r = offsets[k + f];
+    const base = offsets[f] * p;
+    for (let j = 0; j < p; j++) sub.set(X.subarray(j * m + i, j * m + end), base + j * mf + r);
+    subY.set(y.subarray(start + i, start + end), offsets[f] + r);
+    offsets[k + f] = r + end - i;
+    i = end;
+  }
+}
+
+/** Writes each row into its fold's block (see FoldFactorBuilder.add), rows in file order. */
+function scatterRows(
+  X: Float64Array,
+  y: Float64Array,
+  start: number,
+  m: number,
+  p: number,
+  foldOf: Int32Array,
+  counts: Int32Array,
+  offsets: Int32Array,
+  k: number,
+  sub: Float64Array,
+  subY: Float64Array,
+): void {
+  for (let i = 0; i < m; i++) {
+    const f = foldOf[start + i];
+    const mf = counts[f];
+    const r = offsets[k + f]++;
+    const base = offsets[f] * p + r;
+    for (let j = 0; j < p; j++) sub[base + j * mf] = X[j * m + i];
+    subY[offsets[f] + r] = y[start + i];
   }
 }
 

@@ -93,13 +93,14 @@ export function measureSpikes(
     if (points < 2) return;
     // The swing scan sorted every row's value of this input already: its distinct values serve
     // when the data variation reads every row too (at most SPIKE_MAX_ROWS).
-    const distinct = n <= SPIKE_MAX_ROWS ? known.find((k) => k.input === c && k.distinct !== undefined)?.distinct : undefined;
+    const sorted = n <= SPIKE_MAX_ROWS ? known.find((k) => k.input === c && k.distinct !== undefined) : undefined;
     const dataVariation = targetVariation(
       train.inputs[c],
       original?.y ?? train.y,
       n,
       original ? original.weights : train.weights,
-      distinct,
+      sorted?.distinct,
+      sorted?.slots,
     );
     const r = dataVariation > 0 ? curveVariation / dataVariation : Number.NaN;
     perInput.push({ input: name, curveVariation, dataVariation, ratio: r });
@@ -129,15 +130,33 @@ function curveAlong(
 }
 
 /** Total variation of the (weighted) mean target over the input's distinct values in ascending order. */
-function targetVariation(x: Float64Array, y: Float64Array, n: number, weights?: Float64Array, distinct?: Float64Array): number {
-  const { means } = meanTargets(x, y, n, weights, distinct);
-  return meanVariation(means);
+function targetVariation(
+  x: Float64Array,
+  y: Float64Array,
+  n: number,
+  weights?: Float64Array,
+  distinct?: Float64Array,
+  slots?: Int32Array,
+): number {
+  return slotSums(x, y, n, weights, distinct, slots, variationOfSlots);
 }
 
-/** sum |means[j+1] - means[j]|: {@link totalVariation} of a plain array (one loop). */
-function meanVariation(means: readonly number[]): number {
+/**
+ * sum |means[j+1] - means[j]| over the means {@link meansOfSlots} gives, without making them: the
+ * same means (sums / totals of the kept slots) and the same additions in the same order (one loop).
+ */
+function variationOfSlots(sorted: Float64Array, sums: Float64Array, totals: Float64Array): number {
   let s = 0;
-  for (let j = 1; j < means.length; j++) s += Math.abs(means[j] - means[j - 1]);
+  let previous = 0;
+  let kept = 0;
+  for (let j = 0; j < sorted.length; j++) {
+    if (Number.isFinite(sorted[j]) && totals[j] > 0) {
+      const mean = sums[j] / totals[j];
+      if (kept > 0) s += Math.abs(mean - previous);
+      previous = mean;
+      kept++;
+    }
+  }
   return s;
 }
 
@@ -222,7 +241,9 @@ export function spikeIntervals(
  * sorted once (a native typed-array sort), and each row finds its value's slot through equal-width
  * buckets of the range ({@link SlotBuckets}) or by binary search.
  * `distinct`, when given, must be those distinct values of every row (n <= SPIKE_MAX_ROWS), as
- * the sort and packing here make them: they are taken instead of sorting again. The working
+ * the sort and packing here make them: they are taken instead of sorting again; `slots` with
+ * them, each row's index in them (swing.ts {@link InsideCurve}): the rows are summed into their
+ * slots without looking their values up (the same additions). The working
  * arrays are lent (core/scratch.ts); each loop is a function of its own (see DEVELOPERS.md,
  * "Writing hot loops").
  */
@@ -232,7 +253,25 @@ function meanTargets(
   n: number,
   weights?: Float64Array,
   distinct?: Float64Array,
+  slots?: Int32Array,
 ): { values: number[]; means: number[] } {
+  return slotSums(x, y, n, weights, distinct, slots, meansOfSlots);
+}
+
+/**
+ * The work of {@link meanTargets}: each slot's sum of (weighted) targets and total weight, handed
+ * to `read` (sorted distinct values, sums, totals; lent arrays it must not keep), whose result is
+ * returned.
+ */
+function slotSums<T>(
+  x: Float64Array,
+  y: Float64Array,
+  n: number,
+  weights: Float64Array | undefined,
+  distinct: Float64Array | undefined,
+  slots: Int32Array | undefined,
+  read: (sorted: Float64Array, sums: Float64Array, totals: Float64Array) => T,
+): T {
   const m = Math.min(n, SPIKE_MAX_ROWS);
   const own = distinct !== undefined && m === n ? null : borrowDoubles(m);
   try {
@@ -247,9 +286,9 @@ function meanTargets(
     const totals = borrowDoubles(sorted.length);
     const buckets = borrowInts(sorted.length);
     try {
-      const found = slotBuckets(sorted, buckets);
-      sumBySlot(x, y, n, m, weights, sorted, found, sums, totals);
-      return meansOfSlots(sorted, sums, totals);
+      if (own === null && slots !== undefined) sumInSlots(y, n, weights, slots, sums, totals);
+      else sumBySlot(x, y, n, m, weights, sorted, slotBuckets(sorted, buckets), sums, totals);
+      return read(sorted, sums, totals);
     } finally {
       returnInts(buckets);
       returnDoubles(totals);
@@ -358,6 +397,27 @@ function sumBySlot(
     const w = weights === undefined ? 1 : weights[r];
     sums[lo] += weights === undefined ? y[r] : w * y[r];
     totals[lo] += w;
+  }
+}
+
+/**
+ * {@link sumBySlot} of every row (m = n) when each row's slot is known: slots[r] is the slot
+ * sumBySlot finds for row r (the index of its value among the distinct values). The same
+ * additions in the same order (rows in file order).
+ */
+function sumInSlots(
+  y: Float64Array,
+  n: number,
+  weights: Float64Array | undefined,
+  slots: Int32Array,
+  sums: Float64Array,
+  totals: Float64Array,
+): void {
+  for (let r = 0; r < n; r++) {
+    const slot = slots[r];
+    const w = weights === undefined ? 1 : weights[r];
+    sums[slot] += weights === undefined ? y[r] : w * y[r];
+    totals[slot] += w;
   }
 }
 

@@ -5,10 +5,12 @@
 import { createDesign, type Design } from '../design/design-matrix.js';
 import type { Term } from '../design/terms/index.js';
 import { predictRows } from '../design/blocks.js';
+import { polynomialPredictor } from '../design/polynomial-predictions.js';
 import type { Rows } from './cross-validation.js';
-import { columnMedian, selectKth } from './column-median.js';
+import { columnMedian, medianOfSorted, selectKth } from './column-median.js';
 import { range } from '../design/stats.js';
 import { sortFloat64 } from './radix-sort.js';
+import { sortWithSlots } from './sorted-slots.js';
 import { nearestPairs } from './nearest-neighbours.js';
 import { checkDeadline } from '../core/deadline.js';
 import { inverseTarget, type TargetTransformKind } from '../data/target-transform.js';
@@ -193,8 +195,15 @@ function gridFromSorted(
   const even = borrowDoubles(uniform);
   try {
     fillUniform(even, uniform, lo, hi);
-    const w = fillGaps(inside, uniform, distinct, gaps, per);
     const beyond = marginGrid(lo, hi, margin * width, marginPoints);
+    // The usual grid: the gap points merged with the uniform ones as they are made (one pass).
+    const taken = new Int32Array(1);
+    const merged = ascending(even, 0, uniform) ? mergeGapPoints(even, uniform, distinct, gaps, per, inside, taken) : -1;
+    if (merged >= 0) {
+      const all = appendUniform(even, taken[0], uniform, inside, merged);
+      return { inside: inside.subarray(0, all), beyond: unique(beyond, beyond.length), gaps: count - 1 };
+    }
+    const w = fillGaps(inside, uniform, distinct, gaps, per);
     return { inside: uniqueOfRuns(even, inside, uniform, w), beyond: unique(beyond, beyond.length), gaps: count - 1 };
   } finally {
     returnDoubles(even);
@@ -310,6 +319,59 @@ function unique(xs: Float64Array, length: number): Float64Array {
 function fillUniform(out: Float64Array, count: number, lo: number, hi: number): void {
   const width = hi - lo;
   for (let t = 0; t < count; t++) out[t] = t === count - 1 ? hi : lo + (width * t) / Math.max(1, count - 1);
+}
+
+/**
+ * {@link uniqueOfRuns} of the ascending uniform points first[0..split) and the points
+ * {@link fillGaps} makes, written to out[0..) as the gap points are made, without writing them
+ * first: before each gap point v the uniform points u with !sortsBefore(v, u) (as
+ * {@link mergeBlocks} orders them), and every value unless it equals (`===`) the one written
+ * before it. Returns how many were written, or -1 when the gap points are not
+ * {@link increasing} (the caller then takes the general path, which overwrites `out`); taken[0]
+ * is how many uniform points it wrote, the rest follow with {@link appendUniform} (nothing but the
+ * return after the loop: see DEVELOPERS.md, "Writing hot loops").
+ */
+function mergeGapPoints(
+  first: Float64Array,
+  split: number,
+  distinct: Float64Array,
+  gaps: Int32Array,
+  per: number,
+  out: Float64Array,
+  taken: Int32Array,
+): number {
+  let i = 0;
+  let w = 0;
+  let made = 0;
+  taken[0] = 0;
+  let previous = 0;
+  for (let g = 0; g < gaps.length; g++) {
+    const a = distinct[gaps[g]];
+    const b = distinct[gaps[g] + 1];
+    for (let t = 1; t <= per; t++) {
+      const v = a + ((b - a) * t) / (per + 1);
+      if (made === 0 ? Number.isNaN(v) : !(previous < v)) return -1;
+      made++;
+      previous = v;
+      while (i < split && !sortsBefore(v, first[i])) {
+        const u = first[i++];
+        taken[0] = i;
+        if (w === 0 || u !== out[w - 1]) out[w++] = u;
+      }
+      if (w === 0 || v !== out[w - 1]) out[w++] = v;
+    }
+  }
+  return w;
+}
+
+/** Writes the uniform points first[from..split) after out[0..w) as {@link mergeGapPoints} does (each unless equal to the one before); returns the count. */
+function appendUniform(first: Float64Array, from: number, split: number, out: Float64Array, w: number): number {
+  let at = w;
+  for (let i = from; i < split; i++) {
+    const u = first[i];
+    if (at === 0 || u !== out[at - 1]) out[at++] = u;
+  }
+  return at;
 }
 
 /** Writes `per` points inside each listed gap of `distinct` from out[at]; returns the next free index. */
@@ -464,7 +526,12 @@ function predictorAlong(
   // Column c is `xs` itself; only the other inputs get a column of their fixed value.
   const columnsAt = (xs: Float64Array): Float64Array[] =>
     design.inputs.map((_, k) => (k === c ? xs : new Float64Array(xs.length).fill(fixed[k])));
-  if (readByEveryTerm(design, c)) return (xs, out) => predictRows(design, { inputs: columnsAt(xs), rows: xs.length }, coefficients, out);
+  if (readByEveryTerm(design, c)) {
+    // One polynomial term: the predictions in one pass, without a design block (the same bits).
+    const polynomial = polynomialPredictor(design, coefficients);
+    if (polynomial !== null) return (xs, out) => polynomial(xs, out ?? new Float64Array(xs.length));
+    return (xs, out) => predictRows(design, { inputs: columnsAt(xs), rows: xs.length }, coefficients, out);
+  }
   // The fixed part: intercept plus every term that does not read input c, at the fixed values.
   const row = design.fill(columnsAt(Float64Array.of(fixed[c])), 0, 1);
   let base = design.intercept ? coefficients[0] : 0;
@@ -625,6 +692,97 @@ function worstExcursionIndex(pred: Float64Array, m: number, lo: number, hi: numb
   return index;
 }
 
+/**
+ * What {@link scanCurve} finds in one pass over a curve's predictions, by index:
+ * [worst, variation, min, imin, max, imax] (see {@link scanCurve}; the variation is stored by its caller).
+ */
+const SCAN_WORST = 0;
+const SCAN_VARIATION = 1;
+const SCAN_MIN = 2;
+const SCAN_IMIN = 3;
+const SCAN_MAX = 4;
+const SCAN_IMAX = 5;
+
+/**
+ * One pass over pred[0..m) (m >= 1) for three figures the inside grid needs, each as its own loop
+ * gives it: into[0] the index of {@link worstExcursionIndex}, the {@link totalVariation} (the same
+ * additions in the same order; returned), and into[2..6) the smallest and largest value with the
+ * index of the first of each, as {@link extremesOfRun} finds them from pred[0] (a NaN pred[0]
+ * stays both, at index 0). `into` is written where a figure changes, so that nothing but the
+ * return follows the loop (see DEVELOPERS.md, "Writing hot loops").
+ */
+function scanCurve(pred: Float64Array, m: number, lo: number, hi: number, into: Float64Array): number {
+  let value = -Infinity;
+  let farthest = -Infinity;
+  let variation = 0;
+  let previous = pred[0];
+  let min = previous;
+  let max = previous;
+  into[SCAN_WORST] = 0;
+  into[SCAN_MIN] = min;
+  into[SCAN_IMIN] = 0;
+  into[SCAN_MAX] = max;
+  into[SCAN_IMAX] = 0;
+  for (let i = 0; i < m; i++) {
+    const v = pred[i];
+    const above = v - hi;
+    const below = lo - v;
+    const distance = Number.isNaN(v) ? Infinity : Math.max(0, above, below);
+    if (distance > farthest) {
+      farthest = distance;
+      const e = pointExcursion(v, lo, hi);
+      if (e > value) {
+        value = e;
+        into[SCAN_WORST] = i;
+      }
+    }
+    if (i > 0) variation += Math.abs(v - previous);
+    previous = v;
+    if (v < min) {
+      min = v;
+      into[SCAN_MIN] = v;
+      into[SCAN_IMIN] = i;
+    }
+    if (v > max) {
+      max = v;
+      into[SCAN_MAX] = v;
+      into[SCAN_IMAX] = i;
+    }
+  }
+  return variation;
+}
+
+/**
+ * {@link mergedExtremes} of the inside predictions `a` and the margin predictions `b` from the
+ * extremes {@link scanCurve} found over `a` (`scan`) and a short scan of `b`: the first extreme of
+ * each run, then of the two the more extreme value, the earlier in the merged order on a tie.
+ * Null when the plain scan must decide (a run that is empty or starts with a NaN).
+ */
+function extremesFromScan(a: Float64Array, b: Float64Array, place: Int32Array, scan: Float64Array): [number, number] | null {
+  if (a.length === 0 || Number.isNaN(a[0])) return null;
+  if (b.length === 0) return [scan[SCAN_IMIN], scan[SCAN_IMAX]];
+  if (Number.isNaN(b[0])) return null;
+  const best = { min: b[0], max: b[0], imin: 0, imax: 0 };
+  extremesOfRun(b, 0, b.length, 0, best);
+  // The merged index of a[i]: i plus the margin points before it (place[k] - k of them are inside points).
+  const iminA = scan[SCAN_IMIN] + marginPointsBefore(place, scan[SCAN_IMIN]);
+  const imaxA = scan[SCAN_IMAX] + marginPointsBefore(place, scan[SCAN_IMAX]);
+  const minA = scan[SCAN_MIN];
+  const maxA = scan[SCAN_MAX];
+  const iminB = place[best.imin];
+  const imaxB = place[best.imax];
+  const imin = best.min < minA || (!(minA < best.min) && iminB < iminA) ? iminB : iminA;
+  const imax = best.max > maxA || (!(maxA > best.max) && imaxB < imaxA) ? imaxB : imaxA;
+  return [imin, imax];
+}
+
+/** How many points of `b` come before a[i] in the merge of {@link mergedPlaces} (place[k] - k <= i). */
+function marginPointsBefore(place: Int32Array, i: number): number {
+  let count = 0;
+  for (let k = 0; k < place.length; k++) if (place[k] - k <= i) count++;
+  return count;
+}
+
 /** One input's scan: its grid inside the training range and in the margins. */
 export interface SwingGrid {
   /** Index of the input in `design.inputs`. */
@@ -643,6 +801,11 @@ export interface SwingGrid {
    * the order of the built-in sort, -0 before +0), from which the grid was built.
    */
   distinct?: Float64Array;
+  /**
+   * With `distinct`, when the sort gave them (diagnostics/sorted-slots.ts): slots[r] is the index
+   * in `distinct` of training row r's value (equal to `===`); absent otherwise.
+   */
+  slots?: Int32Array;
 }
 
 /**
@@ -729,7 +892,10 @@ export function planSwing(design: Design, train: Rows, options: SwingOptions = {
   // they are dropped as new arrays would be).
   const scratch = borrowDoubles(n);
   const work = borrowDoubles(n);
-  const medians = train.inputs.map((col) => columnMedian(col, n, scratch));
+  // An input whose every row is sorted below takes its median from the sorted values; the
+  // others (categories, samples, transformed scales) by selection after the loop.
+  const medians: number[] = train.inputs.map(() => Number.NaN);
+  const fromSorted: boolean[] = train.inputs.map(() => false);
   const radixScratch = new Uint32Array(work.buffer, work.byteOffset, 2 * n);
   const grids: SwingGrid[] = [];
   const lent: Float64Array[] = [];
@@ -741,12 +907,26 @@ export function planSwing(design: Design, train: Rows, options: SwingOptions = {
       if (discrete.length >= 2) grids.push({ input: c, inside: Float64Array.from(discrete), beyond: new Float64Array(0) });
       continue;
     }
-    const len = gridSample(train.inputs[c], n, options.maxGridRows ?? SWING_DEFAULTS.maxGridRows, scratch);
-    const sample = scratch.subarray(0, len);
+    const maxGridRows = options.maxGridRows ?? SWING_DEFAULTS.maxGridRows;
     // An input every term reads on one transformed scale (log x ...) is scanned on that scale.
     const onScale = inputScaleOf(design, c);
-    if (onScale !== null) for (let i = 0; i < len; i++) sample[i] = onScale.forward(sample[i]);
-    const grid = gridFromSorted(sortFloat64(sample, radixScratch), len, gridOptions, work.subarray(0, len));
+    // Every row on the input's own scale: one sort gives the sorted values and each row's slot
+    // among the distinct values (for the spike figure); else (or when that sort declines) a copy
+    // of the rows (or of a sample of them) sorted.
+    let slots: Int32Array | null = n >= 2 && n <= maxGridRows && onScale === null ? new Int32Array(n) : null;
+    let len = n;
+    if (slots === null || !sortWithSlots(train.inputs[c], n, scratch, slots)) {
+      slots = null;
+      len = gridSample(train.inputs[c], n, maxGridRows, scratch);
+      if (onScale !== null) for (let i = 0; i < len; i++) scratch[i] = onScale.forward(scratch[i]);
+      sortFloat64(scratch.subarray(0, len), radixScratch);
+    }
+    const sample = scratch.subarray(0, len);
+    if (len === n && n > 0 && onScale === null) {
+      medians[c] = medianOfSorted(train.inputs[c], n, sample, work);
+      fromSorted[c] = true;
+    }
+    const grid = gridFromSorted(sample, len, gridOptions, work.subarray(0, len));
     if (onScale !== null) {
       const onInput = grid.inside.map(onScale.inverse);
       returnDoubles(grid.inside);
@@ -759,11 +939,12 @@ export function planSwing(design: Design, train: Rows, options: SwingOptions = {
       // The grid packed the distinct values to the front of the sorted sample (every row here).
       grids.push(
         whole
-          ? { input: c, inside: grid.inside, beyond, whole, distinct: sample.slice(0, grid.gaps + 1) }
+          ? { input: c, inside: grid.inside, beyond, whole, distinct: sample.slice(0, grid.gaps + 1), ...(slots !== null ? { slots } : {}) }
           : { input: c, inside: grid.inside, beyond, whole },
       );
     }
   }
+  for (let c = 0; c < medians.length; c++) if (!fromSorted[c]) medians[c] = columnMedian(train.inputs[c], n, scratch);
   returnDoubles(work);
   returnDoubles(scratch);
 
@@ -880,6 +1061,8 @@ export interface InsideCurve {
   backTransform?: TargetTransformKind;
   /** The input's distinct training values, ascending ({@link SwingGrid.distinct}), or absent. */
   distinct?: Float64Array;
+  /** With `distinct`: each training row's slot in it ({@link SwingGrid.slots}), or absent. */
+  slots?: Int32Array;
 }
 
 /**
@@ -906,12 +1089,25 @@ export function scoreSwing(plan: SwingPlan, design: Design, coefficients: ArrayL
     design.inputs.forEach((name, c) => (inputs[name] = columns[c][i]));
     return { inputs, prediction };
   };
-  /** Scores points (predicted here unless their predictions are given); returns the predictions. */
-  const score = (columns: Float64Array[], m: number, where: 'inside' | 'beyond', given?: Float64Array): Float64Array => {
+  /**
+   * Scores points (predicted here unless their predictions are given); returns the predictions.
+   * With `scan`, the worst point comes from {@link scanCurve}, which fills `scan` too.
+   */
+  const score = (
+    columns: Float64Array[],
+    m: number,
+    where: 'inside' | 'beyond',
+    given?: Float64Array,
+    scan?: Float64Array,
+  ): Float64Array => {
     const pred = given ?? predictRows(design, { inputs: columns, rows: m }, coefficients);
     if (plan.backTransform !== undefined) backTransformInPlace(pred, m, plan.backTransform);
     if (m > 0) {
-      const index = worstExcursionIndex(pred, m, ylo, yhi);
+      let index: number;
+      if (scan !== undefined) {
+        scan[SCAN_VARIATION] = scanCurve(pred, m, ylo, yhi, scan);
+        index = scan[SCAN_WORST];
+      } else index = worstExcursionIndex(pred, m, ylo, yhi);
       const value = pointExcursion(pred[index], ylo, yhi);
       if (where === 'inside') {
         if (worstInside === null || value > inside) {
@@ -935,6 +1131,7 @@ export function scoreSwing(plan: SwingPlan, design: Design, coefficients: ArrayL
     return constants[k].subarray(0, length);
   };
   const curves: SwingCurve[] = [];
+  const scan = new Float64Array(6);
   for (const grid of plan.grids) {
     checkDeadline('swing scan');
     const c = grid.input;
@@ -942,15 +1139,17 @@ export function scoreSwing(plan: SwingPlan, design: Design, coefficients: ArrayL
     const predict = predictorAlong(design, coefficients, c, medians);
     // The inside predictions are lent (core/scratch.ts) and given back before the next input:
     // only figures and copies of them are kept.
-    const pin = score(along(grid.inside), grid.inside.length, 'inside', predict(grid.inside, borrowDoubles(grid.inside.length)));
+    // One pass over the inside predictions finds the worst point, the variation and the extremes.
+    const pin = score(along(grid.inside), grid.inside.length, 'inside', predict(grid.inside, borrowDoubles(grid.inside.length)), scan);
     const pout = score(along(grid.beyond), grid.beyond.length, 'beyond', predict(grid.beyond));
     if (insideCurves !== undefined && grid.whole === true && readByEveryTerm(design, c)) {
       insideCurves.push({
         input: c,
         points: pin.length,
-        variation: totalVariation(pin, pin.length),
+        variation: pin.length > 0 ? scan[SCAN_VARIATION] : 0,
         ...(plan.backTransform !== undefined ? { backTransform: plan.backTransform } : {}),
         ...(grid.distinct !== undefined ? { distinct: grid.distinct } : {}),
+        ...(grid.distinct !== undefined && grid.slots !== undefined ? { slots: grid.slots } : {}),
       });
     }
     if (curves.length >= plan.maxCurves) {
@@ -960,7 +1159,7 @@ export function scoreSwing(plan: SwingPlan, design: Design, coefficients: ArrayL
     // Curve for charts: all points ascending (inside and margins merged), thinned with the
     // extremes kept; only the kept points are read out of the merged order.
     const place = mergedPlaces(grid.inside, grid.beyond);
-    const [imin, imax] = mergedExtremes(pin, pout, place);
+    const [imin, imax] = extremesFromScan(pin, pout, place, scan) ?? mergedExtremes(pin, pout, place);
     const keep = thinIndices(grid.inside.length + grid.beyond.length, maxCurvePoints, [imax, imin]);
     const others: Record<string, number> = Object.create(null);
     design.inputs.forEach((name, k) => {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { columnMedian } from '../../src/diagnostics/column-median.js';
+import { columnMedian, medianOfSorted } from '../../src/diagnostics/column-median.js';
 import { seededRandom } from '../../src/diagnostics/random.js';
 
 /** The median by a full sort (the definition: middle value, or the mean of the two middle values). */
@@ -39,4 +39,27 @@ describe('column median (exact; bracketed by a sample on big columns)', () => {
     expect(columnMedian(values, 30_000)).toBe(sortedMedian(values.subarray(0, 30_000)));
     expect(columnMedian(values, 40_000)).toBe(sortedMedian(values));
   });
+});
+
+describe('median read off sorted values (medianOfSorted)', () => {
+  const u = seededRandom(99);
+  const cases: [string, Float64Array][] = [
+    ['odd', Float64Array.from({ length: 1001 }, () => u() * 10 - 5)],
+    ['even', Float64Array.from({ length: 1000 }, () => u() * 10 - 5)],
+    ['repeats', Float64Array.from({ length: 600 }, () => Math.round(u() * 6))],
+    ['zeros of both signs in the middle', Float64Array.from({ length: 8 }, (_, i) => [-0, 0, -1, 2, 0, -0, 3, -4][i])],
+    ['a NaN', Float64Array.from([3, Number.NaN, 1, 2, 5])],
+    ['infinities', Float64Array.from([Infinity, -Infinity, 1, 2])],
+    ['one value', Float64Array.of(7)],
+  ];
+  for (const [name, values] of cases) {
+    it(`gives the bits of the selection: ${name}`, () => {
+      const expected = columnMedian(Float64Array.from(values), values.length);
+      const sorted = Float64Array.from(values).sort();
+      const got = medianOfSorted(values, values.length, sorted);
+      expect(Object.is(got, expected)).toBe(true);
+      // Remembered: a later reader gets the same value.
+      expect(Object.is(columnMedian(values, values.length), expected)).toBe(true);
+    });
+  }
 });

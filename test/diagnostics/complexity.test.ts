@@ -5,7 +5,7 @@ import { createDesign } from '../../src/design/design-matrix.js';
 import { descriptor } from '../checks/context.js';
 import { fitRows, predictRow, relDiff, selectRows } from './helpers.js';
 import { assignFolds } from '../../src/diagnostics/folds.js';
-import { summariseFolds } from '../../src/diagnostics/cross-validation.js';
+import { complementFactors, foldFactors, summariseFolds } from '../../src/diagnostics/cross-validation.js';
 import { seededRandom } from '../../src/diagnostics/random.js';
 
 describe('one-standard-error rule (Hastie, Tibshirani & Friedman, ESL 2nd ed. section 7.10)', () => {
@@ -82,6 +82,36 @@ describe('sweep of the ridge penalty', () => {
     for (let i = 1; i < settings.length; i++) expect(settings[i]).toBeLessThan(settings[i - 1]);
     expect(sweep?.curve[sweep.current].setting).toBe(0.5);
     expect(sweep?.curve.length).toBe(20);
+  });
+
+  it("takes the caller's folds with its fold factors only when they are the model's own folds", () => {
+    const u = seededRandom(9);
+    const n = 61;
+    const x = Float64Array.from({ length: n }, () => u());
+    const y = Float64Array.from({ length: n }, (_, i) => x[i] + 0.3 * (u() - 0.5));
+    const d = descriptor({ terms: [{ kind: 'linear', columns: ['x'] }], target: 'y', ridge: 0.2 });
+    const design = createDesign([createTerm(d.terms[0], new Map([['x', x]]), d.file)], true);
+    const rows = { inputs: [x], y, rows: n };
+    const fit = fitRows(design, rows, 0.2);
+    const own = assignFolds(n, d.fit.folds, d.fit.foldOrder, d.fit.seed);
+    const factors = () => {
+      const perFold = foldFactors(design, rows, own);
+      return { perFold, complements: complementFactors(perFold) };
+    };
+    const plain = sweepComplexity(d, design, rows, fit, { factors });
+    let asked = 0;
+    const given = sweepComplexity(d, design, rows, fit, {
+      factors,
+      folds: () => {
+        asked++;
+        return own;
+      },
+    });
+    expect(asked).toBe(1);
+    expect(given).toEqual(plain);
+    // Folds of other settings (here of fewer rows) are not taken: the sweep assigns its own.
+    const other = assignFolds(n - 1, d.fit.folds, d.fit.foldOrder, d.fit.seed);
+    expect(sweepComplexity(d, design, rows, fit, { factors, folds: () => other })).toEqual(plain);
   });
 
   it('scores every lambda like brute-force refits on each fold complement, on every row (no subsample)', () => {

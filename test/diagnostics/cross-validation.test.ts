@@ -4,13 +4,14 @@ import {
   complementCoefficients,
   complementFactors,
   crossValidate,
+  FoldFactorBuilder,
   foldFactors,
   outOfFoldErrors,
   outOfFoldErrorsFromFactors,
   summariseFolds,
 } from '../../src/diagnostics/cross-validation.js';
 import { assignFolds } from '../../src/diagnostics/folds.js';
-import { fitDesign } from '../../src/fit/index.js';
+import { fitDesign, QrAccumulator } from '../../src/fit/index.js';
 import { fitRows, linearDesign, predictRow, randomRows, relDiff, selectRows } from './helpers.js';
 
 /** Explicit design matrix (row-major number[][]) of rows. */
@@ -162,5 +163,37 @@ describe('k-fold cross-validation from merged fold factors', () => {
         ),
       );
     });
+  }
+});
+
+describe('FoldFactorBuilder', () => {
+  // Each block's rows of fold f must reach fold f's factor as one piece, in file order (the factor
+  // depends on how rows are split into pieces): the same bits as gathering them fold by fold,
+  // whether runs are copied whole (blocks folds) or rows scattered one by one (shuffled).
+  for (const order of ['blocks', 'shuffled'] as const) {
+    for (const blockSize of [7, 40, 1000]) {
+      it(`gives each fold the factor of its rows of each block, bit for bit (${order}, blocks of ${blockSize} rows)`, () => {
+        const design = linearDesign(3);
+        const rows = randomRows(203, 3, 11);
+        const folds = assignFolds(rows.rows, 5, order, 3);
+        const builder = new FoldFactorBuilder(design.p, folds);
+        const reference = Array.from({ length: folds.k }, () => new QrAccumulator(design.p));
+        for (let start = 0; start < rows.rows; start += blockSize) {
+          const m = Math.min(blockSize, rows.rows - start);
+          builder.add(design.fill(rows.inputs, start, m), rows.y, start, m);
+          for (let f = 0; f < folds.k; f++) {
+            const own = selectRows(rows, (r) => r >= start && r < start + m && folds.foldOf[r] === f);
+            if (own.rows > 0) reference[f].addRows(design.fill(own.inputs, 0, own.rows), own.y, own.rows);
+          }
+        }
+        for (let f = 0; f < folds.k; f++) {
+          const got = builder.factors[f];
+          expect(got.rows).toBe(reference[f].rows);
+          expect(Array.from(got.R)).toEqual(Array.from(reference[f].R));
+          expect(Array.from(got.qty)).toEqual(Array.from(reference[f].qty));
+          expect(got.rss).toBe(reference[f].rss);
+        }
+      });
+    }
   }
 });

@@ -90,6 +90,8 @@ describe('spike data variation', () => {
       const { want, shared, spikes, known } = figures(2000, 13, { weights, levels: 60 });
       expect(known.length).toBe(1);
       expect(known[0].distinct?.length).toBeGreaterThan(50);
+      // The swing sort's slot of each row: the rows are summed without looking their values up.
+      expect(known[0].slots?.length).toBe(2000);
       expect(shared.perInput[0]?.dataVariation).toBe(want);
       expect(shared).toEqual(spikes);
     }

@@ -205,6 +205,8 @@ describe('swing curve: inside and margin points merged, thinned with the extreme
       count: 50,
     },
     { name: 'no predictions (NaN)', inside: even(0, 1, 300), beyond: [-0.1, 1.1], coefficients: [Number.NaN, 1], count: 40 },
+    // 0 x Infinity: one NaN amid the inside points, infinite extremes equal across the two runs.
+    { name: 'a NaN amid infinities', inside: even(-1, 1, 501), beyond: [-1.2, 1.2], coefficients: [0, Infinity], count: 60 },
     {
       name: 'wide margins, extremes in them',
       inside: even(-1, 1, 700),
