@@ -16,7 +16,7 @@ export const modules = {
 /* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1___default = /*#__PURE__*/__webpack_require__.n(node_path__WEBPACK_IMPORTED_MODULE_1__);
 /* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(4296);
 /* harmony import */ var _run_base_comparison_js__WEBPACK_IMPORTED_MODULE_3__ = __webpack_require__(5148);
-/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_4__ = __webpack_require__(5834);
+/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_4__ = __webpack_require__(5141);
 /* harmony import */ var _repo_git_repository_js__WEBPACK_IMPORTED_MODULE_5__ = __webpack_require__(4029);
 /**
  * Evaluates every model as it was on a base commit, read with git from that commit (settings

@@ -1621,7 +1621,7 @@ function buildClassifierChartData(model, maxPoints = chart_types/* MAX_CHART_POI
     const { design, fit, descriptor } = model.context;
     const { train, holdout, trainEta, holdoutEta } = model;
     const inputs = [...design.inputs];
-    const medians = train.inputs.map((col) => (0,column_median/* columnMedian */.z)(col, train.rows));
+    const medians = train.inputs.map((col) => (0,column_median/* columnMedian */.zP)(col, train.rows));
     const spread = [];
     for (let c = 0; c < inputs.length; c++) {
         const [lo, hi] = (0,stats/* range */.y1)(train.inputs[c], train.rows);

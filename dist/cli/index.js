@@ -787,7 +787,7 @@ const complexity_check = {
         // A streamed model's rows at hand are its sample (data/row-source.ts): the sweep runs on the
         // sample with folds of its own, not on the fold factors of every row.
         const sampled = train.sampleOf !== undefined && train.sampleOf > train.rows;
-        const sweep = (0,complexity/* sweepComplexity */.j6)(descriptor, design, train, fit, sampled ? { sampled: true } : { factors: () => context.analyses.foldFactors() });
+        const sweep = (0,complexity/* sweepComplexity */.j6)(descriptor, design, train, fit, sampled ? { sampled: true } : { factors: () => context.analyses.foldFactors(), folds: () => context.analyses.folds() });
         if (sweep === null || sweep.chosen < 0 || sweep.current < 0) {
             return { value: null, reason: 'not-applicable', message: 'the model has no complexity setting to sweep, or too few rows' };
         }
@@ -1724,7 +1724,7 @@ __nccwpck_require__.a(module, async (__webpack_handle_async_dependencies__, __we
 /* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(4296);
 /* harmony import */ var _run_worker_role_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(5280);
 /* harmony import */ var _entries_check_run_js__WEBPACK_IMPORTED_MODULE_5__ = __nccwpck_require__(9752);
-/* harmony import */ var _entries_model_spool_js__WEBPACK_IMPORTED_MODULE_6__ = __nccwpck_require__(9656);
+/* harmony import */ var _entries_model_spool_js__WEBPACK_IMPORTED_MODULE_6__ = __nccwpck_require__(3783);
 /* harmony import */ var _entries_report_file_js__WEBPACK_IMPORTED_MODULE_14__ = __nccwpck_require__(7435);
 /* harmony import */ var _report_json_js__WEBPACK_IMPORTED_MODULE_7__ = __nccwpck_require__(2794);
 /* harmony import */ var _report_escape_js__WEBPACK_IMPORTED_MODULE_12__ = __nccwpck_require__(4031);
@@ -7441,7 +7441,7 @@ function run(validate, value) {
 /* harmony import */ var _limits_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(9304);
 /* harmony import */ var _schema_errors_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(3119);
 /* harmony import */ var _schemas_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(9602);
-/* harmony import */ var _yaml_source_js__WEBPACK_IMPORTED_MODULE_5__ = __nccwpck_require__(2865);
+/* harmony import */ var _yaml_source_js__WEBPACK_IMPORTED_MODULE_5__ = __nccwpck_require__(3700);
 /**
  * The repository settings file (`fitgate.yml` by default): where the descriptors are, the
  * limits every model gets, defaults for `fit`, and resource caps.
@@ -7639,22 +7639,554 @@ function parseYamlDocument(text, options) {
 
 /***/ }),
 
-/***/ 2865:
+/***/ 3700:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
-/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   kv: () => (/* binding */ readYamlFile)
-/* harmony export */ });
-/* unused harmony exports YAML_GUARDS, YAML_ERROR, decodeYamlBytes, parseYaml */
-/* harmony import */ var yaml__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(8815);
-/* harmony import */ var _yaml_parse_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(3317);
-/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(4296);
+
+// EXPORTS
+__nccwpck_require__.d(__webpack_exports__, {
+  kv: () => (/* binding */ readYamlFile)
+});
+
+// UNUSED EXPORTS: YAML_ERROR, YAML_GUARDS, decodeYamlBytes, parseYaml, parseYamlWithLibrary
+
+// EXTERNAL MODULE: ./node_modules/yaml/dist/index.js
+var dist = __nccwpck_require__(8815);
+;// CONCATENATED MODULE: ./src/config/yaml-fast.ts
+/**
+ * A fast path for the common shape of fitgate's YAML files, beside the `yaml` library (which stays
+ * the authority). Parsing a descriptor of some fifteen lines through the library costs a few hundred
+ * microseconds; on a repository of a thousand models that was about a tenth of a whole run
+ * (measured by CPU profile, see docs/security.md). This module reads a strict subset of YAML 1.2 in
+ * one linear pass and gives the same {@link FastYamlResult} the library-based path would give (the
+ * same plain value, the same key and value positions); for anything outside the subset it answers
+ * `null` ("declined") and the caller parses the text with the library exactly as before.
+ *
+ * The subset (everything else is declined):
+ * - lines end in `\n` only; no tab, carriage return or other control character anywhere; no line
+ *   longer than {@link FAST_YAML_LIMITS}.maxLineLength; at most {@link FAST_YAML_LIMITS}.maxDepth
+ *   nested collections;
+ * - optionally one leading `---` line (comments may stand before it); no other document marker,
+ *   no directive; the document is one block mapping or block list starting in column 1;
+ * - block mappings (`key: value`, `key:` followed by a more indented block, a block list at the
+ *   same indentation or nothing) and block lists (`- item`, `- key: value` starting a mapping,
+ *   `-` followed by a more indented block or nothing), nested by spaces;
+ * - keys: plain words of letters, digits and `_ . - + / : $ ( ) ^ ~` (not ending in `:`), unique
+ *   in their mapping, not resolving to null;
+ * - values on one line: plain scalars (no `: `, no brackets, not starting with an indicator),
+ *   single-quoted strings (`''` for a quote), double-quoted strings without backslashes, and flow
+ *   mappings `{ k: v, ... }` and flow lists `[a, b]` of such scalars and of flow collections (no
+ *   empty entry, no trailing comma, no `:` or `#` in their plain scalars);
+ * - full-line comments anywhere and trailing comments after a space.
+ *
+ * Plain scalars resolve as the library's YAML 1.2 core schema resolves them (same tests in the same
+ * order: null, bool, 0o octal, decimal int, 0x hex, .inf/.nan, exponent float, float), so `yes`,
+ * `off` and `017`-like text resolve the same way on both paths.
+ */
+/** Limits of the fast path; text beyond them is declined (not refused: the library then decides). */
+const FAST_YAML_LIMITS = Object.freeze({
+    /** Longest line read, in UTF-16 code units. */
+    maxLineLength: 500,
+    /** Deepest nesting of mappings and lists (the library path allows 64). */
+    maxDepth: 32,
+    /** Largest text in UTF-16 code units. */
+    maxLength: 256 * 1024,
+});
+/** Thrown inside the parser to decline; caught in {@link parseFastYaml}. */
+class Declined {
+}
+const DECLINED = new Declined();
+/**
+ * Parses text in the fast-path subset (see the module comment).
+ *
+ * @param text YAML text without a byte-order mark
+ * @returns the value and position lookups, or null when the text is outside the subset (declined)
+ */
+function parseFastYaml(text) {
+    if (text.length > FAST_YAML_LIMITS.maxLength)
+        return null;
+    const lineStarts = [0];
+    const content = [];
+    let sawMarker = false;
+    let lineStart = 0;
+    for (let i = 0; i <= text.length; i++) {
+        const c = i < text.length ? text.charCodeAt(i) : 0x0a;
+        if (c !== 0x0a) {
+            if (c < 0x20 || (c >= 0x7f && c <= 0xa0) || c === 0x2028 || c === 0x2029 || c === 0xfeff)
+                return null;
+            continue;
+        }
+        const end = i;
+        if (end - lineStart > FAST_YAML_LIMITS.maxLineLength)
+            return null;
+        let indent = 0;
+        while (lineStart + indent < end && text.charCodeAt(lineStart + indent) === 0x20)
+            indent++;
+        const first = lineStart + indent < end ? text.charCodeAt(lineStart + indent) : -1;
+        if (first !== -1 && first !== 0x23) {
+            if (indent === 0 && (text.startsWith('---', lineStart) || text.startsWith('...', lineStart))) {
+                if (content.length > 0 || sawMarker || end - lineStart !== 3 || text.charCodeAt(lineStart) !== 0x2d)
+                    return null;
+                sawMarker = true;
+            }
+            else {
+                content.push({ start: lineStart, end, indent });
+            }
+        }
+        if (i < text.length)
+            lineStarts.push(i + 1);
+        lineStart = i + 1;
+    }
+    if (content.length === 0 || content[0].indent !== 0)
+        return null;
+    let root;
+    try {
+        const parser = new Parser(text, content);
+        root = parser.document();
+    }
+    catch (error) {
+        if (error === DECLINED)
+            return null;
+        throw error;
+    }
+    const at = (offset) => {
+        let low = 0;
+        let high = lineStarts.length;
+        while (low < high) {
+            const mid = (low + high) >> 1;
+            if (lineStarts[mid] <= offset)
+                low = mid + 1;
+            else
+                high = mid;
+        }
+        return { line: low, column: offset - lineStarts[low - 1] + 1 };
+    };
+    // The same walk as the library path's `locate` (yaml-source.ts), on this module's nodes.
+    const locate = (path, wantValue) => {
+        let node = root;
+        let keyOffset = root.start;
+        for (const segment of path) {
+            if (typeof segment === 'number' && node.kind === 'seq') {
+                const item = node.items[segment];
+                if (item === undefined)
+                    return null;
+                node = item;
+                keyOffset = item.start;
+            }
+            else if (node.kind === 'map') {
+                const index = node.keys.indexOf(String(segment));
+                if (index < 0)
+                    return null;
+                keyOffset = node.keyStarts[index];
+                node = node.values[index];
+            }
+            else {
+                return null;
+            }
+        }
+        return at(wantValue ? node.start : keyOffset);
+    };
+    return {
+        value: toPlain(root),
+        positionOf: (path) => locate(path, false),
+        valuePositionOf: (path) => locate(path, true),
+    };
+}
+function toPlain(node) {
+    if (node.kind === 'scalar')
+        return node.value;
+    if (node.kind === 'seq')
+        return node.items.map(toPlain);
+    const out = {};
+    for (let i = 0; i < node.keys.length; i++) {
+        const key = node.keys[i];
+        const value = toPlain(node.values[i]);
+        // As the library does: an own property even for `__proto__` (other names a plain object
+        // inherits are data properties, which an assignment shadows the same way).
+        if (key === '__proto__')
+            Object.defineProperty(out, key, { value, writable: true, enumerable: true, configurable: true });
+        else
+            out[key] = value;
+    }
+    return out;
+}
+const KEY = /^(?:[A-Za-z0-9_]|[-+.][A-Za-z0-9_.])[A-Za-z0-9_.\-+/:$()^~]*$/;
+class Parser {
+    text;
+    lines;
+    li = 0;
+    constructor(text, lines) {
+        this.text = text;
+        this.lines = lines;
+    }
+    document() {
+        const node = this.block(0, 1);
+        if (this.li !== this.lines.length)
+            throw DECLINED;
+        return node;
+    }
+    /** The block node whose first line is the current one, at its indentation. */
+    block(indent, depth) {
+        if (depth > FAST_YAML_LIMITS.maxDepth)
+            throw DECLINED;
+        const line = this.lines[this.li];
+        if (line.indent !== indent)
+            throw DECLINED;
+        return this.isItem(line.start + indent, line.end) ? this.seq(indent, depth) : this.map(indent, line.start + indent, depth);
+    }
+    /** Whether a `-` at `pos` starts a list item (followed by a space or the line's end). */
+    isItem(pos, end) {
+        return this.text.charCodeAt(pos) === 0x2d && (pos + 1 === end || this.text.charCodeAt(pos + 1) === 0x20);
+    }
+    /** A block mapping at `indent`; its first key is at `firstKey` on the current line (compact in a list item or not). */
+    map(indent, firstKey, depth) {
+        const node = { kind: 'map', start: firstKey, keys: [], keyStarts: [], values: [] };
+        let keyPos = firstKey;
+        for (;;) {
+            const line = this.lines[this.li];
+            const { text } = this;
+            // The key: up to the first `:` followed by a space or the line's end.
+            let colon = -1;
+            for (let i = keyPos; i < line.end; i++) {
+                const c = text.charCodeAt(i);
+                if (c === 0x3a && (i + 1 === line.end || text.charCodeAt(i + 1) === 0x20)) {
+                    colon = i;
+                    break;
+                }
+                if (c === 0x20)
+                    throw DECLINED;
+            }
+            if (colon < 0)
+                throw DECLINED;
+            const keySource = text.slice(keyPos, colon);
+            if (!KEY.test(keySource) || keySource.endsWith(':'))
+                throw DECLINED;
+            const keyValue = resolvePlain(keySource);
+            if (keyValue === null)
+                throw DECLINED;
+            const key = String(keyValue);
+            if (node.keys.includes(key))
+                throw DECLINED;
+            node.keys.push(key);
+            node.keyStarts.push(keyPos);
+            node.values.push(this.valueAfter(colon + 1, line, indent, depth));
+            // The next line of this mapping, or its end.
+            if (this.li >= this.lines.length)
+                break;
+            const next = this.lines[this.li];
+            if (next.indent > indent)
+                throw DECLINED;
+            if (next.indent < indent)
+                break;
+            keyPos = next.start + indent;
+            // A list item at a mapping's own indentation (not after an empty key) is an error for the library.
+            if (this.isItem(keyPos, next.end))
+                throw DECLINED;
+        }
+        return node;
+    }
+    /** A block list at `indent` starting on the current line. */
+    seq(indent, depth) {
+        const first = this.lines[this.li];
+        const node = { kind: 'seq', start: first.start + indent, items: [] };
+        for (;;) {
+            const line = this.lines[this.li];
+            const dash = line.start + indent;
+            node.items.push(this.itemAfter(dash + 1, line, indent, depth));
+            if (this.li >= this.lines.length)
+                break;
+            const next = this.lines[this.li];
+            if (next.indent > indent)
+                throw DECLINED;
+            if (next.indent < indent || !this.isItem(next.start + indent, next.end))
+                break;
+        }
+        return node;
+    }
+    /** A list item's content after its `-`; consumes the item's lines. */
+    itemAfter(pos, line, indent, depth) {
+        const { text } = this;
+        let p = pos;
+        while (p < line.end && text.charCodeAt(p) === 0x20)
+            p++;
+        const c = p < line.end ? text.charCodeAt(p) : -1;
+        if (c === -1 || c === 0x23)
+            return this.nestedOrNull(p, indent, depth, false);
+        if (this.isItem(p, line.end))
+            throw DECLINED;
+        if (c !== 0x27 && c !== 0x22 && c !== 0x5b && c !== 0x7b && hasKeyColon(text, p, line.end)) {
+            if (depth + 1 > FAST_YAML_LIMITS.maxDepth)
+                throw DECLINED;
+            return this.map(p - line.start, p, depth + 1);
+        }
+        const value = this.inlineValue(p, line.end, depth + 1);
+        this.li++;
+        return value;
+    }
+    /** A mapping entry's value after its `:`; consumes the entry's lines. */
+    valueAfter(pos, line, indent, depth) {
+        const { text } = this;
+        let p = pos;
+        while (p < line.end && text.charCodeAt(p) === 0x20)
+            p++;
+        const c = p < line.end ? text.charCodeAt(p) : -1;
+        if (c === -1 || c === 0x23)
+            return this.nestedOrNull(p, indent, depth, true);
+        const value = this.inlineValue(p, line.end, depth + 1);
+        this.li++;
+        return value;
+    }
+    /**
+     * After an empty `key:` or `-`: a more indented block on the next line, a block list at the same
+     * indentation (after a mapping key only), or null placed where the library places it.
+     */
+    nestedOrNull(nullAt, indent, depth, afterKey) {
+        this.li++;
+        if (this.li < this.lines.length) {
+            const next = this.lines[this.li];
+            if (next.indent > indent)
+                return this.block(next.indent, depth + 1);
+            if (afterKey && next.indent === indent && this.isItem(next.start + indent, next.end))
+                return this.seq(indent, depth + 1);
+        }
+        return { kind: 'scalar', start: nullAt, value: null };
+    }
+    /** A scalar or flow collection filling the rest of a line from `p` (a trailing comment allowed). */
+    inlineValue(p, end, depth) {
+        const { text } = this;
+        const c = text.charCodeAt(p);
+        let node;
+        let after;
+        if (c === 0x27 || c === 0x22) {
+            const q = quoted(text, p, end);
+            node = { kind: 'scalar', start: p, value: q.value };
+            after = q.end;
+        }
+        else if (c === 0x5b || c === 0x7b) {
+            const f = flow(text, p, end, depth);
+            node = f.node;
+            after = f.end;
+        }
+        else {
+            let stop = end;
+            for (let i = p + 1; i < end; i++) {
+                if (text.charCodeAt(i) === 0x23 && text.charCodeAt(i - 1) === 0x20) {
+                    stop = i;
+                    break;
+                }
+            }
+            let last = stop;
+            while (last > p && text.charCodeAt(last - 1) === 0x20)
+                last--;
+            const source = text.slice(p, last);
+            if (!plainOk(source, false))
+                throw DECLINED;
+            return { kind: 'scalar', start: p, value: resolvePlain(source) };
+        }
+        // After a quoted scalar or a flow collection: spaces, then the line's end or a comment.
+        let i = after;
+        while (i < end && text.charCodeAt(i) === 0x20)
+            i++;
+        if (i < end && (text.charCodeAt(i) !== 0x23 || i === after))
+            throw DECLINED;
+        return node;
+    }
+}
+/** Whether a `:` followed by a space or the line's end comes before any comment on the line. */
+function hasKeyColon(text, p, end) {
+    for (let i = p; i < end; i++) {
+        const c = text.charCodeAt(i);
+        if (c === 0x3a && (i + 1 === end || text.charCodeAt(i + 1) === 0x20))
+            return true;
+        if (c === 0x23 && i > p && text.charCodeAt(i - 1) === 0x20)
+            return false;
+    }
+    return false;
+}
+/** A quoted scalar on one line at `p`: its value and the offset after its closing quote. */
+function quoted(text, p, end) {
+    const quote = text.charCodeAt(p);
+    if (quote === 0x22) {
+        const close = text.indexOf('"', p + 1);
+        if (close < 0 || close >= end)
+            throw DECLINED;
+        const value = text.slice(p + 1, close);
+        if (value.includes('\\'))
+            throw DECLINED;
+        return { value, end: close + 1 };
+    }
+    let value = '';
+    let i = p + 1;
+    for (;;) {
+        const close = text.indexOf("'", i);
+        if (close < 0 || close >= end)
+            throw DECLINED;
+        value += text.slice(i, close);
+        if (close + 1 < end && text.charCodeAt(close + 1) === 0x27) {
+            value += "'";
+            i = close + 2;
+        }
+        else {
+            return { value, end: close + 1 };
+        }
+    }
+}
+/** A flow mapping or list of scalars and flow collections on one line at `p`: its node and the offset after its closing bracket. */
+function flow(text, p, end, depth) {
+    if (depth > FAST_YAML_LIMITS.maxDepth)
+        throw DECLINED;
+    const isMap = text.charCodeAt(p) === 0x7b;
+    const close = isMap ? 0x7d : 0x5d;
+    const keys = [];
+    const keyStarts = [];
+    const values = [];
+    const skip = (from) => {
+        let i = from;
+        while (i < end && text.charCodeAt(i) === 0x20)
+            i++;
+        return i;
+    };
+    let i = skip(p + 1);
+    if (i < end && text.charCodeAt(i) === close) {
+        const node = isMap ? { kind: 'map', start: p, keys, keyStarts, values } : { kind: 'seq', start: p, items: values };
+        return { node, end: i + 1 };
+    }
+    for (let count = 0;; count++) {
+        if (count > FAST_YAML_LIMITS.maxLineLength)
+            throw DECLINED;
+        if (isMap) {
+            const colon = text.indexOf(': ', i);
+            if (colon < 0 || colon >= end)
+                throw DECLINED;
+            const keySource = text.slice(i, colon);
+            if (!KEY.test(keySource) || keySource.includes(':') || keySource.endsWith(':'))
+                throw DECLINED;
+            const keyValue = resolvePlain(keySource);
+            if (keyValue === null)
+                throw DECLINED;
+            const key = String(keyValue);
+            if (keys.includes(key))
+                throw DECLINED;
+            keys.push(key);
+            keyStarts.push(i);
+            i = skip(colon + 1);
+        }
+        if (i >= end)
+            throw DECLINED;
+        const c = text.charCodeAt(i);
+        let after;
+        if (c === 0x27 || c === 0x22) {
+            const q = quoted(text, i, end);
+            values.push({ kind: 'scalar', start: i, value: q.value });
+            after = q.end;
+        }
+        else if (c === 0x5b || c === 0x7b) {
+            const inner = flow(text, i, end, depth + 1);
+            values.push(inner.node);
+            after = inner.end;
+        }
+        else {
+            let stop = i;
+            while (stop < end) {
+                const d = text.charCodeAt(stop);
+                if (d === 0x2c || d === 0x5d || d === 0x7d)
+                    break;
+                stop++;
+            }
+            let last = stop;
+            while (last > i && text.charCodeAt(last - 1) === 0x20)
+                last--;
+            const source = text.slice(i, last);
+            if (!plainOk(source, true))
+                throw DECLINED;
+            values.push({ kind: 'scalar', start: i, value: resolvePlain(source) });
+            after = last;
+        }
+        i = skip(after);
+        if (i >= end)
+            throw DECLINED;
+        const d = text.charCodeAt(i);
+        if (d === close) {
+            const node = isMap ? { kind: 'map', start: p, keys, keyStarts, values } : { kind: 'seq', start: p, items: values };
+            return { node, end: i + 1 };
+        }
+        if (d !== 0x2c)
+            throw DECLINED;
+        i = skip(i + 1);
+        if (i >= end || text.charCodeAt(i) === close || text.charCodeAt(i) === 0x2c)
+            throw DECLINED;
+    }
+}
+/** Whether a plain scalar's text (trimmed, one line) is one the fast path reads as the library does. */
+function plainOk(source, inFlow) {
+    if (source.length === 0)
+        return false;
+    const first = source.charCodeAt(0);
+    // Indicators that cannot start a plain scalar here: - ? : , [ ] { } # & * ! | > ' " % @ `
+    if ('?:,[]{}#&*!|>\'"%@`'.includes(source[0]))
+        return false;
+    if (first === 0x2d && !/^-[0-9A-Za-z._]/.test(source))
+        return false;
+    if (source.endsWith(':') || source.includes(': ') || source.includes(' #'))
+        return false;
+    if (/[[\]{}]/.test(source))
+        return false;
+    if (inFlow && (source.includes(':') || source.includes('#') || source.includes(',')))
+        return false;
+    return true;
+}
+/** First characters a null, boolean or number of the core schema can start with. */
+const FIRST = /^[0-9+\-.~nNtTfF]/;
+const NULL = /^(?:~|[Nn]ull|NULL)?$/;
+const BOOL = /^(?:[Tt]rue|TRUE|[Ff]alse|FALSE)$/;
+const INT_OCT = /^0o[0-7]+$/;
+const INT = /^[-+]?[0-9]+$/;
+const INT_HEX = /^0x[0-9a-fA-F]+$/;
+const FLOAT_NAN = /^(?:[-+]?\.(?:inf|Inf|INF)|\.nan|\.NaN|\.NAN)$/;
+const FLOAT_EXP = /^[-+]?(?:\.[0-9]+|[0-9]+(?:\.[0-9]*)?)[eE][-+]?[0-9]+$/;
+const FLOAT = /^[-+]?(?:\.[0-9]+|[0-9]+\.[0-9]*)$/;
+/**
+ * A plain scalar's value under the YAML 1.2 core schema, with the tests and conversions of the
+ * `yaml` library's core schema (node_modules/yaml/dist/schema/core), tried in the library's order.
+ */
+function resolvePlain(source) {
+    // Every test below needs one of these first characters (or empty text): others are text at once.
+    if (source.length > 0 && !FIRST.test(source))
+        return source;
+    if (NULL.test(source))
+        return null;
+    if (BOOL.test(source))
+        return source[0] === 't' || source[0] === 'T';
+    if (INT_OCT.test(source))
+        return parseInt(source.substring(2), 8);
+    if (INT.test(source))
+        return parseInt(source, 10);
+    if (INT_HEX.test(source))
+        return parseInt(source.substring(2), 16);
+    if (FLOAT_NAN.test(source)) {
+        if (source.slice(-3).toLowerCase() === 'nan')
+            return Number.NaN;
+        return source[0] === '-' ? Number.NEGATIVE_INFINITY : Number.POSITIVE_INFINITY;
+    }
+    if (FLOAT_EXP.test(source))
+        return parseFloat(source);
+    if (FLOAT.test(source))
+        return parseFloat(source);
+    return source;
+}
+
+// EXTERNAL MODULE: ./src/config/yaml-parse.ts
+var yaml_parse = __nccwpck_require__(3317);
+// EXTERNAL MODULE: ./src/core/errors.ts
+var errors = __nccwpck_require__(4296);
+;// CONCATENATED MODULE: ./src/config/yaml-source.ts
 /**
  * YAML text to a plain value plus the source position of any key path, with the guards a
  * file from a pull request needs: a size cap, a nesting cap, an alias cap, duplicate keys
  * refused, and non-UTF-8 or binary content refused. Every problem is an {@link InputError}
  * naming the file, line and column.
  */
+
 
 
 
@@ -7693,11 +8225,11 @@ function decodeYamlBytes(bytes, file) {
     }
     catch {
         const at = firstInvalidUtf8(bytes);
-        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(YAML_ERROR.encoding, `is not UTF-8 text (invalid byte 0x${bytes[at].toString(16).padStart(2, '0')} at offset ${at}); expected a UTF-8 YAML file`, { file, ...positionInBytes(bytes, at) });
+        throw new errors/* InputError */.dz(YAML_ERROR.encoding, `is not UTF-8 text (invalid byte 0x${bytes[at].toString(16).padStart(2, '0')} at offset ${at}); expected a UTF-8 YAML file`, { file, ...positionInBytes(bytes, at) });
     }
     const nul = text.indexOf('\u0000');
     if (nul >= 0) {
-        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(YAML_ERROR.encoding, 'contains a NUL character, so it looks binary; expected a UTF-8 YAML file', {
+        throw new errors/* InputError */.dz(YAML_ERROR.encoding, 'contains a NUL character, so it looks binary; expected a UTF-8 YAML file', {
             file,
             ...positionInText(text, nul),
         });
@@ -7725,16 +8257,34 @@ async function readYamlFile(repo, path) {
  */
 function parseYaml(text, file) {
     checkSize(Buffer.byteLength(text, 'utf8'), file);
+    // The common shape of descriptors and settings files is read without the library when the text
+    // is inside the fast path's strict subset (same value, same positions: see yaml-fast.ts);
+    // anything else, and every error, goes to the library.
+    const fast = parseFastYaml(text.charCodeAt(0) === 0xfeff ? text.slice(1) : text);
+    if (fast !== null)
+        return fast;
+    return parseYamlWithLibrary(text, file);
+}
+/**
+ * Parses YAML text with the `yaml` library only (no fast path), with every guard of
+ * {@link parseYaml}; the authority the fast path is tested against.
+ *
+ * @param text the YAML text
+ * @param file repository-relative path, for messages
+ * @throws InputError as {@link parseYaml}
+ */
+function parseYamlWithLibrary(text, file) {
+    checkSize(Buffer.byteLength(text, 'utf8'), file);
     if (text.charCodeAt(0) === 0xfeff)
         text = text.slice(1);
     // A cheap bound first: the yaml package's parser gets slow (and its composer runs out of
     // stack) on documents nested thousands deep, so refuse those before parsing.
     const rough = roughNesting(text);
     if (rough.depth > ROUGH_DEPTH_CAP) {
-        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(YAML_ERROR.tooDeep, `is nested more than ${YAML_GUARDS.maxDepth} levels deep; expected a shallow settings or descriptor file`, { file, ...positionInText(text, rough.offset) });
+        throw new errors/* InputError */.dz(YAML_ERROR.tooDeep, `is nested more than ${YAML_GUARDS.maxDepth} levels deep; expected a shallow settings or descriptor file`, { file, ...positionInText(text, rough.offset) });
     }
-    const lineCounter = new yaml__WEBPACK_IMPORTED_MODULE_0__/* .LineCounter */ .HN();
-    const doc = (0,_yaml_parse_js__WEBPACK_IMPORTED_MODULE_1__/* .parseYamlDocument */ .I)(text, { lineCounter, prettyErrors: false, uniqueKeys: false, version: '1.2', schema: 'core' });
+    const lineCounter = new dist/* LineCounter */.HN();
+    const doc = (0,yaml_parse/* parseYamlDocument */.I)(text, { lineCounter, prettyErrors: false, uniqueKeys: false, version: '1.2', schema: 'core' });
     const at = (offset) => {
         const { line, col } = lineCounter.linePos(offset);
         return { line, column: col };
@@ -7743,7 +8293,7 @@ function parseYaml(text, file) {
         const error = doc.errors[0];
         const stackOverflow = /call stack/i.test(error.message);
         const message = error.message.replace(/ at line \d+, column \d+:?[\s\S]*$/, '');
-        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(stackOverflow ? YAML_ERROR.tooDeep : YAML_ERROR.syntax, stackOverflow ? `is nested too deeply; expected at most ${YAML_GUARDS.maxDepth} levels` : `is not valid YAML: ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .clip */ .$Q)(message, 120)}`, { file, ...at(error.pos[0]) });
+        throw new errors/* InputError */.dz(stackOverflow ? YAML_ERROR.tooDeep : YAML_ERROR.syntax, stackOverflow ? `is nested too deeply; expected at most ${YAML_GUARDS.maxDepth} levels` : `is not valid YAML: ${(0,errors/* clip */.$Q)(message, 120)}`, { file, ...at(error.pos[0]) });
     }
     checkStructure(doc, text, file, at);
     let value;
@@ -7752,14 +8302,14 @@ function parseYaml(text, file) {
     }
     catch (error) {
         const first = firstAlias(doc.contents);
-        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(YAML_ERROR.aliases, `expands aliases (*name) more than ${YAML_GUARDS.maxAliasCount} times (${error instanceof Error ? error.message : String(error)}); expected few aliases`, { file, ...(first ? at(first) : {}) });
+        throw new errors/* InputError */.dz(YAML_ERROR.aliases, `expands aliases (*name) more than ${YAML_GUARDS.maxAliasCount} times (${error instanceof Error ? error.message : String(error)}); expected few aliases`, { file, ...(first ? at(first) : {}) });
     }
     const locate = (path, wantValue) => {
         let node = doc.contents;
         let keyOffset = node && node.range ? node.range[0] : 0;
         for (const segment of path) {
             node = resolveAlias(doc, node);
-            if (typeof segment === 'number' && (0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .isSeq */ .oP)(node)) {
+            if (typeof segment === 'number' && (0,dist/* isSeq */.oP)(node)) {
                 const item = node.items[segment];
                 if (item === undefined)
                     return null;
@@ -7769,7 +8319,7 @@ function parseYaml(text, file) {
                     return null;
                 keyOffset = range[0];
             }
-            else if ((0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .isMap */ .jh)(node)) {
+            else if ((0,dist/* isMap */.jh)(node)) {
                 const pair = node.items.find((p) => keyText(p.key) === String(segment));
                 if (!pair)
                     return null;
@@ -7847,25 +8397,25 @@ function roughNesting(text) {
 /** Checks nesting depth, duplicate keys and keys that are lists or mappings on the syntax tree (aliases are followed only to see what a key is). */
 function checkStructure(doc, text, file, at) {
     const visit = (node, depth) => {
-        if ((0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .isMap */ .jh)(node) || (0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .isSeq */ .oP)(node)) {
+        if ((0,dist/* isMap */.jh)(node) || (0,dist/* isSeq */.oP)(node)) {
             if (depth > YAML_GUARDS.maxDepth) {
-                throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(YAML_ERROR.tooDeep, `is nested more than ${YAML_GUARDS.maxDepth} levels deep; expected a shallow settings or descriptor file`, {
+                throw new errors/* InputError */.dz(YAML_ERROR.tooDeep, `is nested more than ${YAML_GUARDS.maxDepth} levels deep; expected a shallow settings or descriptor file`, {
                     file,
                     ...(node.range ? at(node.range[0]) : {}),
                 });
             }
         }
-        if ((0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .isMap */ .jh)(node)) {
+        if ((0,dist/* isMap */.jh)(node)) {
             const seen = new Map();
             for (const pair of node.items) {
                 const keyOffset = pair.key?.range?.[0] ?? node.range?.[0] ?? 0;
                 // YAML allows a list or a mapping as a key; no key of fitgate's files is one, and plain
                 // JavaScript objects cannot hold one (the yaml package would print a process warning).
                 const keyNode = resolveAlias(doc, pair.key);
-                if ((0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .isMap */ .jh)(keyNode) || (0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .isSeq */ .oP)(keyNode)) {
+                if ((0,dist/* isMap */.jh)(keyNode) || (0,dist/* isSeq */.oP)(keyNode)) {
                     const range = pair.key?.range;
                     const written = range ? text.slice(range[0], range[1]).replace(/\s+/g, ' ').trim() : '';
-                    throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(YAML_ERROR.collectionKey, `a ${(0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .isMap */ .jh)(keyNode) ? 'mapping' : 'list'} used as a key (\`${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .clip */ .$Q)(written, 40)}\`); expected a plain name before the colon`, {
+                    throw new errors/* InputError */.dz(YAML_ERROR.collectionKey, `a ${(0,dist/* isMap */.jh)(keyNode) ? 'mapping' : 'list'} used as a key (\`${(0,errors/* clip */.$Q)(written, 40)}\`); expected a plain name before the colon`, {
                         file,
                         ...at(keyOffset),
                     });
@@ -7874,7 +8424,7 @@ function checkStructure(doc, text, file, at) {
                 const before = seen.get(key);
                 if (before !== undefined) {
                     const first = at(before);
-                    throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(YAML_ERROR.duplicateKey, `key \`${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .clip */ .$Q)(key)}\` appears twice in the same mapping (first at line ${first.line}); expected each key once`, {
+                    throw new errors/* InputError */.dz(YAML_ERROR.duplicateKey, `key \`${(0,errors/* clip */.$Q)(key)}\` appears twice in the same mapping (first at line ${first.line}); expected each key once`, {
                         file,
                         key,
                         ...at(keyOffset),
@@ -7885,11 +8435,11 @@ function checkStructure(doc, text, file, at) {
                 visit(pair.value, depth + 1);
             }
         }
-        else if ((0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .isSeq */ .oP)(node)) {
+        else if ((0,dist/* isSeq */.oP)(node)) {
             for (const item of node.items)
                 visit(item, depth + 1);
         }
-        else if ((0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .isPair */ .tO)(node)) {
+        else if ((0,dist/* isPair */.tO)(node)) {
             visit(node.key, depth + 1);
             visit(node.value, depth + 1);
         }
@@ -7898,17 +8448,17 @@ function checkStructure(doc, text, file, at) {
 }
 /** A mapping key as the text plain JavaScript would use for it. */
 function keyText(key) {
-    if ((0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .isScalar */ .jn)(key))
+    if ((0,dist/* isScalar */.jn)(key))
         return String(key.value);
     if (key === null || key === undefined)
         return '';
-    if ((0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .isAlias */ .Vj)(key))
+    if ((0,dist/* isAlias */.Vj)(key))
         return `*${key.source}`;
     return String(key);
 }
 function resolveAlias(doc, node) {
     let current = node;
-    for (let hops = 0; (0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .isAlias */ .Vj)(current) && hops < 8; hops++)
+    for (let hops = 0; (0,dist/* isAlias */.Vj)(current) && hops < 8; hops++)
         current = current.resolve(doc);
     return current;
 }
@@ -7918,16 +8468,16 @@ function firstAlias(root) {
     let best = null;
     while (stack.length > 0) {
         const node = stack.pop();
-        if ((0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .isAlias */ .Vj)(node)) {
+        if ((0,dist/* isAlias */.Vj)(node)) {
             const start = node.range?.[0];
             if (start !== undefined && (best === null || start < best))
                 best = start;
         }
-        else if ((0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .isMap */ .jh)(node)) {
+        else if ((0,dist/* isMap */.jh)(node)) {
             for (const pair of node.items)
                 stack.push(pair.key, pair.value);
         }
-        else if ((0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .isSeq */ .oP)(node)) {
+        else if ((0,dist/* isSeq */.oP)(node)) {
             for (const item of node.items)
                 stack.push(item);
         }
@@ -7936,7 +8486,7 @@ function firstAlias(root) {
 }
 function checkSize(bytes, file) {
     if (bytes > YAML_GUARDS.maxBytes) {
-        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(YAML_ERROR.tooLarge, `is ${bytes} bytes; expected a YAML file of at most ${YAML_GUARDS.maxBytes} bytes (1 MiB)`, {
+        throw new errors/* InputError */.dz(YAML_ERROR.tooLarge, `is ${bytes} bytes; expected a YAML file of at most ${YAML_GUARDS.maxBytes} bytes (1 MiB)`, {
             file,
         });
     }
@@ -9209,14 +9759,19 @@ class ChunkBuilder {
     finish() {
         this.handOut();
     }
-    /** Moves the rows gathered so far into a ready chunk; false when there were none. */
+    /**
+     * Moves the rows gathered so far into a ready chunk; false when there were none. A chunk that
+     * does not fill its buffers gets views of their first `rows` entries, not copies: the builder
+     * never writes those buffers again (they are not recycled, and the next rows go into fresh
+     * buffers), and they are at most twice the rows they hold.
+     */
     handOut() {
         const rows = this.row;
         if (rows === 0)
             return false;
         const exact = rows === this.capacity;
-        const slots = exact ? this.slots : this.slots.map((s) => s.slice(0, rows));
-        const lines = exact ? this.lines : this.lines.slice(0, rows);
+        const slots = exact ? this.slots : this.slots.map((s) => s.subarray(0, rows));
+        const lines = exact ? this.lines : this.lines.subarray(0, rows);
         const chunk = { rows, columns: this.request.slotOfColumn.map((slot) => slots[slot]), lines };
         if (exact)
             this.#buffersOf.set(chunk, { slots, lines });
@@ -10835,7 +11390,12 @@ async function readTable(repo, path, options) {
     const chunks = typeof path === 'string'
         ? scan(counted, path, settings, (plan) => (header = plan.header), false, true, counts)
         : scanParts(repo, path, settings, (plan) => (header = plan.header), true, counts, count, parts);
-    for await (const chunk of chunks) {
+    // A chunk shorter than `chunkRows` is the last its reader hands out, and its buffers are never
+    // written again: the first such chunk is held as it is, and when nothing follows (a file of
+    // fewer rows than a chunk, as every file of a many-models run) its arrays become the table's
+    // columns without a copy.
+    let lone = null;
+    const take = (chunk) => {
         const needed = rows + chunk.rows;
         if (needed > lines.length) {
             let capacity = Math.max(needed, Math.ceil(lines.length * 1.5));
@@ -10852,6 +11412,23 @@ async function readTable(repo, path, options) {
         });
         lines.set(chunk.lines, rows);
         rows = needed;
+    };
+    for await (const chunk of chunks) {
+        if (rows === 0 && lone === null && chunk.rows < settings.chunkRows) {
+            lone = chunk;
+            continue;
+        }
+        if (lone !== null) {
+            take(lone);
+            lone = null;
+        }
+        take(chunk);
+    }
+    if (lone !== null) {
+        const chunk = lone;
+        columns = settings.columns.map((_, k) => chunk.columns[firstOf[k]]);
+        lines = chunk.lines;
+        rows = chunk.rows;
     }
     const out = new Map();
     settings.columns.forEach((name, k) => {
@@ -12214,8 +12791,9 @@ function weightedDesign(design, scaling) {
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   I: () => (/* binding */ selectKth),
-/* harmony export */   z: () => (/* binding */ columnMedian)
+/* harmony export */   $Y: () => (/* binding */ medianOfSorted),
+/* harmony export */   I0: () => (/* binding */ selectKth),
+/* harmony export */   zP: () => (/* binding */ columnMedian)
 /* harmony export */ });
 /* harmony import */ var _design_stats_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(6801);
 /**
@@ -12242,6 +12820,28 @@ function columnMedian(values, n, scratch) {
         const s = scratch !== undefined && scratch.length >= n ? scratch.subarray(0, n) : new Float64Array(n);
         median = (n >= BRACKET_MIN_ROWS ? bracketedMedian(values, n, s) : null) ?? selectedMedian(values, n, s);
     }
+    remembered.set(values, { n, median });
+    return median;
+}
+/**
+ * {@link columnMedian} of the first n values of a column, read off the same values already sorted
+ * ascending (`sorted[0..n)`, the order of the built-in typed-array sort), and remembered as
+ * columnMedian remembers it. The median's value is fixed by the sorted values, so it equals the
+ * selection's except where the selection may return either of two equal values: a middle value of
+ * 0 (-0 or +0) or a NaN anywhere (sorted last); then it selects as columnMedian does.
+ *
+ * @param values the column (length >= n)
+ * @param n rows to take (n >= 1)
+ * @param sorted values[0..n) sorted ascending (length >= n)
+ * @param scratch optional work array for the selection (length >= n)
+ */
+function medianOfSorted(values, n, sorted, scratch) {
+    const upper = n >> 1;
+    const high = sorted[upper];
+    const low = n % 2 === 1 ? high : sorted[upper - 1];
+    if (n < 1 || Number.isNaN(sorted[n - 1]) || high === 0 || low === 0)
+        return columnMedian(values, n, scratch);
+    const median = n % 2 === 1 ? high : (low + high) / 2;
     remembered.set(values, { n, median });
     return median;
 }
@@ -12678,6 +13278,16 @@ function sweepCoefficients(complements, lambdas, penalised) {
     });
     return coefficients;
 }
+/** True when `folds` are those {@link assignFolds}(n, fit.folds, fit.foldOrder, fit.seed) gives (in-memory folds of n rows under the same settings). */
+function sameFolds(folds, n, fit) {
+    return (folds.streamed !== true &&
+        folds.foldOf.length === n &&
+        Number.isInteger(fit.folds) &&
+        fit.folds >= 1 &&
+        folds.k === Math.max(1, Math.min(fit.folds, n)) &&
+        folds.order === fit.foldOrder &&
+        folds.seed === fit.seed);
+}
 /**
  * Sweeps the model's main complexity setting and applies {@link oneStandardErrorRule} to the
  * k-fold errors (the same folds for every setting).
@@ -12714,7 +13324,10 @@ function sweepComplexity(descriptor, design, train, fit, options = {}) {
     const thinned = target.kind !== 'ridge' && train.rows > maxRows;
     const rows = thinned ? subsample(train, maxRows) : train;
     const subsampled = thinned || options.sampled === true;
-    const folds = (0,diagnostics_folds/* assignFolds */.oF)(rows.rows, descriptor.fit.folds, descriptor.fit.foldOrder, descriptor.fit.seed);
+    const given = target.kind === 'ridge' && options.factors !== undefined ? options.folds?.() : undefined;
+    const folds = given !== undefined && sameFolds(given, rows.rows, descriptor.fit)
+        ? given
+        : (0,diagnostics_folds/* assignFolds */.oF)(rows.rows, descriptor.fit.folds, descriptor.fit.foldOrder, descriptor.fit.seed);
     if (folds.k < 2)
         return null;
     const ridge = descriptor.fit.ridge;
@@ -12907,35 +13520,86 @@ class FoldFactorBuilder {
             this.factors[first].addRows(X, y.subarray(start, start + m), m);
             return;
         }
-        // The gathered rows go to arrays lent for this block (core/scratch.ts).
+        // The gathered rows go to arrays lent for this block (core/scratch.ts): fold f's rows, in file
+        // order, as a column-major block of its own at offsets[f] rows into them. Each row is read
+        // once: runs of consecutive rows of one fold (every fold's rows for `blocks` folds) are copied
+        // column by column, scattered rows one by one.
         const sub = (0,_core_scratch_js__WEBPACK_IMPORTED_MODULE_4__/* .borrowDoubles */ .an)(m * p);
         const subY = (0,_core_scratch_js__WEBPACK_IMPORTED_MODULE_4__/* .borrowDoubles */ .an)(m);
+        const offsets = (0,_core_scratch_js__WEBPACK_IMPORTED_MODULE_4__/* .borrowInts */ ._1)(2 * k);
         try {
             const counts = this.#counts;
             counts.fill(0);
-            for (let i = 0; i < m; i++)
-                counts[foldOf[start + i]]++;
+            const runs = countRows(foldOf, start, m, counts);
+            let at = 0;
+            for (let f = 0; f < k; f++) {
+                offsets[f] = at;
+                offsets[k + f] = 0;
+                at += counts[f];
+            }
+            if (runs * 4 <= m)
+                copyRuns(X, y, start, m, p, foldOf, counts, offsets, k, sub, subY);
+            else
+                scatterRows(X, y, start, m, p, foldOf, counts, offsets, k, sub, subY);
             for (let f = 0; f < k; f++) {
                 const mf = counts[f];
                 if (mf === 0)
                     continue;
-                // Gather the block's rows of fold f into a column-major mf x p block.
-                let r = 0;
-                for (let i = 0; i < m; i++) {
-                    if (foldOf[start + i] !== f)
-                        continue;
-                    for (let j = 0; j < p; j++)
-                        sub[j * mf + r] = X[j * m + i];
-                    subY[r] = y[start + i];
-                    r++;
-                }
-                this.factors[f].addRows(sub, subY, mf);
+                const from = offsets[f];
+                this.factors[f].addRows(sub.subarray(from * p, (from + mf) * p), subY.subarray(from, from + mf), mf);
             }
         }
         finally {
+            (0,_core_scratch_js__WEBPACK_IMPORTED_MODULE_4__/* .returnInts */ .vb)(offsets);
             (0,_core_scratch_js__WEBPACK_IMPORTED_MODULE_4__/* .returnDoubles */ .TI)(subY);
             (0,_core_scratch_js__WEBPACK_IMPORTED_MODULE_4__/* .returnDoubles */ .TI)(sub);
         }
+    }
+}
+// The row loops of FoldFactorBuilder.add, one loop each (see DEVELOPERS.md, "Writing hot loops").
+/** counts[f] += rows of fold f among rows start .. start+m-1; returns the number of runs of consecutive rows of one fold. */
+function countRows(foldOf, start, m, counts) {
+    let runs = 0;
+    for (let i = 0; i < m; i++) {
+        const f = foldOf[start + i];
+        counts[f]++;
+        if (i === 0 || f !== foldOf[start + i - 1])
+            runs++;
+    }
+    return runs;
+}
+/**
+ * Copies each run of consecutive rows of one fold into its fold's block (see
+ * FoldFactorBuilder.add): its column segments and targets as whole pieces. offsets[k + f] counts
+ * fold f's rows written so far.
+ */
+function copyRuns(X, y, start, m, p, foldOf, counts, offsets, k, sub, subY) {
+    let i = 0;
+    while (i < m) {
+        const f = foldOf[start + i];
+        let end = i + 1;
+        while (end < m && foldOf[start + end] === f)
+            end++;
+        const mf = counts[f];
+        const r = offsets[k + f];
+        const base = offsets[f] * p;
+        for (let j = 0; j < p; j++)
+            sub.set(X.subarray(j * m + i, j * m + end), base + j * mf + r);
+        subY.set(y.subarray(start + i, start + end), offsets[f] + r);
+        offsets[k + f] = r + end - i;
+        i = end;
+    }
+}
+/** Writes each row into its fold's block (see FoldFactorBuilder.add), rows in file order. */
+function scatterRows(X, y, start, m, p, foldOf, counts, offsets, k, sub, subY) {
+    for (let i = 0; i < m; i++) {
+        const f = foldOf[start + i];
+        const mf = counts[f];
+        const r = offsets[k + f]++;
+        const base = offsets[f] * p + r;
+        for (let j = 0; j < p; j++)
+            sub[base + j * mf] = X[j * m + i];
+        subY[offsets[f] + r] = y[start + i];
     }
 }
 /** True when rows start .. start+m-1 (m >= 1) all belong to one fold (one loop per function; see DEVELOPERS.md, "Writing hot loops"). */
@@ -14017,7 +14681,7 @@ function pairedErrorFigures(train, holdout) {
 /* unused harmony exports SPIKE_MAX_ROWS, SPIKE_MAX_GAPS, SPIKE_POINTS_PER_GAP */
 /* harmony import */ var _design_blocks_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(7254);
 /* harmony import */ var _column_median_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(8455);
-/* harmony import */ var _swing_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(309);
+/* harmony import */ var _swing_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(2331);
 /* harmony import */ var _data_target_transform_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(1938);
 /* harmony import */ var _core_scratch_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(7365);
 
@@ -14046,7 +14710,7 @@ function measureSpikes(design, train, coefficients, original, known = []) {
     let medians = null;
     const mediansOnce = () => {
         if (medians === null)
-            medians = train.inputs.map((col) => (0,_column_median_js__WEBPACK_IMPORTED_MODULE_1__/* .columnMedian */ .z)(col, n));
+            medians = train.inputs.map((col) => (0,_column_median_js__WEBPACK_IMPORTED_MODULE_1__/* .columnMedian */ .zP)(col, n));
         return medians;
     };
     const perInput = [];
@@ -14070,8 +14734,8 @@ function measureSpikes(design, train, coefficients, original, known = []) {
             return;
         // The swing scan sorted every row's value of this input already: its distinct values serve
         // when the data variation reads every row too (at most SPIKE_MAX_ROWS).
-        const distinct = n <= SPIKE_MAX_ROWS ? known.find((k) => k.input === c && k.distinct !== undefined)?.distinct : undefined;
-        const dataVariation = targetVariation(train.inputs[c], original?.y ?? train.y, n, original ? original.weights : train.weights, distinct);
+        const sorted = n <= SPIKE_MAX_ROWS ? known.find((k) => k.input === c && k.distinct !== undefined) : undefined;
+        const dataVariation = targetVariation(train.inputs[c], original?.y ?? train.y, n, original ? original.weights : train.weights, sorted?.distinct, sorted?.slots);
         const r = dataVariation > 0 ? curveVariation / dataVariation : Number.NaN;
         perInput.push({ input: name, curveVariation, dataVariation, ratio: r });
         if (!Number.isNaN(r) && (Number.isNaN(ratio) || r > ratio)) {
@@ -14094,15 +14758,26 @@ function curveAlong(design, train, coefficients, c, medians, original) {
     return curve;
 }
 /** Total variation of the (weighted) mean target over the input's distinct values in ascending order. */
-function targetVariation(x, y, n, weights, distinct) {
-    const { means } = meanTargets(x, y, n, weights, distinct);
-    return meanVariation(means);
+function targetVariation(x, y, n, weights, distinct, slots) {
+    return slotSums(x, y, n, weights, distinct, slots, variationOfSlots);
 }
-/** sum |means[j+1] - means[j]|: {@link totalVariation} of a plain array (one loop). */
-function meanVariation(means) {
+/**
+ * sum |means[j+1] - means[j]| over the means {@link meansOfSlots} gives, without making them: the
+ * same means (sums / totals of the kept slots) and the same additions in the same order (one loop).
+ */
+function variationOfSlots(sorted, sums, totals) {
     let s = 0;
-    for (let j = 1; j < means.length; j++)
-        s += Math.abs(means[j] - means[j - 1]);
+    let previous = 0;
+    let kept = 0;
+    for (let j = 0; j < sorted.length; j++) {
+        if (Number.isFinite(sorted[j]) && totals[j] > 0) {
+            const mean = sums[j] / totals[j];
+            if (kept > 0)
+                s += Math.abs(mean - previous);
+            previous = mean;
+            kept++;
+        }
+    }
     return s;
 }
 /** Most intervals {@link spikeIntervals} examines (the widest, when an input has more gaps). */
@@ -14148,7 +14823,7 @@ function spikeIntervals(design, train, coefficients, c, limit, original) {
         for (let t = 0; t < per; t++)
             grid[q * per + t] = values[j] + ((values[j + 1] - values[j]) * t) / (per - 1);
     });
-    const medians = train.inputs.map((col) => (0,_column_median_js__WEBPACK_IMPORTED_MODULE_1__/* .columnMedian */ .z)(col, n));
+    const medians = train.inputs.map((col) => (0,_column_median_js__WEBPACK_IMPORTED_MODULE_1__/* .columnMedian */ .zP)(col, n));
     const columns = design.inputs.map((_, k) => (k === c ? grid : new Float64Array(grid.length).fill(medians[k])));
     const curve = (0,_design_blocks_js__WEBPACK_IMPORTED_MODULE_0__/* .predictRows */ .tp)(design, { inputs: columns, rows: grid.length }, coefficients);
     if (original !== undefined)
@@ -14172,11 +14847,21 @@ function spikeIntervals(design, train, coefficients, c, limit, original) {
  * sorted once (a native typed-array sort), and each row finds its value's slot through equal-width
  * buckets of the range ({@link SlotBuckets}) or by binary search.
  * `distinct`, when given, must be those distinct values of every row (n <= SPIKE_MAX_ROWS), as
- * the sort and packing here make them: they are taken instead of sorting again. The working
+ * the sort and packing here make them: they are taken instead of sorting again; `slots` with
+ * them, each row's index in them (swing.ts {@link InsideCurve}): the rows are summed into their
+ * slots without looking their values up (the same additions). The working
  * arrays are lent (core/scratch.ts); each loop is a function of its own (see DEVELOPERS.md,
  * "Writing hot loops").
  */
-function meanTargets(x, y, n, weights, distinct) {
+function meanTargets(x, y, n, weights, distinct, slots) {
+    return slotSums(x, y, n, weights, distinct, slots, meansOfSlots);
+}
+/**
+ * The work of {@link meanTargets}: each slot's sum of (weighted) targets and total weight, handed
+ * to `read` (sorted distinct values, sums, totals; lent arrays it must not keep), whose result is
+ * returned.
+ */
+function slotSums(x, y, n, weights, distinct, slots, read) {
     const m = Math.min(n, SPIKE_MAX_ROWS);
     const own = distinct !== undefined && m === n ? null : (0,_core_scratch_js__WEBPACK_IMPORTED_MODULE_4__/* .borrowDoubles */ .an)(m);
     try {
@@ -14192,9 +14877,11 @@ function meanTargets(x, y, n, weights, distinct) {
         const totals = (0,_core_scratch_js__WEBPACK_IMPORTED_MODULE_4__/* .borrowDoubles */ .an)(sorted.length);
         const buckets = (0,_core_scratch_js__WEBPACK_IMPORTED_MODULE_4__/* .borrowInts */ ._1)(sorted.length);
         try {
-            const found = slotBuckets(sorted, buckets);
-            sumBySlot(x, y, n, m, weights, sorted, found, sums, totals);
-            return meansOfSlots(sorted, sums, totals);
+            if (own === null && slots !== undefined)
+                sumInSlots(y, n, weights, slots, sums, totals);
+            else
+                sumBySlot(x, y, n, m, weights, sorted, slotBuckets(sorted, buckets), sums, totals);
+            return read(sorted, sums, totals);
         }
         finally {
             (0,_core_scratch_js__WEBPACK_IMPORTED_MODULE_4__/* .returnInts */ .vb)(buckets);
@@ -14287,6 +14974,19 @@ function sumBySlot(x, y, n, m, weights, sorted, found, sums, totals) {
         totals[lo] += w;
     }
 }
+/**
+ * {@link sumBySlot} of every row (m = n) when each row's slot is known: slots[r] is the slot
+ * sumBySlot finds for row r (the index of its value among the distinct values). The same
+ * additions in the same order (rows in file order).
+ */
+function sumInSlots(y, n, weights, slots, sums, totals) {
+    for (let r = 0; r < n; r++) {
+        const slot = slots[r];
+        const w = weights === undefined ? 1 : weights[r];
+        sums[slot] += weights === undefined ? y[r] : w * y[r];
+        totals[slot] += w;
+    }
+}
 /** The finite values of `sorted` whose total weight is above 0, and their means sums / totals. */
 function meansOfSlots(sorted, sums, totals) {
     const values = [];
@@ -14313,7 +15013,7 @@ function widestGapIndices(values, max) {
 
 /***/ }),
 
-/***/ 309:
+/***/ 2331:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -14331,12 +15031,251 @@ __nccwpck_require__.d(__webpack_exports__, {
 var design_matrix = __nccwpck_require__(6566);
 // EXTERNAL MODULE: ./src/design/blocks.ts
 var blocks = __nccwpck_require__(7254);
+;// CONCATENATED MODULE: ./src/design/polynomial-predictions.ts
+/**
+ * A predictor for `design` under the coefficients `w` when its only term is a `polynomial` term
+ * without an input transform (intercept or not), else null. predict(xs, out) adds to out[i] (all
+ * zeros, length >= xs.length) the prediction at xs[i] and returns `out`: the same operations in
+ * the same order as {@link predictRows} (design/blocks.ts) gives, so the bits are equal. The block
+ * holds 1 (the intercept), then z = (x - shift) / scale (x itself when shift = 0 and scale = 1)
+ * and its powers z^k = z^(k-1) z (design/terms/polynomial.ts, kernels/polynomial-columns.ts); the
+ * products are added to the output column after column, those of weight 0 left out
+ * (kernels/products.ts). test/design/polynomial-predictions.test.ts compares the bits.
+ *
+ * @param design the fitted design
+ * @param w coefficients (length p)
+ */
+function polynomialPredictor(design, w) {
+    if (design.terms.length !== 1)
+        return null;
+    const term = design.terms[0];
+    const spec = term.spec;
+    if (spec.kind !== 'polynomial' || spec.transform !== undefined || term.inputScale !== undefined || term.admits !== undefined)
+        return null;
+    const { shift, scale } = term.fixed;
+    if (typeof shift !== 'number' || typeof scale !== 'number')
+        return null;
+    const degree = spec.degree;
+    const first = design.intercept ? 1 : 0;
+    if (!(degree >= 1) || term.columnNames.length !== degree || design.p !== first + degree)
+        return null;
+    const weights = new Float64Array(design.p);
+    for (let j = 0; j < design.p; j++)
+        weights[j] = w[j];
+    const raw = shift === 0 && scale === 1;
+    return (xs, out) => {
+        if (degree <= 4)
+            lowDegreeRows(xs, xs.length, shift, scale, raw, design.intercept, weights, degree, out);
+        else
+            polynomialRows(xs, xs.length, shift, scale, raw, design.intercept, weights, degree, out);
+        return out;
+    };
+}
+/**
+ * out[i] += the prediction at xs[i] for i < m (see {@link polynomialPredictor}): the intercept's
+ * product 1 w_0, then z^k w_k for k = 1 .. degree, each added in turn unless its weight is 0.
+ * One loop nest (see DEVELOPERS.md, "Writing hot loops").
+ */
+function polynomialRows(xs, m, shift, scale, raw, intercept, w, degree, out) {
+    const first = intercept ? 1 : 0;
+    const w0 = intercept ? w[0] : 0;
+    const addIntercept = intercept && w0 !== 0;
+    for (let i = 0; i < m; i++) {
+        const z = raw ? xs[i] : (xs[i] - shift) / scale;
+        let sum = out[i];
+        if (addIntercept)
+            sum += 1 * w0;
+        let power = z;
+        for (let k = 0; k < degree; k++) {
+            if (k > 0)
+                power = power * z;
+            const wk = w[first + k];
+            if (wk !== 0)
+                sum += power * wk;
+        }
+        out[i] = sum;
+    }
+}
+/**
+ * {@link polynomialRows} for a degree of at most 4, the powers written out (no loop over the
+ * columns inside the loop over the points: several times faster): the same operations in the
+ * same order.
+ */
+function lowDegreeRows(xs, m, shift, scale, raw, intercept, w, degree, out) {
+    const first = intercept ? 1 : 0;
+    const w0 = intercept ? w[0] : 0;
+    const w1 = w[first];
+    const w2 = degree >= 2 ? w[first + 1] : 0;
+    const w3 = degree >= 3 ? w[first + 2] : 0;
+    const w4 = degree >= 4 ? w[first + 3] : 0;
+    // Which products are added: the intercept's and each power's of weight other than 0.
+    const use0 = intercept && w0 !== 0;
+    const use1 = w1 !== 0;
+    const use2 = degree >= 2 && w2 !== 0;
+    const use3 = degree >= 3 && w3 !== 0;
+    const use4 = degree >= 4 && w4 !== 0;
+    for (let i = 0; i < m; i++) {
+        const z = raw ? xs[i] : (xs[i] - shift) / scale;
+        let sum = out[i];
+        if (use0)
+            sum += 1 * w0;
+        if (use1)
+            sum += z * w1;
+        const z2 = z * z;
+        if (use2)
+            sum += z2 * w2;
+        const z3 = z2 * z;
+        if (use3)
+            sum += z3 * w3;
+        if (use4)
+            sum += z3 * z * w4;
+        out[i] = sum;
+    }
+}
+
 // EXTERNAL MODULE: ./src/diagnostics/column-median.ts
 var column_median = __nccwpck_require__(8455);
 // EXTERNAL MODULE: ./src/design/stats.ts
 var stats = __nccwpck_require__(6801);
 // EXTERNAL MODULE: ./src/diagnostics/radix-sort.ts
 var radix_sort = __nccwpck_require__(8459);
+// EXTERNAL MODULE: ./src/core/scratch.ts
+var core_scratch = __nccwpck_require__(7365);
+;// CONCATENATED MODULE: ./src/diagnostics/sorted-slots.ts
+/**
+ * One sort of a column that serves two readers: the ascending values (the swing grid is built from
+ * them, diagnostics/swing.ts) and, for every row, the index of its value among the distinct values
+ * (the spike figure's mean target per value sums each row into its value's slot,
+ * diagnostics/spikes.ts), so that the rows need not look their values up again.
+ */
+
+/**
+ * Most moves of the insertion sorts, per row: more declines the column (its distinct values are
+ * not spread evenly). Repeated values cost none (equal values stay in row order).
+ */
+const MOVES_PER_ROW = 16;
+/**
+ * Sorts column[0..n) into out[0..n) ascending in the order of the built-in typed-array sort (-0
+ * before +0), and sets slots[r] to the index of row r's value among the distinct values of the
+ * sorted column (values equal to `===` share one: -0 and +0 are one value, as the packing of
+ * distinct values keeps them). A distribution sort of the row indices (Knuth, The Art of Computer
+ * Programming, vol. 3, 2nd ed., sec. 5.2.5: about n/4 buckets of equal width between the
+ * extremes, insertion sort in each). Returns false, with `out` and `slots` untouched, when the
+ * column holds a NaN, its extremes are equal or not finite, or the insertion sorts would move
+ * values more than 16 times per row (distinct values bunched in few buckets); the caller then
+ * sorts another way.
+ *
+ * @param column the values (not modified; length >= n)
+ * @param n rows (n >= 1)
+ * @param out receives the sorted values (length >= n)
+ * @param slots receives each row's slot (length >= n)
+ */
+function sortWithSlots(column, n, out, slots) {
+    if (n < 2)
+        return false;
+    const ends = new Float64Array(2);
+    if (!extremes(column, n, ends))
+        return false;
+    const lo = ends[0];
+    const hi = ends[1];
+    const buckets = Math.max(1, n >> 2);
+    const scale = buckets / (hi - lo);
+    if (!(hi > lo) || !Number.isFinite(lo) || !Number.isFinite(hi) || !Number.isFinite(scale) || !(scale > 0))
+        return false;
+    const start = (0,core_scratch/* borrowInts */._1)(buckets + 1);
+    const order = (0,core_scratch/* borrowInts */._1)(n);
+    try {
+        countBuckets(column, n, lo, scale, buckets - 1, start);
+        prefixSums(start, buckets);
+        placeRows(column, n, lo, scale, buckets - 1, start, order);
+        // placeRows advanced each bucket's start to the next one's: bucket b now runs from start[b - 1].
+        if (!sortBuckets(column, order, start, buckets, MOVES_PER_ROW * n))
+            return false;
+        writeSorted(column, order, n, out, slots);
+        return true;
+    }
+    finally {
+        (0,core_scratch/* returnInts */.vb)(order);
+        (0,core_scratch/* returnInts */.vb)(start);
+    }
+}
+// The passes are one loop each (see DEVELOPERS.md, "Writing hot loops").
+/** ends = [smallest, largest] of column[0..n); false when a value is NaN. */
+function extremes(column, n, ends) {
+    let lo = Infinity;
+    let hi = -Infinity;
+    for (let i = 0; i < n; i++) {
+        const v = column[i];
+        if (Number.isNaN(v))
+            return false;
+        if (v < lo)
+            lo = v;
+        if (v > hi)
+            hi = v;
+    }
+    ends[0] = lo;
+    ends[1] = hi;
+    return true;
+}
+/** start[b + 1] = rows whose bucket is b (start all zeros, buckets + 1 long). */
+function countBuckets(column, n, lo, scale, last, start) {
+    for (let i = 0; i < n; i++)
+        start[Math.min(last, Math.floor((column[i] - lo) * scale)) + 1]++;
+}
+/** Turns the counts of {@link countBuckets} into each bucket's first position. */
+function prefixSums(start, buckets) {
+    for (let b = 0; b < buckets; b++)
+        start[b + 1] += start[b];
+}
+/** order[...] = the rows bucket by bucket, in row order within each; start[b] ends at bucket b's end. */
+function placeRows(column, n, lo, scale, last, start, order) {
+    for (let i = 0; i < n; i++)
+        order[start[Math.min(last, Math.floor((column[i] - lo) * scale))]++] = i;
+}
+/**
+ * Insertion sort of each bucket's rows by value (bucket b at order[b > 0 ? start[b - 1] : 0 ..
+ * start[b])); false, leaving `order` part sorted, as soon as more than `budget` moves were made.
+ */
+function sortBuckets(column, order, start, buckets, budget) {
+    let from = 0;
+    let left = budget;
+    for (let b = 0; b < buckets; b++) {
+        const end = start[b];
+        for (let i = from + 1; i < end; i++) {
+            const row = order[i];
+            const v = column[row];
+            let j = i - 1;
+            while (j >= from && sortsBefore(v, column[order[j]])) {
+                if (--left < 0)
+                    return false;
+                order[j + 1] = order[j];
+                j--;
+            }
+            order[j + 1] = row;
+        }
+        from = end;
+    }
+    return true;
+}
+/** a < b in the order of the built-in sort (-0 before +0). */
+function sortsBefore(a, b) {
+    return a < b || (a === 0 && b === 0 && Object.is(a, -0) && !Object.is(b, -0));
+}
+/** out[i] = the i-th smallest value; slots[row] = its distinct value's index (a new slot where the value changes, `!==`). */
+function writeSorted(column, order, n, out, slots) {
+    let slot = -1;
+    let previous = 0;
+    for (let i = 0; i < n; i++) {
+        const row = order[i];
+        const v = column[row];
+        if (i === 0 || v !== previous)
+            slot++;
+        previous = v;
+        out[i] = v;
+        slots[row] = slot;
+    }
+}
+
 ;// CONCATENATED MODULE: ./src/diagnostics/nearest-neighbours.ts
 /**
  * The k nearest neighbours of every point of a small set (the swing scan's sampled rows), exactly
@@ -14527,13 +15466,13 @@ function considerNeighbour(flat, d, a, b, kk, best, bestIdx) {
 var deadline = __nccwpck_require__(2091);
 // EXTERNAL MODULE: ./src/data/target-transform.ts
 var target_transform = __nccwpck_require__(1938);
-// EXTERNAL MODULE: ./src/core/scratch.ts
-var core_scratch = __nccwpck_require__(7365);
 ;// CONCATENATED MODULE: ./src/diagnostics/swing.ts
 /**
  * Swing between and beyond samples: how far a model's predictions leave the band of observed
  * training targets on inputs between the training rows and just past their range.
  */
+
+
 
 
 
@@ -14621,8 +15560,15 @@ function gridFromSorted(sorted, n, options, work) {
     const even = (0,core_scratch/* borrowDoubles */.an)(uniform);
     try {
         fillUniform(even, uniform, lo, hi);
-        const w = fillGaps(inside, uniform, distinct, gaps, per);
         const beyond = marginGrid(lo, hi, margin * width, marginPoints);
+        // The usual grid: the gap points merged with the uniform ones as they are made (one pass).
+        const taken = new Int32Array(1);
+        const merged = ascending(even, 0, uniform) ? mergeGapPoints(even, uniform, distinct, gaps, per, inside, taken) : -1;
+        if (merged >= 0) {
+            const all = appendUniform(even, taken[0], uniform, inside, merged);
+            return { inside: inside.subarray(0, all), beyond: unique(beyond, beyond.length), gaps: count - 1 };
+        }
+        const w = fillGaps(inside, uniform, distinct, gaps, per);
         return { inside: uniqueOfRuns(even, inside, uniform, w), beyond: unique(beyond, beyond.length), gaps: count - 1 };
     }
     finally {
@@ -14693,7 +15639,7 @@ function blockEnd(xs, from, to, v) {
     let hi = to;
     while (lo < hi) {
         const mid = (lo + hi) >>> 1;
-        if (sortsBefore(xs[mid], v))
+        if (swing_sortsBefore(xs[mid], v))
             lo = mid + 1;
         else
             hi = mid;
@@ -14704,7 +15650,7 @@ function blockEnd(xs, from, to, v) {
 function ascending(xs, from, to) {
     for (let i = from; i < to; i++) {
         const v = xs[i];
-        if (Number.isNaN(v) || (i > from && sortsBefore(v, xs[i - 1])))
+        if (Number.isNaN(v) || (i > from && swing_sortsBefore(v, xs[i - 1])))
             return false;
     }
     return true;
@@ -14721,14 +15667,14 @@ function mergeRuns(first, xs, split, length) {
     let j = split;
     let w = 0;
     for (let k = 0; k < length; k++) {
-        const v = j >= length || (i < split && !sortsBefore(xs[j], first[i])) ? first[i++] : xs[j++];
+        const v = j >= length || (i < split && !swing_sortsBefore(xs[j], first[i])) ? first[i++] : xs[j++];
         if (w === 0 || v !== xs[w - 1])
             xs[w++] = v;
     }
     return w;
 }
 /** a < b in the order of the built-in typed-array sort (-0 before +0). */
-function sortsBefore(a, b) {
+function swing_sortsBefore(a, b) {
     return a < b || (a === 0 && b === 0 && Object.is(a, -0) && !Object.is(b, -0));
 }
 /** The distinct values of xs[0..length), ascending, as a subarray of xs (xs is reordered). */
@@ -14741,6 +15687,53 @@ function fillUniform(out, count, lo, hi) {
     const width = hi - lo;
     for (let t = 0; t < count; t++)
         out[t] = t === count - 1 ? hi : lo + (width * t) / Math.max(1, count - 1);
+}
+/**
+ * {@link uniqueOfRuns} of the ascending uniform points first[0..split) and the points
+ * {@link fillGaps} makes, written to out[0..) as the gap points are made, without writing them
+ * first: before each gap point v the uniform points u with !sortsBefore(v, u) (as
+ * {@link mergeBlocks} orders them), and every value unless it equals (`===`) the one written
+ * before it. Returns how many were written, or -1 when the gap points are not
+ * {@link increasing} (the caller then takes the general path, which overwrites `out`); taken[0]
+ * is how many uniform points it wrote, the rest follow with {@link appendUniform} (nothing but the
+ * return after the loop: see DEVELOPERS.md, "Writing hot loops").
+ */
+function mergeGapPoints(first, split, distinct, gaps, per, out, taken) {
+    let i = 0;
+    let w = 0;
+    let made = 0;
+    taken[0] = 0;
+    let previous = 0;
+    for (let g = 0; g < gaps.length; g++) {
+        const a = distinct[gaps[g]];
+        const b = distinct[gaps[g] + 1];
+        for (let t = 1; t <= per; t++) {
+            const v = a + ((b - a) * t) / (per + 1);
+            if (made === 0 ? Number.isNaN(v) : !(previous < v))
+                return -1;
+            made++;
+            previous = v;
+            while (i < split && !swing_sortsBefore(v, first[i])) {
+                const u = first[i++];
+                taken[0] = i;
+                if (w === 0 || u !== out[w - 1])
+                    out[w++] = u;
+            }
+            if (w === 0 || v !== out[w - 1])
+                out[w++] = v;
+        }
+    }
+    return w;
+}
+/** Writes the uniform points first[from..split) after out[0..w) as {@link mergeGapPoints} does (each unless equal to the one before); returns the count. */
+function appendUniform(first, from, split, out, w) {
+    let at = w;
+    for (let i = from; i < split; i++) {
+        const u = first[i];
+        if (at === 0 || u !== out[at - 1])
+            out[at++] = u;
+    }
+    return at;
 }
 /** Writes `per` points inside each listed gap of `distinct` from out[at]; returns the next free index. */
 function fillGaps(out, at, distinct, gaps, per) {
@@ -14775,7 +15768,7 @@ function widestGaps(distinct, maxGaps, work) {
         return allGaps(count);
     const widths = work !== undefined && work.length >= count ? work.subarray(0, count) : new Float64Array(count);
     gapWidths(distinct, count, widths);
-    const threshold = (0,column_median/* selectKth */.I)(widths, count - maxGaps);
+    const threshold = (0,column_median/* selectKth */.I0)(widths, count - maxGaps);
     const out = (0,core_scratch/* borrowInts */._1)(maxGaps);
     pickGaps(distinct, count, threshold, maxGaps - gapsWiderThan(distinct, count, threshold), out);
     return out;
@@ -14888,8 +15881,13 @@ function predictorAlong(design, coefficients, c, fixed) {
     const varying = design.terms.map((t) => t.inputs.includes(name));
     // Column c is `xs` itself; only the other inputs get a column of their fixed value.
     const columnsAt = (xs) => design.inputs.map((_, k) => (k === c ? xs : new Float64Array(xs.length).fill(fixed[k])));
-    if (readByEveryTerm(design, c))
+    if (readByEveryTerm(design, c)) {
+        // One polynomial term: the predictions in one pass, without a design block (the same bits).
+        const polynomial = polynomialPredictor(design, coefficients);
+        if (polynomial !== null)
+            return (xs, out) => polynomial(xs, out ?? new Float64Array(xs.length));
         return (xs, out) => (0,blocks/* predictRows */.tp)(design, { inputs: columnsAt(xs), rows: xs.length }, coefficients, out);
+    }
     // The fixed part: intercept plus every term that does not read input c, at the fixed values.
     const row = design.fill(columnsAt(Float64Array.of(fixed[c])), 0, 1);
     let base = design.intercept ? coefficients[0] : 0;
@@ -15039,6 +16037,99 @@ function worstExcursionIndex(pred, m, lo, hi) {
     return index;
 }
 /**
+ * What {@link scanCurve} finds in one pass over a curve's predictions, by index:
+ * [worst, variation, min, imin, max, imax] (see {@link scanCurve}; the variation is stored by its caller).
+ */
+const SCAN_WORST = 0;
+const SCAN_VARIATION = 1;
+const SCAN_MIN = 2;
+const SCAN_IMIN = 3;
+const SCAN_MAX = 4;
+const SCAN_IMAX = 5;
+/**
+ * One pass over pred[0..m) (m >= 1) for three figures the inside grid needs, each as its own loop
+ * gives it: into[0] the index of {@link worstExcursionIndex}, the {@link totalVariation} (the same
+ * additions in the same order; returned), and into[2..6) the smallest and largest value with the
+ * index of the first of each, as {@link extremesOfRun} finds them from pred[0] (a NaN pred[0]
+ * stays both, at index 0). `into` is written where a figure changes, so that nothing but the
+ * return follows the loop (see DEVELOPERS.md, "Writing hot loops").
+ */
+function scanCurve(pred, m, lo, hi, into) {
+    let value = -Infinity;
+    let farthest = -Infinity;
+    let variation = 0;
+    let previous = pred[0];
+    let min = previous;
+    let max = previous;
+    into[SCAN_WORST] = 0;
+    into[SCAN_MIN] = min;
+    into[SCAN_IMIN] = 0;
+    into[SCAN_MAX] = max;
+    into[SCAN_IMAX] = 0;
+    for (let i = 0; i < m; i++) {
+        const v = pred[i];
+        const above = v - hi;
+        const below = lo - v;
+        const distance = Number.isNaN(v) ? Infinity : Math.max(0, above, below);
+        if (distance > farthest) {
+            farthest = distance;
+            const e = pointExcursion(v, lo, hi);
+            if (e > value) {
+                value = e;
+                into[SCAN_WORST] = i;
+            }
+        }
+        if (i > 0)
+            variation += Math.abs(v - previous);
+        previous = v;
+        if (v < min) {
+            min = v;
+            into[SCAN_MIN] = v;
+            into[SCAN_IMIN] = i;
+        }
+        if (v > max) {
+            max = v;
+            into[SCAN_MAX] = v;
+            into[SCAN_IMAX] = i;
+        }
+    }
+    return variation;
+}
+/**
+ * {@link mergedExtremes} of the inside predictions `a` and the margin predictions `b` from the
+ * extremes {@link scanCurve} found over `a` (`scan`) and a short scan of `b`: the first extreme of
+ * each run, then of the two the more extreme value, the earlier in the merged order on a tie.
+ * Null when the plain scan must decide (a run that is empty or starts with a NaN).
+ */
+function extremesFromScan(a, b, place, scan) {
+    if (a.length === 0 || Number.isNaN(a[0]))
+        return null;
+    if (b.length === 0)
+        return [scan[SCAN_IMIN], scan[SCAN_IMAX]];
+    if (Number.isNaN(b[0]))
+        return null;
+    const best = { min: b[0], max: b[0], imin: 0, imax: 0 };
+    extremesOfRun(b, 0, b.length, 0, best);
+    // The merged index of a[i]: i plus the margin points before it (place[k] - k of them are inside points).
+    const iminA = scan[SCAN_IMIN] + marginPointsBefore(place, scan[SCAN_IMIN]);
+    const imaxA = scan[SCAN_IMAX] + marginPointsBefore(place, scan[SCAN_IMAX]);
+    const minA = scan[SCAN_MIN];
+    const maxA = scan[SCAN_MAX];
+    const iminB = place[best.imin];
+    const imaxB = place[best.imax];
+    const imin = best.min < minA || (!(minA < best.min) && iminB < iminA) ? iminB : iminA;
+    const imax = best.max > maxA || (!(maxA > best.max) && imaxB < imaxA) ? imaxB : imaxA;
+    return [imin, imax];
+}
+/** How many points of `b` come before a[i] in the merge of {@link mergedPlaces} (place[k] - k <= i). */
+function marginPointsBefore(place, i) {
+    let count = 0;
+    for (let k = 0; k < place.length; k++)
+        if (place[k] - k <= i)
+            count++;
+    return count;
+}
+/**
  * The inputs of the sampled rows, each divided by its standard deviation over them after taking
  * off their mean (0 for an input without spread), row-major: flat[a * d + c] for the neighbour
  * search.
@@ -15100,7 +16191,10 @@ function planSwing(design, train, options = {}) {
     // they are dropped as new arrays would be).
     const scratch = (0,core_scratch/* borrowDoubles */.an)(n);
     const work = (0,core_scratch/* borrowDoubles */.an)(n);
-    const medians = train.inputs.map((col) => (0,column_median/* columnMedian */.z)(col, n, scratch));
+    // An input whose every row is sorted below takes its median from the sorted values; the
+    // others (categories, samples, transformed scales) by selection after the loop.
+    const medians = train.inputs.map(() => Number.NaN);
+    const fromSorted = train.inputs.map(() => false);
     const radixScratch = new Uint32Array(work.buffer, work.byteOffset, 2 * n);
     const grids = [];
     const lent = [];
@@ -15113,14 +16207,28 @@ function planSwing(design, train, options = {}) {
                 grids.push({ input: c, inside: Float64Array.from(discrete), beyond: new Float64Array(0) });
             continue;
         }
-        const len = gridSample(train.inputs[c], n, options.maxGridRows ?? SWING_DEFAULTS.maxGridRows, scratch);
-        const sample = scratch.subarray(0, len);
+        const maxGridRows = options.maxGridRows ?? SWING_DEFAULTS.maxGridRows;
         // An input every term reads on one transformed scale (log x ...) is scanned on that scale.
         const onScale = inputScaleOf(design, c);
-        if (onScale !== null)
-            for (let i = 0; i < len; i++)
-                sample[i] = onScale.forward(sample[i]);
-        const grid = gridFromSorted((0,radix_sort/* sortFloat64 */.f)(sample, radixScratch), len, gridOptions, work.subarray(0, len));
+        // Every row on the input's own scale: one sort gives the sorted values and each row's slot
+        // among the distinct values (for the spike figure); else (or when that sort declines) a copy
+        // of the rows (or of a sample of them) sorted.
+        let slots = n >= 2 && n <= maxGridRows && onScale === null ? new Int32Array(n) : null;
+        let len = n;
+        if (slots === null || !sortWithSlots(train.inputs[c], n, scratch, slots)) {
+            slots = null;
+            len = gridSample(train.inputs[c], n, maxGridRows, scratch);
+            if (onScale !== null)
+                for (let i = 0; i < len; i++)
+                    scratch[i] = onScale.forward(scratch[i]);
+            (0,radix_sort/* sortFloat64 */.f)(scratch.subarray(0, len), radixScratch);
+        }
+        const sample = scratch.subarray(0, len);
+        if (len === n && n > 0 && onScale === null) {
+            medians[c] = (0,column_median/* medianOfSorted */.$Y)(train.inputs[c], n, sample, work);
+            fromSorted[c] = true;
+        }
+        const grid = gridFromSorted(sample, len, gridOptions, work.subarray(0, len));
         if (onScale !== null) {
             const onInput = grid.inside.map(onScale.inverse);
             (0,core_scratch/* returnDoubles */.TI)(grid.inside);
@@ -15134,10 +16242,13 @@ function planSwing(design, train, options = {}) {
             const beyond = admitted(design, c, grid.beyond);
             // The grid packed the distinct values to the front of the sorted sample (every row here).
             grids.push(whole
-                ? { input: c, inside: grid.inside, beyond, whole, distinct: sample.slice(0, grid.gaps + 1) }
+                ? { input: c, inside: grid.inside, beyond, whole, distinct: sample.slice(0, grid.gaps + 1), ...(slots !== null ? { slots } : {}) }
                 : { input: c, inside: grid.inside, beyond, whole });
         }
     }
+    for (let c = 0; c < medians.length; c++)
+        if (!fromSorted[c])
+            medians[c] = (0,column_median/* columnMedian */.zP)(train.inputs[c], n, scratch);
     (0,core_scratch/* returnDoubles */.TI)(work);
     (0,core_scratch/* returnDoubles */.TI)(scratch);
     // Several inputs: segments between sampled rows and their nearest neighbours.
@@ -15251,13 +16362,22 @@ function scoreSwing(plan, design, coefficients, insideCurves) {
         design.inputs.forEach((name, c) => (inputs[name] = columns[c][i]));
         return { inputs, prediction };
     };
-    /** Scores points (predicted here unless their predictions are given); returns the predictions. */
-    const score = (columns, m, where, given) => {
+    /**
+     * Scores points (predicted here unless their predictions are given); returns the predictions.
+     * With `scan`, the worst point comes from {@link scanCurve}, which fills `scan` too.
+     */
+    const score = (columns, m, where, given, scan) => {
         const pred = given ?? (0,blocks/* predictRows */.tp)(design, { inputs: columns, rows: m }, coefficients);
         if (plan.backTransform !== undefined)
             backTransformInPlace(pred, m, plan.backTransform);
         if (m > 0) {
-            const index = worstExcursionIndex(pred, m, ylo, yhi);
+            let index;
+            if (scan !== undefined) {
+                scan[SCAN_VARIATION] = scanCurve(pred, m, ylo, yhi, scan);
+                index = scan[SCAN_WORST];
+            }
+            else
+                index = worstExcursionIndex(pred, m, ylo, yhi);
             const value = pointExcursion(pred[index], ylo, yhi);
             if (where === 'inside') {
                 if (worstInside === null || value > inside) {
@@ -15284,6 +16404,7 @@ function scoreSwing(plan, design, coefficients, insideCurves) {
         return constants[k].subarray(0, length);
     };
     const curves = [];
+    const scan = new Float64Array(6);
     for (const grid of plan.grids) {
         (0,deadline/* checkDeadline */.Ft)('swing scan');
         const c = grid.input;
@@ -15291,15 +16412,17 @@ function scoreSwing(plan, design, coefficients, insideCurves) {
         const predict = predictorAlong(design, coefficients, c, medians);
         // The inside predictions are lent (core/scratch.ts) and given back before the next input:
         // only figures and copies of them are kept.
-        const pin = score(along(grid.inside), grid.inside.length, 'inside', predict(grid.inside, (0,core_scratch/* borrowDoubles */.an)(grid.inside.length)));
+        // One pass over the inside predictions finds the worst point, the variation and the extremes.
+        const pin = score(along(grid.inside), grid.inside.length, 'inside', predict(grid.inside, (0,core_scratch/* borrowDoubles */.an)(grid.inside.length)), scan);
         const pout = score(along(grid.beyond), grid.beyond.length, 'beyond', predict(grid.beyond));
         if (insideCurves !== undefined && grid.whole === true && readByEveryTerm(design, c)) {
             insideCurves.push({
                 input: c,
                 points: pin.length,
-                variation: totalVariation(pin, pin.length),
+                variation: pin.length > 0 ? scan[SCAN_VARIATION] : 0,
                 ...(plan.backTransform !== undefined ? { backTransform: plan.backTransform } : {}),
                 ...(grid.distinct !== undefined ? { distinct: grid.distinct } : {}),
+                ...(grid.distinct !== undefined && grid.slots !== undefined ? { slots: grid.slots } : {}),
             });
         }
         if (curves.length >= plan.maxCurves) {
@@ -15309,7 +16432,7 @@ function scoreSwing(plan, design, coefficients, insideCurves) {
         // Curve for charts: all points ascending (inside and margins merged), thinned with the
         // extremes kept; only the kept points are read out of the merged order.
         const place = mergedPlaces(grid.inside, grid.beyond);
-        const [imin, imax] = mergedExtremes(pin, pout, place);
+        const [imin, imax] = extremesFromScan(pin, pout, place, scan) ?? mergedExtremes(pin, pout, place);
         const keep = thinIndices(grid.inside.length + grid.beyond.length, maxCurvePoints, [imax, imin]);
         const others = Object.create(null);
         design.inputs.forEach((name, k) => {
@@ -15951,28 +17074,18 @@ async function runCheck(settings, options) {
 
 /***/ }),
 
-/***/ 9656:
+/***/ 3783:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
-
-// EXPORTS
-__nccwpck_require__.d(__webpack_exports__, {
-  hy: () => (/* binding */ openModelSpool)
-});
-
-// UNUSED EXPORTS: SPOOL_READ_BYTES, SPOOL_RENDER, SPOOL_SUFFIX, renderForSpool, smallCopy
-
-// EXTERNAL MODULE: external "node:fs"
-var external_node_fs_ = __nccwpck_require__(3024);
-;// CONCATENATED MODULE: external "node:string_decoder"
-const external_node_string_decoder_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:string_decoder");
-// EXTERNAL MODULE: ./src/report/json.ts
-var json = __nccwpck_require__(2794);
-// EXTERNAL MODULE: ./src/run/model-handoff.ts
-var model_handoff = __nccwpck_require__(9107);
-// EXTERNAL MODULE: ./src/entries/safe-write.ts
-var safe_write = __nccwpck_require__(9725);
-;// CONCATENATED MODULE: ./src/entries/model-spool.ts
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   hy: () => (/* binding */ openModelSpool)
+/* harmony export */ });
+/* unused harmony exports SPOOL_READ_BYTES, SPOOL_SUFFIX, smallCopy, SPOOL_RENDER, renderForSpool */
+/* harmony import */ var node_fs__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(3024);
+/* harmony import */ var node_fs__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_fs__WEBPACK_IMPORTED_MODULE_0__);
+/* harmony import */ var _report_json_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(2794);
+/* harmony import */ var _run_model_handoff_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(9107);
+/* harmony import */ var _safe_write_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(9725);
 /**
  * Each model's part of the JSON report set aside while the run goes on: a run that writes only
  * the JSON report to a file (`fitgate check --format json --out FILE`) renders each model's text
@@ -15993,7 +17106,6 @@ var safe_write = __nccwpck_require__(9725);
  * refused, a full disk), the text is kept in memory instead and the report's own write reports the
  * problem, as without a spool. Without a target, the text is kept in memory.
  */
-
 
 
 
@@ -16034,18 +17146,18 @@ const SPOOL_RENDER = 'json-model-spool';
  * @param model a model's outcome
  */
 function renderForSpool(model) {
-    return { kept: smallCopy(model), text: [...(0,json/* jsonModelReport */.ml)(model)].join('') };
+    return { kept: smallCopy(model), text: [...(0,_report_json_js__WEBPACK_IMPORTED_MODULE_1__/* .jsonModelReport */ .ml)(model)].join('') };
 }
 // Registered on every thread that loads this module (worker threads load the CLI bundle whole).
-(0,model_handoff/* registerModelRender */.r9)(SPOOL_RENDER, renderForSpool);
+(0,_run_model_handoff_js__WEBPACK_IMPORTED_MODULE_2__/* .registerModelRender */ .r9)(SPOOL_RENDER, renderForSpool);
 /**
  * Opens a spool for one run.
  * @param target the report file the text is for (the spool file goes beside it), or undefined to keep the text in memory
  * @param hooks replaced file operations, for tests; default none
  */
 function openModelSpool(target, hooks = {}) {
-    const write = hooks.write ?? external_node_fs_.writeSync;
-    const read = hooks.read ?? external_node_fs_.readSync;
+    const write = hooks.write ?? node_fs__WEBPACK_IMPORTED_MODULE_0__.writeSync;
+    const read = hooks.read ?? node_fs__WEBPACK_IMPORTED_MODULE_0__.readSync;
     let texts = new Map();
     let extents = new Map();
     // The spool file: undefined until the first model, null when there is none (no target, or it failed).
@@ -16058,7 +17170,7 @@ function openModelSpool(target, hooks = {}) {
             return null;
         let opened;
         try {
-            opened = (0,safe_write/* openTempBeside */.rB)(target.file, target.place, SPOOL_SUFFIX);
+            opened = (0,_safe_write_js__WEBPACK_IMPORTED_MODULE_3__/* .openTempBeside */ .rB)(target.file, target.place, SPOOL_SUFFIX);
         }
         catch {
             // The report's own write meets the same problem and reports it.
@@ -16066,7 +17178,7 @@ function openModelSpool(target, hooks = {}) {
         }
         named = true;
         try {
-            (0,external_node_fs_.unlinkSync)(opened.path);
+            (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.unlinkSync)(opened.path);
             named = false;
         }
         catch {
@@ -16093,10 +17205,9 @@ function openModelSpool(target, hooks = {}) {
         end += bytes.length;
         return true;
     };
-    // One buffer for every read of the run (a piece is a string made from it, so it is not kept).
+    // One buffer for every read of the run: the bytes go to the report as they are, never decoded.
     let buffer = null;
     const fileText = function* (spool, extent) {
-        const decoder = new external_node_string_decoder_namespaceObject.StringDecoder('utf8');
         buffer ??= Buffer.allocUnsafe(SPOOL_READ_BYTES);
         const chunk = buffer;
         // Each round reads at least one byte, so this ends after at most extent.bytes rounds.
@@ -16105,11 +17216,8 @@ function openModelSpool(target, hooks = {}) {
             if (!(n > 0))
                 throw new Error('the model spool file ended early');
             done += n;
-            yield decoder.write(chunk.subarray(0, n));
+            yield chunk.subarray(0, n);
         }
-        const rest = decoder.end();
-        if (rest !== '')
-            yield rest;
     };
     const take = ({ kept, text }) => {
         if (file === undefined)
@@ -16152,14 +17260,14 @@ function openModelSpool(target, hooks = {}) {
             extents = new Map();
             if (file !== null && file !== undefined) {
                 try {
-                    (0,external_node_fs_.closeSync)(file.fd);
+                    (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.closeSync)(file.fd);
                 }
                 catch {
                     // closed already; nothing more to free
                 }
                 if (named) {
                     try {
-                        (0,external_node_fs_.unlinkSync)(file.path);
+                        (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.unlinkSync)(file.path);
                     }
                     catch {
                         // gone already
@@ -16184,11 +17292,24 @@ function openModelSpool(target, hooks = {}) {
 /* unused harmony export batches */
 /** Bytes gathered before each write. */
 const WRITE_BUFFER_BYTES = 1 << 20;
-/** Groups pieces into strings of about {@link WRITE_BUFFER_BYTES} UTF-16 units (one buffer each). */
+/**
+ * Groups pieces into strings of about {@link WRITE_BUFFER_BYTES} UTF-16 units (one buffer each).
+ * A piece of bytes (UTF-8 text already) ends the batch before it and is handed on as a copy of
+ * its own (the source may use its buffer again for the next piece).
+ */
 function* batches(pieces) {
     let parts = [];
     let size = 0;
     for (const piece of pieces) {
+        if (typeof piece !== 'string') {
+            if (size > 0)
+                yield parts.join('');
+            parts = [];
+            size = 0;
+            if (piece.length > 0)
+                yield Buffer.from(piece);
+            continue;
+        }
         parts.push(piece);
         size += piece.length;
         if (size >= WRITE_BUFFER_BYTES) {
@@ -16280,12 +17401,27 @@ function drained(stream) {
  * one buffer that is used again for the next batch (the caller writes each batch before asking
  * for the next): a report of any size is written through one buffer, with no string or buffer
  * per batch left for the garbage collector. A piece that could need more than the whole buffer
- * (3 bytes per UTF-16 unit at most) is its own batch.
+ * (3 bytes per UTF-16 unit at most) is its own batch. A piece of bytes (UTF-8 text already) is
+ * copied in as it is, or is its own batch when larger than the buffer.
  */
 function* encodedBatches(pieces) {
     const buffer = Buffer.allocUnsafe(_report_file_js__WEBPACK_IMPORTED_MODULE_4__/* .WRITE_BUFFER_BYTES */ .nM);
     let used = 0;
     for (const piece of pieces) {
+        if (typeof piece !== 'string') {
+            if (piece.length > buffer.length - used) {
+                if (used > 0)
+                    yield buffer.subarray(0, used);
+                used = 0;
+                if (piece.length > buffer.length) {
+                    yield piece;
+                    continue;
+                }
+            }
+            buffer.set(piece, used);
+            used += piece.length;
+            continue;
+        }
         const most = piece.length * 3;
         if (most > buffer.length - used) {
             if (used > 0)
@@ -18656,7 +19792,8 @@ function twoProductError(a, b, prod) {
  * lexically (no absolute paths, no `..` above the root) and then through the file system
  * (the real path, with every symbolic link at any level followed, must stay inside the
  * root's real path) before anything is opened; the real path is what gets opened. A path's real
- * path, once found inside the root, is kept for the reader's life (one run).
+ * path, once found inside the root, and a regular file's size are kept for the reader's life (one
+ * run).
  *
  * The file system calls are synchronous behind the asynchronous interface: a run reads its files
  * one after another (models run in parallel on worker threads, each with its own reader), and a
@@ -18691,12 +19828,49 @@ function createFsRepository(root) {
     // several times (resolved from its descriptor, sized, read), and the answer is the same within
     // one run. Only paths found inside are kept; a missing path is looked up again each time.
     const knownInside = new Map();
+    // Sizes of regular files already found, by real path: a run asks for a data file's kind and
+    // size several times (planned, sized, read). The size checked against the limits is the one
+    // found first; a read still goes to the file's end as it is then.
+    const fileSize = new Map();
+    /**
+     * The real path of `rel` when its folder's real path is known (found inside the root before, or
+     * found now the same way) and its last name is no link: that folder's real path joined with the
+     * name, one `lstat` instead of a `realpath` of the whole path (which reads every folder on the
+     * way again). Undefined when that does not apply (a link, nothing there, a folder not found): the
+     * caller then resolves the whole path. A regular file's size is kept as {@link kindOf} keeps it.
+     */
+    const plainChild = (rel, base, depth) => {
+        if (rel === '' || depth > MAX_PLAIN_DEPTH)
+            return undefined;
+        const slash = rel.lastIndexOf('/');
+        const folderRel = slash < 0 ? '' : rel.slice(0, slash);
+        const folder = folderRel === '' ? base : (knownInside.get(folderRel) ?? plainChild(folderRel, base, depth + 1));
+        if (folder === undefined)
+            return undefined;
+        const candidate = node_path__WEBPACK_IMPORTED_MODULE_1__.join(folder, rel.slice(slash + 1));
+        let info;
+        try {
+            info = (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.lstatSync)(candidate, { throwIfNoEntry: false });
+        }
+        catch {
+            return undefined;
+        }
+        if (info === undefined || info.isSymbolicLink())
+            return undefined;
+        knownInside.set(rel, candidate);
+        if (info.isFile())
+            fileSize.set(candidate, info.size);
+        return candidate;
+    };
     /** The real path of a normalised repository-relative path, or null when nothing is there. */
     const realInside = async (rel, where, shown) => {
         const known = knownInside.get(rel);
         if (known !== undefined)
             return known;
         const base = await rootReal();
+        const plain = plainChild(rel, base, 0);
+        if (plain !== undefined)
+            return plain;
         const full = rel === '' ? base : node_path__WEBPACK_IMPORTED_MODULE_1__.join(base, rel);
         let real = null;
         try {
@@ -18733,7 +19907,7 @@ function createFsRepository(root) {
         return real;
     };
     const check = async (path) => realInside((0,_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .normaliseRepoPath */ .Gn)(path), { file: path }, path);
-    /** What `path` names, and its real path and file information when something is there. */
+    /** What `path` names, and its real path when something is there (and its size when it is a file). */
     const kindOf = async (path) => {
         const real = await check(path);
         if (real === null) {
@@ -18748,17 +19922,23 @@ function createFsRepository(root) {
                 return { kind: 'missing', real: null };
             }
         }
+        const known = fileSize.get(real);
+        if (known !== undefined)
+            return { kind: 'file', real, size: known };
         const info = await stat(real, { file: path });
-        return { kind: info.isFile() ? 'file' : info.isDirectory() ? 'folder' : 'special', real, info };
+        if (!info.isFile())
+            return { kind: info.isDirectory() ? 'folder' : 'special', real };
+        fileSize.set(real, info.size);
+        return { kind: 'file', real, size: info.size };
     };
-    /** The real path of a regular file and its information; InputError otherwise. */
+    /** The real path of a regular file and its size; InputError otherwise. */
     const requireFile = async (path) => {
-        const { kind, real, info } = await kindOf(path);
+        const { kind, real, size } = await kindOf(path);
         if (kind === 'missing')
             throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .FILE_MISSING */ .GY, `no such file in ${rootAbsolute}; expected an existing file`, { file: path });
-        if (kind !== 'file' || real === null || info === undefined)
+        if (kind !== 'file' || real === null || size === undefined)
             throw (0,_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .notAFileError */ .V5)(kind === 'file' ? 'special' : kind, { file: path });
-        return { real, info };
+        return { real, size };
     };
     return {
         label: rootAbsolute,
@@ -18775,7 +19955,7 @@ function createFsRepository(root) {
             return (await kindOf(path)).kind;
         },
         async size(path) {
-            return (await requireFile(path)).info.size;
+            return (await requireFile(path)).size;
         },
         async read(path) {
             const { real } = await requireFile(path);
@@ -18787,7 +19967,7 @@ function createFsRepository(root) {
             }
         },
         async *stream(path, chunkBytes = 1024 * 1024) {
-            const { real, info } = await requireFile(path);
+            const { real, size: fileBytes } = await requireFile(path);
             let fd;
             try {
                 fd = (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.openSync)(real, 'r');
@@ -18802,7 +19982,7 @@ function createFsRepository(root) {
                 // keep a previous one; a piece is filled until it is full or a read finds the end, so a
                 // small file is one buffer and the read that finds its end goes into that buffer's room.
                 const most = Math.max(1, Math.floor(chunkBytes));
-                let size = Math.min(most, info.size + 1);
+                let size = Math.min(most, fileBytes + 1);
                 for (;;) {
                     const piece = Buffer.allocUnsafe(size);
                     let filled = 0;
@@ -18825,7 +20005,7 @@ function createFsRepository(root) {
                         yield filled === size ? piece : piece.subarray(0, filled);
                     if (ended)
                         return;
-                    size = Math.min(most, Math.max(65_536, info.size + 1));
+                    size = Math.min(most, Math.max(65_536, fileBytes + 1));
                 }
             }
             finally {
@@ -18856,6 +20036,8 @@ async function stat(path, where) {
         throw (0,_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .unreadableError */ .Sw)(error, where);
     }
 }
+/** Folders above a path resolved one name at a time before the whole path is resolved at once. */
+const MAX_PLAIN_DEPTH = 64;
 function isInside(base, real) {
     const rel = node_path__WEBPACK_IMPORTED_MODULE_1__.relative(base, real);
     return rel === '' || (rel !== '..' && !rel.startsWith(`..${node_path__WEBPACK_IMPORTED_MODULE_1__.sep}`) && !node_path__WEBPACK_IMPORTED_MODULE_1__.isAbsolute(rel));
@@ -19591,7 +20773,9 @@ function escapeMermaid(text) {
  * native `JSON.stringify`, its size bounded by the run's chart data), to write one after another:
  * joined, they are {@link formatJson}'s text. A run of any number of models is written without
  * ever being one string. Each piece is neutralised ({@link neutraliseJson});
- * a piece never splits a JSON string, so no `##[` can span two pieces.
+ * a piece never splits a JSON string, so no `##[` can span two pieces. The pieces of a model's text
+ * rendered earlier ({@link JsonReportOptions.modelText}: neutralised when rendered) pass as they
+ * are, strings or bytes.
  */
 function* jsonReport(result, options = {}) {
     const modelText = options.modelText;
@@ -19613,6 +20797,7 @@ function* jsonReport(result, options = {}) {
                 written = false;
             })();
         };
+    // Pieces of text written earlier pass as they are; the walk's own pieces are strings.
     for (const piece of (0,_core_json_pieces_js__WEBPACK_IMPORTED_MODULE_1__/* .jsonPieces */ .M)(result, { depth: MODEL_DEPTH, substitute }))
         yield written ? piece : (0,_runner_commands_js__WEBPACK_IMPORTED_MODULE_0__/* .neutraliseJson */ .rb)(piece);
     yield '\n';
@@ -20683,7 +21868,7 @@ function buildChartData(model, checks, maxPoints = _result_chart_types_js__WEBPA
             no_points: share.noPoints,
         };
     }
-    const medians = train.inputs.map((col) => (0,_diagnostics_column_median_js__WEBPACK_IMPORTED_MODULE_3__/* .columnMedian */ .z)(col, train.rows));
+    const medians = train.inputs.map((col) => (0,_diagnostics_column_median_js__WEBPACK_IMPORTED_MODULE_3__/* .columnMedian */ .zP)(col, train.rows));
     let spread = 0;
     for (let c = 0; c < inputs.length; c++) {
         const [lo, hi] = (0,_design_stats_js__WEBPACK_IMPORTED_MODULE_7__/* .range */ .y1)(train.inputs[c], train.rows);
@@ -20833,8 +22018,8 @@ var schema_errors = __nccwpck_require__(3119);
 var schemas = __nccwpck_require__(9602);
 // EXTERNAL MODULE: ./src/config/settings-file.ts
 var settings_file = __nccwpck_require__(4140);
-// EXTERNAL MODULE: ./src/config/yaml-source.ts
-var yaml_source = __nccwpck_require__(2865);
+// EXTERNAL MODULE: ./src/config/yaml-source.ts + 1 modules
+var yaml_source = __nccwpck_require__(3700);
 // EXTERNAL MODULE: external "node:path"
 var external_node_path_ = __nccwpck_require__(6760);
 // EXTERNAL MODULE: ./src/core/errors.ts
@@ -21374,8 +22559,8 @@ var cross_validation = __nccwpck_require__(4733);
 var diagnostics_folds = __nccwpck_require__(9236);
 // EXTERNAL MODULE: ./src/diagnostics/leakage.ts
 var diagnostics_leakage = __nccwpck_require__(2918);
-// EXTERNAL MODULE: ./src/diagnostics/swing.ts + 1 modules
-var swing = __nccwpck_require__(309);
+// EXTERNAL MODULE: ./src/diagnostics/swing.ts + 3 modules
+var swing = __nccwpck_require__(2331);
 ;// CONCATENATED MODULE: ./src/diagnostics/analyses.ts
 
 
@@ -22870,8 +24055,8 @@ var deadline = __nccwpck_require__(2091);
 var format = __nccwpck_require__(6228);
 // EXTERNAL MODULE: ./src/diagnostics/complexity.ts + 1 modules
 var complexity = __nccwpck_require__(7070);
-// EXTERNAL MODULE: ./src/diagnostics/swing.ts + 1 modules
-var swing = __nccwpck_require__(309);
+// EXTERNAL MODULE: ./src/diagnostics/swing.ts + 3 modules
+var swing = __nccwpck_require__(2331);
 // EXTERNAL MODULE: ./src/result/chart-types.ts
 var chart_types = __nccwpck_require__(3473);
 ;// CONCATENATED MODULE: ./src/run/cost.ts
