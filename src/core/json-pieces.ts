@@ -71,15 +71,14 @@ export function* jsonPiecesAt<P extends string | Uint8Array = string>(
 }
 
 /**
- * `JSON.stringify(value, null, 2)` with every line after the first indented `level` more steps:
- * the value stringified inside `level` one-element arrays (whose lines JSON.stringify indents
- * itself), the arrays' own brackets cut off. One native call, no second pass over the text.
+ * The value stringified inside `level` one-element arrays (whose lines JSON.stringify indents
+ * itself), and how many characters of the arrays' own brackets stand before and after it (ASCII,
+ * so as many bytes). One native call, no second pass over the text.
  */
-function indented(value: unknown, level: number): string {
+function wrappedText(value: unknown, level: number): { text: string; head: number; tail: number } {
   let wrapped = value;
   for (let l = 0; l < level; l++) wrapped = [wrapped];
   const text = JSON.stringify(wrapped, null, 2) ?? 'null';
-  if (level === 0) return text;
   // Openers: `[` then a line break and one more step of indent per level; closers the mirror image.
   let head = 0;
   let tail = 0;
@@ -87,7 +86,32 @@ function indented(value: unknown, level: number): string {
     head += 1 + 1 + INDENT.length * (l + 1);
     tail += 1 + INDENT.length * l + 1;
   }
-  return text.slice(head, text.length - tail);
+  return { text, head, tail };
+}
+
+/**
+ * `JSON.stringify(value, null, 2)` with every line after the first indented `level` more steps
+ * ({@link wrappedText} with the brackets cut off).
+ */
+function indented(value: unknown, level: number): string {
+  const { text, head, tail } = wrappedText(value, level);
+  return level === 0 ? text : text.slice(head, text.length - tail);
+}
+
+/**
+ * The UTF-8 bytes of `value` stringified whole as {@link jsonPiecesAt} writes it `level` containers
+ * deep when `level` is at least its walking depth (one piece): `transform(text)` encoded, where
+ * `transform` must leave the text's ASCII brackets, line breaks and indentation around the value
+ * as they are (an escape of characters inside its strings does). The brackets of the wrapping are
+ * cut off the bytes, so the text is never copied to drop them.
+ * @param value a JSON-compatible value (no `toJSON` at its top)
+ * @param level its nesting level
+ * @param transform applied to the whole text before encoding; default none
+ */
+export function jsonBytesAt(value: unknown, level: number, transform: (text: string) => string = (text) => text): Uint8Array {
+  const { text, head, tail } = wrappedText(value, level);
+  const bytes = Buffer.from(transform(text), 'utf8');
+  return level === 0 ? bytes : bytes.subarray(head, bytes.length - tail);
 }
 
 function* piecesOf<P extends string | Uint8Array>(

@@ -19,7 +19,7 @@
  * problem, as without a spool. Without a target, the text is kept in memory.
  */
 import { closeSync, readSync, unlinkSync, writeSync } from 'node:fs';
-import { jsonModelReport } from '../report/json.js';
+import { jsonModelBytes } from '../report/json.js';
 import type { ModelResult } from '../result/result.js';
 import { registerModelRender, type ModelHandoff, type RenderedModel } from '../run/model-handoff.js';
 import { openTempBeside, type TempFile, type WritePlace } from './safe-write.js';
@@ -35,11 +35,11 @@ export interface ModelSpool {
   handoff: ModelHandoff;
   /**
    * The text set aside for a copy {@link keep} returned, in pieces, or undefined for any other
-   * model: one string when it was kept in memory; read from the spool file, its UTF-8 bytes as they
+   * model: its UTF-8 bytes, whole when they were kept in memory; read from the spool file as they
    * are asked for, in one buffer used again for the next piece (so each piece is valid until the
    * next is asked for). A piece that cannot be read throws.
    */
-  text(model: ModelResult): Iterable<string | Uint8Array> | undefined;
+  text(model: ModelResult): Iterable<Uint8Array> | undefined;
   /** Drops every text, closes and removes the spool file (calling it again does nothing); {@link keep} then returns models whole. */
   close(): void;
 }
@@ -87,12 +87,12 @@ export function smallCopy(model: ModelResult): ModelResult {
 export const SPOOL_RENDER = 'json-model-spool';
 
 /**
- * A model's small copy ({@link smallCopy}) and its part of the JSON report (report/json.ts
- * `jsonModelReport`), joined into one string.
+ * A model's small copy ({@link smallCopy}) and its part of the JSON report as UTF-8 bytes
+ * (report/json.ts `jsonModelBytes`: `jsonModelReport`'s text, encoded).
  * @param model a model's outcome
  */
 export function renderForSpool(model: ModelResult): RenderedModel {
-  return { kept: smallCopy(model), text: [...jsonModelReport(model)].join('') };
+  return { kept: smallCopy(model), text: jsonModelBytes(model) };
 }
 
 // Registered on every thread that loads this module (worker threads load the CLI bundle whole).
@@ -120,7 +120,7 @@ export interface SpoolHooks {
 export function openModelSpool(target?: SpoolTarget, hooks: SpoolHooks = {}): ModelSpool {
   const write = hooks.write ?? writeSync;
   const read = hooks.read ?? readSync;
-  let texts = new Map<ModelResult, string>();
+  let texts = new Map<ModelResult, Uint8Array>();
   let extents = new Map<ModelResult, Extent>();
   // The spool file: undefined until the first model, null when there is none (no target, or it failed).
   let file: TempFile | null | undefined = target === undefined ? null : undefined;
@@ -147,8 +147,7 @@ export function openModelSpool(target?: SpoolTarget, hooks: SpoolHooks = {}): Mo
     return opened;
   };
   /** Appends `text` to the spool file; false (nothing kept there) when the write fails. */
-  const append = (spool: TempFile, copy: ModelResult, text: string): boolean => {
-    const bytes = Buffer.from(text, 'utf8');
+  const append = (spool: TempFile, copy: ModelResult, bytes: Uint8Array): boolean => {
     try {
       // Each round writes at least one byte, so this ends after at most bytes.length rounds.
       for (let offset = 0; offset < bytes.length; ) {

@@ -1,7 +1,7 @@
 /**
  * The JSON report: the Result exactly as the pipeline returned it.
  */
-import { jsonPieces, jsonPiecesAt } from '../core/json-pieces.js';
+import { jsonBytesAt, jsonPieces, jsonPiecesAt } from '../core/json-pieces.js';
 import type { ModelResult, Result } from '../result/result.js';
 import { neutraliseJson } from './runner-commands.js';
 
@@ -63,6 +63,14 @@ export interface JsonReportOptions<P extends string | Uint8Array = string> {
  */
 export function* jsonModelReport(model: ModelResult): Generator<string> {
   for (const piece of jsonPiecesAt(model, 2, { depth: MODEL_DEPTH })) yield neutraliseJson(piece);
+}
+
+/**
+ * {@link jsonModelReport}'s text as UTF-8 bytes, exactly: the model is one piece at its level, and
+ * {@link neutraliseJson} changes only characters inside its strings, never the brackets around it.
+ */
+export function jsonModelBytes(model: ModelResult): Uint8Array {
+  return jsonBytesAt(model, 2, neutraliseJson);
 }
 
 /**

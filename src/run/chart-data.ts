@@ -102,8 +102,9 @@ function partIndex(data: ModelData, keep: Int32Array): { files?: string[]; file_
 
 /** {@link chartNumber} of the kept rows of a column, in the order of `keep`. */
 function pickRows(col: ArrayLike<number>, keep: Int32Array): (number | null)[] {
-  const out: (number | null)[] = [];
-  for (let t = 0; t < keep.length; t++) out.push(chartNumber(col[keep[t]]));
+  // Made at its length (one backing store, not grown push by push) and filled in order.
+  const out = new Array<number | null>(keep.length);
+  for (let t = 0; t < keep.length; t++) out[t] = chartNumber(col[keep[t]]);
   return out;
 }
 
@@ -111,11 +112,11 @@ function series(data: ModelData, predictions: Float64Array, max: number, numbers
   const keep = thinRows(data.rows, seriesPoints(data.inputs.length, max, numbers));
   const thinned = keep.length < data.rows;
   // Plain loops over the kept rows (`Array.from` with a mapping function is several times slower).
-  const lines: number[] = [];
-  const residual: (number | null)[] = [];
-  if (data.parts === undefined || data.parts.length === 0) for (let t = 0; t < keep.length; t++) lines.push(data.lines[keep[t]]);
-  else for (let t = 0; t < keep.length; t++) lines.push(placeOfLine(data, data.lines[keep[t]]).line);
-  for (let t = 0; t < keep.length; t++) residual.push(chartNumber(data.y[keep[t]] - predictions[keep[t]]));
+  const lines = new Array<number>(keep.length);
+  const residual = new Array<number | null>(keep.length);
+  if (data.parts === undefined || data.parts.length === 0) for (let t = 0; t < keep.length; t++) lines[t] = data.lines[keep[t]];
+  else for (let t = 0; t < keep.length; t++) lines[t] = placeOfLine(data, data.lines[keep[t]]).line;
+  for (let t = 0; t < keep.length; t++) residual[t] = chartNumber(data.y[keep[t]] - predictions[keep[t]]);
   return {
     rows: data.rows,
     shown: keep.length,

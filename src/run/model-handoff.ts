@@ -3,7 +3,7 @@
  * rendered on the thread that evaluated it (a worker thread too) into the small copy the Result
  * keeps and the model's report text, then taken on the main thread (which sets the text aside,
  * entries/model-spool.ts). Rendering where the model ran spreads that work over the threads, and
- * only the copy and a string cross between them instead of the outcome's whole object graph.
+ * only the copy and the text's bytes cross between them instead of the outcome's whole object graph.
  *
  * A worker thread cannot receive a function, so a render is found by name: the module that defines
  * it registers it when it loads, on every thread that loads it (the CLI bundle is one file, which
@@ -16,8 +16,8 @@ import type { ModelResult } from '../result/result.js';
 export interface RenderedModel {
   /** What the Result keeps of the model (a small copy). */
   kept: ModelResult;
-  /** The model's part of the report, as text. */
-  text: string;
+  /** The model's part of the report, as UTF-8 bytes. */
+  text: Uint8Array;
 }
 
 /** Renders one model's outcome; must give the same on every thread. */

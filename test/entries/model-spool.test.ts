@@ -28,6 +28,12 @@ import type { ModelResult } from '../../src/result/result.js';
 import { runPipeline } from '../../src/run/pipeline.js';
 import { defaultSettings } from '../../src/run/settings.js';
 
+/** Pieces of text and of UTF-8 bytes joined into one string. */
+const joined = (pieces: Iterable<string | Uint8Array>): string =>
+  Buffer.concat(Array.from(pieces, (piece) => (typeof piece === 'string' ? Buffer.from(piece, 'utf8') : Buffer.from(piece)))).toString(
+    'utf8',
+  );
+
 const examples = (name: string): string => path.resolve(fileURLToPath(new URL(`../../examples/${name}`, import.meta.url)));
 
 describe('the model spool', () => {
@@ -60,7 +66,7 @@ describe('the model spool', () => {
         expect(small.counts).toEqual(whole.counts);
         expect(small.verdict).toBe(whole.verdict);
         expect(whole.models.some((m) => m.charts !== undefined || m.classifier_charts !== undefined)).toBe(true);
-        const text = [...jsonReport(small, { modelText: spool.text })].join('');
+        const text = joined(jsonReport(small, { modelText: spool.text }));
         expect(text).toBe(formatJson(whole));
         expect(text).toBe([...jsonReport(whole)].join(''));
         // Without the spool's text, the small copies are what is written.
@@ -78,7 +84,7 @@ describe('the model spool', () => {
     const spool = openModelSpool();
     try {
       const small = { ...hostile, models: hostile.models.map((m) => spool.keep(m)) };
-      const text = [...jsonReport(small, { modelText: spool.text })].join('');
+      const text = joined(jsonReport(small, { modelText: spool.text }));
       expect(text).toBe(formatJson(hostile));
       expect(text).not.toContain('##[');
       expect(text).not.toContain('\u2028');
@@ -116,7 +122,7 @@ describe('the model spool', () => {
     const spool = openModelSpool();
     const kept = spool.keep(model);
     const written = spool.text(kept);
-    expect(written === undefined ? undefined : [...written].join('')).toBe(
+    expect(written === undefined ? undefined : joined(written)).toBe(
       formatJson({ ...result, models: [model] })
         .split('\n  "models": [\n    ')[1]
         .split('\n  ],\n')[0],
@@ -200,7 +206,7 @@ describe('the spool file beside the report', () => {
     const spool = openModelSpool(c.target);
     try {
       const { whole, small } = await spooledRun(spool);
-      expect([...jsonReport(small, { modelText: spool.text })].join('')).toBe(formatJson(whole));
+      expect(joined(jsonReport(small, { modelText: spool.text }))).toBe(formatJson(whole));
       let error: unknown;
       try {
         writeFileSafely(c.target.file, jsonReport(small, { modelText: spool.text }), c.target.place);
@@ -222,7 +228,7 @@ describe('the spool file beside the report', () => {
     const spool = openModelSpool(c.target);
     try {
       const { whole, small } = await spooledRun(spool);
-      expect([...jsonReport(small, { modelText: spool.text })].join('')).toBe(formatJson(whole));
+      expect(joined(jsonReport(small, { modelText: spool.text }))).toBe(formatJson(whole));
     } finally {
       spool.close();
     }
