@@ -8856,9 +8856,10 @@ function withoutTrailingZeros(text) {
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   M: () => (/* binding */ jsonPieces),
-/* harmony export */   h: () => (/* binding */ jsonPiecesAt)
+/* harmony export */   Mx: () => (/* binding */ jsonPieces),
+/* harmony export */   XC: () => (/* binding */ jsonBytesAt)
 /* harmony export */ });
+/* unused harmony export jsonPiecesAt */
 /**
  * JSON text in pieces: exactly the text `JSON.stringify(value, null, 2)` gives, cut so that no
  * piece holds more than one branch of the value. A report of any number of models is then written
@@ -8904,17 +8905,15 @@ function* jsonPiecesAt(value, level, options = {}) {
     yield* piecesOf(isWritten(v) ? v : null, level, options.depth ?? 4, options.substitute);
 }
 /**
- * `JSON.stringify(value, null, 2)` with every line after the first indented `level` more steps:
- * the value stringified inside `level` one-element arrays (whose lines JSON.stringify indents
- * itself), the arrays' own brackets cut off. One native call, no second pass over the text.
+ * The value stringified inside `level` one-element arrays (whose lines JSON.stringify indents
+ * itself), and how many characters of the arrays' own brackets stand before and after it (ASCII,
+ * so as many bytes). One native call, no second pass over the text.
  */
-function indented(value, level) {
+function wrappedText(value, level) {
     let wrapped = value;
     for (let l = 0; l < level; l++)
         wrapped = [wrapped];
     const text = JSON.stringify(wrapped, null, 2) ?? 'null';
-    if (level === 0)
-        return text;
     // Openers: `[` then a line break and one more step of indent per level; closers the mirror image.
     let head = 0;
     let tail = 0;
@@ -8922,7 +8921,30 @@ function indented(value, level) {
         head += 1 + 1 + INDENT.length * (l + 1);
         tail += 1 + INDENT.length * l + 1;
     }
-    return text.slice(head, text.length - tail);
+    return { text, head, tail };
+}
+/**
+ * `JSON.stringify(value, null, 2)` with every line after the first indented `level` more steps
+ * ({@link wrappedText} with the brackets cut off).
+ */
+function indented(value, level) {
+    const { text, head, tail } = wrappedText(value, level);
+    return level === 0 ? text : text.slice(head, text.length - tail);
+}
+/**
+ * The UTF-8 bytes of `value` stringified whole as {@link jsonPiecesAt} writes it `level` containers
+ * deep when `level` is at least its walking depth (one piece): `transform(text)` encoded, where
+ * `transform` must leave the text's ASCII brackets, line breaks and indentation around the value
+ * as they are (an escape of characters inside its strings does). The brackets of the wrapping are
+ * cut off the bytes, so the text is never copied to drop them.
+ * @param value a JSON-compatible value (no `toJSON` at its top)
+ * @param level its nesting level
+ * @param transform applied to the whole text before encoding; default none
+ */
+function jsonBytesAt(value, level, transform = (text) => text) {
+    const { text, head, tail } = wrappedText(value, level);
+    const bytes = Buffer.from(transform(text), 'utf8');
+    return level === 0 ? bytes : bytes.subarray(head, bytes.length - tail);
 }
 function* piecesOf(value, level, depth, substitute) {
     const given = substitute?.(value);
@@ -17141,12 +17163,12 @@ function smallCopy(model) {
 /** Name of the spool's render in the registry of run/model-handoff.ts. */
 const SPOOL_RENDER = 'json-model-spool';
 /**
- * A model's small copy ({@link smallCopy}) and its part of the JSON report (report/json.ts
- * `jsonModelReport`), joined into one string.
+ * A model's small copy ({@link smallCopy}) and its part of the JSON report as UTF-8 bytes
+ * (report/json.ts `jsonModelBytes`: `jsonModelReport`'s text, encoded).
  * @param model a model's outcome
  */
 function renderForSpool(model) {
-    return { kept: smallCopy(model), text: [...(0,_report_json_js__WEBPACK_IMPORTED_MODULE_1__/* .jsonModelReport */ .ml)(model)].join('') };
+    return { kept: smallCopy(model), text: (0,_report_json_js__WEBPACK_IMPORTED_MODULE_1__/* .jsonModelBytes */ .ZL)(model) };
 }
 // Registered on every thread that loads this module (worker threads load the CLI bundle whole).
 (0,_run_model_handoff_js__WEBPACK_IMPORTED_MODULE_2__/* .registerModelRender */ .r9)(SPOOL_RENDER, renderForSpool);
@@ -17187,8 +17209,7 @@ function openModelSpool(target, hooks = {}) {
         return opened;
     };
     /** Appends `text` to the spool file; false (nothing kept there) when the write fails. */
-    const append = (spool, copy, text) => {
-        const bytes = Buffer.from(text, 'utf8');
+    const append = (spool, copy, bytes) => {
         try {
             // Each round writes at least one byte, so this ends after at most bytes.length rounds.
             for (let offset = 0; offset < bytes.length;) {
@@ -20758,9 +20779,9 @@ function escapeMermaid(text) {
 
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
 /* harmony export */   L7: () => (/* binding */ jsonReport),
-/* harmony export */   ml: () => (/* binding */ jsonModelReport)
+/* harmony export */   ZL: () => (/* binding */ jsonModelBytes)
 /* harmony export */ });
-/* unused harmony export formatJson */
+/* unused harmony exports jsonModelReport, formatJson */
 /* harmony import */ var _core_json_pieces_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(1629);
 /* harmony import */ var _runner_commands_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(673);
 /**
@@ -20798,7 +20819,7 @@ function* jsonReport(result, options = {}) {
             })();
         };
     // Pieces of text written earlier pass as they are; the walk's own pieces are strings.
-    for (const piece of (0,_core_json_pieces_js__WEBPACK_IMPORTED_MODULE_1__/* .jsonPieces */ .M)(result, { depth: MODEL_DEPTH, substitute }))
+    for (const piece of (0,_core_json_pieces_js__WEBPACK_IMPORTED_MODULE_1__/* .jsonPieces */ .Mx)(result, { depth: MODEL_DEPTH, substitute }))
         yield written ? piece : (0,_runner_commands_js__WEBPACK_IMPORTED_MODULE_0__/* .neutraliseJson */ .rb)(piece);
     yield '\n';
 }
@@ -20810,8 +20831,15 @@ const MODEL_DEPTH = 2;
  * outcome is final, and handing it back through {@link JsonReportOptions.modelText}.
  */
 function* jsonModelReport(model) {
-    for (const piece of (0,_core_json_pieces_js__WEBPACK_IMPORTED_MODULE_1__/* .jsonPiecesAt */ .h)(model, 2, { depth: MODEL_DEPTH }))
-        yield (0,_runner_commands_js__WEBPACK_IMPORTED_MODULE_0__/* .neutraliseJson */ .rb)(piece);
+    for (const piece of jsonPiecesAt(model, 2, { depth: MODEL_DEPTH }))
+        yield neutraliseJson(piece);
+}
+/**
+ * {@link jsonModelReport}'s text as UTF-8 bytes, exactly: the model is one piece at its level, and
+ * {@link neutraliseJson} changes only characters inside its strings, never the brackets around it.
+ */
+function jsonModelBytes(model) {
+    return (0,_core_json_pieces_js__WEBPACK_IMPORTED_MODULE_1__/* .jsonBytesAt */ .XC)(model, 2, _runner_commands_js__WEBPACK_IMPORTED_MODULE_0__/* .neutraliseJson */ .rb);
 }
 /**
  * `JSON.stringify(result)` with two-space indentation and a final newline, where `##[` inside a
@@ -21611,25 +21639,26 @@ function partIndex(data, keep) {
 }
 /** {@link chartNumber} of the kept rows of a column, in the order of `keep`. */
 function pickRows(col, keep) {
-    const out = [];
+    // Made at its length (one backing store, not grown push by push) and filled in order.
+    const out = new Array(keep.length);
     for (let t = 0; t < keep.length; t++)
-        out.push(chartNumber(col[keep[t]]));
+        out[t] = chartNumber(col[keep[t]]);
     return out;
 }
 function series(data, predictions, max, numbers) {
     const keep = thinRows(data.rows, seriesPoints(data.inputs.length, max, numbers));
     const thinned = keep.length < data.rows;
     // Plain loops over the kept rows (`Array.from` with a mapping function is several times slower).
-    const lines = [];
-    const residual = [];
+    const lines = new Array(keep.length);
+    const residual = new Array(keep.length);
     if (data.parts === undefined || data.parts.length === 0)
         for (let t = 0; t < keep.length; t++)
-            lines.push(data.lines[keep[t]]);
+            lines[t] = data.lines[keep[t]];
     else
         for (let t = 0; t < keep.length; t++)
-            lines.push((0,_data_data_parts_js__WEBPACK_IMPORTED_MODULE_0__/* .placeOfLine */ .xX)(data, data.lines[keep[t]]).line);
+            lines[t] = (0,_data_data_parts_js__WEBPACK_IMPORTED_MODULE_0__/* .placeOfLine */ .xX)(data, data.lines[keep[t]]).line;
     for (let t = 0; t < keep.length; t++)
-        residual.push(chartNumber(data.y[keep[t]] - predictions[keep[t]]));
+        residual[t] = chartNumber(data.y[keep[t]] - predictions[keep[t]]);
     return {
         rows: data.rows,
         shown: keep.length,
