@@ -29456,24 +29456,18 @@ function* jsonReport(result, options = {}) {
             })();
         };
     // Pieces of text written earlier pass as they are; the walk's own pieces are strings.
-    for (const piece of (0,json_pieces/* jsonPieces */.Mx)(result, { depth: MODEL_DEPTH, substitute }))
+    for (const piece of (0,json_pieces/* jsonPieces */.M)(result, { depth: MODEL_DEPTH, substitute }))
         yield written ? piece : (0,runner_commands/* neutraliseJson */.rb)(piece);
     yield '\n';
 }
 /** Depth the report's pieces are walked to: the Result, `models`, then each model whole (half the time of walking into each model). */
 const MODEL_DEPTH = 2;
 /**
- * One model's part of the JSON report, as {@link jsonReport} writes it inside `models` (indented
- * two levels, neutralised, no separators around it): for rendering each model's text as soon as its
- * outcome is final, and handing it back through {@link JsonReportOptions.modelText}.
- */
-function* jsonModelReport(model) {
-    for (const piece of jsonPiecesAt(model, 2, { depth: MODEL_DEPTH }))
-        yield neutraliseJson(piece);
-}
-/**
- * {@link jsonModelReport}'s text as UTF-8 bytes, exactly: the model is one piece at its level, and
- * {@link neutraliseJson} changes only characters inside its strings, never the brackets around it.
+ * One model's part of the JSON report as UTF-8 bytes, exactly as {@link jsonReport} writes it
+ * inside `models` (indented two levels, neutralised, no separators around it): for rendering each
+ * model's text as soon as its outcome is final, and handing it back through
+ * {@link JsonReportOptions.modelText}. {@link neutraliseJson} changes only characters inside the
+ * text's strings, never the brackets of the wrapping that are cut off.
  */
 function jsonModelBytes(model) {
     return jsonBytesAt(model, 2, neutraliseJson);
@@ -32762,9 +32756,9 @@ function withoutTrailingZeros(text) {
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   Mx: () => (/* binding */ jsonPieces)
+/* harmony export */   M: () => (/* binding */ jsonPieces)
 /* harmony export */ });
-/* unused harmony exports jsonPiecesAt, jsonBytesAt */
+/* unused harmony export jsonBytesAt */
 /**
  * JSON text in pieces: exactly the text `JSON.stringify(value, null, 2)` gives, cut so that no
  * piece holds more than one branch of the value. A report of any number of models is then written
@@ -32799,17 +32793,6 @@ function* jsonPieces(value, options = {}) {
     yield* piecesOf(v, 0, options.depth ?? 4, options.substitute);
 }
 /**
- * The pieces of `value` as {@link jsonPieces} writes it nested `level` containers deep in a larger
- * value (lines after the first indented `level` more steps): joined, exactly that part of the text.
- * @param value a JSON-compatible value
- * @param level its nesting level (0: the top)
- * @param options how deep to walk, counted from the top; default 4 levels
- */
-function* jsonPiecesAt(value, level, options = {}) {
-    const v = prepared(value, '');
-    yield* piecesOf(isWritten(v) ? v : null, level, options.depth ?? 4, options.substitute);
-}
-/**
  * The value stringified inside `level` one-element arrays (whose lines JSON.stringify indents
  * itself), and how many characters of the arrays' own brackets stand before and after it (ASCII,
  * so as many bytes). One native call, no second pass over the text.
@@ -32837,8 +32820,9 @@ function indented(value, level) {
     return level === 0 ? text : text.slice(head, text.length - tail);
 }
 /**
- * The UTF-8 bytes of `value` stringified whole as {@link jsonPiecesAt} writes it `level` containers
- * deep when `level` is at least its walking depth (one piece): `transform(text)` encoded, where
+ * The UTF-8 bytes of `value` stringified whole as {@link jsonPieces} writes it nested `level`
+ * containers deep in a larger value when `level` is at least its walking depth (one piece: lines
+ * after the first indented `level` more steps): `transform(text)` encoded, where
  * `transform` must leave the text's ASCII brackets, line breaks and indentation around the value
  * as they are (an escape of characters inside its strings does). The brackets of the wrapping are
  * cut off the bytes, so the text is never copied to drop them.
@@ -42281,7 +42265,7 @@ function sarifLog(result, options = {}) {
  * are {@link formatSarif}'s text.
  */
 function* sarifReport(result, options = {}) {
-    yield* (0,json_pieces/* jsonPieces */.Mx)(sarifLog(result, options));
+    yield* (0,json_pieces/* jsonPieces */.M)(sarifLog(result, options));
     yield '\n';
 }
 /** The SARIF report as JSON text (two-space indentation, final newline). */

@@ -1672,7 +1672,7 @@ function sarifLog(result, options = {}) {
  * are {@link formatSarif}'s text.
  */
 function* sarifReport(result, options = {}) {
-    yield* (0,json_pieces/* jsonPieces */.Mx)(sarifLog(result, options));
+    yield* (0,json_pieces/* jsonPieces */.M)(sarifLog(result, options));
     yield '\n';
 }
 /** The SARIF report as JSON text (two-space indentation, final newline). */

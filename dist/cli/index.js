@@ -8856,10 +8856,9 @@ function withoutTrailingZeros(text) {
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   Mx: () => (/* binding */ jsonPieces),
-/* harmony export */   XC: () => (/* binding */ jsonBytesAt)
+/* harmony export */   M: () => (/* binding */ jsonPieces),
+/* harmony export */   X: () => (/* binding */ jsonBytesAt)
 /* harmony export */ });
-/* unused harmony export jsonPiecesAt */
 /**
  * JSON text in pieces: exactly the text `JSON.stringify(value, null, 2)` gives, cut so that no
  * piece holds more than one branch of the value. A report of any number of models is then written
@@ -8894,17 +8893,6 @@ function* jsonPieces(value, options = {}) {
     yield* piecesOf(v, 0, options.depth ?? 4, options.substitute);
 }
 /**
- * The pieces of `value` as {@link jsonPieces} writes it nested `level` containers deep in a larger
- * value (lines after the first indented `level` more steps): joined, exactly that part of the text.
- * @param value a JSON-compatible value
- * @param level its nesting level (0: the top)
- * @param options how deep to walk, counted from the top; default 4 levels
- */
-function* jsonPiecesAt(value, level, options = {}) {
-    const v = prepared(value, '');
-    yield* piecesOf(isWritten(v) ? v : null, level, options.depth ?? 4, options.substitute);
-}
-/**
  * The value stringified inside `level` one-element arrays (whose lines JSON.stringify indents
  * itself), and how many characters of the arrays' own brackets stand before and after it (ASCII,
  * so as many bytes). One native call, no second pass over the text.
@@ -8932,8 +8920,9 @@ function indented(value, level) {
     return level === 0 ? text : text.slice(head, text.length - tail);
 }
 /**
- * The UTF-8 bytes of `value` stringified whole as {@link jsonPiecesAt} writes it `level` containers
- * deep when `level` is at least its walking depth (one piece): `transform(text)` encoded, where
+ * The UTF-8 bytes of `value` stringified whole as {@link jsonPieces} writes it nested `level`
+ * containers deep in a larger value when `level` is at least its walking depth (one piece: lines
+ * after the first indented `level` more steps): `transform(text)` encoded, where
  * `transform` must leave the text's ASCII brackets, line breaks and indentation around the value
  * as they are (an escape of characters inside its strings does). The brackets of the wrapping are
  * cut off the bytes, so the text is never copied to drop them.
@@ -17111,7 +17100,7 @@ async function runCheck(settings, options) {
 /**
  * Each model's part of the JSON report set aside while the run goes on: a run that writes only
  * the JSON report to a file (`fitgate check --format json --out FILE`) renders each model's text
- * (report/json.ts `jsonModelReport`) as soon as its outcome is final and keeps a small copy of the
+ * (report/json.ts `jsonModelBytes`) as soon as its outcome is final and keeps a small copy of the
  * outcome ({@link smallCopy}: what the verdict, the counts and the exit status read); the report is
  * then written from the copies with each model's text ({@link ModelSpool.text}). The run keeps
  * neither each outcome's object graph (typed arrays, chart objects, figures, checks) nor its text
@@ -17164,7 +17153,7 @@ function smallCopy(model) {
 const SPOOL_RENDER = 'json-model-spool';
 /**
  * A model's small copy ({@link smallCopy}) and its part of the JSON report as UTF-8 bytes
- * (report/json.ts `jsonModelBytes`: `jsonModelReport`'s text, encoded).
+ * (report/json.ts `jsonModelBytes`).
  * @param model a model's outcome
  */
 function renderForSpool(model) {
@@ -20781,7 +20770,7 @@ function escapeMermaid(text) {
 /* harmony export */   L7: () => (/* binding */ jsonReport),
 /* harmony export */   ZL: () => (/* binding */ jsonModelBytes)
 /* harmony export */ });
-/* unused harmony exports jsonModelReport, formatJson */
+/* unused harmony export formatJson */
 /* harmony import */ var _core_json_pieces_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(1629);
 /* harmony import */ var _runner_commands_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(673);
 /**
@@ -20819,27 +20808,21 @@ function* jsonReport(result, options = {}) {
             })();
         };
     // Pieces of text written earlier pass as they are; the walk's own pieces are strings.
-    for (const piece of (0,_core_json_pieces_js__WEBPACK_IMPORTED_MODULE_1__/* .jsonPieces */ .Mx)(result, { depth: MODEL_DEPTH, substitute }))
+    for (const piece of (0,_core_json_pieces_js__WEBPACK_IMPORTED_MODULE_1__/* .jsonPieces */ .M)(result, { depth: MODEL_DEPTH, substitute }))
         yield written ? piece : (0,_runner_commands_js__WEBPACK_IMPORTED_MODULE_0__/* .neutraliseJson */ .rb)(piece);
     yield '\n';
 }
 /** Depth the report's pieces are walked to: the Result, `models`, then each model whole (half the time of walking into each model). */
 const MODEL_DEPTH = 2;
 /**
- * One model's part of the JSON report, as {@link jsonReport} writes it inside `models` (indented
- * two levels, neutralised, no separators around it): for rendering each model's text as soon as its
- * outcome is final, and handing it back through {@link JsonReportOptions.modelText}.
- */
-function* jsonModelReport(model) {
-    for (const piece of jsonPiecesAt(model, 2, { depth: MODEL_DEPTH }))
-        yield neutraliseJson(piece);
-}
-/**
- * {@link jsonModelReport}'s text as UTF-8 bytes, exactly: the model is one piece at its level, and
- * {@link neutraliseJson} changes only characters inside its strings, never the brackets around it.
+ * One model's part of the JSON report as UTF-8 bytes, exactly as {@link jsonReport} writes it
+ * inside `models` (indented two levels, neutralised, no separators around it): for rendering each
+ * model's text as soon as its outcome is final, and handing it back through
+ * {@link JsonReportOptions.modelText}. {@link neutraliseJson} changes only characters inside the
+ * text's strings, never the brackets of the wrapping that are cut off.
  */
 function jsonModelBytes(model) {
-    return (0,_core_json_pieces_js__WEBPACK_IMPORTED_MODULE_1__/* .jsonBytesAt */ .XC)(model, 2, _runner_commands_js__WEBPACK_IMPORTED_MODULE_0__/* .neutraliseJson */ .rb);
+    return (0,_core_json_pieces_js__WEBPACK_IMPORTED_MODULE_1__/* .jsonBytesAt */ .X)(model, 2, _runner_commands_js__WEBPACK_IMPORTED_MODULE_0__/* .neutraliseJson */ .rb);
 }
 /**
  * `JSON.stringify(result)` with two-space indentation and a final newline, where `##[` inside a

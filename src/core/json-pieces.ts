@@ -19,7 +19,7 @@ export interface JsonPiecesOptions<P extends string | Uint8Array = string> {
   /**
    * Text written in place of a value met on the walk: pieces that, joined, are exactly what the
    * walk would write for that value at its nesting level (e.g. written earlier by
-   * {@link jsonPiecesAt} from a fuller copy of it), or undefined to walk the value itself.
+   * {@link jsonBytesAt} from a fuller copy of it), or undefined to walk the value itself.
    * Default none.
    */
   substitute?: (value: unknown) => Iterable<P> | undefined;
@@ -55,22 +55,6 @@ export function* jsonPieces<P extends string | Uint8Array = string>(
 }
 
 /**
- * The pieces of `value` as {@link jsonPieces} writes it nested `level` containers deep in a larger
- * value (lines after the first indented `level` more steps): joined, exactly that part of the text.
- * @param value a JSON-compatible value
- * @param level its nesting level (0: the top)
- * @param options how deep to walk, counted from the top; default 4 levels
- */
-export function* jsonPiecesAt<P extends string | Uint8Array = string>(
-  value: unknown,
-  level: number,
-  options: JsonPiecesOptions<P> = {},
-): Generator<string | P> {
-  const v = prepared(value, '');
-  yield* piecesOf(isWritten(v) ? v : null, level, options.depth ?? 4, options.substitute);
-}
-
-/**
  * The value stringified inside `level` one-element arrays (whose lines JSON.stringify indents
  * itself), and how many characters of the arrays' own brackets stand before and after it (ASCII,
  * so as many bytes). One native call, no second pass over the text.
@@ -99,8 +83,9 @@ function indented(value: unknown, level: number): string {
 }
 
 /**
- * The UTF-8 bytes of `value` stringified whole as {@link jsonPiecesAt} writes it `level` containers
- * deep when `level` is at least its walking depth (one piece): `transform(text)` encoded, where
+ * The UTF-8 bytes of `value` stringified whole as {@link jsonPieces} writes it nested `level`
+ * containers deep in a larger value when `level` is at least its walking depth (one piece: lines
+ * after the first indented `level` more steps): `transform(text)` encoded, where
  * `transform` must leave the text's ASCII brackets, line breaks and indentation around the value
  * as they are (an escape of characters inside its strings does). The brackets of the wrapping are
  * cut off the bytes, so the text is never copied to drop them.

@@ -1,7 +1,7 @@
 /**
  * Each model's part of the JSON report set aside while the run goes on: a run that writes only
  * the JSON report to a file (`fitgate check --format json --out FILE`) renders each model's text
- * (report/json.ts `jsonModelReport`) as soon as its outcome is final and keeps a small copy of the
+ * (report/json.ts `jsonModelBytes`) as soon as its outcome is final and keeps a small copy of the
  * outcome ({@link smallCopy}: what the verdict, the counts and the exit status read); the report is
  * then written from the copies with each model's text ({@link ModelSpool.text}). The run keeps
  * neither each outcome's object graph (typed arrays, chart objects, figures, checks) nor its text
@@ -88,7 +88,7 @@ export const SPOOL_RENDER = 'json-model-spool';
 
 /**
  * A model's small copy ({@link smallCopy}) and its part of the JSON report as UTF-8 bytes
- * (report/json.ts `jsonModelBytes`: `jsonModelReport`'s text, encoded).
+ * (report/json.ts `jsonModelBytes`).
  * @param model a model's outcome
  */
 export function renderForSpool(model: ModelResult): RenderedModel {

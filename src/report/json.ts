@@ -1,7 +1,7 @@
 /**
  * The JSON report: the Result exactly as the pipeline returned it.
  */
-import { jsonBytesAt, jsonPieces, jsonPiecesAt } from '../core/json-pieces.js';
+import { jsonBytesAt, jsonPieces } from '../core/json-pieces.js';
 import type { ModelResult, Result } from '../result/result.js';
 import { neutraliseJson } from './runner-commands.js';
 
@@ -50,24 +50,18 @@ const MODEL_DEPTH = 2;
  */
 export interface JsonReportOptions<P extends string | Uint8Array = string> {
   /**
-   * A model's text rendered earlier ({@link jsonModelReport} of the full model, while the Result
+   * A model's text rendered earlier ({@link jsonModelBytes} of the full model, while the Result
    * keeps a smaller copy), or undefined to format the model as it is in the Result. Default none.
    */
   modelText?: (model: ModelResult) => Iterable<P> | undefined;
 }
 
 /**
- * One model's part of the JSON report, as {@link jsonReport} writes it inside `models` (indented
- * two levels, neutralised, no separators around it): for rendering each model's text as soon as its
- * outcome is final, and handing it back through {@link JsonReportOptions.modelText}.
- */
-export function* jsonModelReport(model: ModelResult): Generator<string> {
-  for (const piece of jsonPiecesAt(model, 2, { depth: MODEL_DEPTH })) yield neutraliseJson(piece);
-}
-
-/**
- * {@link jsonModelReport}'s text as UTF-8 bytes, exactly: the model is one piece at its level, and
- * {@link neutraliseJson} changes only characters inside its strings, never the brackets around it.
+ * One model's part of the JSON report as UTF-8 bytes, exactly as {@link jsonReport} writes it
+ * inside `models` (indented two levels, neutralised, no separators around it): for rendering each
+ * model's text as soon as its outcome is final, and handing it back through
+ * {@link JsonReportOptions.modelText}. {@link neutraliseJson} changes only characters inside the
+ * text's strings, never the brackets of the wrapping that are cut off.
  */
 export function jsonModelBytes(model: ModelResult): Uint8Array {
   return jsonBytesAt(model, 2, neutraliseJson);
