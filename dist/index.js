@@ -33135,7 +33135,7 @@ const VERSION = '0.1.0';
 /* harmony export */   ui: () => (/* binding */ DEFAULT_FORMAT),
 /* harmony export */   v0: () => (/* binding */ formatCellNumber)
 /* harmony export */ });
-/* unused harmony exports MISSING_SPELLINGS, isMissingCell, separatorOfHeader, formatProblem */
+/* unused harmony exports separatorOfHeader, formatProblem */
 /* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(4296);
 /* harmony import */ var _line_blocks_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(5383);
 /* harmony import */ var _csv_rules_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(8706);
@@ -33151,18 +33151,6 @@ const VERSION = '0.1.0';
 
 /** The format when the descriptor says nothing: detected separator, decimal point, missing cells are errors. */
 const DEFAULT_FORMAT = Object.freeze({ separator: 'auto', decimal: '.', missing: 'error' });
-/**
- * Cell texts that mean "missing" under `missing: drop`, compared after trimming white space and
- * ignoring case: the empty cell, `NA`, `N/A`, `#N/A`, `NaN`, `null`, `None`. (The spellings
- * spreadsheet and statistics programs commonly write for a missing value: common practice.)
- */
-const MISSING_SPELLINGS = Object.freeze(['', 'na', 'n/a', '#n/a', 'nan', 'null', 'none']);
-const MISSING_SET = new Set(MISSING_SPELLINGS);
-/** True when a cell's text (untrimmed) is one of {@link MISSING_SPELLINGS}. */
-function isMissingCell(cell) {
-    const text = cell.trim();
-    return text.length <= 4 && MISSING_SET.has(text.toLowerCase());
-}
 /**
  * The separator of a header line when it is not set: comma when the line holds a comma outside
  * quotes (as before separators were detected, so comma files read as they always did); else
@@ -33294,7 +33282,7 @@ function formatProblem(format) {
  * @param format the file's format
  */
 function formatCellNumber(cell, file, line, column, format) {
-    if (format.missing === 'drop' && isMissingCell(cell))
+    if (format.missing === 'drop' && (0,_csv_rules_js__WEBPACK_IMPORTED_MODULE_2__/* .isMissingCell */ .lz)(cell))
         return Number.NaN;
     let text = cell.trim();
     if (format.decimal === ',') {
@@ -33353,9 +33341,10 @@ function splitLabelError(cell, file, line, split) {
 /* harmony export */   fS: () => (/* binding */ DEFAULT_MAX_BYTES),
 /* harmony export */   i5: () => (/* binding */ underflows),
 /* harmony export */   j7: () => (/* binding */ planColumns),
+/* harmony export */   lz: () => (/* binding */ isMissingCell),
 /* harmony export */   vB: () => (/* binding */ ChunkBuilder)
 /* harmony export */ });
-/* unused harmony exports MAX_HEADER_COLUMNS, layoutHint */
+/* unused harmony exports MAX_HEADER_COLUMNS, MISSING_SPELLINGS, layoutHint */
 /* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(4296);
 /**
  * The rules both CSV paths share, kept in one place so that the fast path and the general
@@ -33386,6 +33375,18 @@ const MIN_NORMAL = 2.2250738585072014e-308;
  * Source: ECMA-262 `StrDecimalLiteral` (section "ToNumber Applied to the String Type").
  */
 const DECIMAL_NUMBER = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
+/**
+ * Cell texts that mean "missing" under `missing: drop` (data/csv-format.ts), compared after trimming white space and
+ * ignoring case: the empty cell, `NA`, `N/A`, `#N/A`, `NaN`, `null`, `None`. (The spellings
+ * spreadsheet and statistics programs commonly write for a missing value: common practice.)
+ */
+const MISSING_SPELLINGS = Object.freeze(['', 'na', 'n/a', '#n/a', 'nan', 'null', 'none']);
+const MISSING_SET = new Set(MISSING_SPELLINGS);
+/** True when a cell's text (untrimmed) is one of {@link MISSING_SPELLINGS}. */
+function isMissingCell(cell) {
+    const text = cell.trim();
+    return text.length <= 4 && MISSING_SET.has(text.toLowerCase());
+}
 /**
  * Collapses repeated names in a column request.
  * @param columns names as the caller gave them
@@ -33525,7 +33526,23 @@ function cellError(cell, file, line, column) {
         why = `got ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(cell, MAX_CELL_QUOTED)}; missing and infinite values are not allowed`;
     else
         why = `got ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(cell, MAX_CELL_QUOTED)}`;
-    return new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz('csv-cell', `column ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(column, MAX_CELL_QUOTED)}: expected a finite decimal number (like 12, -0.5 or 1.5e-3); ${why}`, { file, line, key: column });
+    return new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz('csv-cell', `column ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(column, MAX_CELL_QUOTED)}: expected a finite decimal number (like 12, -0.5 or 1.5e-3); ${why}${cellHint(text)}`, { file, line, key: column });
+}
+/** A number written with a decimal comma and no other mark, like `2,5` or `-0,125`. */
+const DECIMAL_COMMA_NUMBER = /^[+-]?\d*,\d+$/;
+/**
+ * The setting that would have read a refused cell, said after its error: `data.missing: drop` for
+ * a missing cell, `data.decimal: ","` for what may be a number with a decimal comma (`1,250` may
+ * also be a thousands separator, so the hint says "if"). Neither can be set
+ * already when such a cell is refused (under `drop` a missing cell drops its row; under `,` the
+ * comma has become a point before the cell is judged), so the hint never names a setting in force.
+ */
+function cellHint(text) {
+    if (isMissingCell(text))
+        return '. Hint: to drop the rows with a missing cell in a used column (and count them in the report), set `data.missing: drop` in the descriptor';
+    if (DECIMAL_COMMA_NUMBER.test(text))
+        return '. Hint: if the file writes numbers with a decimal comma (1,5 for 1.5), set `data.decimal: ","` in the descriptor';
+    return '';
 }
 /** The `csv-ragged` error for a row whose field count differs from the header's. */
 function raggedError(file, line, expected, actual) {

@@ -8,7 +8,7 @@
 
 import { InputError, quoteValue } from '../core/errors.js';
 import { MAX_HEADER_BYTES } from './line-blocks.js';
-import { cellError, DECIMAL_NUMBER, underflows } from './csv-rules.js';
+import { cellError, DECIMAL_NUMBER, isMissingCell, underflows } from './csv-rules.js';
 
 /** Field separators fitgate reads. */
 export type Separator = ',' | ';' | '\t';
@@ -25,21 +25,6 @@ export interface CsvFormat {
 
 /** The format when the descriptor says nothing: detected separator, decimal point, missing cells are errors. */
 export const DEFAULT_FORMAT: Readonly<CsvFormat> = Object.freeze({ separator: 'auto', decimal: '.', missing: 'error' });
-
-/**
- * Cell texts that mean "missing" under `missing: drop`, compared after trimming white space and
- * ignoring case: the empty cell, `NA`, `N/A`, `#N/A`, `NaN`, `null`, `None`. (The spellings
- * spreadsheet and statistics programs commonly write for a missing value: common practice.)
- */
-export const MISSING_SPELLINGS: readonly string[] = Object.freeze(['', 'na', 'n/a', '#n/a', 'nan', 'null', 'none']);
-
-const MISSING_SET = new Set(MISSING_SPELLINGS);
-
-/** True when a cell's text (untrimmed) is one of {@link MISSING_SPELLINGS}. */
-export function isMissingCell(cell: string): boolean {
-  const text = cell.trim();
-  return text.length <= 4 && MISSING_SET.has(text.toLowerCase());
-}
 
 /** Which rows of a file with a split column to read. */
 export interface SplitFilter {

@@ -32,6 +32,21 @@ export const MIN_NORMAL = 2.2250738585072014e-308;
  */
 export const DECIMAL_NUMBER = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
 
+/**
+ * Cell texts that mean "missing" under `missing: drop` (data/csv-format.ts), compared after trimming white space and
+ * ignoring case: the empty cell, `NA`, `N/A`, `#N/A`, `NaN`, `null`, `None`. (The spellings
+ * spreadsheet and statistics programs commonly write for a missing value: common practice.)
+ */
+export const MISSING_SPELLINGS: readonly string[] = Object.freeze(['', 'na', 'n/a', '#n/a', 'nan', 'null', 'none']);
+
+const MISSING_SET = new Set(MISSING_SPELLINGS);
+
+/** True when a cell's text (untrimmed) is one of {@link MISSING_SPELLINGS}. */
+export function isMissingCell(cell: string): boolean {
+  const text = cell.trim();
+  return text.length <= 4 && MISSING_SET.has(text.toLowerCase());
+}
+
 /** What the header check hands to a parser. */
 export interface ColumnPlan {
   /** All header names in file order. */
@@ -212,9 +227,27 @@ export function cellError(cell: string, file: string, line: number, column: stri
   else why = `got ${quoteValue(cell, MAX_CELL_QUOTED)}`;
   return new InputError(
     'csv-cell',
-    `column ${quoteValue(column, MAX_CELL_QUOTED)}: expected a finite decimal number (like 12, -0.5 or 1.5e-3); ${why}`,
+    `column ${quoteValue(column, MAX_CELL_QUOTED)}: expected a finite decimal number (like 12, -0.5 or 1.5e-3); ${why}${cellHint(text)}`,
     { file, line, key: column },
   );
+}
+
+/** A number written with a decimal comma and no other mark, like `2,5` or `-0,125`. */
+const DECIMAL_COMMA_NUMBER = /^[+-]?\d*,\d+$/;
+
+/**
+ * The setting that would have read a refused cell, said after its error: `data.missing: drop` for
+ * a missing cell, `data.decimal: ","` for what may be a number with a decimal comma (`1,250` may
+ * also be a thousands separator, so the hint says "if"). Neither can be set
+ * already when such a cell is refused (under `drop` a missing cell drops its row; under `,` the
+ * comma has become a point before the cell is judged), so the hint never names a setting in force.
+ */
+function cellHint(text: string): string {
+  if (isMissingCell(text))
+    return '. Hint: to drop the rows with a missing cell in a used column (and count them in the report), set `data.missing: drop` in the descriptor';
+  if (DECIMAL_COMMA_NUMBER.test(text))
+    return '. Hint: if the file writes numbers with a decimal comma (1,5 for 1.5), set `data.decimal: ","` in the descriptor';
+  return '';
 }
 
 /** The `csv-ragged` error for a row whose field count differs from the header's. */

@@ -3,7 +3,8 @@ import fc from 'fast-check';
 import { memoryRepo } from './memory-repo.js';
 import { bits, outcome } from './outcome.js';
 import { readTable } from '../../src/data/table.js';
-import { isMissingCell, separatorOfHeader, MISSING_SPELLINGS } from '../../src/data/csv-format.js';
+import { separatorOfHeader } from '../../src/data/csv-format.js';
+import { isMissingCell, MISSING_SPELLINGS } from '../../src/data/csv-rules.js';
 
 const FILE = 'data/t.csv';
 const RUNS = 150;
@@ -89,10 +90,27 @@ describe('missing cells', () => {
     }
   });
 
-  it('error (default): a missing cell is a csv-cell error naming file, line and column', async () => {
-    const repo = memoryRepo({ [FILE]: 'x,y\n1,2\n3,NA\n' });
-    const got = await outcome(repo, FILE, { columns: ['x', 'y'] });
-    expect(got).toMatchObject({ ok: false, code: 'csv-cell', file: FILE, line: 3, key: 'y' });
+  it('error (default): a missing cell is a csv-cell error naming file, line and column, and the setting that drops it', async () => {
+    for (const cell of ['NA', '', ' #N/A ']) {
+      const repo = memoryRepo({ [FILE]: `x,y\n1,2\n3,${cell}\n` });
+      for (const general of [false, true]) {
+        const got = await outcome(repo, FILE, { columns: ['x', 'y'], general });
+        expect(got).toMatchObject({ ok: false, code: 'csv-cell', file: FILE, line: 3, key: 'y' });
+        expect(got.ok === false && got.message, JSON.stringify(cell)).toMatch(/Hint: .*set `data\.missing: drop`/);
+      }
+    }
+    // A cell that no setting reads gets no hint.
+    const other = await outcome(memoryRepo({ [FILE]: 'x,y\n1,2\n3,abc\n' }), FILE, { columns: ['x', 'y'] });
+    expect(other.ok === false && other.message).not.toMatch(/Hint/);
+  });
+
+  it('a number with a decimal comma in a semicolon file is refused with the setting that reads it', async () => {
+    const repo = memoryRepo({ [FILE]: 'x;y\n1;2\n3;-0,25\n' });
+    for (const general of [false, true]) {
+      const got = await outcome(repo, FILE, { columns: ['x', 'y'], general });
+      expect(got).toMatchObject({ ok: false, code: 'csv-cell', file: FILE, line: 3, key: 'y' });
+      expect(got.ok === false && got.message).toMatch(/Hint: if the file writes numbers with a decimal comma .*set `data\.decimal: ","`/);
+    }
   });
 
   it('drop still refuses a cell that is neither a number nor missing', async () => {
