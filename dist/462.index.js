@@ -131,7 +131,7 @@ async function* generalChunks(pieces, target, skipRows = 0) {
         if (failure instanceof _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz)
             throw failure;
         if (bad !== null)
-            throw (0,_line_blocks_js__WEBPACK_IMPORTED_MODULE_2__/* .encodingError */ .Sj)(file, 1 + lineFeeds, bad.utf16);
+            throw (0,_line_blocks_js__WEBPACK_IMPORTED_MODULE_2__/* .encodingError */ .Sj)(file, 1 + lineFeeds, bad.signature);
         throw syntaxError(failure, file, nextLine());
     };
     // Line feeds written so far: the line of bad bytes is the one after them.
@@ -166,7 +166,7 @@ async function* generalChunks(pieces, target, skipRows = 0) {
         if (settle(bad))
             return;
         if (bad !== null)
-            throw (0,_line_blocks_js__WEBPACK_IMPORTED_MODULE_2__/* .encodingError */ .Sj)(file, 1 + lineFeeds, bad.utf16);
+            throw (0,_line_blocks_js__WEBPACK_IMPORTED_MODULE_2__/* .encodingError */ .Sj)(file, 1 + lineFeeds, bad.signature);
         if (plan === null)
             throw (0,_csv_rules_js__WEBPACK_IMPORTED_MODULE_3__/* .emptyError */ .CA)(file);
         builder.finish();

@@ -9955,6 +9955,73 @@ function partLines(data, lines) {
 
 /***/ }),
 
+/***/ 4134:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   tM: () => (/* binding */ SIGNATURE_BYTES),
+/* harmony export */   yK: () => (/* binding */ signatureOf)
+/* harmony export */ });
+/* unused harmony export FILE_SIGNATURES */
+/**
+ * What a data file that is not UTF-8 text most likely is, told by its first bytes (the "magic
+ * numbers" each format starts with), so that the encoding error says what to do with it: a
+ * compressed file of another kind, an archive or a spreadsheet workbook instead of CSV text.
+ *
+ * Sources of the signatures: The Unicode Standard (the UTF-16 byte-order marks); RFC 1952 (gzip);
+ * the .xz file format specification; bzip2's stream header `BZh` (as bzip2 1.0 writes it; from
+ * memory); RFC 8878 (the Zstandard frame's magic number); PKWARE's APPNOTE.TXT (the ZIP local file
+ * header; .xlsx, .docx and .ods files are ZIP archives); 7-Zip's 7zFormat.txt; [MS-CFB] (the
+ * Compound File Binary header of legacy Office files); the Apache Parquet format (`PAR1`).
+ * test/data/file-signatures.test.ts checks the gzip, bzip2, xz and ZIP signatures against files
+ * that Python's standard library writes.
+ */
+const RECOMPRESS = 'fitgate reads plain CSV text and gzip-compressed CSV (`.csv.gz`): decompress it, or compress it with gzip';
+const EXPORT = 'export the sheet or table as a CSV file (UTF-8)';
+/** The signatures fitgate recognises, longest first where one could begin another. */
+const FILE_SIGNATURES = Object.freeze([
+    { magic: [0xff, 0xfe], what: 'UTF-16 text', advice: 'save it as UTF-8', otherEncoding: true },
+    { magic: [0xfe, 0xff], what: 'UTF-16 text', advice: 'save it as UTF-8', otherEncoding: true },
+    {
+        magic: [0x1f, 0x8b],
+        what: 'gzip-compressed data',
+        advice: 'give it a name ending in `.gz` (e.g. `train.csv.gz`), so that fitgate decompresses it as it reads',
+    },
+    { magic: [0xfd, 0x37, 0x7a, 0x58, 0x5a, 0x00], what: 'xz-compressed data', advice: RECOMPRESS },
+    { magic: [0x42, 0x5a, 0x68], what: 'bzip2-compressed data', advice: RECOMPRESS },
+    { magic: [0x28, 0xb5, 0x2f, 0xfd], what: 'Zstandard-compressed data', advice: RECOMPRESS },
+    {
+        magic: [0x50, 0x4b, 0x03, 0x04],
+        what: 'a ZIP archive (an .xlsx or .ods workbook is one)',
+        advice: `extract the CSV file from it, or ${EXPORT}`,
+    },
+    { magic: [0x37, 0x7a, 0xbc, 0xaf, 0x27, 0x1c], what: 'a 7z archive', advice: 'extract the CSV file from it' },
+    { magic: [0xd0, 0xcf, 0x11, 0xe0, 0xa1, 0xb1, 0x1a, 0xe1], what: 'a legacy Office file (such as an .xls workbook)', advice: EXPORT },
+    { magic: [0x50, 0x41, 0x52, 0x31], what: 'a Parquet file', advice: EXPORT },
+]);
+/** Most bytes a signature needs. */
+const SIGNATURE_BYTES = Math.max(...FILE_SIGNATURES.map((s) => s.magic.length));
+/**
+ * The signature the bytes start with, or null.
+ * @param head the file's first bytes (at least {@link SIGNATURE_BYTES} of them where the file has that many)
+ */
+function signatureOf(head) {
+    for (const signature of FILE_SIGNATURES) {
+        const { magic } = signature;
+        if (head.length < magic.length)
+            continue;
+        let match = true;
+        for (let i = 0; i < magic.length && match; i++)
+            match = head[i] === magic[i];
+        if (match)
+            return signature;
+    }
+    return null;
+}
+
+
+/***/ }),
+
 /***/ 4355:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
@@ -9973,6 +10040,8 @@ const external_node_stream_namespaceObject = __WEBPACK_EXTERNAL_createRequire(im
 const external_node_zlib_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:zlib");
 // EXTERNAL MODULE: ./src/core/errors.ts
 var errors = __nccwpck_require__(4296);
+// EXTERNAL MODULE: ./src/data/file-signatures.ts
+var file_signatures = __nccwpck_require__(4134);
 ;// CONCATENATED MODULE: ./src/data/gzip-stream.ts
 /**
  * Data files compressed with gzip (`.gz` names, e.g. `train.csv.gz`): their bytes are
@@ -9980,6 +10049,7 @@ var errors = __nccwpck_require__(4296);
  * decompressed size is held to the same cap as a plain file's size, so a small file that
  * expands without end (a "gzip bomb") stops at the cap.
  */
+
 
 
 
@@ -10010,8 +10080,21 @@ function openDataFile(repo, path, maxBytes) {
  */
 async function* gunzipPieces(pieces, file, maxBytes) {
     const gunzip = (0,external_node_zlib_namespaceObject.createGunzip)();
+    // The file's first bytes, for the error when they are not gzip data.
+    const head = new Uint8Array(file_signatures/* SIGNATURE_BYTES */.tM);
+    let headLength = 0;
+    const watched = async function* () {
+        for await (const piece of pieces) {
+            if (headLength < head.length) {
+                const take = piece.subarray(0, head.length - headLength);
+                head.set(take, headLength);
+                headLength += take.length;
+            }
+            yield piece;
+        }
+    };
     // Errors of the source or of zlib end the iteration below; the callback only keeps them from being unhandled.
-    (0,external_node_stream_namespaceObject.pipeline)(external_node_stream_namespaceObject.Readable.from(pieces, { objectMode: false }), gunzip, () => undefined);
+    (0,external_node_stream_namespaceObject.pipeline)(external_node_stream_namespaceObject.Readable.from(watched(), { objectMode: false }), gunzip, () => undefined);
     let total = 0;
     try {
         for await (const out of gunzip) {
@@ -10027,12 +10110,26 @@ async function* gunzipPieces(pieces, file, maxBytes) {
         if (error instanceof errors/* InputError */.dz)
             throw error;
         const code = error.code;
-        throw new errors/* InputError */.dz('csv-gzip', `the file is named .gz but is not valid gzip data (${typeof code === 'string' ? code : 'unreadable'}); expected a file written by gzip`, { file });
+        throw new errors/* InputError */.dz('csv-gzip', `the file is named .gz but is not valid gzip data (${typeof code === 'string' ? code : 'unreadable'}); expected a file written by gzip${notGzipHint(head.subarray(0, headLength))}`, { file });
     }
     finally {
         gunzip.destroy();
     }
 }
+/**
+ * What a file named .gz holds instead, by its first bytes: another format (data/file-signatures.ts),
+ * or plain text (printable ASCII, tabs and line ends), or nothing known ('').
+ */
+function notGzipHint(head) {
+    const signature = (0,file_signatures/* signatureOf */.yK)(head);
+    if (signature !== null && signature.magic[0] !== GZIP_FIRST_BYTE)
+        return `. Hint: the file looks like ${signature.what}; ${signature.advice}`;
+    if (head.length > 0 && head.every((b) => (b >= 0x20 && b < 0x7f) || b === 0x09 || b === 0x0a || b === 0x0d))
+        return '. Hint: the file starts like plain text: if it is an uncompressed CSV file, drop the `.gz` from its name';
+    return '';
+}
+/** The first byte of every gzip member (RFC 1952). */
+const GZIP_FIRST_BYTE = 0x1f;
 
 
 /***/ }),
@@ -10055,6 +10152,8 @@ __nccwpck_require__.d(__webpack_exports__, {
 const external_node_buffer_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:buffer");
 // EXTERNAL MODULE: ./src/core/errors.ts
 var errors = __nccwpck_require__(4296);
+// EXTERNAL MODULE: ./src/data/file-signatures.ts
+var file_signatures = __nccwpck_require__(4134);
 ;// CONCATENATED MODULE: ./src/data/line-blocks.ts
 /**
  * Turns a file's byte pieces (as a {@link RepoReader} streams them, split anywhere) into
@@ -10063,6 +10162,7 @@ var errors = __nccwpck_require__(4296);
  * UTF-8 byte-order mark and stops at the first line that is not UTF-8 (the reader, which
  * counts lines, then throws {@link encodingError}).
  */
+
 
 
 /** The header, with any blank lines before it, must end within this many bytes of the file's start (1 MiB). */
@@ -10088,6 +10188,8 @@ async function* lineBlocks(pieces) {
     let pending = [];
     let pendingBytes = 0;
     let first = true;
+    /** What the file's first bytes say it is (data/file-signatures.ts), told with a bad-UTF-8 block. */
+    let signature = null;
     /** Bytes handed out (or passed over as a byte-order mark) so far. */
     let consumed = 0;
     /** True once a line that is not blank has ended within the cap. */
@@ -10097,7 +10199,7 @@ async function* lineBlocks(pieces) {
         bytes: new Uint8Array(0),
         final: false,
         badUtf8: false,
-        utf16: false,
+        signature: null,
         headerTooLong: true,
         loneCarriageReturn: held.some(hasLoneCarriageReturn),
     });
@@ -10105,12 +10207,14 @@ async function* lineBlocks(pieces) {
     function* emit(bytes, final) {
         if (first) {
             first = false;
+            signature = (0,file_signatures/* signatureOf */.yK)(bytes.subarray(0, file_signatures/* SIGNATURE_BYTES */.tM));
             if (bytes.length >= 3 && bytes[0] === BOM[0] && bytes[1] === BOM[1] && bytes[2] === BOM[2]) {
                 bytes = bytes.subarray(3);
                 consumed += 3;
             }
-            else if (bytes.length >= 2 && ((bytes[0] === 0xff && bytes[1] === 0xfe) || (bytes[0] === 0xfe && bytes[1] === 0xff))) {
-                yield { bytes: bytes.subarray(0, 0), final: false, badUtf8: true, utf16: true };
+            else if (signature?.otherEncoding === true) {
+                // Text in another encoding (UTF-16): refused at its mark.
+                yield { bytes: bytes.subarray(0, 0), final: false, badUtf8: true, signature };
                 return false;
             }
         }
@@ -10128,12 +10232,12 @@ async function* lineBlocks(pieces) {
         consumed += bytes.length;
         const good = utf8Prefix(bytes);
         if (good === bytes.length) {
-            yield { bytes, final, badUtf8: false, utf16: false };
+            yield { bytes, final, badUtf8: false, signature: null };
             return true;
         }
         if (good > 0)
-            yield { bytes: bytes.subarray(0, good), final: false, badUtf8: false, utf16: false };
-        yield { bytes: bytes.subarray(0, 0), final: false, badUtf8: true, utf16: false };
+            yield { bytes: bytes.subarray(0, good), final: false, badUtf8: false, signature: null };
+        yield { bytes: bytes.subarray(0, 0), final: false, badUtf8: true, signature };
         return false;
     }
     for await (const piece of pieces) {
@@ -10241,21 +10345,20 @@ function blockError(file, line, block) {
     if (block.headerTooLong === true)
         return headerTooLongError(file, line, block.loneCarriageReturn === true);
     if (block.badUtf8)
-        return encodingError(file, line, block.utf16);
+        return encodingError(file, line, block.signature);
     return null;
 }
 /**
  * The `csv-encoding` error for a line that is not UTF-8.
  * @param file repository-relative path
  * @param line 1-based line holding the bad bytes
- * @param utf16 the file starts with a UTF-16 byte-order mark
+ * @param signature what the file's first bytes say it is (data/file-signatures.ts), or null
  */
-function encodingError(file, line, utf16) {
-    const hint = utf16 ? ' (the file looks like UTF-16)' : '';
-    return new errors/* InputError */.dz('csv-encoding', `the line holds bytes that are not UTF-8 text${hint}; expected a UTF-8 CSV file (save it as UTF-8)`, {
-        file,
-        line,
-    });
+function encodingError(file, line, signature) {
+    const message = signature === null
+        ? 'the line holds bytes that are not UTF-8 text; expected a UTF-8 CSV file (save it as UTF-8)'
+        : `the line holds bytes that are not UTF-8 text: the file looks like ${signature.what}; expected a UTF-8 CSV file (${signature.advice})`;
+    return new errors/* InputError */.dz('csv-encoding', message, { file, line });
 }
 
 

@@ -134,7 +134,7 @@ export async function* generalChunks(pieces: AsyncIterable<Uint8Array>, target: 
     if (failure === null) return false;
     if (failure instanceof StopReading) return true;
     if (failure instanceof InputError) throw failure;
-    if (bad !== null) throw encodingError(file, 1 + lineFeeds, bad.utf16);
+    if (bad !== null) throw encodingError(file, 1 + lineFeeds, bad.signature);
     throw syntaxError(failure, file, nextLine());
   };
 
@@ -164,7 +164,7 @@ export async function* generalChunks(pieces: AsyncIterable<Uint8Array>, target: 
     }
     await endParser(parser);
     if (settle(bad)) return;
-    if (bad !== null) throw encodingError(file, 1 + lineFeeds, bad.utf16);
+    if (bad !== null) throw encodingError(file, 1 + lineFeeds, bad.signature);
     if (plan === null) throw emptyError(file);
     builder.finish();
     for (const chunk of builder.take()) {

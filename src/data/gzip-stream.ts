@@ -9,6 +9,7 @@ import { Readable, pipeline } from 'node:stream';
 import { createGunzip } from 'node:zlib';
 import { InputError } from '../core/errors.js';
 import type { RepoReader } from '../repo/types.js';
+import { SIGNATURE_BYTES, signatureOf } from './file-signatures.js';
 
 /** True when a data path names a gzip file (ends with `.gz`, any case). */
 export function isGzipPath(path: string): boolean {
@@ -38,8 +39,21 @@ export function openDataFile(repo: RepoReader, path: string, maxBytes: number): 
  */
 export async function* gunzipPieces(pieces: AsyncIterable<Uint8Array>, file: string, maxBytes: number): AsyncGenerator<Uint8Array> {
   const gunzip = createGunzip();
+  // The file's first bytes, for the error when they are not gzip data.
+  const head = new Uint8Array(SIGNATURE_BYTES);
+  let headLength = 0;
+  const watched = async function* (): AsyncGenerator<Uint8Array> {
+    for await (const piece of pieces) {
+      if (headLength < head.length) {
+        const take = piece.subarray(0, head.length - headLength);
+        head.set(take, headLength);
+        headLength += take.length;
+      }
+      yield piece;
+    }
+  };
   // Errors of the source or of zlib end the iteration below; the callback only keeps them from being unhandled.
-  pipeline(Readable.from(pieces, { objectMode: false }), gunzip, () => undefined);
+  pipeline(Readable.from(watched(), { objectMode: false }), gunzip, () => undefined);
   let total = 0;
   try {
     for await (const out of gunzip as AsyncIterable<Buffer>) {
@@ -59,10 +73,26 @@ export async function* gunzipPieces(pieces: AsyncIterable<Uint8Array>, file: str
     const code = (error as { code?: unknown }).code;
     throw new InputError(
       'csv-gzip',
-      `the file is named .gz but is not valid gzip data (${typeof code === 'string' ? code : 'unreadable'}); expected a file written by gzip`,
+      `the file is named .gz but is not valid gzip data (${typeof code === 'string' ? code : 'unreadable'}); expected a file written by gzip${notGzipHint(head.subarray(0, headLength))}`,
       { file },
     );
   } finally {
     gunzip.destroy();
   }
 }
+
+/**
+ * What a file named .gz holds instead, by its first bytes: another format (data/file-signatures.ts),
+ * or plain text (printable ASCII, tabs and line ends), or nothing known ('').
+ */
+function notGzipHint(head: Uint8Array): string {
+  const signature = signatureOf(head);
+  if (signature !== null && signature.magic[0] !== GZIP_FIRST_BYTE)
+    return `. Hint: the file looks like ${signature.what}; ${signature.advice}`;
+  if (head.length > 0 && head.every((b) => (b >= 0x20 && b < 0x7f) || b === 0x09 || b === 0x0a || b === 0x0d))
+    return '. Hint: the file starts like plain text: if it is an uncompressed CSV file, drop the `.gz` from its name';
+  return '';
+}
+
+/** The first byte of every gzip member (RFC 1952). */
+const GZIP_FIRST_BYTE = 0x1f;

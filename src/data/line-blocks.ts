@@ -8,6 +8,7 @@
 
 import { isUtf8 } from 'node:buffer';
 import { InputError } from '../core/errors.js';
+import { SIGNATURE_BYTES, signatureOf, type FileSignature } from './file-signatures.js';
 
 /** One block of whole lines, or the news that the next line is not UTF-8. */
 export interface LineBlock {
@@ -21,8 +22,11 @@ export interface LineBlock {
    * {@link encodingError} with that line's number.
    */
   badUtf8: boolean;
-  /** With `badUtf8`: the file starts with a UTF-16 byte-order mark. */
-  utf16: boolean;
+  /**
+   * With `badUtf8`: what the file's first bytes say it is (UTF-16 text, another compression,
+   * an archive or a workbook; data/file-signatures.ts), or null. Otherwise null.
+   */
+  signature: FileSignature | null;
   /**
    * True when the header (the first line that is not blank) does not end within the first
    * {@link MAX_HEADER_BYTES} bytes (`bytes` is then empty and nothing follows). The reader throws
@@ -58,6 +62,8 @@ export async function* lineBlocks(pieces: AsyncIterable<Uint8Array>): AsyncGener
   let pending: Uint8Array[] = [];
   let pendingBytes = 0;
   let first = true;
+  /** What the file's first bytes say it is (data/file-signatures.ts), told with a bad-UTF-8 block. */
+  let signature: FileSignature | null = null;
   /** Bytes handed out (or passed over as a byte-order mark) so far. */
   let consumed = 0;
   /** True once a line that is not blank has ended within the cap. */
@@ -68,7 +74,7 @@ export async function* lineBlocks(pieces: AsyncIterable<Uint8Array>): AsyncGener
     bytes: new Uint8Array(0),
     final: false,
     badUtf8: false,
-    utf16: false,
+    signature: null,
     headerTooLong: true,
     loneCarriageReturn: held.some(hasLoneCarriageReturn),
   });
@@ -77,11 +83,13 @@ export async function* lineBlocks(pieces: AsyncIterable<Uint8Array>): AsyncGener
   function* emit(bytes: Uint8Array, final: boolean): Generator<LineBlock, boolean> {
     if (first) {
       first = false;
+      signature = signatureOf(bytes.subarray(0, SIGNATURE_BYTES));
       if (bytes.length >= 3 && bytes[0] === BOM[0] && bytes[1] === BOM[1] && bytes[2] === BOM[2]) {
         bytes = bytes.subarray(3);
         consumed += 3;
-      } else if (bytes.length >= 2 && ((bytes[0] === 0xff && bytes[1] === 0xfe) || (bytes[0] === 0xfe && bytes[1] === 0xff))) {
-        yield { bytes: bytes.subarray(0, 0), final: false, badUtf8: true, utf16: true };
+      } else if (signature?.otherEncoding === true) {
+        // Text in another encoding (UTF-16): refused at its mark.
+        yield { bytes: bytes.subarray(0, 0), final: false, badUtf8: true, signature };
         return false;
       }
     }
@@ -97,11 +105,11 @@ export async function* lineBlocks(pieces: AsyncIterable<Uint8Array>): AsyncGener
     consumed += bytes.length;
     const good = utf8Prefix(bytes);
     if (good === bytes.length) {
-      yield { bytes, final, badUtf8: false, utf16: false };
+      yield { bytes, final, badUtf8: false, signature: null };
       return true;
     }
-    if (good > 0) yield { bytes: bytes.subarray(0, good), final: false, badUtf8: false, utf16: false };
-    yield { bytes: bytes.subarray(0, 0), final: false, badUtf8: true, utf16: false };
+    if (good > 0) yield { bytes: bytes.subarray(0, good), final: false, badUtf8: false, signature: null };
+    yield { bytes: bytes.subarray(0, 0), final: false, badUtf8: true, signature };
     return false;
   }
 
@@ -206,7 +214,7 @@ export function headerTooLongError(file: string, line: number, loneCarriageRetur
  */
 export function blockError(file: string, line: number, block: LineBlock): InputError | null {
   if (block.headerTooLong === true) return headerTooLongError(file, line, block.loneCarriageReturn === true);
-  if (block.badUtf8) return encodingError(file, line, block.utf16);
+  if (block.badUtf8) return encodingError(file, line, block.signature);
   return null;
 }
 
@@ -214,16 +222,12 @@ export function blockError(file: string, line: number, block: LineBlock): InputE
  * The `csv-encoding` error for a line that is not UTF-8.
  * @param file repository-relative path
  * @param line 1-based line holding the bad bytes
- * @param utf16 the file starts with a UTF-16 byte-order mark
+ * @param signature what the file's first bytes say it is (data/file-signatures.ts), or null
  */
-export function encodingError(file: string, line: number, utf16: boolean): InputError {
-  const hint = utf16 ? ' (the file looks like UTF-16)' : '';
-  return new InputError(
-    'csv-encoding',
-    `the line holds bytes that are not UTF-8 text${hint}; expected a UTF-8 CSV file (save it as UTF-8)`,
-    {
-      file,
-      line,
-    },
-  );
+export function encodingError(file: string, line: number, signature: FileSignature | null): InputError {
+  const message =
+    signature === null
+      ? 'the line holds bytes that are not UTF-8 text; expected a UTF-8 CSV file (save it as UTF-8)'
+      : `the line holds bytes that are not UTF-8 text: the file looks like ${signature.what}; expected a UTF-8 CSV file (${signature.advice})`;
+  return new InputError('csv-encoding', message, { file, line });
 }

@@ -25,6 +25,24 @@ describe('gzip data files (.csv.gz)', () => {
     expect(await outcome(repo, 'b.csv.gz', { columns: ['x'] })).toMatchObject({ ok: false, code: 'csv-gzip', file: 'b.csv.gz' });
   });
 
+  it('says what a file named .gz holds instead: plain text, or another format known by its first bytes', async () => {
+    // The xz stream header's magic bytes (data/file-signatures.ts), then bytes no gzip member starts with.
+    const xz = Uint8Array.from([0xfd, 0x37, 0x7a, 0x58, 0x5a, 0x00, 0x00, 0x04, 0xe6, 0xd6]);
+    const repo = memoryRepo({ 'a.csv.gz': text, 'x.csv.gz': xz, 'z.csv.gz': Uint8Array.from([0x00, 0xff, 0x00, 0xff]) }, { cuts: [1, 3] });
+    const message = async (file: string): Promise<string> => {
+      const got = await outcome(repo, file, { columns: ['x'] });
+      expect(got).toMatchObject({ ok: false, code: 'csv-gzip', file });
+      return got.ok ? '' : got.message;
+    };
+    expect(await message('a.csv.gz')).toMatch(/Hint: the file starts like plain text: .*drop the `\.gz` from its name/);
+    expect(await message('x.csv.gz')).toMatch(/Hint: the file looks like xz-compressed data; .*compress it with gzip/);
+    expect(await message('z.csv.gz')).not.toMatch(/Hint/);
+    // Cut short, a real gzip file gets no hint: it is gzip data.
+    const packed = gzipSync(Buffer.from(text));
+    const cut = await outcome(memoryRepo({ 'b.csv.gz': packed.subarray(0, packed.length - 20) }), 'b.csv.gz', { columns: ['x'] });
+    expect(cut.ok === false && cut.message).not.toMatch(/Hint/);
+  });
+
   it('stops at the size cap when the data decompresses past it (a small file that expands without end)', async () => {
     const bomb = gzipSync(Buffer.from('x\n' + '1\n'.repeat(4_000_000)));
     expect(bomb.length).toBeLessThan(100_000);

@@ -28,11 +28,12 @@ export const sharedReferenceDir = fileURLToPath(new URL('../../../shared/referen
 export const sharedBenchDir = fileURLToPath(new URL('../../../shared/bench/', import.meta.url));
 
 /**
- * Something a test can need. The `python3-*` names are Debian packages checked by importing
- * their module with {@link PYTHON3}: python3-numpy -> `numpy`, python3-pandas -> `pandas`,
- * python3-sklearn -> `sklearn`.
+ * Something a test can need. `python3` is Debian's Python with its standard library alone (the
+ * python3-* packages install it too). The `python3-*` names are Debian packages checked by
+ * importing their module with {@link PYTHON3}: python3-numpy -> `numpy`, python3-pandas ->
+ * `pandas`, python3-sklearn -> `sklearn`.
  */
-export type Need = 'chromium' | 'python3-numpy' | 'python3-pandas' | 'python3-sklearn' | 'shared/reference' | 'shared/bench';
+export type Need = 'chromium' | 'python3' | 'python3-numpy' | 'python3-pandas' | 'python3-sklearn' | 'shared/reference' | 'shared/bench';
 
 const PYTHON_MODULES: Partial<Record<Need, string>> = {
   'python3-numpy': 'numpy',
@@ -58,6 +59,8 @@ export function unmetNeeds(needs: readonly Need[]): string[] {
   const reasons: string[] = [];
   if (needs.includes('chromium') && !executable(CHROMIUM)) reasons.push(`${CHROMIUM} is missing (Debian package chromium)`);
   const packages = needs.filter((n) => PYTHON_MODULES[n] !== undefined);
+  if (needs.includes('python3') && packages.length === 0 && !executable(PYTHON3))
+    reasons.push(`${PYTHON3} is missing (Debian package python3)`);
   if (packages.length > 0) {
     if (!executable(PYTHON3)) {
       reasons.push(`${PYTHON3} is missing (Debian packages python3 ${packages.join(' ')})`);
