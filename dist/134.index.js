@@ -1701,6 +1701,7 @@ var diagnostics_folds = __webpack_require__(7694);
 
 
 
+
 /**
  * Rows the classifier sweep uses at most (an even-stride subsample above it): every setting is
  * k IRLS fits, so the sweep is kept to a bounded cost; 20,000 rows rank the settings well within
@@ -1711,8 +1712,9 @@ const CLASSIFIER_SWEEP_MAX_ROWS = 20000;
  * Sweeps the classifier's complexity setting. Ridge: lambda = s x 10^t, t = 3, 2, ..., -3, with
  * s = max(current lambda, rows / 1000), plus the current lambda, largest (simplest) first, each
  * setting's fit on all the sweep's rows started from the previous one's, and its fold fits from
- * it (their first Newton step from its per-fold Grams: fit/logistic.ts, firstStepsWithout). Degree: 1 .. current + 3 (at most 15). Width: current
- * x 2^t, t = 4 .. -2. Each setting: the mean of the fold log-losses and its standard error (sample
+ * it (their first Newton step from its per-fold Grams: fit/logistic.ts, firstStepsWithout). Other
+ * kinds: the settings of complexity.ts `sweepSettings` (degree, width, knots, harmonics); a
+ * setting the data cannot carry is left out. Each setting: the mean of the fold log-losses and its standard error (sample
  * sd / sqrt(k)).
  * @returns null when there is nothing to sweep or fewer than 2 folds
  */
@@ -1738,22 +1740,21 @@ function sweepClassifier(descriptor, design, train) {
     else {
         const trainColumns = new Map(design.inputs.map((name, c) => [name, train.inputs[c]]));
         const spec = design.terms[target.term].spec;
-        const values = [];
-        if (target.kind === 'degree') {
-            const degree = spec.degree;
-            const top = Math.max(degree, Math.min(degree + 3, 15));
-            for (let g = 1; g <= top; g++)
-                values.push({ value: g, current: g === degree });
-        }
-        else {
-            const width = spec.width;
-            for (let t = 4; t >= -2; t--)
-                values.push({ value: width * 2 ** t, current: t === 0 });
-        }
-        for (const { value, current } of values) {
-            const changed = target.kind === 'degree' ? { ...spec, degree: value } : { ...spec, width: value };
-            const terms = design.terms.map((t, i) => (i === target.term ? (0,design_terms/* createTerm */.P)(changed, trainColumns, descriptor.file) : t));
-            points.push({ value, current, design: (0,design_matrix/* createDesign */.x)(terms, design.intercept), ridge });
+        const kind = target.kind;
+        for (const { value, current } of (0,complexity/* sweepSettings */._j)(spec, kind)) {
+            let changed;
+            try {
+                const setting = current ? spec : (0,complexity/* changedSpec */.Q$)(spec, kind, value);
+                const terms = design.terms.map((t, i) => (i === target.term ? (0,design_terms/* createTerm */.P)(setting, trainColumns, descriptor.file) : t));
+                changed = (0,design_matrix/* createDesign */.x)(terms, design.intercept);
+            }
+            catch (error) {
+                // A setting the data cannot carry (e.g. more spline knots than distinct quantiles) is left out.
+                if (!(error instanceof errors/* InputError */.dz))
+                    throw error;
+                continue;
+            }
+            points.push({ value, current, design: changed, ridge });
         }
     }
     const curve = [];

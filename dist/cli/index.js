@@ -9963,6 +9963,7 @@ function partLines(data, lines) {
 /* harmony export */   yK: () => (/* binding */ signatureOf)
 /* harmony export */ });
 /* unused harmony export FILE_SIGNATURES */
+/* harmony import */ var _core_extremes_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(398);
 /**
  * What a data file that is not UTF-8 text most likely is, told by its first bytes (the "magic
  * numbers" each format starts with), so that the encoding error says what to do with it: a
@@ -9976,6 +9977,7 @@ function partLines(data, lines) {
  * test/data/file-signatures.test.ts checks the gzip, bzip2, xz and ZIP signatures against files
  * that Python's standard library writes.
  */
+
 const RECOMPRESS = 'fitgate reads plain CSV text and gzip-compressed CSV (`.csv.gz`): decompress it, or compress it with gzip';
 const EXPORT = 'export the sheet or table as a CSV file (UTF-8)';
 /** The signatures fitgate recognises, longest first where one could begin another. */
@@ -10000,7 +10002,7 @@ const FILE_SIGNATURES = Object.freeze([
     { magic: [0x50, 0x41, 0x52, 0x31], what: 'a Parquet file', advice: EXPORT },
 ]);
 /** Most bytes a signature needs. */
-const SIGNATURE_BYTES = Math.max(...FILE_SIGNATURES.map((s) => s.magic.length));
+const SIGNATURE_BYTES = (0,_core_extremes_js__WEBPACK_IMPORTED_MODULE_0__/* .maxOf */ ._)(FILE_SIGNATURES.map((s) => s.magic.length));
 /**
  * The signature the bytes start with, or null.
  * @param head the file's first bytes (at least {@link SIGNATURE_BYTES} of them where the file has that many)
@@ -13118,9 +13120,11 @@ function selectKth(a, k) {
 // EXPORTS
 __nccwpck_require__.d(__webpack_exports__, {
   QA: () => (/* binding */ SWEEP_MAX_ROWS),
+  Q$: () => (/* binding */ changedSpec),
   gs: () => (/* binding */ oneStandardErrorRule),
   pb: () => (/* binding */ subsample),
   j6: () => (/* binding */ sweepComplexity),
+  _j: () => (/* binding */ sweepSettings),
   EH: () => (/* binding */ sweepShape),
   mb: () => (/* binding */ sweepTarget)
 });
@@ -13322,7 +13326,38 @@ function countSettings(spec) {
     const top = spec.kind === 'spline' ? Math.min(100, current + 4) : Math.min(50, current + 3);
     return Array.from({ length: top }, (_, i) => ({ value: i + 1, current: i + 1 === current }));
 }
-/** The term's spec with the swept setting changed (knots become a count at the training quantiles). */
+/**
+ * The settings a sweep of the term `spec` tries for a kind other than ridge, simplest first, the
+ * term's own setting marked `current`: degrees 1 .. min(current + {@link SWEEP_DEGREES_ABOVE},
+ * maxDegree) (at least the current one; over several inputs only those of at most
+ * {@link MAX_SWEEP_COLUMNS} columns, and the current one), widths current x 2^t for t in
+ * {@link SWEEP_WIDTH_EXPONENTS}, knot counts 1 .. current + 4 (at most 100), harmonics 1 ..
+ * current + 3 (at most 50). The regression and the classifier sweeps both try these.
+ * @param spec the swept term's spec
+ * @param kind the sweep's kind (not `ridge`)
+ * @param maxDegree highest degree tried; default {@link SWEEP_MAX_DEGREE}
+ */
+function sweepSettings(spec, kind, maxDegree = SWEEP_MAX_DEGREE) {
+    if (kind === 'degree') {
+        const degree = spec.degree;
+        // Over several inputs the columns grow as C(k + g, g) - 1: stop before MAX_SWEEP_COLUMNS.
+        const inputs = spec.kind === 'multi-polynomial' ? spec.of.length : 1;
+        return sweepDegrees(degree, maxDegree)
+            .filter((g) => g === degree || monomialCount(inputs, g) <= MAX_SWEEP_COLUMNS)
+            .map((g) => ({ value: g, current: g === degree }));
+    }
+    if (kind === 'width') {
+        const width = spec.width;
+        return SWEEP_WIDTH_EXPONENTS.map((t) => ({ value: width * 2 ** t, current: t === 0 }));
+    }
+    return countSettings(spec);
+}
+/**
+ * The term's spec with the swept setting changed (knots become a count at the training quantiles).
+ * @param spec the swept term's spec
+ * @param kind the sweep's kind (not `ridge`)
+ * @param value the setting
+ */
 function changedSpec(spec, kind, value) {
     if (kind === 'degree')
         return { ...spec, degree: value };
@@ -13367,10 +13402,23 @@ function sweepShape(descriptor, design, rows, options = {}) {
     if (target.kind === 'ridge')
         return { kind: 'ridge', rows, parameters: Array.from({ length: SWEEP_RIDGE_EXPONENTS.length + 1 }, () => design.p) };
     const used = Math.min(rows, options.maxRows ?? SWEEP_MAX_ROWS);
+    const term = design.terms[target.term];
+    const settings = sweepSettings(term.spec, target.kind, options.maxDegree);
     if (target.kind === 'width')
-        return { kind: 'width', rows: used, parameters: SWEEP_WIDTH_EXPONENTS.map(() => design.p) };
-    const degree = design.terms[target.term].spec.degree;
-    return { kind: 'degree', rows: used, parameters: sweepDegrees(degree, options.maxDegree).map((g) => design.p - degree + g) };
+        return { kind: 'width', rows: used, parameters: settings.map(() => design.p) };
+    // Columns of the term at each setting: a polynomial of one input has `degree` columns, one of
+    // several inputs C(k + g, g) - 1; a spline gains a column per knot, a Fourier term two per harmonic.
+    const own = term.columnNames.length;
+    const currentValue = settings.find((x) => x.current)?.value ?? 0;
+    const columnsAt = (value) => {
+        const spec = term.spec;
+        if (spec.kind === 'multi-polynomial')
+            return monomialCount(spec.of.length, value);
+        if (target.kind === 'degree')
+            return value;
+        return own + (value - currentValue) * (target.kind === 'harmonics' ? 2 : 1);
+    };
+    return { kind: target.kind, rows: used, parameters: settings.map(({ value }) => design.p - own + columnsAt(value)) };
 }
 /**
  * m rows at an even stride through the data (row floor(t n / m) for t < m), as new columns.
@@ -13495,31 +13543,13 @@ function sweepComplexity(descriptor, design, train, fit, options = {}) {
         const scaledRows = scaling === null ? rows : { inputs: rows.inputs, y: scaling.y, rows: rows.rows };
         const trainColumns = new Map(design.inputs.map((name, c) => [name, train.inputs[c]]));
         const spec = design.terms[target.term].spec;
-        const settings = [];
-        if (target.kind === 'degree') {
-            const degree = spec.degree;
-            const top = Math.max(degree, Math.min(degree + 3, options.maxDegree ?? 15));
-            // Over several inputs the columns grow as C(k + g, g) - 1: stop before MAX_SWEEP_COLUMNS.
-            const inputs = spec.kind === 'multi-polynomial' ? spec.of.length : 1;
-            for (let g = 1; g <= top; g++)
-                if (g === degree || monomialCount(inputs, g) <= MAX_SWEEP_COLUMNS)
-                    settings.push({ value: g, current: g === degree });
-        }
-        else if (target.kind === 'width') {
-            const width = spec.width;
-            for (let t = 4; t >= -2; t--)
-                settings.push({ value: width * 2 ** t, current: t === 0 });
-        }
-        else {
-            for (const setting of countSettings(spec))
-                settings.push(setting);
-        }
-        for (const { value, current } of settings) {
+        const kind = target.kind;
+        for (const { value, current } of sweepSettings(spec, kind, options.maxDegree)) {
             (0,deadline/* checkDeadline */.Ft)('complexity sweep');
             const label = `${target.kind} ${formatSetting(value)}`;
             let d;
             try {
-                const changed = current ? spec : changedSpec(spec, target.kind, value);
+                const changed = current ? spec : changedSpec(spec, kind, value);
                 const terms = design.terms.map((t, i) => (i === target.term ? (0,design_terms/* createTerm */.P)(changed, trainColumns, descriptor.file) : t));
                 d = (0,design_matrix/* createDesign */.x)(terms, design.intercept);
             }
@@ -21383,8 +21413,7 @@ const MAX_CHART_POINTS = 1000;
  * prediction and the residual (inputs + 4 numbers), so a series keeps at most
  * floor(5,000 / (inputs + 4)) rows, and never more than {@link MAX_CHART_POINTS} (a model of one
  * input keeps 1,000, of five 555). With at most {@link MAX_PARTIAL_CURVES} curves this bounds a
- * model's chart data whatever its rows and inputs: a report of 1,000 models of 5 inputs stays
- * near 300 MB of JSON.
+ * model's chart data whatever its rows and inputs; {@link RUN_CHART_NUMBERS} bounds a run's.
  */
 const MAX_SERIES_NUMBERS = 5000;
 /** Most partial curves of a model of several inputs: those of its first inputs (with a spread). */

@@ -11,6 +11,7 @@
  * test/data/file-signatures.test.ts checks the gzip, bzip2, xz and ZIP signatures against files
  * that Python's standard library writes.
  */
+import { maxOf } from '../core/extremes.js';
 
 /** A kind of file recognised by its first bytes. */
 export interface FileSignature {
@@ -50,7 +51,7 @@ export const FILE_SIGNATURES: readonly FileSignature[] = Object.freeze([
 ]);
 
 /** Most bytes a signature needs. */
-export const SIGNATURE_BYTES = Math.max(...FILE_SIGNATURES.map((s) => s.magic.length));
+export const SIGNATURE_BYTES = maxOf(FILE_SIGNATURES.map((s) => s.magic.length));
 
 /**
  * The signature the bytes start with, or null.

@@ -1,15 +1,17 @@
 /**
  * The complexity sweep of a binary classifier: the same settings as the regression sweep
  * (complexity.ts: the ridge penalty, else the highest polynomial degree, else the first radial
- * width), each scored by its k-fold cross-validation log-loss on the model's own folds, and the
+ * width, else the first spline's knot count, else the first Fourier term's harmonics; the settings
+ * of complexity.ts `sweepSettings`), each scored by its k-fold cross-validation log-loss on the model's own folds, and the
  * one-standard-error rule (Hastie, Tibshirani & Friedman, The Elements of Statistical Learning,
  * 2nd ed., 2009, section 7.10) picking the simplest setting within one standard error of the best.
  */
-import type { Descriptor, PolynomialTermSpec, RbfTermSpec } from '../config/types.js';
+import type { Descriptor } from '../config/types.js';
+import { InputError } from '../core/errors.js';
 import { createDesign, type Design } from '../design/design-matrix.js';
 import { createTerm, type Term } from '../design/terms/index.js';
 import { firstStepsWithout, fitLogistic, outOfFoldDeviance, type LogisticRows } from '../fit/logistic.js';
-import { oneStandardErrorRule, subsample, sweepTarget, type SweepKind } from './complexity.js';
+import { changedSpec, oneStandardErrorRule, subsample, sweepSettings, sweepTarget, type SweepKind } from './complexity.js';
 import { assignFolds } from './folds.js';
 
 /** One point of a classifier's complexity sweep. */
@@ -43,8 +45,9 @@ export const CLASSIFIER_SWEEP_MAX_ROWS = 20000;
  * Sweeps the classifier's complexity setting. Ridge: lambda = s x 10^t, t = 3, 2, ..., -3, with
  * s = max(current lambda, rows / 1000), plus the current lambda, largest (simplest) first, each
  * setting's fit on all the sweep's rows started from the previous one's, and its fold fits from
- * it (their first Newton step from its per-fold Grams: fit/logistic.ts, firstStepsWithout). Degree: 1 .. current + 3 (at most 15). Width: current
- * x 2^t, t = 4 .. -2. Each setting: the mean of the fold log-losses and its standard error (sample
+ * it (their first Newton step from its per-fold Grams: fit/logistic.ts, firstStepsWithout). Other
+ * kinds: the settings of complexity.ts `sweepSettings` (degree, width, knots, harmonics); a
+ * setting the data cannot carry is left out. Each setting: the mean of the fold log-losses and its standard error (sample
  * sd / sqrt(k)).
  * @returns null when there is nothing to sweep or fewer than 2 folds
  */
@@ -65,20 +68,19 @@ export function sweepClassifier(descriptor: Descriptor, design: Design, train: L
   } else {
     const trainColumns = new Map<string, Float64Array>(design.inputs.map((name, c) => [name, train.inputs[c]]));
     const spec = design.terms[target.term].spec;
-    const values: { value: number; current: boolean }[] = [];
-    if (target.kind === 'degree') {
-      const degree = (spec as PolynomialTermSpec).degree;
-      const top = Math.max(degree, Math.min(degree + 3, 15));
-      for (let g = 1; g <= top; g++) values.push({ value: g, current: g === degree });
-    } else {
-      const width = (spec as RbfTermSpec).width;
-      for (let t = 4; t >= -2; t--) values.push({ value: width * 2 ** t, current: t === 0 });
-    }
-    for (const { value, current } of values) {
-      const changed =
-        target.kind === 'degree' ? { ...(spec as PolynomialTermSpec), degree: value } : { ...(spec as RbfTermSpec), width: value };
-      const terms: Term[] = design.terms.map((t, i) => (i === target.term ? createTerm(changed, trainColumns, descriptor.file) : t));
-      points.push({ value, current, design: createDesign(terms, design.intercept), ridge });
+    const kind = target.kind;
+    for (const { value, current } of sweepSettings(spec, kind)) {
+      let changed: Design;
+      try {
+        const setting = current ? spec : changedSpec(spec, kind, value);
+        const terms: Term[] = design.terms.map((t, i) => (i === target.term ? createTerm(setting, trainColumns, descriptor.file) : t));
+        changed = createDesign(terms, design.intercept);
+      } catch (error) {
+        // A setting the data cannot carry (e.g. more spline knots than distinct quantiles) is left out.
+        if (!(error instanceof InputError)) throw error;
+        continue;
+      }
+      points.push({ value, current, design: changed, ridge });
     }
   }
   const curve: ClassifierSweep['points'] = [];

@@ -179,8 +179,44 @@ function countSettings(spec: TermSpec): { value: number; current: boolean }[] {
   return Array.from({ length: top }, (_, i) => ({ value: i + 1, current: i + 1 === current }));
 }
 
-/** The term's spec with the swept setting changed (knots become a count at the training quantiles). */
-function changedSpec(spec: TermSpec, kind: SweepKind, value: number): TermSpec {
+/**
+ * The settings a sweep of the term `spec` tries for a kind other than ridge, simplest first, the
+ * term's own setting marked `current`: degrees 1 .. min(current + {@link SWEEP_DEGREES_ABOVE},
+ * maxDegree) (at least the current one; over several inputs only those of at most
+ * {@link MAX_SWEEP_COLUMNS} columns, and the current one), widths current x 2^t for t in
+ * {@link SWEEP_WIDTH_EXPONENTS}, knot counts 1 .. current + 4 (at most 100), harmonics 1 ..
+ * current + 3 (at most 50). The regression and the classifier sweeps both try these.
+ * @param spec the swept term's spec
+ * @param kind the sweep's kind (not `ridge`)
+ * @param maxDegree highest degree tried; default {@link SWEEP_MAX_DEGREE}
+ */
+export function sweepSettings(
+  spec: TermSpec,
+  kind: Exclude<SweepKind, 'ridge'>,
+  maxDegree = SWEEP_MAX_DEGREE,
+): { value: number; current: boolean }[] {
+  if (kind === 'degree') {
+    const degree = (spec as PolynomialTermSpec | MultiPolynomialTermSpec).degree;
+    // Over several inputs the columns grow as C(k + g, g) - 1: stop before MAX_SWEEP_COLUMNS.
+    const inputs = spec.kind === 'multi-polynomial' ? spec.of.length : 1;
+    return sweepDegrees(degree, maxDegree)
+      .filter((g) => g === degree || monomialCount(inputs, g) <= MAX_SWEEP_COLUMNS)
+      .map((g) => ({ value: g, current: g === degree }));
+  }
+  if (kind === 'width') {
+    const width = (spec as RbfTermSpec).width;
+    return SWEEP_WIDTH_EXPONENTS.map((t) => ({ value: width * 2 ** t, current: t === 0 }));
+  }
+  return countSettings(spec);
+}
+
+/**
+ * The term's spec with the swept setting changed (knots become a count at the training quantiles).
+ * @param spec the swept term's spec
+ * @param kind the sweep's kind (not `ridge`)
+ * @param value the setting
+ */
+export function changedSpec(spec: TermSpec, kind: Exclude<SweepKind, 'ridge'>, value: number): TermSpec {
   if (kind === 'degree') return { ...(spec as PolynomialTermSpec | MultiPolynomialTermSpec), degree: value };
   if (kind === 'width') return { ...(spec as RbfTermSpec), width: value };
   if (kind === 'knots') return { ...(spec as SplineTermSpec), knots: { kind: 'count', count: value } };
@@ -241,9 +277,20 @@ export function sweepShape(
   if (target.kind === 'ridge')
     return { kind: 'ridge', rows, parameters: Array.from({ length: SWEEP_RIDGE_EXPONENTS.length + 1 }, () => design.p) };
   const used = Math.min(rows, options.maxRows ?? SWEEP_MAX_ROWS);
-  if (target.kind === 'width') return { kind: 'width', rows: used, parameters: SWEEP_WIDTH_EXPONENTS.map(() => design.p) };
-  const degree = (design.terms[target.term].spec as PolynomialTermSpec).degree;
-  return { kind: 'degree', rows: used, parameters: sweepDegrees(degree, options.maxDegree).map((g) => design.p - degree + g) };
+  const term = design.terms[target.term];
+  const settings = sweepSettings(term.spec, target.kind, options.maxDegree);
+  if (target.kind === 'width') return { kind: 'width', rows: used, parameters: settings.map(() => design.p) };
+  // Columns of the term at each setting: a polynomial of one input has `degree` columns, one of
+  // several inputs C(k + g, g) - 1; a spline gains a column per knot, a Fourier term two per harmonic.
+  const own = term.columnNames.length;
+  const currentValue = settings.find((x) => x.current)?.value ?? 0;
+  const columnsAt = (value: number): number => {
+    const spec = term.spec;
+    if (spec.kind === 'multi-polynomial') return monomialCount(spec.of.length, value);
+    if (target.kind === 'degree') return value;
+    return own + (value - currentValue) * (target.kind === 'harmonics' ? 2 : 1);
+  };
+  return { kind: target.kind, rows: used, parameters: settings.map(({ value }) => design.p - own + columnsAt(value)) };
 }
 
 /**
@@ -381,26 +428,13 @@ export function sweepComplexity(
     const scaledRows: Rows = scaling === null ? rows : { inputs: rows.inputs, y: scaling.y, rows: rows.rows };
     const trainColumns = new Map<string, Float64Array>(design.inputs.map((name, c) => [name, train.inputs[c]]));
     const spec = design.terms[target.term].spec;
-    const settings: { value: number; current: boolean }[] = [];
-    if (target.kind === 'degree') {
-      const degree = (spec as PolynomialTermSpec).degree;
-      const top = Math.max(degree, Math.min(degree + 3, options.maxDegree ?? 15));
-      // Over several inputs the columns grow as C(k + g, g) - 1: stop before MAX_SWEEP_COLUMNS.
-      const inputs = spec.kind === 'multi-polynomial' ? spec.of.length : 1;
-      for (let g = 1; g <= top; g++)
-        if (g === degree || monomialCount(inputs, g) <= MAX_SWEEP_COLUMNS) settings.push({ value: g, current: g === degree });
-    } else if (target.kind === 'width') {
-      const width = (spec as RbfTermSpec).width;
-      for (let t = 4; t >= -2; t--) settings.push({ value: width * 2 ** t, current: t === 0 });
-    } else {
-      for (const setting of countSettings(spec)) settings.push(setting);
-    }
-    for (const { value, current } of settings) {
+    const kind = target.kind;
+    for (const { value, current } of sweepSettings(spec, kind, options.maxDegree)) {
       checkDeadline('complexity sweep');
       const label = `${target.kind} ${formatSetting(value)}`;
       let d: Design;
       try {
-        const changed = current ? spec : changedSpec(spec, target.kind, value);
+        const changed = current ? spec : changedSpec(spec, kind, value);
         const terms: Term[] = design.terms.map((t, i) => (i === target.term ? createTerm(changed, trainColumns, descriptor.file) : t));
         d = createDesign(terms, design.intercept);
       } catch (error) {

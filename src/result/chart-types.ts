@@ -13,8 +13,7 @@ export const MAX_CHART_POINTS = 1000;
  * prediction and the residual (inputs + 4 numbers), so a series keeps at most
  * floor(5,000 / (inputs + 4)) rows, and never more than {@link MAX_CHART_POINTS} (a model of one
  * input keeps 1,000, of five 555). With at most {@link MAX_PARTIAL_CURVES} curves this bounds a
- * model's chart data whatever its rows and inputs: a report of 1,000 models of 5 inputs stays
- * near 300 MB of JSON.
+ * model's chart data whatever its rows and inputs; {@link RUN_CHART_NUMBERS} bounds a run's.
  */
 export const MAX_SERIES_NUMBERS = 5000;
 

@@ -19,7 +19,7 @@ export type Verdict = 'pass' | 'warn' | 'fail' | 'error';
 export interface CheckResult {
   /** Check id, e.g. `generalisation-gap`. */
   id: string;
-  /** Stable code: the id plus a sub-reason, e.g. `generalisation-gap/over-fail`. */
+  /** Stable code: the id plus the status or a sub-reason, e.g. `generalisation-gap/fail`, `holdout-rmse/off`. */
   code: string;
   status: CheckStatus;
   /** The figure the limit applies to; null when skipped or not computable. */

@@ -73,3 +73,39 @@ describe('classifier complexity sweep', () => {
     }
   });
 });
+
+describe('classifier complexity sweep of spline knots and Fourier harmonics', () => {
+  const data = rows(1500);
+  const columns = new Map([['x', data.inputs[0]]]);
+  const cases = [
+    {
+      kind: 'knots',
+      term: { kind: 'spline', of: 'x', knots: { kind: 'count', count: 3 }, degree: 3, natural: false },
+      values: [1, 2, 3, 4, 5, 6, 7],
+      at: (value: number) => ({ kind: 'spline', of: 'x', knots: { kind: 'count', count: value }, degree: 3, natural: false }),
+    },
+    {
+      kind: 'harmonics',
+      term: { kind: 'fourier', of: 'x', period: 6, harmonics: 2 },
+      values: [1, 2, 3, 4, 5],
+      at: (value: number) => ({ kind: 'fourier', of: 'x', period: 6, harmonics: value }),
+    },
+  ] as const;
+  for (const c of cases) {
+    it(`${c.kind}: the settings of the regression sweep, each with the CV log-loss of independent fold fits`, () => {
+      const d = descriptor({ terms: [c.term as never], target: 'y' });
+      const design = createDesign([createTerm(d.terms[0], columns, d.file)], true);
+      const sweep = sweepClassifier(d, design, data)!;
+      expect(sweep.kind).toBe(c.kind);
+      expect(sweep.points.map((p) => p.value)).toEqual(c.values);
+      expect(sweep.points[sweep.current].value).toBe(c.values.find((v) => v === (c.kind === 'knots' ? 3 : 2)));
+      for (const point of sweep.points) {
+        const spec = { ...c.at(point.value), line: d.terms[0].line } as (typeof d.terms)[0];
+        const dg = createDesign([createTerm(spec, columns, d.file)], true);
+        const expected = mean(independent(dg, data, 0, 5));
+        expect(Number.isFinite(point.cvLogLoss), `${c.kind} ${point.value}`).toBe(true);
+        expect(Math.abs(point.cvLogLoss - expected) / expected, `${c.kind} ${point.value}`).toBeLessThan(1e-9);
+      }
+    });
+  }
+});

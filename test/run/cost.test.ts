@@ -69,6 +69,8 @@ describe('the cost estimate', () => {
       }),
       descriptor({ terms: [{ kind: 'rbf', of: 'x', centers: { kind: 'count', from: 0, to: 10, count: 6 }, width: 2 }], target: 'y' }),
       descriptor({ terms: [{ kind: 'linear', columns: ['x'] }], target: 'y', ridge: 0.5 }),
+      descriptor({ terms: [{ kind: 'spline', of: 'x', knots: { kind: 'count', count: 3 }, degree: 3, natural: false }], target: 'y' }),
+      descriptor({ terms: [{ kind: 'fourier', of: 'x', period: 10, harmonics: 2 }], target: 'y' }),
     ];
     for (const d of cases) {
       const ctx = buildContext(d, t, t);
