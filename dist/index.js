@@ -30674,6 +30674,10 @@ function descriptorText(model, ratio) {
         `  train: ${scalar(model.train)}`,
         `  holdout: ${scalar(model.holdout)}`,
         `  target: ${scalar(model.target)}`,
+        ...(model.decimal === ',' ? ['  decimal: ","                # the files write numbers with a decimal comma'] : []),
+        ...(model.missing === 'drop'
+            ? ['  missing: drop               # rows with an empty or NA-like cell in a used column are dropped and counted']
+            : []),
         `terms:                       # ${model.degree === 1 ? 'linear terms: a modest first model' : 'degree 2, inputs standardised: a modest first model'}`,
         ...terms,
         'fit:',
@@ -33344,7 +33348,7 @@ function splitLabelError(cell, file, line, split) {
 /* harmony export */   lz: () => (/* binding */ isMissingCell),
 /* harmony export */   vB: () => (/* binding */ ChunkBuilder)
 /* harmony export */ });
-/* unused harmony exports MAX_HEADER_COLUMNS, MISSING_SPELLINGS, layoutHint */
+/* unused harmony exports MAX_HEADER_COLUMNS, MISSING_SPELLINGS, layoutHint, MISSING_HINT, DECIMAL_COMMA_HINT */
 /* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(4296);
 /**
  * The rules both CSV paths share, kept in one place so that the fast path and the general
@@ -33528,6 +33532,10 @@ function cellError(cell, file, line, column) {
         why = `got ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(cell, MAX_CELL_QUOTED)}`;
     return new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz('csv-cell', `column ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(column, MAX_CELL_QUOTED)}: expected a finite decimal number (like 12, -0.5 or 1.5e-3); ${why}${cellHint(text)}`, { file, line, key: column });
 }
+/** The end of a `csv-cell` error for a missing cell: the setting that drops such rows. */
+const MISSING_HINT = '. Hint: to drop the rows with a missing cell in a used column (and count them in the report), set `data.missing: drop` in the descriptor';
+/** The end of a `csv-cell` error for what may be a number with a decimal comma: the setting that reads it. */
+const DECIMAL_COMMA_HINT = '. Hint: if the file writes numbers with a decimal comma (1,5 for 1.5), set `data.decimal: ","` in the descriptor';
 /** A number written with a decimal comma and no other mark, like `2,5` or `-0,125`. */
 const DECIMAL_COMMA_NUMBER = /^[+-]?\d*,\d+$/;
 /**
@@ -33539,9 +33547,9 @@ const DECIMAL_COMMA_NUMBER = /^[+-]?\d*,\d+$/;
  */
 function cellHint(text) {
     if (isMissingCell(text))
-        return '. Hint: to drop the rows with a missing cell in a used column (and count them in the report), set `data.missing: drop` in the descriptor';
+        return MISSING_HINT;
     if (DECIMAL_COMMA_NUMBER.test(text))
-        return '. Hint: if the file writes numbers with a decimal comma (1,5 for 1.5), set `data.decimal: ","` in the descriptor';
+        return DECIMAL_COMMA_HINT;
     return '';
 }
 /** The `csv-ragged` error for a row whose field count differs from the header's. */

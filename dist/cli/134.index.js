@@ -12,7 +12,7 @@ export const modules = {
 /* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(4296);
 /* harmony import */ var _load_model_data_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(5240);
 /* harmony import */ var _table_js__WEBPACK_IMPORTED_MODULE_3__ = __webpack_require__(8785);
-/* harmony import */ var _gzip_stream_js__WEBPACK_IMPORTED_MODULE_4__ = __webpack_require__(4355);
+/* harmony import */ var _gzip_stream_js__WEBPACK_IMPORTED_MODULE_4__ = __webpack_require__(4596);
 /* harmony import */ var _data_parts_js__WEBPACK_IMPORTED_MODULE_5__ = __webpack_require__(6837);
 /**
  * The target of a binary classifier as 0/1: the two classes of the training rows, whichever way

@@ -41,8 +41,8 @@ const parse = function (data, opts = {}) {
 
 // EXTERNAL MODULE: ./src/core/errors.ts
 var errors = __webpack_require__(4296);
-// EXTERNAL MODULE: ./src/data/gzip-stream.ts + 2 modules
-var gzip_stream = __webpack_require__(4355);
+// EXTERNAL MODULE: ./src/data/gzip-stream.ts + 1 modules
+var gzip_stream = __webpack_require__(4596);
 ;// CONCATENATED MODULE: ./src/data/text-columns.ts
 /**
  * Text columns of a CSV file (category levels), read apart from the numeric columns: the numeric

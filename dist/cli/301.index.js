@@ -327,7 +327,7 @@ function existsInRepo(root, rel) {
  *
  * @param root absolute repository root
  * @param rel repository-relative path with `/`
- * @param text UTF-8 contents
+ * @param text the contents: text (written as UTF-8) or bytes as they are
  * @param overwrite replace an existing regular file (default false: an existing file is an error)
  * @throws InputError `path-outside` (the path leaves the repository), `output-refused` (a folder on
  *   the way leads outside, or the target is a link or not a file), `file-exists` (the file exists

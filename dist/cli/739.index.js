@@ -40,6 +40,8 @@ var external_node_fs_ = __webpack_require__(3024);
 // EXTERNAL MODULE: external "node:path"
 var external_node_path_ = __webpack_require__(6760);
 var external_node_path_default = /*#__PURE__*/__webpack_require__.n(external_node_path_);
+// EXTERNAL MODULE: external "node:zlib"
+var external_node_zlib_ = __webpack_require__(8522);
 // EXTERNAL MODULE: ./src/config/init-files.ts
 var init_files = __webpack_require__(1144);
 // EXTERNAL MODULE: ./src/config/settings-file.ts
@@ -54,6 +56,10 @@ var nearest = __webpack_require__(761);
 var version = __webpack_require__(3323);
 // EXTERNAL MODULE: ./src/data/table.ts + 1 modules
 var data_table = __webpack_require__(8785);
+// EXTERNAL MODULE: ./src/data/csv-rules.ts
+var csv_rules = __webpack_require__(8706);
+// EXTERNAL MODULE: ./src/data/gzip-stream.ts + 1 modules
+var gzip_stream = __webpack_require__(4596);
 // EXTERNAL MODULE: ./src/diagnostics/random.ts
 var random = __webpack_require__(5089);
 ;// CONCATENATED MODULE: ./src/diagnostics/holdout-split.ts
@@ -134,6 +140,9 @@ var repo_write = __webpack_require__(9056);
 
 
 
+
+
+
 /** Folder the first descriptor goes into, repository-relative. */
 const MODELS_FOLDER = 'models';
 /** Most columns init tries to read as numbers (a wider file keeps the first ones that are). */
@@ -149,13 +158,13 @@ function schemaLocation(root, folder, file) {
         return external_node_path_default().posix.relative(folder === '' ? '.' : folder, installed);
     return `${links/* REPOSITORY_URL */.l.replace('https://github.com/', 'https://raw.githubusercontent.com/')}/v${version/* VERSION */.x}/dist/schema/${file}.schema.json`;
 }
-/** Reads the columns that hold numbers only (the target must be one of them). */
-async function numericTable(repo, file, header, target) {
+/** Reads the columns that hold numbers only (the target must be one of them), under `format`. */
+async function numericTable(repo, file, header, target, format) {
     let columns = [target, ...header.filter((c) => c !== target)].slice(0, MAX_COLUMNS);
     const dropped = header.length > MAX_COLUMNS ? header.filter((c) => !columns.includes(c)) : [];
     for (let attempt = 0; attempt <= MAX_COLUMNS; attempt++) {
         try {
-            return { table: await (0,data_table/* readTable */.xz)(repo, file, { columns }), dropped };
+            return { table: await (0,data_table/* readTable */.xz)(repo, file, { columns, format }), dropped };
         }
         catch (error) {
             const bad = error instanceof errors/* InputError */.dz && error.code === 'csv-cell' ? error.location.key : undefined;
@@ -167,14 +176,72 @@ async function numericTable(repo, file, header, target) {
     }
     throw new errors/* InputError */.dz('csv-cell', 'too many columns that are not numbers', { file });
 }
-/** The text of the data rows `indexes` of a CSV (with its header lines), from the rows' physical lines. */
+/**
+ * The numeric columns under the decimal mark asked for; under `auto`, a decimal comma when more
+ * columns read as numbers with it than with a point (a file separated by commas cannot have one).
+ * An error of the init's own reading names the init option that settles it, not the descriptor key.
+ */
+async function readNumbers(repo, command, header, target) {
+    const attempt = async (decimal) => ({
+        ...(await numericTable(repo, command.train, header, target, { decimal, missing: command.missing })),
+        decimal,
+    });
+    try {
+        if (command.decimal !== 'auto')
+            return await attempt(command.decimal);
+        let point = null;
+        let pointError = null;
+        try {
+            point = await attempt('.');
+            if (point.dropped.length === 0)
+                return point;
+        }
+        catch (error) {
+            pointError = error;
+        }
+        let comma = null;
+        try {
+            comma = await attempt(',');
+        }
+        catch {
+            // Not a decimal-comma file either: the point's outcome stands.
+        }
+        if (comma !== null && (point === null || comma.dropped.length < point.dropped.length))
+            return comma;
+        if (point !== null)
+            return point;
+        throw pointError;
+    }
+    catch (error) {
+        if (!(error instanceof errors/* InputError */.dz) || error.code !== 'csv-cell')
+            throw error;
+        const message = error.message
+            .replace(csv_rules/* MISSING_HINT */.PF, '. Hint: to drop the rows with a missing cell in a used column, give `--missing drop`')
+            .replace(csv_rules/* DECIMAL_COMMA_HINT */.SK, '. Hint: if the file writes numbers with a decimal comma (1,5 for 1.5), give `--decimal ,`');
+        throw new errors/* InputError */.dz(error.code, message, error.location);
+    }
+}
+/** The text of a data file as written (decompressed when its name ends in `.gz`), within the plain-file size cap. */
+async function fileText(repo, file) {
+    const bytes = await repo.read(file);
+    const plain = (0,gzip_stream/* isGzipPath */.ip)(file) ? (0,external_node_zlib_.gunzipSync)(bytes, { maxOutputLength: csv_rules/* DEFAULT_MAX_BYTES */.fS }) : bytes;
+    return new TextDecoder('utf-8').decode(plain).replace(/^\uFEFF/, '');
+}
+/**
+ * The text of the data rows `indexes` of a CSV, from the rows' physical lines: the header (the
+ * first line that is not blank), then each row's lines up to the next row's (lines between rows
+ * that were not read as rows, such as rows dropped for a missing cell, go with the row before
+ * them; those before the first row, with the first row). Blank lines are left out.
+ */
 function rowsText(lines, rowLines, indexes) {
-    const out = lines.slice(0, rowLines[0] - 1);
+    const header = lines.findIndex((line) => line.trim() !== '');
+    const out = [lines[header]];
     for (const i of indexes) {
-        const first = rowLines[i] - 1;
+        const own = rowLines[i] - 1;
+        const first = i === 0 ? header + 1 : own;
         const end = i + 1 < rowLines.length ? rowLines[i + 1] - 1 : lines.length;
         for (let j = first; j < end; j++)
-            if (lines[j].trim() !== '' || j === first)
+            if (lines[j].trim() !== '' || j === own)
                 out.push(lines[j]);
     }
     return `${out.join('\n')}\n`;
@@ -183,7 +250,7 @@ function rowsText(lines, rowLines, indexes) {
 function nameFrom(file) {
     const stem = external_node_path_default().posix
         .basename(file)
-        .replace(/\.csv$/i, '')
+        .replace(/(\.csv)?(\.gz)?$/i, '')
         .replace(/[-_.]?train(ing)?$/i, '');
     const name = stem
         .replace(/[^A-Za-z0-9._-]+/g, '-')
@@ -200,7 +267,7 @@ async function runInit(command) {
         const near = (0,nearest/* nearestWord */.z)(target, header);
         throw new errors/* InputError */.dz('csv-missing-column', `no column ${(0,errors/* quoteValue */.cl)(target, 60)}${near !== null ? ` (did you mean ${(0,errors/* quoteValue */.cl)(near, 60)}?)` : ''}; expected one of: ${header.slice(0, 20).join(', ')}`, { file: command.train, key: '--target' });
     }
-    const { table, dropped } = await numericTable(repo, command.train, header, target);
+    const { table, dropped, decimal } = await readNumbers(repo, command, header, target);
     const inputs = header.filter((c) => c !== target && table.columns.has(c));
     if (inputs.length === 0)
         throw new errors/* InputError */.dz('csv-missing-column', `no numeric column besides the target ${(0,errors/* quoteValue */.cl)(target, 60)}; expected at least one input column`, { file: command.train });
@@ -223,18 +290,19 @@ async function runInit(command) {
                 file: command.train,
             });
         const split = splitRows(table.rows, command.holdoutShare, command.split, command.seed);
-        const lines = new TextDecoder('utf-8')
-            .decode(await repo.read(command.train))
-            .replace(/^\uFEFF/, '')
-            .split(/\r?\n/);
+        const lines = (await fileText(repo, command.train)).split(/\r?\n/);
         while (lines.length > 0 && lines[lines.length - 1].trim() === '')
             lines.pop();
-        const stem = command.train.replace(/\.csv$/i, '');
-        trainFile = `${stem}-train.csv`;
-        holdoutFile = `${stem}-holdout.csv`;
+        // A gzip file splits into gzip files: data/x.csv.gz -> data/x-train.csv.gz and data/x-holdout.csv.gz.
+        const gzip = (0,gzip_stream/* isGzipPath */.ip)(command.train);
+        const stem = command.train.replace(gzip ? /(\.csv)?\.gz$/i : /\.csv$/i, '');
+        const ending = gzip ? '.csv.gz' : '.csv';
+        const packed = (text) => (gzip ? (0,external_node_zlib_.gzipSync)(text) : text);
+        trainFile = `${stem}-train${ending}`;
+        holdoutFile = `${stem}-holdout${ending}`;
         trainRows = split.train.length;
-        writes.push({ file: trainFile, text: rowsText(lines, table.lines, split.train), overwrite: command.force });
-        writes.push({ file: holdoutFile, text: rowsText(lines, table.lines, split.holdout), overwrite: command.force });
+        writes.push({ file: trainFile, text: packed(rowsText(lines, table.lines, split.train)), overwrite: command.force });
+        writes.push({ file: holdoutFile, text: packed(rowsText(lines, table.lines, split.holdout)), overwrite: command.force });
         const how = command.split === 'last'
             ? `the last ${split.holdout.length} of ${table.rows} rows (a block at the end, for data in time order)`
             : `${split.holdout.length} of ${table.rows} rows drawn at random with seed ${command.seed} (reproducible: \`--seed ${command.seed}\` gives the same split)`;
@@ -243,6 +311,12 @@ async function runInit(command) {
     }
     else if (!(await repo.isFile(holdoutFile))) {
         throw new errors/* InputError */.dz('file-missing', `hold-out file not found in ${repo.label}`, { file: holdoutFile, key: '--holdout' });
+    }
+    if (decimal === ',')
+        said.push('read the numbers with a decimal comma (data.decimal: "," in the descriptor)');
+    if (table.dropped > 0) {
+        notes.push(`Rows with a missing cell in a used column: ${table.dropped} in ${command.train}; data.missing: drop leaves them out of every check.`);
+        said.push(`${table.dropped} rows of ${command.train} have a missing cell in a used column: data.missing: drop leaves them out of every check`);
     }
     if (dropped.length > 0) {
         notes.push(`Left out (not numeric): ${dropped.slice(0, 10).join(', ')}${dropped.length > 10 ? ', ...' : ''}.`);
@@ -264,6 +338,8 @@ async function runInit(command) {
             rows: trainRows,
             schema: schemaLocation(command.root, folder, 'descriptor'),
             notes,
+            decimal,
+            missing: command.missing,
         }, ratio),
     });
     if (!(0,repo_write/* existsInRepo */.Qg)(command.root, settings_file/* DEFAULT_SETTINGS_PATH */.WA)) {
@@ -346,7 +422,7 @@ function existsInRepo(root, rel) {
  *
  * @param root absolute repository root
  * @param rel repository-relative path with `/`
- * @param text UTF-8 contents
+ * @param text the contents: text (written as UTF-8) or bytes as they are
  * @param overwrite replace an existing regular file (default false: an existing file is an error)
  * @throws InputError `path-outside` (the path leaves the repository), `output-refused` (a folder on
  *   the way leads outside, or the target is a link or not a file), `file-exists` (the file exists

@@ -2232,6 +2232,10 @@ function descriptorText(model, ratio) {
         `  train: ${scalar(model.train)}`,
         `  holdout: ${scalar(model.holdout)}`,
         `  target: ${scalar(model.target)}`,
+        ...(model.decimal === ',' ? ['  decimal: ","                # the files write numbers with a decimal comma'] : []),
+        ...(model.missing === 'drop'
+            ? ['  missing: drop               # rows with an empty or NA-like cell in a used column are dropped and counted']
+            : []),
         `terms:                       # ${model.degree === 1 ? 'linear terms: a modest first model' : 'degree 2, inputs standardised: a modest first model'}`,
         ...terms,
         'fit:',
@@ -9499,6 +9503,8 @@ function splitLabelError(cell, file, line, split) {
 /* harmony export */   CA: () => (/* binding */ emptyError),
 /* harmony export */   L6: () => (/* binding */ raggedError),
 /* harmony export */   NX: () => (/* binding */ planRequest),
+/* harmony export */   PF: () => (/* binding */ MISSING_HINT),
+/* harmony export */   SK: () => (/* binding */ DECIMAL_COMMA_HINT),
 /* harmony export */   Vt: () => (/* binding */ MIN_NORMAL),
 /* harmony export */   W4: () => (/* binding */ cellNumber),
 /* harmony export */   _I: () => (/* binding */ DEFAULT_CHUNK_ROWS),
@@ -9692,6 +9698,10 @@ function cellError(cell, file, line, column) {
         why = `got ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(cell, MAX_CELL_QUOTED)}`;
     return new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz('csv-cell', `column ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(column, MAX_CELL_QUOTED)}: expected a finite decimal number (like 12, -0.5 or 1.5e-3); ${why}${cellHint(text)}`, { file, line, key: column });
 }
+/** The end of a `csv-cell` error for a missing cell: the setting that drops such rows. */
+const MISSING_HINT = '. Hint: to drop the rows with a missing cell in a used column (and count them in the report), set `data.missing: drop` in the descriptor';
+/** The end of a `csv-cell` error for what may be a number with a decimal comma: the setting that reads it. */
+const DECIMAL_COMMA_HINT = '. Hint: if the file writes numbers with a decimal comma (1,5 for 1.5), set `data.decimal: ","` in the descriptor';
 /** A number written with a decimal comma and no other mark, like `2,5` or `-0,125`. */
 const DECIMAL_COMMA_NUMBER = /^[+-]?\d*,\d+$/;
 /**
@@ -9703,9 +9713,9 @@ const DECIMAL_COMMA_NUMBER = /^[+-]?\d*,\d+$/;
  */
 function cellHint(text) {
     if (isMissingCell(text))
-        return '. Hint: to drop the rows with a missing cell in a used column (and count them in the report), set `data.missing: drop` in the descriptor';
+        return MISSING_HINT;
     if (DECIMAL_COMMA_NUMBER.test(text))
-        return '. Hint: if the file writes numbers with a decimal comma (1,5 for 1.5), set `data.decimal: ","` in the descriptor';
+        return DECIMAL_COMMA_HINT;
     return '';
 }
 /** The `csv-ragged` error for a row whose field count differs from the header's. */
@@ -10024,7 +10034,7 @@ function signatureOf(head) {
 
 /***/ }),
 
-/***/ 4355:
+/***/ 4596:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -10038,8 +10048,8 @@ __nccwpck_require__.d(__webpack_exports__, {
 
 ;// CONCATENATED MODULE: external "node:stream"
 const external_node_stream_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:stream");
-;// CONCATENATED MODULE: external "node:zlib"
-const external_node_zlib_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:zlib");
+// EXTERNAL MODULE: external "node:zlib"
+var external_node_zlib_ = __nccwpck_require__(8522);
 // EXTERNAL MODULE: ./src/core/errors.ts
 var errors = __nccwpck_require__(4296);
 // EXTERNAL MODULE: ./src/data/file-signatures.ts
@@ -10081,7 +10091,7 @@ function openDataFile(repo, path, maxBytes) {
  * @param maxBytes cap on the decompressed bytes
  */
 async function* gunzipPieces(pieces, file, maxBytes) {
-    const gunzip = (0,external_node_zlib_namespaceObject.createGunzip)();
+    const gunzip = (0,external_node_zlib_.createGunzip)();
     // The file's first bytes, for the error when they are not gzip data.
     const head = new Uint8Array(file_signatures/* SIGNATURE_BYTES */.tM);
     let headLength = 0;
@@ -10764,7 +10774,7 @@ function trainingRows(data) {
 /* harmony export */ });
 /* unused harmony exports STREAM_ABOVE_BYTES, GZIP_RATIO, estimatedTextBytes, streamsTrainingFile */
 /* harmony import */ var _core_mix32_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(6736);
-/* harmony import */ var _gzip_stream_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(4355);
+/* harmony import */ var _gzip_stream_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(4596);
 /* harmony import */ var _table_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(8785);
 /* harmony import */ var _csv_rules_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(8706);
 /* harmony import */ var _data_parts_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(6837);
@@ -11407,8 +11417,8 @@ class FastReader {
     }
 }
 
-// EXTERNAL MODULE: ./src/data/gzip-stream.ts + 2 modules
-var gzip_stream = __nccwpck_require__(4355);
+// EXTERNAL MODULE: ./src/data/gzip-stream.ts + 1 modules
+var gzip_stream = __nccwpck_require__(4596);
 ;// CONCATENATED MODULE: ./src/data/table.ts
 /**
  * CSV data files to numeric columns.
@@ -16934,6 +16944,20 @@ const COMMANDS = [
                 choices: ['1', '2'],
                 default: '1',
             },
+            {
+                name: 'decimal',
+                value: 'mark',
+                description: 'decimal mark of the numbers: auto takes a comma when more columns read as numbers with it than with a point (written into the descriptor as data.decimal)',
+                choices: ['auto', '.', ','],
+                default: 'auto',
+            },
+            {
+                name: 'missing',
+                value: 'how',
+                description: 'rows with an empty or NA-like cell in a used column: error, or drop them and count them in the report (written into the descriptor as data.missing)',
+                choices: ['error', 'drop'],
+                default: 'error',
+            },
             { name: 'force', description: 'overwrite files that exist' },
             DEBUG,
             HELP,
@@ -16958,7 +16982,7 @@ const COMMANDS = [
         options: [HELP],
     },
 ];
-const DESCRIPTION = 'Refit committed regression models, re-score them on their hold-out rows, and fail when they overfit.';
+const DESCRIPTION = 'Refit committed regression models and classifiers, re-score them on their hold-out rows, and fail when they overfit.';
 /** Help lines are wrapped to this many columns. */
 const HELP_WIDTH = 80;
 /** A mistake on the command line: printed with a pointer to the help, exit status 2. */
@@ -17032,6 +17056,8 @@ function parseArgs(argv, cwd) {
             holdoutShare: parseNumberOption(value('holdout-share'), 'holdout-share', 0.25, 0, 1, true),
             seed: parseNumberOption(value('seed'), 'seed', 1, 0, 2 ** 31 - 1, false, true),
             degree: value('degree') === '2' ? 2 : 1,
+            decimal: value('decimal') === ',' ? ',' : value('decimal') === '.' ? '.' : 'auto',
+            missing: value('missing') === 'drop' ? 'drop' : 'error',
             force: read.switches.has('force'),
             debug: common.debug,
         };
@@ -24999,6 +25025,13 @@ module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:path");
 /***/ ((module) => {
 
 module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:worker_threads");
+
+/***/ }),
+
+/***/ 8522:
+/***/ ((module) => {
+
+module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:zlib");
 
 /***/ }),
 

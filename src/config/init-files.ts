@@ -28,6 +28,10 @@ export interface FirstModel {
   schema: string;
   /** Lines saying where the data came from (e.g. how the hold-out was split), written as comments. */
   notes: string[];
+  /** Decimal mark of the files (`data.decimal`, written when a comma). Default `.`. */
+  decimal?: '.' | ',';
+  /** Rows with a missing cell (`data.missing`, written when `drop`). Default `error`. */
+  missing?: 'error' | 'drop';
 }
 
 /** Limit written into the descriptor for the parameter ratio, with the reason. */
@@ -116,6 +120,10 @@ export function descriptorText(model: FirstModel, ratio: RatioLimit): string {
     `  train: ${scalar(model.train)}`,
     `  holdout: ${scalar(model.holdout)}`,
     `  target: ${scalar(model.target)}`,
+    ...(model.decimal === ',' ? ['  decimal: ","                # the files write numbers with a decimal comma'] : []),
+    ...(model.missing === 'drop'
+      ? ['  missing: drop               # rows with an empty or NA-like cell in a used column are dropped and counted']
+      : []),
     `terms:                       # ${model.degree === 1 ? 'linear terms: a modest first model' : 'degree 2, inputs standardised: a modest first model'}`,
     ...terms,
     'fit:',

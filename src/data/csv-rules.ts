@@ -232,6 +232,14 @@ export function cellError(cell: string, file: string, line: number, column: stri
   );
 }
 
+/** The end of a `csv-cell` error for a missing cell: the setting that drops such rows. */
+export const MISSING_HINT =
+  '. Hint: to drop the rows with a missing cell in a used column (and count them in the report), set `data.missing: drop` in the descriptor';
+
+/** The end of a `csv-cell` error for what may be a number with a decimal comma: the setting that reads it. */
+export const DECIMAL_COMMA_HINT =
+  '. Hint: if the file writes numbers with a decimal comma (1,5 for 1.5), set `data.decimal: ","` in the descriptor';
+
 /** A number written with a decimal comma and no other mark, like `2,5` or `-0,125`. */
 const DECIMAL_COMMA_NUMBER = /^[+-]?\d*,\d+$/;
 
@@ -243,10 +251,8 @@ const DECIMAL_COMMA_NUMBER = /^[+-]?\d*,\d+$/;
  * comma has become a point before the cell is judged), so the hint never names a setting in force.
  */
 function cellHint(text: string): string {
-  if (isMissingCell(text))
-    return '. Hint: to drop the rows with a missing cell in a used column (and count them in the report), set `data.missing: drop` in the descriptor';
-  if (DECIMAL_COMMA_NUMBER.test(text))
-    return '. Hint: if the file writes numbers with a decimal comma (1,5 for 1.5), set `data.decimal: ","` in the descriptor';
+  if (isMissingCell(text)) return MISSING_HINT;
+  if (DECIMAL_COMMA_NUMBER.test(text)) return DECIMAL_COMMA_HINT;
   return '';
 }
 

@@ -116,6 +116,10 @@ export interface InitCommand {
   seed: number;
   /** Degree of the first model's polynomial terms: 1 (linear terms, default) or 2 (standardised inputs). */
   degree: 1 | 2;
+  /** Decimal mark of the numbers: `auto` (default: a comma when more columns read as numbers with it), `.` or `,`. */
+  decimal: 'auto' | '.' | ',';
+  /** Rows with a missing cell in a used column: `error` (default) or `drop` (written into the descriptor). */
+  missing: 'error' | 'drop';
   /** Overwrite files that exist (`--force`). */
   force: boolean;
   debug: boolean;
@@ -317,6 +321,22 @@ const COMMANDS: readonly CommandSpec[] = [
         choices: ['1', '2'],
         default: '1',
       },
+      {
+        name: 'decimal',
+        value: 'mark',
+        description:
+          'decimal mark of the numbers: auto takes a comma when more columns read as numbers with it than with a point (written into the descriptor as data.decimal)',
+        choices: ['auto', '.', ','],
+        default: 'auto',
+      },
+      {
+        name: 'missing',
+        value: 'how',
+        description:
+          'rows with an empty or NA-like cell in a used column: error, or drop them and count them in the report (written into the descriptor as data.missing)',
+        choices: ['error', 'drop'],
+        default: 'error',
+      },
       { name: 'force', description: 'overwrite files that exist' },
       DEBUG,
       HELP,
@@ -343,7 +363,7 @@ const COMMANDS: readonly CommandSpec[] = [
   },
 ];
 
-const DESCRIPTION = 'Refit committed regression models, re-score them on their hold-out rows, and fail when they overfit.';
+const DESCRIPTION = 'Refit committed regression models and classifiers, re-score them on their hold-out rows, and fail when they overfit.';
 
 /** Help lines are wrapped to this many columns. */
 const HELP_WIDTH = 80;
@@ -420,6 +440,8 @@ export function parseArgs(argv: string[], cwd: string): Parsed {
       holdoutShare: parseNumberOption(value('holdout-share'), 'holdout-share', 0.25, 0, 1, true),
       seed: parseNumberOption(value('seed'), 'seed', 1, 0, 2 ** 31 - 1, false, true),
       degree: value('degree') === '2' ? 2 : 1,
+      decimal: value('decimal') === ',' ? ',' : value('decimal') === '.' ? '.' : 'auto',
+      missing: value('missing') === 'drop' ? 'drop' : 'error',
       force: read.switches.has('force'),
       debug: common.debug,
     };

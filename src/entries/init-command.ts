@@ -6,6 +6,7 @@
  */
 import { existsSync } from 'node:fs';
 import path from 'node:path';
+import { gunzipSync, gzipSync } from 'node:zlib';
 import { descriptorText, firstModelParameters, ratioLimitFor, settingsText } from '../config/init-files.js';
 import { DEFAULT_MODEL_PATTERNS, DEFAULT_SETTINGS_PATH } from '../config/settings-file.js';
 import { InputError, quoteValue } from '../core/errors.js';
@@ -13,6 +14,9 @@ import { REPOSITORY_URL } from '../core/links.js';
 import { nearestWord } from '../core/nearest.js';
 import { VERSION } from '../core/version.js';
 import { readHeader, readTable, type Table } from '../data/table.js';
+import { DECIMAL_COMMA_HINT, DEFAULT_MAX_BYTES, MISSING_HINT } from '../data/csv-rules.js';
+import { isGzipPath } from '../data/gzip-stream.js';
+import type { CsvFormat } from '../data/csv-format.js';
 import { splitRows } from '../diagnostics/holdout-split.js';
 import { createFsRepository } from '../repo/fs-repository.js';
 import { existsInRepo, FILE_EXISTS, writeInRepo } from './repo-write.js';
@@ -37,18 +41,19 @@ function schemaLocation(root: string, folder: string, file: 'descriptor' | 'sett
   return `${REPOSITORY_URL.replace('https://github.com/', 'https://raw.githubusercontent.com/')}/v${VERSION}/dist/schema/${file}.schema.json`;
 }
 
-/** Reads the columns that hold numbers only (the target must be one of them). */
+/** Reads the columns that hold numbers only (the target must be one of them), under `format`. */
 async function numericTable(
   repo: RepoReader,
   file: string,
   header: string[],
   target: string,
+  format: Partial<CsvFormat>,
 ): Promise<{ table: Table; dropped: string[] }> {
   let columns = [target, ...header.filter((c) => c !== target)].slice(0, MAX_COLUMNS);
   const dropped: string[] = header.length > MAX_COLUMNS ? header.filter((c) => !columns.includes(c)) : [];
   for (let attempt = 0; attempt <= MAX_COLUMNS; attempt++) {
     try {
-      return { table: await readTable(repo, file, { columns }), dropped };
+      return { table: await readTable(repo, file, { columns, format }), dropped };
     } catch (error) {
       const bad = error instanceof InputError && error.code === 'csv-cell' ? error.location.key : undefined;
       if (bad === undefined || bad === target || !columns.includes(bad)) throw error;
@@ -59,13 +64,70 @@ async function numericTable(
   throw new InputError('csv-cell', 'too many columns that are not numbers', { file });
 }
 
-/** The text of the data rows `indexes` of a CSV (with its header lines), from the rows' physical lines. */
+/**
+ * The numeric columns under the decimal mark asked for; under `auto`, a decimal comma when more
+ * columns read as numbers with it than with a point (a file separated by commas cannot have one).
+ * An error of the init's own reading names the init option that settles it, not the descriptor key.
+ */
+async function readNumbers(
+  repo: RepoReader,
+  command: InitCommand,
+  header: string[],
+  target: string,
+): Promise<{ table: Table; dropped: string[]; decimal: '.' | ',' }> {
+  const attempt = async (decimal: '.' | ','): Promise<{ table: Table; dropped: string[]; decimal: '.' | ',' }> => ({
+    ...(await numericTable(repo, command.train, header, target, { decimal, missing: command.missing })),
+    decimal,
+  });
+  try {
+    if (command.decimal !== 'auto') return await attempt(command.decimal);
+    let point: Awaited<ReturnType<typeof attempt>> | null = null;
+    let pointError: unknown = null;
+    try {
+      point = await attempt('.');
+      if (point.dropped.length === 0) return point;
+    } catch (error) {
+      pointError = error;
+    }
+    let comma: Awaited<ReturnType<typeof attempt>> | null = null;
+    try {
+      comma = await attempt(',');
+    } catch {
+      // Not a decimal-comma file either: the point's outcome stands.
+    }
+    if (comma !== null && (point === null || comma.dropped.length < point.dropped.length)) return comma;
+    if (point !== null) return point;
+    throw pointError;
+  } catch (error) {
+    if (!(error instanceof InputError) || error.code !== 'csv-cell') throw error;
+    const message = error.message
+      .replace(MISSING_HINT, '. Hint: to drop the rows with a missing cell in a used column, give `--missing drop`')
+      .replace(DECIMAL_COMMA_HINT, '. Hint: if the file writes numbers with a decimal comma (1,5 for 1.5), give `--decimal ,`');
+    throw new InputError(error.code, message, error.location);
+  }
+}
+
+/** The text of a data file as written (decompressed when its name ends in `.gz`), within the plain-file size cap. */
+async function fileText(repo: RepoReader, file: string): Promise<string> {
+  const bytes = await repo.read(file);
+  const plain = isGzipPath(file) ? gunzipSync(bytes, { maxOutputLength: DEFAULT_MAX_BYTES }) : bytes;
+  return new TextDecoder('utf-8').decode(plain).replace(/^\uFEFF/, '');
+}
+
+/**
+ * The text of the data rows `indexes` of a CSV, from the rows' physical lines: the header (the
+ * first line that is not blank), then each row's lines up to the next row's (lines between rows
+ * that were not read as rows, such as rows dropped for a missing cell, go with the row before
+ * them; those before the first row, with the first row). Blank lines are left out.
+ */
 function rowsText(lines: string[], rowLines: Int32Array, indexes: Int32Array): string {
-  const out = lines.slice(0, rowLines[0] - 1);
+  const header = lines.findIndex((line) => line.trim() !== '');
+  const out = [lines[header]];
   for (const i of indexes) {
-    const first = rowLines[i] - 1;
+    const own = rowLines[i] - 1;
+    const first = i === 0 ? header + 1 : own;
     const end = i + 1 < rowLines.length ? rowLines[i + 1] - 1 : lines.length;
-    for (let j = first; j < end; j++) if (lines[j].trim() !== '' || j === first) out.push(lines[j]);
+    for (let j = first; j < end; j++) if (lines[j].trim() !== '' || j === own) out.push(lines[j]);
   }
   return `${out.join('\n')}\n`;
 }
@@ -74,7 +136,7 @@ function rowsText(lines: string[], rowLines: Int32Array, indexes: Int32Array): s
 function nameFrom(file: string): string {
   const stem = path.posix
     .basename(file)
-    .replace(/\.csv$/i, '')
+    .replace(/(\.csv)?(\.gz)?$/i, '')
     .replace(/[-_.]?train(ing)?$/i, '');
   const name = stem
     .replace(/[^A-Za-z0-9._-]+/g, '-')
@@ -96,7 +158,7 @@ export async function runInit(command: InitCommand): Promise<CommandOutcome> {
       { file: command.train, key: '--target' },
     );
   }
-  const { table, dropped } = await numericTable(repo, command.train, header, target);
+  const { table, dropped, decimal } = await readNumbers(repo, command, header, target);
   const inputs = header.filter((c) => c !== target && table.columns.has(c));
   if (inputs.length === 0)
     throw new InputError(
@@ -111,7 +173,7 @@ export async function runInit(command: InitCommand): Promise<CommandOutcome> {
   }
   const name = command.name ?? nameFrom(command.train);
   const descriptorPath = `${MODELS_FOLDER}/${name}.model.yml`;
-  const writes: Array<{ file: string; text: string; overwrite: boolean }> = [];
+  const writes: Array<{ file: string; text: string | Uint8Array; overwrite: boolean }> = [];
   const notes: string[] = [];
   const said: string[] = [];
 
@@ -124,17 +186,18 @@ export async function runInit(command: InitCommand): Promise<CommandOutcome> {
         file: command.train,
       });
     const split = splitRows(table.rows, command.holdoutShare, command.split, command.seed);
-    const lines = new TextDecoder('utf-8')
-      .decode(await repo.read(command.train))
-      .replace(/^\uFEFF/, '')
-      .split(/\r?\n/);
+    const lines = (await fileText(repo, command.train)).split(/\r?\n/);
     while (lines.length > 0 && lines[lines.length - 1].trim() === '') lines.pop();
-    const stem = command.train.replace(/\.csv$/i, '');
-    trainFile = `${stem}-train.csv`;
-    holdoutFile = `${stem}-holdout.csv`;
+    // A gzip file splits into gzip files: data/x.csv.gz -> data/x-train.csv.gz and data/x-holdout.csv.gz.
+    const gzip = isGzipPath(command.train);
+    const stem = command.train.replace(gzip ? /(\.csv)?\.gz$/i : /\.csv$/i, '');
+    const ending = gzip ? '.csv.gz' : '.csv';
+    const packed = (text: string): string | Uint8Array => (gzip ? gzipSync(text) : text);
+    trainFile = `${stem}-train${ending}`;
+    holdoutFile = `${stem}-holdout${ending}`;
     trainRows = split.train.length;
-    writes.push({ file: trainFile, text: rowsText(lines, table.lines, split.train), overwrite: command.force });
-    writes.push({ file: holdoutFile, text: rowsText(lines, table.lines, split.holdout), overwrite: command.force });
+    writes.push({ file: trainFile, text: packed(rowsText(lines, table.lines, split.train)), overwrite: command.force });
+    writes.push({ file: holdoutFile, text: packed(rowsText(lines, table.lines, split.holdout)), overwrite: command.force });
     const how =
       command.split === 'last'
         ? `the last ${split.holdout.length} of ${table.rows} rows (a block at the end, for data in time order)`
@@ -145,6 +208,15 @@ export async function runInit(command: InitCommand): Promise<CommandOutcome> {
     );
   } else if (!(await repo.isFile(holdoutFile))) {
     throw new InputError('file-missing', `hold-out file not found in ${repo.label}`, { file: holdoutFile, key: '--holdout' });
+  }
+  if (decimal === ',') said.push('read the numbers with a decimal comma (data.decimal: "," in the descriptor)');
+  if (table.dropped > 0) {
+    notes.push(
+      `Rows with a missing cell in a used column: ${table.dropped} in ${command.train}; data.missing: drop leaves them out of every check.`,
+    );
+    said.push(
+      `${table.dropped} rows of ${command.train} have a missing cell in a used column: data.missing: drop leaves them out of every check`,
+    );
   }
   if (dropped.length > 0) {
     notes.push(`Left out (not numeric): ${dropped.slice(0, 10).join(', ')}${dropped.length > 10 ? ', ...' : ''}.`);
@@ -167,6 +239,8 @@ export async function runInit(command: InitCommand): Promise<CommandOutcome> {
         rows: trainRows,
         schema: schemaLocation(command.root, folder, 'descriptor'),
         notes,
+        decimal,
+        missing: command.missing,
       },
       ratio,
     ),

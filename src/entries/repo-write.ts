@@ -32,13 +32,13 @@ export function existsInRepo(root: string, rel: string): boolean {
  *
  * @param root absolute repository root
  * @param rel repository-relative path with `/`
- * @param text UTF-8 contents
+ * @param text the contents: text (written as UTF-8) or bytes as they are
  * @param overwrite replace an existing regular file (default false: an existing file is an error)
  * @throws InputError `path-outside` (the path leaves the repository), `output-refused` (a folder on
  *   the way leads outside, or the target is a link or not a file), `file-exists` (the file exists
  *   and `overwrite` is false)
  */
-export function writeInRepo(root: string, rel: string, text: string, overwrite = false): void {
+export function writeInRepo(root: string, rel: string, text: string | Uint8Array, overwrite = false): void {
   const normal = normaliseRepoPath(rel, { file: rel });
   const base = realpathSync(root);
   if (!overwrite && existsInRepo(base, normal))

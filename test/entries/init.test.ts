@@ -1,6 +1,7 @@
 // `fitgate init`, through the command (the sources run as `node cli.js`): the files it writes,
 // the reproducible hold-out split, the limit suited to the row count, and refusing to overwrite.
-import { existsSync, mkdirSync, readFileSync, symlinkSync } from 'node:fs';
+import { existsSync, mkdirSync, readFileSync, symlinkSync, writeFileSync } from 'node:fs';
+import { gunzipSync, gzipSync } from 'node:zlib';
 import path from 'node:path';
 import { parse } from 'yaml';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -174,5 +175,73 @@ describe('fitgate init with a hold-out file', () => {
     expect(r.stderr).toBe(
       'fitgate: data/air.csv: `--target`: no column "humidty_pct" (did you mean "humidity_pct"?); expected one of: hour, vent_pct, site, humidity_pct\n',
     );
+  });
+});
+
+describe('fitgate init with data as it arrives', () => {
+  /** The greenhouse log written with semicolons and decimal commas, as some spreadsheet locales save it. */
+  const commaLog = (rows: number) => log(rows).replaceAll(',', ';').replaceAll('.', ',');
+
+  it('reads decimal commas (auto), writes data.decimal into the descriptor, and check reads the split files', () => {
+    const dir = repo({ 'data/air.csv': commaLog(40) });
+    const r = cli.run(['init', 'data/air.csv', '--target', 'humidity_pct'], dir);
+    expect(r.status, r.stderr).toBe(0);
+    expect(r.stdout).toContain('read the numbers with a decimal comma');
+    const value = parse(read(dir, 'models/air.model.yml')) as { data: Record<string, string>; terms: unknown[] };
+    expect(value.data).toMatchObject({ decimal: ',', target: 'humidity_pct' });
+    expect(value.terms).toEqual([{ linear: ['hour', 'vent_pct'] }]);
+    expect(read(dir, 'data/air-train.csv').split('\n')[1]).toMatch(/^\d+;\d+;north;\d+,\d+$/);
+    const check = cli.run(['check', '--jobs', '1'], dir);
+    expect([0, 1], check.stdout + check.stderr).toContain(check.status);
+  });
+
+  it('with --decimal . a decimal-comma target is refused with the init option that reads it', () => {
+    const dir = repo({ 'data/air.csv': commaLog(20) });
+    const r = cli.run(['init', 'data/air.csv', '--target', 'humidity_pct', '--decimal', '.'], dir);
+    expect(r.status).toBe(2);
+    expect(r.stderr).toMatch(/column "humidity_pct": expected a finite decimal number .*give `--decimal ,`/);
+    expect(r.stderr).not.toContain('in the descriptor');
+  });
+
+  it('missing cells: refused with the option that drops them; with --missing drop the rows are dropped, counted and written down', () => {
+    const text = log(40)
+      .split('\n')
+      .map((line, i) => (i === 5 ? line.replace(/,[^,]*$/, ',NA') : i === 9 ? line.replace(/,[^,]*$/, ',') : line))
+      .join('\n');
+    const dir = repo({ 'data/air.csv': text });
+    const refused = cli.run(['init', 'data/air.csv', '--target', 'humidity_pct'], dir);
+    expect(refused.status).toBe(2);
+    expect(refused.stderr).toMatch(/data\/air\.csv:6: .*got "NA".*give `--missing drop`/);
+    const r = cli.run(['init', 'data/air.csv', '--target', 'humidity_pct', '--missing', 'drop'], dir);
+    expect(r.status, r.stderr).toBe(0);
+    expect(r.stdout).toContain(
+      '2 rows of data/air.csv have a missing cell in a used column: data.missing: drop leaves them out of every check',
+    );
+    const descriptor = read(dir, 'models/air.model.yml');
+    expect((parse(descriptor) as { data: Record<string, string> }).data).toMatchObject({ missing: 'drop' });
+    expect(descriptor).toContain('# Rows with a missing cell in a used column: 2 in data/air.csv');
+    // Every row stays in the split files, each once; the check drops the two.
+    const split = [...dataRows(read(dir, 'data/air-train.csv')), ...dataRows(read(dir, 'data/air-holdout.csv'))];
+    expect(split.sort()).toEqual(dataRows(text).sort());
+    const check = cli.run(['check', '--jobs', '1'], dir);
+    expect([0, 1], check.stdout + check.stderr).toContain(check.status);
+  });
+
+  it('splits a gzip file into gzip files that check reads', () => {
+    const dir = repo({});
+    mkdirSync(path.join(dir, 'data'));
+    writeFileSync(path.join(dir, 'data/air.csv.gz'), gzipSync(log(40)));
+    const r = cli.run(['init', 'data/air.csv.gz', '--target', 'humidity_pct'], dir);
+    expect(r.status, r.stderr).toBe(0);
+    expect(r.stdout).toContain('wrote data/air-train.csv.gz\nwrote data/air-holdout.csv.gz\n');
+    const train = dataRows(gunzipSync(readFileSync(path.join(dir, 'data/air-train.csv.gz'))).toString('utf8'));
+    const holdout = dataRows(gunzipSync(readFileSync(path.join(dir, 'data/air-holdout.csv.gz'))).toString('utf8'));
+    expect([...train, ...holdout].sort()).toEqual(dataRows(log(40)).sort());
+    expect((parse(read(dir, 'models/air.model.yml')) as { data: Record<string, string> }).data).toMatchObject({
+      train: '../data/air-train.csv.gz',
+      holdout: '../data/air-holdout.csv.gz',
+    });
+    const check = cli.run(['check', '--jobs', '1'], dir);
+    expect([0, 1], check.stdout + check.stderr).toContain(check.status);
   });
 });
