@@ -9969,6 +9969,7 @@ function partLines(data, lines) {
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   sh: () => (/* binding */ GZIP_SIGNATURE),
 /* harmony export */   tM: () => (/* binding */ SIGNATURE_BYTES),
 /* harmony export */   yK: () => (/* binding */ signatureOf)
 /* harmony export */ });
@@ -9988,17 +9989,19 @@ function partLines(data, lines) {
  * that Python's standard library writes.
  */
 
+/** gzip data (RFC 1952): read as such only under a name ending in `.gz`. */
+const GZIP_SIGNATURE = Object.freeze({
+    magic: [0x1f, 0x8b],
+    what: 'gzip-compressed data',
+    advice: 'give it a name ending in `.gz` (e.g. `train.csv.gz`), so that fitgate decompresses it as it reads',
+});
 const RECOMPRESS = 'fitgate reads plain CSV text and gzip-compressed CSV (`.csv.gz`): decompress it, or compress it with gzip';
 const EXPORT = 'export the sheet or table as a CSV file (UTF-8)';
 /** The signatures fitgate recognises, longest first where one could begin another. */
 const FILE_SIGNATURES = Object.freeze([
     { magic: [0xff, 0xfe], what: 'UTF-16 text', advice: 'save it as UTF-8', otherEncoding: true },
     { magic: [0xfe, 0xff], what: 'UTF-16 text', advice: 'save it as UTF-8', otherEncoding: true },
-    {
-        magic: [0x1f, 0x8b],
-        what: 'gzip-compressed data',
-        advice: 'give it a name ending in `.gz` (e.g. `train.csv.gz`), so that fitgate decompresses it as it reads',
-    },
+    GZIP_SIGNATURE,
     { magic: [0xfd, 0x37, 0x7a, 0x58, 0x5a, 0x00], what: 'xz-compressed data', advice: RECOMPRESS },
     { magic: [0x42, 0x5a, 0x68], what: 'bzip2-compressed data', advice: RECOMPRESS },
     { magic: [0x28, 0xb5, 0x2f, 0xfd], what: 'Zstandard-compressed data', advice: RECOMPRESS },
@@ -10134,14 +10137,12 @@ async function* gunzipPieces(pieces, file, maxBytes) {
  */
 function notGzipHint(head) {
     const signature = (0,file_signatures/* signatureOf */.yK)(head);
-    if (signature !== null && signature.magic[0] !== GZIP_FIRST_BYTE)
+    if (signature !== null && signature !== file_signatures/* GZIP_SIGNATURE */.sh)
         return `. Hint: the file looks like ${signature.what}; ${signature.advice}`;
     if (head.length > 0 && head.every((b) => (b >= 0x20 && b < 0x7f) || b === 0x09 || b === 0x0a || b === 0x0d))
         return '. Hint: the file starts like plain text: if it is an uncompressed CSV file, drop the `.gz` from its name';
     return '';
 }
-/** The first byte of every gzip member (RFC 1952). */
-const GZIP_FIRST_BYTE = 0x1f;
 
 
 /***/ }),

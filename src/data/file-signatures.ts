@@ -25,6 +25,13 @@ export interface FileSignature {
   readonly otherEncoding?: boolean;
 }
 
+/** gzip data (RFC 1952): read as such only under a name ending in `.gz`. */
+export const GZIP_SIGNATURE: FileSignature = Object.freeze({
+  magic: [0x1f, 0x8b],
+  what: 'gzip-compressed data',
+  advice: 'give it a name ending in `.gz` (e.g. `train.csv.gz`), so that fitgate decompresses it as it reads',
+});
+
 const RECOMPRESS = 'fitgate reads plain CSV text and gzip-compressed CSV (`.csv.gz`): decompress it, or compress it with gzip';
 const EXPORT = 'export the sheet or table as a CSV file (UTF-8)';
 
@@ -32,11 +39,7 @@ const EXPORT = 'export the sheet or table as a CSV file (UTF-8)';
 export const FILE_SIGNATURES: readonly FileSignature[] = Object.freeze([
   { magic: [0xff, 0xfe], what: 'UTF-16 text', advice: 'save it as UTF-8', otherEncoding: true },
   { magic: [0xfe, 0xff], what: 'UTF-16 text', advice: 'save it as UTF-8', otherEncoding: true },
-  {
-    magic: [0x1f, 0x8b],
-    what: 'gzip-compressed data',
-    advice: 'give it a name ending in `.gz` (e.g. `train.csv.gz`), so that fitgate decompresses it as it reads',
-  },
+  GZIP_SIGNATURE,
   { magic: [0xfd, 0x37, 0x7a, 0x58, 0x5a, 0x00], what: 'xz-compressed data', advice: RECOMPRESS },
   { magic: [0x42, 0x5a, 0x68], what: 'bzip2-compressed data', advice: RECOMPRESS },
   { magic: [0x28, 0xb5, 0x2f, 0xfd], what: 'Zstandard-compressed data', advice: RECOMPRESS },

@@ -9,7 +9,7 @@ import { Readable, pipeline } from 'node:stream';
 import { createGunzip } from 'node:zlib';
 import { InputError } from '../core/errors.js';
 import type { RepoReader } from '../repo/types.js';
-import { SIGNATURE_BYTES, signatureOf } from './file-signatures.js';
+import { GZIP_SIGNATURE, SIGNATURE_BYTES, signatureOf } from './file-signatures.js';
 
 /** True when a data path names a gzip file (ends with `.gz`, any case). */
 export function isGzipPath(path: string): boolean {
@@ -87,12 +87,8 @@ export async function* gunzipPieces(pieces: AsyncIterable<Uint8Array>, file: str
  */
 function notGzipHint(head: Uint8Array): string {
   const signature = signatureOf(head);
-  if (signature !== null && signature.magic[0] !== GZIP_FIRST_BYTE)
-    return `. Hint: the file looks like ${signature.what}; ${signature.advice}`;
+  if (signature !== null && signature !== GZIP_SIGNATURE) return `. Hint: the file looks like ${signature.what}; ${signature.advice}`;
   if (head.length > 0 && head.every((b) => (b >= 0x20 && b < 0x7f) || b === 0x09 || b === 0x0a || b === 0x0d))
     return '. Hint: the file starts like plain text: if it is an uncompressed CSV file, drop the `.gz` from its name';
   return '';
 }
-
-/** The first byte of every gzip member (RFC 1952). */
-const GZIP_FIRST_BYTE = 0x1f;
