@@ -122,7 +122,7 @@ for (const classifier of [false, true]) {
       expect(m.error).toBeNull();
       expect(m.rows).toEqual(plain.rows);
       expect(m.coefficients).toEqual(plain.coefficients);
-      if (!classifier) expect(m.dropped).toEqual({ train: 3, holdout: 0 });
+      expect(m.dropped).toEqual({ train: 3, holdout: 0 });
     });
   });
 }
