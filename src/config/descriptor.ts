@@ -198,6 +198,15 @@ function readPredictions(
       '`refit_compare` reports the refit on the target as written; expected no `refit_compare` beside `data.target_transform`',
     );
   }
+  if (raw.fit?.refit === false && raw.task === 'classification') {
+    throw errorAt(
+      doc,
+      file,
+      DESCRIPTOR_ERROR.predictions,
+      ['fit', 'refit'],
+      "`refit: false` scores a regression model's shipped coefficients as they are; a classifier is always refitted (its shipped `coefficients` are compared with the refit by `reproducibility`), so expected no `refit: false` on a classifier",
+    );
+  }
   if (raw.fit?.refit_compare === true && raw.task === 'classification') {
     throw errorAt(
       doc,
