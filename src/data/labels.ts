@@ -12,6 +12,12 @@ import type { RepoReader } from '../repo/types.js';
 /** Largest number of distinct labels collected before a target is judged not binary. */
 const MAX_LABELS = 20;
 
+/**
+ * A classifier's rows are always held in memory, never streamed as a sample (its fit makes passes
+ * of its own over every row; run/fit-classifier.ts refuses training files too large to hold).
+ */
+const HELD = { streamAboveBytes: Number.POSITIVE_INFINITY } as const;
+
 /** How the target's classes were read. */
 export interface ClassLabels {
   /** The positive class as written in the file (e.g. `1`, `true`, `churned`). */
@@ -45,7 +51,7 @@ export async function loadClassifierData(
 ): Promise<ClassifierTables> {
   let tables: ModelTables;
   try {
-    tables = await loadModelData(repo, descriptor, inputs, settings);
+    tables = await loadModelData(repo, descriptor, inputs, settings, HELD);
   } catch (error) {
     if (error instanceof InputError && error.code === 'csv-cell' && error.location.key === descriptor.data.target) {
       return loadTextLabels(repo, descriptor, inputs, settings);
@@ -81,7 +87,7 @@ async function loadTextLabels(
   inputs: readonly string[],
   settings: SettingsFile,
 ): Promise<ClassifierTables> {
-  const { targetText, ...tables } = await loadModelData(repo, descriptor, inputs, settings, { targetAsText: true });
+  const { targetText, ...tables } = await loadModelData(repo, descriptor, inputs, settings, { ...HELD, targetAsText: true });
   const text = targetText as { train: string[]; holdout: string[] };
   const found: string[] = [];
   for (const label of text.train) {
