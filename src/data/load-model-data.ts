@@ -65,7 +65,7 @@ export interface LoadOptions {
   /**
    * Read the target as text (a classifier's class labels), with the same separator, split column
    * and dropped rows as the numbers; the tables then carry it as `targetText` and `y` is left 0.
-   * Under `data.missing: drop` a row whose label is a missing cell is dropped and counted.
+   * Under `data.missing: drop` a row whose label (or category level) is a missing cell is dropped and counted.
    */
   targetAsText?: boolean;
   /** Sees every chunk of a streamed training file during the sampling read (checks that need every row). */
@@ -157,7 +157,8 @@ export async function loadModelData(
       } catch (error) {
         throw withAsker(error, descriptor);
       }
-      if (textTarget && format?.missing === 'drop') table = dropMissingText(table, text, data.target);
+      // Under `missing: drop` a missing cell in a text column drops its row, as in a numeric one.
+      if (format?.missing === 'drop') table = dropMissingText(table, text);
     }
     if (table.rows === 0) {
       const why = side
@@ -436,13 +437,13 @@ async function readCategoryText(
 }
 
 /**
- * The table without the rows whose `column` cell is a missing cell (`data.missing: drop`), counted
+ * The table without the rows with a missing cell in a text column (`data.missing: drop`), counted
  * with the rows the numeric read dropped; `text` loses the same rows.
  */
-function dropMissingText(table: Table, text: Map<string, string[]>, column: string): Table {
-  const cells = text.get(column) as string[];
+function dropMissingText(table: Table, text: Map<string, string[]>): Table {
+  const cellsOf = [...text.values()];
   const keep: number[] = [];
-  for (let i = 0; i < table.rows; i++) if (!isMissingCell(cells[i])) keep.push(i);
+  for (let i = 0; i < table.rows; i++) if (!cellsOf.some((cells) => isMissingCell(cells[i]))) keep.push(i);
   if (keep.length === table.rows) return table;
   for (const [name, values] of text)
     text.set(

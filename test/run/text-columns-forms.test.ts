@@ -100,8 +100,9 @@ for (const classifier of [false, true]) {
       expectSameFit(m, plain);
     });
 
-    it('missing: drop drops the rows with a missing cell (the label too) and keeps the text of the others', async () => {
-      // Rows 1 and 6 of the training file lose their x; row 10 its label (classifier) or target.
+    it('missing: drop drops the rows with a missing cell (a label or level too) and keeps the text of the others', async () => {
+      // Rows 1 and 6 of the training file lose their x; row 10 its label (classifier) or target;
+      // rows 13 and 20 their category level (NA, empty): a missing level drops its row too.
       const gaps = (rows: Row[]) => {
         const lines = csv(rows, { label }).split('\n');
         lines[2] = lines[2].replace(/^[^,]*/, 'NA');
@@ -109,9 +110,17 @@ for (const classifier of [false, true]) {
         const cells = lines[11].split(',');
         cells[classifier ? 3 : 2] = 'NA';
         lines[11] = cells.join(',');
+        for (const [at, cell] of [
+          [14, 'NA'],
+          [21, ' '],
+        ] as const) {
+          const row = lines[at].split(',');
+          row[1] = cell;
+          lines[at] = row.join(',');
+        }
         return lines.join('\n');
       };
-      const kept = train.filter((_, i) => i !== 1 && i !== 6 && i !== 10);
+      const kept = train.filter((_, i) => ![1, 6, 10, 13, 20].includes(i));
       const plain = await run({ 'm.model.yml': descriptor({ classifier }), 't.csv': csv(kept), 'h.csv': csv(holdout) });
       expect(plain.error).toBeNull();
       const m = await run({
@@ -122,7 +131,7 @@ for (const classifier of [false, true]) {
       expect(m.error).toBeNull();
       expect(m.rows).toEqual(plain.rows);
       expect(m.coefficients).toEqual(plain.coefficients);
-      expect(m.dropped).toEqual({ train: 3, holdout: 0 });
+      expect(m.dropped).toEqual({ train: 5, holdout: 0 });
     });
   });
 }
