@@ -135,3 +135,38 @@ for (const classifier of [false, true]) {
     });
   });
 }
+
+describe('predictions matched by a key column in semicolon and tab files', () => {
+  // The key column is text read apart from the numbers: it must be read with the data's separator.
+  const keyed = (rows: Row[], sep: string, prefix: string) =>
+    `id${sep}x${sep}y\n${rows.map((r, i) => [`${prefix}${i}`, r.x, r.y].join(sep)).join('\n')}\n`;
+  // The side file lists the predictions in reverse order, so only the key can match them.
+  const side = (rows: Row[], prefix: string, sep: string) =>
+    `id${sep}pred\n${rows
+      .map((r, i) => `${prefix}${i}${sep}${(1.2 + 0.5 * r.x).toFixed(4)}`)
+      .reverse()
+      .join('\n')}\n`;
+  const model = (data: string) =>
+    `version: 1\nname: m\ndata:\n  train: t.csv\n  holdout: h.csv\n  target: y\n${data}predictions:\n  train: { file: tp.csv, key: id, column: pred }\n  holdout: { file: hp.csv, key: id, column: pred }\n  inputs: [x]\nlimits:\n  leakage: off\n`;
+  // A set separator holds for every file of the model, the side files too.
+  const files = (sep: string, data: string, sideSep = sep) => ({
+    'm.model.yml': model(data),
+    't.csv': keyed(train, sep, 't'),
+    'h.csv': keyed(holdout, sep, 'h'),
+    'tp.csv': side(train, 't', sideSep),
+    'hp.csv': side(holdout, 'h', sideSep),
+  });
+
+  it('gives the figures of the comma files', async () => {
+    const plain = await run(files(',', ''));
+    expect(plain.error).toBeNull();
+    for (const [sep, data, sideSep] of [
+      [';', '', ','],
+      ['\t', '  separator: "\\t"\n', '\t'],
+    ]) {
+      const m = await run(files(sep, data, sideSep));
+      expect(m.error).toBeNull();
+      expect(m.metrics).toEqual(plain.metrics);
+    }
+  });
+});
