@@ -100,6 +100,14 @@ describe('category levels', () => {
     expect(r.checks.find((c) => c.id === 'swing-spikes')?.status).not.toBe('fail');
   });
 
+  it('the chart of a category input is drawn at its levels only, no margins, no points between levels', async () => {
+    const { result } = await fitSite('category: { of: site }');
+    const r = await result();
+    const curve = r.charts?.partials.find((c) => c.input === 'site');
+    expect(curve?.x).toEqual([0, 1, 2, 3, 4]);
+    expect(curve?.y).toHaveLength(5);
+  });
+
   it('a swing message names the category input by its level, not by its code', async () => {
     const rp = createMemoryRepository({
       'models/m.model.yml':
