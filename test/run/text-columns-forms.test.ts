@@ -170,3 +170,14 @@ describe('predictions matched by a key column in semicolon and tab files', () =>
     }
   });
 });
+
+describe('charts of a category input', () => {
+  it("a classifier's probability curve along a category input is drawn at its level codes only", async () => {
+    const m = await run({ 'm.model.yml': descriptor({ classifier: true }), 't.csv': csv(train), 'h.csv': csv(holdout) });
+    expect(m.error).toBeNull();
+    const curve = m.classifier_charts?.curves.find((c) => c.input === 'site');
+    // Four levels (east, north, south, west), coded 0..3.
+    expect(curve?.x).toEqual([0, 1, 2, 3]);
+    expect(curve?.p).toHaveLength(4);
+  });
+});
