@@ -167,7 +167,7 @@ function curveAlong(
   discrete?: readonly number[],
 ): { x: number[]; y: (number | null)[] } {
   const xs: number[] = [];
-  if (discrete !== undefined) xs.push(...discrete);
+  if (discrete !== undefined) for (const v of discrete) xs.push(v);
   else for (let t = 0; t < points; t++) xs.push(t === points - 1 ? hi : lo + ((hi - lo) * t) / (points - 1));
   for (const v of extra) if (v >= lo && v <= hi) xs.push(v);
   const grid = Float64Array.from(xs).sort();
