@@ -31,7 +31,7 @@ const check: Check = {
         message: 'no input has two distinct training values, so there is no range to step beyond',
       };
     }
-    const where = describePoint(swing.worstBeyond);
+    const where = describePoint(swing.worstBeyond, context);
     return {
       value: swing.beyond,
       message:

@@ -9,11 +9,18 @@ import { jsonRecord } from '../core/json.js';
 import type { Swing, SwingPoint } from '../diagnostics/swing.js';
 import { predictionsSwing } from './predictions/measures.js';
 
-/** Describes a point's inputs for a message, e.g. `depth_m = 5.1`. */
-export function describePoint(point: SwingPoint | null): string {
+/**
+ * Describes a point's inputs for a message, e.g. `depth_m = 5.1`; a category input by its level
+ * (`site = "west"`), not by the code the scan gives it.
+ */
+export function describePoint(point: SwingPoint | null, context: CheckContext): string {
   if (point === null) return '';
   return Object.entries(point.inputs)
-    .map(([name, v]) => `${clip(name)} = ${formatNumber(v)}`)
+    .map(([name, v]) => {
+      const levels = context.design.terms.find((t) => t.levels !== undefined && t.inputs[0] === name)?.levels;
+      const level = levels?.[v];
+      return `${clip(name)} = ${level !== undefined ? JSON.stringify(level.slice(0, 80)) : formatNumber(v)}`;
+    })
     .join(', ');
 }
 
@@ -88,7 +95,7 @@ const check: Check = {
         detail: swingDetail(swing),
       };
     }
-    const where = describePoint(swing.worstInside);
+    const where = describePoint(swing.worstInside, context);
     return {
       value: swing.inside,
       message:

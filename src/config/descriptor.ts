@@ -132,7 +132,7 @@ export function descriptorFromDocument(doc: YamlDocument, file: string, settings
         : {}),
       ...(raw.data.split ? { split: { ...raw.data.split, line: line(['data', 'split']) } } : {}),
       positive: raw.data.positive ?? null,
-      ...weightingOf(readWeighting(doc, file, raw.data, line)),
+      ...weightingOf(readWeighting(doc, file, raw, line)),
       ...readTargetTransform(doc, file, raw, line),
     },
     terms,
@@ -196,6 +196,15 @@ function readPredictions(
       DESCRIPTOR_ERROR.predictions,
       ['fit', 'refit_compare'],
       '`refit_compare` reports the refit on the target as written; expected no `refit_compare` beside `data.target_transform`',
+    );
+  }
+  if (raw.fit?.refit === false && raw.task === 'classification') {
+    throw errorAt(
+      doc,
+      file,
+      DESCRIPTOR_ERROR.predictions,
+      ['fit', 'refit'],
+      "`refit: false` scores a regression model's shipped coefficients as they are; a classifier is always refitted (its shipped `coefficients` are compared with the refit by `reproducibility`), so expected no `refit: false` on a classifier",
     );
   }
   if (raw.fit?.refit_compare === true && raw.task === 'classification') {
@@ -267,13 +276,24 @@ function readPredictions(
   return { train: source('train'), holdout: source('holdout'), inputs: [...(p.inputs ?? [])], line: line(['predictions']) };
 }
 
-/** `data.weight` or `data.sigma` (the schema lets at most one through), or null. */
-function readWeighting(
-  doc: YamlDocument,
-  file: string,
-  data: RawDescriptor['data'],
-  line: (path: (string | number)[]) => number,
-): Weighting | null {
+/**
+ * `data.weight` or `data.sigma` (the schema lets at most one through), or null.
+ * @throws InputError `weight-and-sigma` for both, or for either on a classifier (its fit takes no row weights)
+ */
+function readWeighting(doc: YamlDocument, file: string, raw: RawDescriptor, line: (path: (string | number)[]) => number): Weighting | null {
+  const data = raw.data;
+  if (raw.task === 'classification') {
+    const key = data.weight !== undefined ? 'weight' : data.sigma !== undefined ? 'sigma' : null;
+    if (key !== null) {
+      throw errorAt(
+        doc,
+        file,
+        DESCRIPTOR_ERROR.weighting,
+        ['data', key],
+        `a classifier is fitted without row weights, so \`${key}\` would be ignored; expected \`data.${key}\` only with \`task: regression\``,
+      );
+    }
+  }
   if (data.weight !== undefined && data.sigma !== undefined) {
     throw errorAt(
       doc,

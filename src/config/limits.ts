@@ -65,8 +65,12 @@ export function limitOrderProblem(spec: LimitSpec, direction: LimitDirection): [
     return [wb, `${wb} ${warnBelow} is below ${fb} ${failBelow}; expected ${wb} >= ${fb} (a floor warns before it fails)`];
   const floor = Math.max(warnBelow ?? -Infinity, failBelow ?? -Infinity);
   const ceiling = Math.min(warnAbove ?? Infinity, failAbove ?? Infinity);
+  // Only explicit bounds hold both a floor and a ceiling: name the floor's own key (the one written).
   if (floor > ceiling)
-    return [b ? 'warn_below' : 'warn', `the floor ${floor} is above the ceiling ${ceiling}; every value would be out of bounds`];
+    return [
+      warnBelow === floor ? 'warn_below' : 'fail_below',
+      `the floor ${floor} is above the ceiling ${ceiling}; every value would be out of bounds`,
+    ];
   return null;
 }
 

@@ -3,17 +3,20 @@
  * the file writes them (0/1, true/false, or two text labels with `data.positive` naming the
  * positive one), checked and mapped to 1 (positive) and 0 (negative).
  */
-import { parse } from 'csv-parse';
 import type { Descriptor, SettingsFile } from '../config/types.js';
 import { InputError, quoteValue } from '../core/errors.js';
 import { loadModelData, type ModelTables } from './load-model-data.js';
-import { readTable } from './table.js';
-import { openDataFile } from './gzip-stream.js';
 import { placeOfLine, type LinePlace } from './data-parts.js';
 import type { RepoReader } from '../repo/types.js';
 
 /** Largest number of distinct labels collected before a target is judged not binary. */
 const MAX_LABELS = 20;
+
+/**
+ * A classifier's rows are always held in memory, never streamed as a sample (its fit makes passes
+ * of its own over every row; run/fit-classifier.ts refuses training files too large to hold).
+ */
+const HELD = { streamAboveBytes: Number.POSITIVE_INFINITY } as const;
 
 /** How the target's classes were read. */
 export interface ClassLabels {
@@ -48,7 +51,7 @@ export async function loadClassifierData(
 ): Promise<ClassifierTables> {
   let tables: ModelTables;
   try {
-    tables = await loadModelData(repo, descriptor, inputs, settings);
+    tables = await loadModelData(repo, descriptor, inputs, settings, HELD);
   } catch (error) {
     if (error instanceof InputError && error.code === 'csv-cell' && error.location.key === descriptor.data.target) {
       return loadTextLabels(repo, descriptor, inputs, settings);
@@ -72,44 +75,45 @@ export async function loadClassifierData(
   return { ...tables, labels };
 }
 
-/** The inputs as numbers and the target as text labels (a second read of each file for the target). */
+/**
+ * The inputs as numbers and the target as text labels: read as the numeric target would be (the
+ * descriptor's separator, split column, dropped rows, category inputs and weights), the labels
+ * coded by first appearance in the training rows.
+ * @throws InputError `target-classes` when the training rows hold more than {@link MAX_LABELS} labels
+ */
 async function loadTextLabels(
   repo: RepoReader,
   descriptor: Descriptor,
   inputs: readonly string[],
   settings: SettingsFile,
 ): Promise<ClassifierTables> {
-  const { data } = descriptor;
-  const maxBytes = settings.caps.maxFileBytes;
-  const read = async (path: string, parts: readonly string[] | undefined) => {
-    const table = await readTable(repo, parts ?? path, { columns: [...inputs], maxBytes });
-    const codes = await partsLabelCodes(repo, parts ?? [path], data.target, descriptor, maxBytes);
-    if (codes.rows !== table.rows) throw new Error(`label rows ${codes.rows} differ from data rows ${table.rows} in ${table.file}`);
-    return { table, codes };
-  };
-  const train = await read(data.train, data.trainParts);
-  const holdout = await read(data.holdout, data.holdoutParts);
-  const labels = chooseClasses(descriptor, train.codes.labels, 'text');
-  const toY = (part: typeof train): Float64Array => {
-    const y = new Float64Array(part.table.rows);
-    const meaning = part.codes.labels.map((label) => (label === labels.positive ? 1 : label === labels.negative ? 0 : -1));
-    for (let i = 0; i < y.length; i++) {
-      const m = meaning[part.codes.codes[i]];
-      if (m < 0)
-        throw unknownLabel(descriptor, placeOfLine(part.table, part.table.lines[i]), part.codes.labels[part.codes.codes[i]], labels);
-      y[i] = m;
+  const { targetText, ...tables } = await loadModelData(repo, descriptor, inputs, settings, { ...HELD, targetAsText: true });
+  const text = targetText as { train: string[]; holdout: string[] };
+  const found: string[] = [];
+  for (const label of text.train) {
+    if (found.includes(label)) continue;
+    if (found.length >= MAX_LABELS) {
+      throw new InputError(
+        'target-classes',
+        `a binary classifier needs exactly two classes in the target \`${descriptor.data.target}\`; ${tables.train.file} holds more than ${MAX_LABELS}`,
+        { file: descriptor.file, line: descriptor.data.lines.target, key: 'data.target' },
+      );
     }
-    return y;
-  };
-  const model = (part: typeof train) => ({
-    inputs: inputs.map((c) => part.table.columns.get(c) as Float64Array),
-    y: toY(part),
-    lines: part.table.lines,
-    rows: part.table.rows,
-    file: part.table.file,
-    ...(part.table.parts ? { parts: part.table.parts } : {}),
-  });
-  return { train: model(train), holdout: model(holdout), trainColumns: train.table.columns, labels };
+    found.push(label);
+  }
+  const labels = chooseClasses(descriptor, found, 'text');
+  for (const [data, cells] of [
+    [tables.train, text.train],
+    [tables.holdout, text.holdout],
+  ] as const) {
+    for (let i = 0; i < data.rows; i++) {
+      const label = cells[i];
+      if (label === labels.positive) data.y[i] = 1;
+      else if (label === labels.negative) data.y[i] = 0;
+      else throw unknownLabel(descriptor, placeOfLine(data, data.lines[i]), label, labels);
+    }
+  }
+  return { ...tables, labels };
 }
 
 /**
@@ -172,123 +176,4 @@ function distinctNumbers(y: Float64Array, n: number): number[] {
   const out: number[] = [];
   for (let i = 0; i < n && out.length < MAX_LABELS; i++) if (!out.includes(y[i])) out.push(y[i]);
   return out;
-}
-
-/**
- * Reads one column of a CSV file as text labels (trimmed), coded by first appearance. The same
- * CSV rules as the numeric reader (comma, `"` quotes, blank lines skipped), so rows line up.
- * @throws InputError `target-classes` when more than {@link MAX_LABELS} distinct labels appear
- */
-async function partsLabelCodes(
-  repo: RepoReader,
-  paths: readonly string[],
-  column: string,
-  descriptor: Descriptor,
-  maxBytes: number,
-): Promise<{ labels: string[]; codes: Int32Array; rows: number }> {
-  if (paths.length === 1) return readLabelCodes(repo, paths[0], column, descriptor, maxBytes);
-  // Parts one after the other: each part's codes renumbered into the labels of all parts, by first appearance.
-  const labels: string[] = [];
-  const chunks: Int32Array[] = [];
-  let rows = 0;
-  for (const path of paths) {
-    const part = await readLabelCodes(repo, path, column, descriptor, maxBytes);
-    const map = part.labels.map((label) => {
-      const k = labels.indexOf(label);
-      if (k >= 0) return k;
-      labels.push(label);
-      return labels.length - 1;
-    });
-    if (labels.length > MAX_LABELS) {
-      throw new InputError(
-        'target-classes',
-        `a binary classifier needs exactly two classes in the target \`${column}\`; its parts hold more than ${MAX_LABELS}`,
-        { file: descriptor.file, line: descriptor.data.lines.target, key: 'data.target' },
-      );
-    }
-    chunks.push(Int32Array.from(part.codes, (c) => map[c]));
-    rows += part.rows;
-  }
-  const codes = new Int32Array(rows);
-  let at = 0;
-  for (const chunk of chunks) {
-    codes.set(chunk, at);
-    at += chunk.length;
-  }
-  return { labels, codes, rows };
-}
-
-/**
- * One file's labels and codes (see {@link partsLabelCodes}); its bytes are read as the numeric
- * reader reads them (decompressed when `.gz`, held to the same byte cap).
- */
-async function readLabelCodes(
-  repo: RepoReader,
-  path: string,
-  column: string,
-  descriptor: Descriptor,
-  maxBytes: number,
-): Promise<{ labels: string[]; codes: Int32Array; rows: number }> {
-  const labels: string[] = [];
-  const index = new Map<string, number>();
-  let codes = new Int32Array(1024);
-  let rows = 0;
-  let field = -1;
-  let tooMany = false;
-  const parser = parse({
-    bom: true,
-    delimiter: ',',
-    quote: '"',
-    escape: '"',
-    record_delimiter: ['\r\n', '\n'],
-    trim: true,
-    skip_empty_lines: true,
-    relax_column_count: true,
-  });
-  const consume = (): void => {
-    for (let record = parser.read() as string[] | null; record !== null; record = parser.read() as string[] | null) {
-      if (field < 0) {
-        field = record.indexOf(column);
-        continue;
-      }
-      const label = record[field] ?? '';
-      let code = index.get(label);
-      if (code === undefined) {
-        if (labels.length >= MAX_LABELS) {
-          tooMany = true;
-          continue;
-        }
-        code = labels.length;
-        labels.push(label);
-        index.set(label, code);
-      }
-      if (rows === codes.length) {
-        const next = new Int32Array(codes.length * 2);
-        next.set(codes);
-        codes = next;
-      }
-      codes[rows++] = code;
-    }
-  };
-  parser.on('readable', consume);
-  const done = new Promise<void>((resolve, reject) => {
-    parser.on('end', resolve);
-    parser.on('error', reject);
-  });
-  for await (const piece of openDataFile(repo, path, maxBytes)) parser.write(Buffer.from(piece.buffer, piece.byteOffset, piece.byteLength));
-  parser.end();
-  await done;
-  consume();
-  if (tooMany) {
-    throw new InputError(
-      'target-classes',
-      `a binary classifier needs exactly two classes in the target \`${column}\`; ${path} holds more than ${MAX_LABELS}`,
-      {
-        file: descriptor.file,
-        line: descriptor.data.lines.target,
-        key: 'data.target',
-      },
-    );
-  }
-  return { labels, codes: codes.subarray(0, rows), rows };
 }

@@ -7,6 +7,8 @@ import type { ModelData } from './model-data.js';
 import { readTable, type Table } from './table.js';
 import { partsLabel, placeOfLine, type DataPart } from './data-parts.js';
 import { levelCodes, trainingLevels } from './levels.js';
+import type { Separator } from './csv-format.js';
+import { isMissingCell } from './csv-rules.js';
 import type { RepoReader } from '../repo/types.js';
 import {
   fileRowSource,
@@ -26,6 +28,8 @@ export interface ModelTables {
   trainColumns: Map<string, Float64Array>;
   /** Training levels (text order) of each category column; the columns hold their codes. */
   levels?: Map<string, string[]>;
+  /** With {@link LoadOptions.targetAsText}: the target's cells as text (trimmed), row by row. */
+  targetText?: { train: string[]; holdout: string[] };
   /**
    * Present when the training file (or its parts together) streams (row-source.ts): `train` then
    * holds a seeded sample of at most {@link SAMPLE_ROWS} rows (every row when the file has no
@@ -58,6 +62,12 @@ export interface LoadOptions {
   chunkRows?: number;
   /** Sample size of a streamed model (default {@link SAMPLE_ROWS}). */
   sampleRows?: number;
+  /**
+   * Read the target as text (a classifier's class labels), with the same separator, split column
+   * and dropped rows as the numbers; the tables then carry it as `targetText` and `y` is left 0.
+   * Under `data.missing: drop` a row whose label (or category level) is a missing cell is dropped and counted.
+   */
+  targetAsText?: boolean;
   /** Sees every chunk of a streamed training file during the sampling read (checks that need every row). */
   onTrainChunk?: (chunk: RowChunk) => void;
 }
@@ -104,7 +114,12 @@ export async function loadModelData(
   // Category inputs are text: read apart (text-columns.ts) and coded (levels.ts), never as numbers.
   const categories = categoryColumns(descriptor);
   const numeric = inputs.filter((c) => !categories.has(c));
-  const columns = [...numeric, data.target, ...(weighting !== null && !inputs.includes(weighting.column) ? [weighting.column] : [])];
+  const textTarget = options.targetAsText === true;
+  const columns = [
+    ...numeric,
+    ...(textTarget ? [] : [data.target]),
+    ...(weighting !== null && !inputs.includes(weighting.column) ? [weighting.column] : []),
+  ];
   const levels = new Map<string, string[]>();
   const maxBytes = settings.caps.maxFileBytes;
   const format = data.format;
@@ -114,7 +129,7 @@ export async function loadModelData(
     partPaths: readonly string[] | undefined,
     line: number,
     key: string,
-  ): Promise<ModelData & { byName: Map<string, Float64Array> }> => {
+  ): Promise<ModelData & { byName: Map<string, Float64Array>; targetText?: string[] }> => {
     let table: Awaited<ReturnType<typeof readTable>>;
     // With a split column both sides read the one file, each keeping its own label's rows.
     const side =
@@ -133,6 +148,18 @@ export async function loadModelData(
     } catch (error) {
       throw withAsker(error, descriptor);
     }
+    // Text columns (category inputs, a target of class labels) of the rows the numeric read kept.
+    const textNames = [...categories.keys(), ...(textTarget ? [data.target] : [])];
+    let text: Map<string, string[]> | null = null;
+    if (textNames.length > 0 && table.rows > 0) {
+      try {
+        text = await readCategoryText(repo, table, textNames, maxBytes, format?.separator ?? 'auto');
+      } catch (error) {
+        throw withAsker(error, descriptor);
+      }
+      // Under `missing: drop` a missing cell in a text column drops its row, as in a numeric one.
+      if (format?.missing === 'drop') table = dropMissingText(table, text);
+    }
     if (table.rows === 0) {
       const why = side
         ? ` labelled ${quoteValue(side.keep)} in column ${quoteValue(side.column)}`
@@ -150,8 +177,7 @@ export async function loadModelData(
         },
       );
     }
-    if (categories.size > 0) {
-      const text = await readCategoryText(repo, table, [...categories.keys()], maxBytes);
+    if (text !== null) {
       for (const [name, term] of categories) {
         const values = text.get(name) as string[];
         if (!levels.has(name)) levels.set(name, trainingLevels(values));
@@ -168,13 +194,14 @@ export async function loadModelData(
     }
     const rows = {
       inputs: inputs.map((c) => table.columns.get(c) as Float64Array),
-      y: table.columns.get(data.target) as Float64Array,
+      y: textTarget ? new Float64Array(table.rows) : (table.columns.get(data.target) as Float64Array),
       lines: table.lines,
       rows: table.rows,
       file: table.file,
       ...(table.parts ? { parts: table.parts } : {}),
       ...(format?.missing === 'drop' ? { dropped: table.dropped } : {}),
       byName: table.columns,
+      ...(text !== null && textTarget ? { targetText: text.get(data.target) as string[] } : {}),
     };
     return weighting === null
       ? rows
@@ -190,11 +217,13 @@ export async function loadModelData(
     const why =
       categories.size > 0
         ? 'a category term'
-        : weighting !== null
-          ? `\`data.${weighting.kind}\``
-          : (data.targetTransform ?? null) !== null
-            ? '`data.target_transform`'
-            : null;
+        : textTarget
+          ? 'a target of text class labels'
+          : weighting !== null
+            ? `\`data.${weighting.kind}\``
+            : (data.targetTransform ?? null) !== null
+              ? '`data.target_transform`'
+              : null;
     if (why !== null) {
       throw new InputError(
         'too-large-to-hold',
@@ -253,7 +282,7 @@ export async function loadModelData(
       ...(format?.missing === 'drop' ? { dropped: counts.dropped } : {}),
     };
     const holdout = await load(data.holdout, data.holdoutParts, data.lines.holdout, 'data.holdout');
-    const { byName: _unused, ...holdoutData } = holdout;
+    const { byName: _unused, targetText: _text, ...holdoutData } = holdout;
     const trainColumns = new Map<string, Float64Array>(inputs.map((name, c) => [name, sample.inputs[c]]));
     return {
       train: sample,
@@ -275,7 +304,7 @@ export async function loadModelData(
   }
   const train = await load(data.train, data.trainParts, data.lines.train, 'data.train');
   const holdout = await load(data.holdout, data.holdoutParts, data.lines.holdout, 'data.holdout');
-  const { byName, ...trainData } = train;
+  const { byName, targetText: trainText, ...trainData } = train;
   if (trainData.weights !== undefined && !trainData.weights.some((w) => w > 0)) {
     throw new InputError('bad-weight', `every training row of ${trainData.file} has weight 0; expected at least one positive weight`, {
       file: descriptor.file,
@@ -283,8 +312,14 @@ export async function loadModelData(
       key: `data.${data.weighting?.kind}`,
     });
   }
-  const { byName: _unused, ...holdoutData } = holdout;
-  return { train: trainData, holdout: holdoutData, trainColumns: byName, levels };
+  const { byName: _unused, targetText: holdoutText, ...holdoutData } = holdout;
+  return {
+    train: trainData,
+    holdout: holdoutData,
+    trainColumns: byName,
+    levels,
+    ...(textTarget ? { targetText: { train: trainText ?? [], holdout: holdoutText ?? [] } } : {}),
+  };
 }
 
 /**
@@ -344,14 +379,17 @@ export function rowWeights(
 
 /**
  * The text of the category columns of a table, file by file (each part apart, its lines made
- * table-wide as the numeric read made them), checked to give the same rows as the numbers.
- * @throws InputError `csv-rows` when a file gives other rows of text than of numbers
+ * table-wide as the numeric read made them): the text of each row the numeric read kept, found by
+ * its line (rows the numeric read left out, dropped for a missing cell or of the other side of a
+ * split column, are skipped), read with the table's separator.
+ * @throws InputError `csv-rows` when a row of numbers has no record of text on its line
  */
 async function readCategoryText(
   repo: RepoReader,
   table: Table,
   names: readonly string[],
   maxBytes: number,
+  separator: Separator | 'auto',
 ): Promise<Map<string, string[]>> {
   const files = table.parts ?? [{ file: table.file, lineOffset: 0 }];
   const out = new Map<string, string[]>(names.map((n) => [n, []]));
@@ -359,26 +397,34 @@ async function readCategoryText(
   let left = maxBytes;
   // csv-parse comes with the text columns: loaded only when a model has text columns.
   const { readTextColumns } = await import('./text-columns.js');
+  const rowsError = (file: string, texts: number) => {
+    // One file: the message as it always was; a part: its own count (the numbers' rows are the whole table's).
+    const numbers = table.parts === undefined ? `${table.rows} rows of numbers` : 'other rows of numbers';
+    return new InputError(
+      'csv-rows',
+      `${table.parts === undefined ? file : clip(file)} gives ${texts} rows of text for its category columns but ${numbers}; expected one record per line (no line breaks inside quoted category cells)`,
+      { file },
+    );
+  };
   for (const part of files) {
-    const text = await readTextColumns(repo, part.file, names, Math.min(left, maxBytes));
+    const text = await readTextColumns(repo, part.file, names, Math.min(left, maxBytes), separator);
     left -= await repo.size(part.file);
     const n = text.lines.length;
-    let same = row + n <= table.rows;
-    for (let i = 0; same && i < n; i++) same = text.lines[i] + part.lineOffset === table.lines[row + i];
-    if (!same) {
-      // One file: the message as it always was; a part: its own count (the numbers' rows are the whole table's).
-      const numbers = table.parts === undefined ? `${table.rows} rows of numbers` : 'other rows of numbers';
-      throw new InputError(
-        'csv-rows',
-        `${table.parts === undefined ? part.file : clip(part.file)} gives ${n} rows of text for its category columns but ${numbers}; expected one record per line (no line breaks inside quoted category cells)`,
-        { file: part.file },
-      );
+    // Both line lists ascend: each row of numbers takes the record of text on its own line.
+    const taken: number[] = [];
+    for (let i = 0; i < n && row < table.rows; i++) {
+      const line = text.lines[i] + part.lineOffset;
+      if (table.lines[row] < line) throw rowsError(part.file, n);
+      if (table.lines[row] === line) {
+        taken.push(i);
+        row++;
+      }
     }
     for (const name of names) {
       const values = out.get(name) as string[];
-      for (const v of text.columns.get(name) as string[]) values.push(v);
+      const cells = text.columns.get(name) as string[];
+      for (const i of taken) values.push(cells[i]);
     }
-    row += n;
   }
   if (row !== table.rows) {
     throw new InputError(
@@ -388,6 +434,35 @@ async function readCategoryText(
     );
   }
   return out;
+}
+
+/**
+ * The table without the rows with a missing cell in a text column (`data.missing: drop`), counted
+ * with the rows the numeric read dropped; `text` loses the same rows.
+ */
+function dropMissingText(table: Table, text: Map<string, string[]>): Table {
+  const cellsOf = [...text.values()];
+  const keep: number[] = [];
+  for (let i = 0; i < table.rows; i++) if (!cellsOf.some((cells) => isMissingCell(cells[i]))) keep.push(i);
+  if (keep.length === table.rows) return table;
+  for (const [name, values] of text)
+    text.set(
+      name,
+      keep.map((i) => values[i]),
+    );
+  const columns = new Map<string, Float64Array>();
+  for (const [name, values] of table.columns)
+    columns.set(
+      name,
+      Float64Array.from(keep, (i) => values[i]),
+    );
+  return {
+    ...table,
+    rows: keep.length,
+    columns,
+    lines: Int32Array.from(keep, (i) => table.lines[i]),
+    dropped: table.dropped + table.rows - keep.length,
+  };
 }
 
 /**

@@ -152,7 +152,10 @@ export function partialCurvePoints(curves: number): number {
   return Math.max(101, Math.min(CURVE_POINTS, Math.floor(PARTIAL_CURVE_POINTS / Math.max(1, curves))));
 }
 
-/** Predictions along input c over [lo, hi] at `points` grid points (plus `extra` x values), the others at `medians`. */
+/**
+ * Predictions along input c over [lo, hi] at `points` grid points (plus `extra` x values), the
+ * others at `medians`; at the values in `discrete` only when given (a category's level codes).
+ */
 function curveAlong(
   model: FittedModel,
   c: number,
@@ -161,9 +164,11 @@ function curveAlong(
   medians: number[],
   extra: readonly number[],
   points: number,
+  discrete?: readonly number[],
 ): { x: number[]; y: (number | null)[] } {
   const xs: number[] = [];
-  for (let t = 0; t < points; t++) xs.push(t === points - 1 ? hi : lo + ((hi - lo) * t) / (points - 1));
+  if (discrete !== undefined) for (const v of discrete) xs.push(v);
+  else for (let t = 0; t < points; t++) xs.push(t === points - 1 ? hi : lo + ((hi - lo) * t) / (points - 1));
   for (const v of extra) if (v >= lo && v <= hi) xs.push(v);
   const grid = Float64Array.from(xs).sort();
   const columns = model.design.inputs.map((_, k) => (k === c ? grid : new Float64Array(grid.length).fill(medians[k])));
@@ -393,9 +398,12 @@ export function buildChartData(
     }
     const swing = inputs.length === 1 ? readSwing(checks, inputs[c]) : null;
     const swingCurve = swing?.curve ?? null;
-    const lo = swingCurve ? Math.min(swingCurve.x[0], tlo) : tlo - CURVE_MARGIN * (thi - tlo);
-    const hi = swingCurve ? Math.max(swingCurve.x[swingCurve.x.length - 1], thi) : thi + CURVE_MARGIN * (thi - tlo);
-    const { x, y } = curveAlong(model, c, lo, hi, medians, swingCurve ? swingCurve.x : [], points);
+    // A category input is drawn at its levels only (no margins, no points between levels), as swing scans it.
+    const discrete = model.design.terms.find((t) => t.discreteValues !== undefined && t.inputs.includes(inputs[c]))?.discreteValues;
+    const margin = discrete !== undefined ? 0 : CURVE_MARGIN * (thi - tlo);
+    const lo = swingCurve ? Math.min(swingCurve.x[0], tlo) : tlo - margin;
+    const hi = swingCurve ? Math.max(swingCurve.x[swingCurve.x.length - 1], thi) : thi + margin;
+    const { x, y } = curveAlong(model, c, lo, hi, medians, swingCurve ? swingCurve.x : [], points, discrete);
     // Keyed by column names (user text): no prototype, so `__proto__` is a name like any other.
     const others: Record<string, number> = Object.create(null);
     inputs.forEach((name, k) => {

@@ -111,13 +111,17 @@ export function buildClassifierChartData(model: FittedClassifier, maxPoints = MA
     const [tlo, thi] = range(train.inputs[c], train.rows);
     const lo = tlo - CURVE_MARGIN * (thi - tlo);
     const hi = thi + CURVE_MARGIN * (thi - tlo);
-    const grid = new Float64Array(gridPoints);
-    for (let t = 0; t < gridPoints; t++) grid[t] = t === gridPoints - 1 ? hi : lo + ((hi - lo) * t) / (gridPoints - 1);
-    const columns = inputs.map((_, k) => (k === c ? grid : new Float64Array(gridPoints).fill(medians[k])));
-    const eta = predictRows(design, { inputs: columns, rows: gridPoints }, fit.coefficients);
+    // A category input is drawn at its level codes only (no margins, no points between levels).
+    const discrete = design.terms.find((t) => t.discreteValues !== undefined && t.inputs.includes(inputs[c]))?.discreteValues;
+    const points = discrete?.length ?? gridPoints;
+    const grid = new Float64Array(points);
+    if (discrete !== undefined) grid.set(discrete);
+    else for (let t = 0; t < points; t++) grid[t] = t === points - 1 ? hi : lo + ((hi - lo) * t) / (points - 1);
+    const columns = inputs.map((_, k) => (k === c ? grid : new Float64Array(points).fill(medians[k])));
+    const eta = predictRows(design, { inputs: columns, rows: points }, fit.coefficients);
     const x: number[] = [];
     const p: (number | null)[] = [];
-    for (let t = 0; t < gridPoints; t++) {
+    for (let t = 0; t < points; t++) {
       const xt = chartNumber(grid[t]);
       if (xt === null || (x.length > 0 && xt === x[x.length - 1])) continue;
       x.push(xt);

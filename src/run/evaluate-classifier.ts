@@ -97,6 +97,7 @@ export async function evaluateClassifier(
     verdict,
     rows: { train: model.train.rows, holdout: model.holdout.rows },
     ...dataFilesField(descriptor.data),
+    ...(model.train.dropped !== undefined ? { dropped: { train: model.train.dropped, holdout: model.holdout.dropped ?? 0 } } : {}),
     parameters: model.context.design.p,
     columns: [...model.context.design.columnNames],
     metrics,

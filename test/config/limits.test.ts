@@ -71,6 +71,10 @@ describe('limitOrderProblem', () => {
     expect(limitOrderProblem({ warn: 2, fail: 1 }, 'below')).toBeNull();
     expect(limitOrderProblem({ warn_above: 3, fail_above: 2 }, 'below')?.[0]).toBe('warn_above');
     expect(limitOrderProblem({ warn_below: 0.5, warn_above: 2 }, 'above')).toBeNull();
+    // A floor above a ceiling names the floor's key as written (the annotation points at its line).
+    expect(limitOrderProblem({ warn_below: 3, fail_above: 1 }, 'above')?.[0]).toBe('warn_below');
+    expect(limitOrderProblem({ fail_below: 0.2, warn_above: 0.1 }, 'below')?.[0]).toBe('fail_below');
+    expect(limitOrderProblem({ warn_below: 0.3, fail_below: 0.2, warn_above: 0.25 }, 'below')?.[0]).toBe('warn_below');
   });
 });
 

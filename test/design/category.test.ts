@@ -99,4 +99,26 @@ describe('category levels', () => {
     expect(curves.find((c) => c.input === 'site')?.x).toEqual([0, 1, 2, 3, 4]);
     expect(r.checks.find((c) => c.id === 'swing-spikes')?.status).not.toBe('fail');
   });
+
+  it('the chart of a category input is drawn at its levels only, no margins, no points between levels', async () => {
+    const { result } = await fitSite('category: { of: site }');
+    const r = await result();
+    const curve = r.charts?.partials.find((c) => c.input === 'site');
+    expect(curve?.x).toEqual([0, 1, 2, 3, 4]);
+    expect(curve?.y).toHaveLength(5);
+  });
+
+  it('a swing message names the category input by its level, not by its code', async () => {
+    const rp = createMemoryRepository({
+      'models/m.model.yml':
+        'version: 1\nname: m\ndata:\n  train: ../train.csv\n  holdout: ../holdout.csv\n  target: y\nterms:\n  - category: { of: site }\n  - polynomial: { of: x, degree: 10 }\n',
+      'train.csv': train,
+      'holdout.csv': holdout,
+    });
+    const d = await loadDescriptor(rp, 'models/m.model.yml', defaultSettings());
+    const r = await evaluateModel(rp, d, defaultSettings());
+    // A degree-10 polynomial through 11 values of x leaves the band in the margins beyond them.
+    const beyond = r.checks.find((c) => c.id === 'swing-beyond');
+    expect(beyond?.message).toMatch(/leave the training target band .* at site = "(07|7|east|north|south)", x = /);
+  });
 });

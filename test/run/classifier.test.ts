@@ -112,6 +112,37 @@ describe('classifier: labels', () => {
   });
 });
 
+describe('classifier: fit.refit', () => {
+  // A classifier is always refitted: `refit: false` used to be ignored (the refit judged, the
+  // shipped coefficients failing reproducibility), so it is a descriptor error at its line.
+  it('refit: false is an error at its line', async () => {
+    const m = await run({
+      'm.model.yml': `${descriptor()}  refit: false\ncoefficients: [-4, 1.5]\n`,
+      'train.csv': csv(HOURS, PASS),
+      'holdout.csv': csv(HOURS, PASS),
+    });
+    expect(m.error).toMatchObject({ code: 'predictions-form', file: 'm.model.yml', line: 13 });
+    expect(m.error?.message).toContain('expected no `refit: false` on a classifier');
+  });
+});
+
+describe('classifier: row weights', () => {
+  // The logistic fit takes no row weights: a weight or sigma column would change nothing, so it
+  // is a descriptor error at its line rather than a setting silently ignored.
+  for (const key of ['weight', 'sigma']) {
+    it(`data.${key} is an error at its line`, async () => {
+      const weighted = `x,y,w\n${HOURS.map((v, i) => `${v},${PASS[i]},${1 + (i % 3)}`).join('\n')}\n`;
+      const m = await run({
+        'm.model.yml': descriptor(`  ${key}: w\n`),
+        'train.csv': weighted,
+        'holdout.csv': weighted,
+      });
+      expect(m.error).toMatchObject({ code: 'weight-and-sigma', file: 'm.model.yml', line: 8 });
+      expect(m.error?.message).toContain(`\`data.${key}\` only with \`task: regression\``);
+    });
+  }
+});
+
 describe('classifier: separation (exact, constructed cases)', () => {
   it('complete: every row separated, the check fails and lists the rows', async () => {
     const x = [1, 2, 3, 4, 5, 6, 7, 8];

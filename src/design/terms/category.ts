@@ -55,6 +55,7 @@ export function categoryTerm(spec: CategoryTermSpec, training: TrainingColumns, 
     columnNames: kept.map((k) => `${spec.of}=${levels[k].slice(0, 80)}`),
     fixed: { levels: levels.length, reference },
     discreteValues: discrete,
+    levels: [...levels],
     admits: (_name, value) => Number.isInteger(value) && value >= 0 && value < levels.length,
     fill(inputs, m, out, offset) {
       for (let j = 0; j < kept.length; j++) indicatorColumn(inputs[0], m, kept[j], out, (offset + j) * m);

@@ -35,6 +35,8 @@ export interface Term {
    */
   /** The only values its (single) input takes, for a category's level codes: scans use exactly these. */
   discreteValues?: readonly number[];
+  /** A category's training levels as written, by code (`levels[code]`), to name a code in messages. */
+  levels?: readonly string[];
   inputScale?: { name: string; forward(value: number): number; inverse(value: number): number };
 }
 
