@@ -8,25 +8,19 @@ export const modules = {
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
 /* harmony export */   W: () => (/* binding */ loadClassifierData)
 /* harmony export */ });
-/* harmony import */ var csv_parse__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(8075);
-/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(4296);
-/* harmony import */ var _load_model_data_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(5240);
-/* harmony import */ var _table_js__WEBPACK_IMPORTED_MODULE_3__ = __webpack_require__(8785);
-/* harmony import */ var _gzip_stream_js__WEBPACK_IMPORTED_MODULE_4__ = __webpack_require__(4596);
-/* harmony import */ var _data_parts_js__WEBPACK_IMPORTED_MODULE_5__ = __webpack_require__(6837);
-/**
- * The target of a binary classifier as 0/1: the two classes of the training rows, whichever way
- * the file writes them (0/1, true/false, or two text labels with `data.positive` naming the
- * positive one), checked and mapped to 1 (positive) and 0 (negative).
- */
-
-
-
+/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(4296);
+/* harmony import */ var _load_model_data_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(5240);
+/* harmony import */ var _data_parts_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(6837);
 
 
 
 /** Largest number of distinct labels collected before a target is judged not binary. */
 const MAX_LABELS = 20;
+/**
+ * A classifier's rows are always held in memory, never streamed as a sample (its fit makes passes
+ * of its own over every row; run/fit-classifier.ts refuses training files too large to hold).
+ */
+const HELD = { streamAboveBytes: Number.POSITIVE_INFINITY };
 /**
  * Reads a classifier's columns: the inputs as numbers, the target as two classes mapped to 1
  * (positive) and 0 (negative). Numbers: the two values 0 and 1 (1 positive), or two other
@@ -40,10 +34,10 @@ const MAX_LABELS = 20;
 async function loadClassifierData(repo, descriptor, inputs, settings) {
     let tables;
     try {
-        tables = await (0,_load_model_data_js__WEBPACK_IMPORTED_MODULE_2__/* .loadModelData */ .u)(repo, descriptor, inputs, settings);
+        tables = await (0,_load_model_data_js__WEBPACK_IMPORTED_MODULE_1__/* .loadModelData */ .u)(repo, descriptor, inputs, settings, HELD);
     }
     catch (error) {
-        if (error instanceof _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz && error.code === 'csv-cell' && error.location.key === descriptor.data.target) {
+        if (error instanceof _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz && error.code === 'csv-cell' && error.location.key === descriptor.data.target) {
             return loadTextLabels(repo, descriptor, inputs, settings);
         }
         throw error;
@@ -62,45 +56,45 @@ async function loadClassifierData(repo, descriptor, inputs, settings) {
             else if (v === negative)
                 y[i] = 0;
             else
-                throw unknownLabel(descriptor, (0,_data_parts_js__WEBPACK_IMPORTED_MODULE_5__/* .placeOfLine */ .xX)(data, data.lines[i]), String(v), labels);
+                throw unknownLabel(descriptor, (0,_data_parts_js__WEBPACK_IMPORTED_MODULE_2__/* .placeOfLine */ .xX)(data, data.lines[i]), String(v), labels);
         }
     }
     return { ...tables, labels };
 }
-/** The inputs as numbers and the target as text labels (a second read of each file for the target). */
+/**
+ * The inputs as numbers and the target as text labels: read as the numeric target would be (the
+ * descriptor's separator, split column, dropped rows, category inputs and weights), the labels
+ * coded by first appearance in the training rows.
+ * @throws InputError `target-classes` when the training rows hold more than {@link MAX_LABELS} labels
+ */
 async function loadTextLabels(repo, descriptor, inputs, settings) {
-    const { data } = descriptor;
-    const maxBytes = settings.caps.maxFileBytes;
-    const read = async (path, parts) => {
-        const table = await (0,_table_js__WEBPACK_IMPORTED_MODULE_3__/* .readTable */ .xz)(repo, parts ?? path, { columns: [...inputs], maxBytes });
-        const codes = await partsLabelCodes(repo, parts ?? [path], data.target, descriptor, maxBytes);
-        if (codes.rows !== table.rows)
-            throw new Error(`label rows ${codes.rows} differ from data rows ${table.rows} in ${table.file}`);
-        return { table, codes };
-    };
-    const train = await read(data.train, data.trainParts);
-    const holdout = await read(data.holdout, data.holdoutParts);
-    const labels = chooseClasses(descriptor, train.codes.labels, 'text');
-    const toY = (part) => {
-        const y = new Float64Array(part.table.rows);
-        const meaning = part.codes.labels.map((label) => (label === labels.positive ? 1 : label === labels.negative ? 0 : -1));
-        for (let i = 0; i < y.length; i++) {
-            const m = meaning[part.codes.codes[i]];
-            if (m < 0)
-                throw unknownLabel(descriptor, (0,_data_parts_js__WEBPACK_IMPORTED_MODULE_5__/* .placeOfLine */ .xX)(part.table, part.table.lines[i]), part.codes.labels[part.codes.codes[i]], labels);
-            y[i] = m;
+    const { targetText, ...tables } = await (0,_load_model_data_js__WEBPACK_IMPORTED_MODULE_1__/* .loadModelData */ .u)(repo, descriptor, inputs, settings, { ...HELD, targetAsText: true });
+    const text = targetText;
+    const found = [];
+    for (const label of text.train) {
+        if (found.includes(label))
+            continue;
+        if (found.length >= MAX_LABELS) {
+            throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz('target-classes', `a binary classifier needs exactly two classes in the target \`${descriptor.data.target}\`; ${tables.train.file} holds more than ${MAX_LABELS}`, { file: descriptor.file, line: descriptor.data.lines.target, key: 'data.target' });
         }
-        return y;
-    };
-    const model = (part) => ({
-        inputs: inputs.map((c) => part.table.columns.get(c)),
-        y: toY(part),
-        lines: part.table.lines,
-        rows: part.table.rows,
-        file: part.table.file,
-        ...(part.table.parts ? { parts: part.table.parts } : {}),
-    });
-    return { train: model(train), holdout: model(holdout), trainColumns: train.table.columns, labels };
+        found.push(label);
+    }
+    const labels = chooseClasses(descriptor, found, 'text');
+    for (const [data, cells] of [
+        [tables.train, text.train],
+        [tables.holdout, text.holdout],
+    ]) {
+        for (let i = 0; i < data.rows; i++) {
+            const label = cells[i];
+            if (label === labels.positive)
+                data.y[i] = 1;
+            else if (label === labels.negative)
+                data.y[i] = 0;
+            else
+                throw unknownLabel(descriptor, (0,_data_parts_js__WEBPACK_IMPORTED_MODULE_2__/* .placeOfLine */ .xX)(data, data.lines[i]), label, labels);
+        }
+    }
+    return { ...tables, labels };
 }
 /**
  * Picks the positive and negative class among the labels found in the training rows.
@@ -110,17 +104,17 @@ function chooseClasses(descriptor, found, kind) {
     const where = { file: descriptor.file, line: descriptor.data.lines.target, key: 'data.target' };
     const list = found
         .slice(0, 6)
-        .map((l) => (0,_core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .quoteValue */ .cl)(l, 30))
+        .map((l) => (0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(l, 30))
         .join(', ') + (found.length > 6 ? ', …' : '');
     if (found.length !== 2) {
         const count = found.length >= MAX_LABELS ? `at least ${MAX_LABELS}` : String(found.length);
-        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz('target-classes', `a binary classifier needs exactly two classes in the target \`${descriptor.data.target}\`; the training rows hold ${count} (${list})`, where);
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz('target-classes', `a binary classifier needs exactly two classes in the target \`${descriptor.data.target}\`; the training rows hold ${count} (${list})`, where);
     }
     const positive = descriptor.data.positive ?? null;
     if (positive !== null) {
         const at = found.indexOf(positive);
         if (at < 0) {
-            throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz('positive-label', `\`data.positive\` is ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .quoteValue */ .cl)(positive, 30)} but the training rows' classes are ${list}; expected one of them`, {
+            throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz('positive-label', `\`data.positive\` is ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(positive, 30)} but the training rows' classes are ${list}; expected one of them`, {
                 ...where,
                 key: 'data.positive',
             });
@@ -134,10 +128,10 @@ function chooseClasses(descriptor, found, kind) {
         const at = lower.indexOf('true');
         return { positive: found[at], negative: found[1 - at], kind };
     }
-    throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz('positive-label', `the target \`${descriptor.data.target}\` holds the classes ${list}; set \`data.positive\` to the one that is the positive class (0/1 and true/false need no setting)`, where);
+    throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz('positive-label', `the target \`${descriptor.data.target}\` holds the classes ${list}; set \`data.positive\` to the one that is the positive class (0/1 and true/false need no setting)`, where);
 }
 function unknownLabel(descriptor, place, label, labels) {
-    return new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz('target-classes', `the target \`${descriptor.data.target}\` is ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .quoteValue */ .cl)(label, 30)} on line ${place.line} of ${place.file}; the training rows' classes are ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .quoteValue */ .cl)(labels.positive, 30)} and ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .quoteValue */ .cl)(labels.negative, 30)}`, { file: descriptor.file, line: descriptor.data.lines.target, key: 'data.target' });
+    return new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz('target-classes', `the target \`${descriptor.data.target}\` is ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(label, 30)} on line ${place.line} of ${place.file}; the training rows' classes are ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(labels.positive, 30)} and ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(labels.negative, 30)}`, { file: descriptor.file, line: descriptor.data.lines.target, key: 'data.target' });
 }
 /** Distinct values of y[0..n), in order of first appearance (at most {@link MAX_LABELS}). */
 function distinctNumbers(y, n) {
@@ -146,106 +140,6 @@ function distinctNumbers(y, n) {
         if (!out.includes(y[i]))
             out.push(y[i]);
     return out;
-}
-/**
- * Reads one column of a CSV file as text labels (trimmed), coded by first appearance. The same
- * CSV rules as the numeric reader (comma, `"` quotes, blank lines skipped), so rows line up.
- * @throws InputError `target-classes` when more than {@link MAX_LABELS} distinct labels appear
- */
-async function partsLabelCodes(repo, paths, column, descriptor, maxBytes) {
-    if (paths.length === 1)
-        return readLabelCodes(repo, paths[0], column, descriptor, maxBytes);
-    // Parts one after the other: each part's codes renumbered into the labels of all parts, by first appearance.
-    const labels = [];
-    const chunks = [];
-    let rows = 0;
-    for (const path of paths) {
-        const part = await readLabelCodes(repo, path, column, descriptor, maxBytes);
-        const map = part.labels.map((label) => {
-            const k = labels.indexOf(label);
-            if (k >= 0)
-                return k;
-            labels.push(label);
-            return labels.length - 1;
-        });
-        if (labels.length > MAX_LABELS) {
-            throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz('target-classes', `a binary classifier needs exactly two classes in the target \`${column}\`; its parts hold more than ${MAX_LABELS}`, { file: descriptor.file, line: descriptor.data.lines.target, key: 'data.target' });
-        }
-        chunks.push(Int32Array.from(part.codes, (c) => map[c]));
-        rows += part.rows;
-    }
-    const codes = new Int32Array(rows);
-    let at = 0;
-    for (const chunk of chunks) {
-        codes.set(chunk, at);
-        at += chunk.length;
-    }
-    return { labels, codes, rows };
-}
-/**
- * One file's labels and codes (see {@link partsLabelCodes}); its bytes are read as the numeric
- * reader reads them (decompressed when `.gz`, held to the same byte cap).
- */
-async function readLabelCodes(repo, path, column, descriptor, maxBytes) {
-    const labels = [];
-    const index = new Map();
-    let codes = new Int32Array(1024);
-    let rows = 0;
-    let field = -1;
-    let tooMany = false;
-    const parser = (0,csv_parse__WEBPACK_IMPORTED_MODULE_0__/* .parse */ .qg)({
-        bom: true,
-        delimiter: ',',
-        quote: '"',
-        escape: '"',
-        record_delimiter: ['\r\n', '\n'],
-        trim: true,
-        skip_empty_lines: true,
-        relax_column_count: true,
-    });
-    const consume = () => {
-        for (let record = parser.read(); record !== null; record = parser.read()) {
-            if (field < 0) {
-                field = record.indexOf(column);
-                continue;
-            }
-            const label = record[field] ?? '';
-            let code = index.get(label);
-            if (code === undefined) {
-                if (labels.length >= MAX_LABELS) {
-                    tooMany = true;
-                    continue;
-                }
-                code = labels.length;
-                labels.push(label);
-                index.set(label, code);
-            }
-            if (rows === codes.length) {
-                const next = new Int32Array(codes.length * 2);
-                next.set(codes);
-                codes = next;
-            }
-            codes[rows++] = code;
-        }
-    };
-    parser.on('readable', consume);
-    const done = new Promise((resolve, reject) => {
-        parser.on('end', resolve);
-        parser.on('error', reject);
-    });
-    for await (const piece of (0,_gzip_stream_js__WEBPACK_IMPORTED_MODULE_4__/* .openDataFile */ .fu)(repo, path, maxBytes))
-        parser.write(Buffer.from(piece.buffer, piece.byteOffset, piece.byteLength));
-    parser.end();
-    await done;
-    consume();
-    if (tooMany) {
-        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz('target-classes', `a binary classifier needs exactly two classes in the target \`${column}\`; ${path} holds more than ${MAX_LABELS}`, {
-            file: descriptor.file,
-            line: descriptor.data.lines.target,
-            key: 'data.target',
-        });
-    }
-    return { labels, codes: codes.subarray(0, rows), rows };
 }
 
 
@@ -1635,14 +1529,20 @@ function buildClassifierChartData(model, maxPoints = chart_types/* MAX_CHART_POI
         const [tlo, thi] = (0,stats/* range */.y1)(train.inputs[c], train.rows);
         const lo = tlo - chart_types/* CURVE_MARGIN */.L0 * (thi - tlo);
         const hi = thi + chart_types/* CURVE_MARGIN */.L0 * (thi - tlo);
-        const grid = new Float64Array(gridPoints);
-        for (let t = 0; t < gridPoints; t++)
-            grid[t] = t === gridPoints - 1 ? hi : lo + ((hi - lo) * t) / (gridPoints - 1);
-        const columns = inputs.map((_, k) => (k === c ? grid : new Float64Array(gridPoints).fill(medians[k])));
-        const eta = (0,blocks/* predictRows */.tp)(design, { inputs: columns, rows: gridPoints }, fit.coefficients);
+        // A category input is drawn at its level codes only (no margins, no points between levels).
+        const discrete = design.terms.find((t) => t.discreteValues !== undefined && t.inputs.includes(inputs[c]))?.discreteValues;
+        const points = discrete?.length ?? gridPoints;
+        const grid = new Float64Array(points);
+        if (discrete !== undefined)
+            grid.set(discrete);
+        else
+            for (let t = 0; t < points; t++)
+                grid[t] = t === points - 1 ? hi : lo + ((hi - lo) * t) / (points - 1);
+        const columns = inputs.map((_, k) => (k === c ? grid : new Float64Array(points).fill(medians[k])));
+        const eta = (0,blocks/* predictRows */.tp)(design, { inputs: columns, rows: points }, fit.coefficients);
         const x = [];
         const p = [];
-        for (let t = 0; t < gridPoints; t++) {
+        for (let t = 0; t < points; t++) {
             const xt = (0,chart_data/* chartNumber */.s6)(grid[t]);
             if (xt === null || (x.length > 0 && xt === x[x.length - 1]))
                 continue;
@@ -2388,6 +2288,7 @@ async function evaluateClassifier(repo, descriptor, settings, base) {
         verdict,
         rows: { train: model.train.rows, holdout: model.holdout.rows },
         ...(0,data_paths/* dataFilesField */.IJ)(descriptor.data),
+        ...(model.train.dropped !== undefined ? { dropped: { train: model.train.dropped, holdout: model.holdout.dropped ?? 0 } } : {}),
         parameters: model.context.design.p,
         columns: [...model.context.design.columnNames],
         metrics,
@@ -2418,166 +2319,6 @@ async function evaluateClassifier(repo, descriptor, settings, base) {
         classifier_charts: buildClassifierChartData(model),
     };
 }
-
-
-/***/ }),
-
-/***/ 8075:
-/***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __webpack_require__) => {
-
-/* harmony export */ __webpack_require__.d(__webpack_exports__, {
-/* harmony export */   qg: () => (/* binding */ parse)
-/* harmony export */ });
-/* unused harmony export Parser */
-/* harmony import */ var stream__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(2203);
-/* harmony import */ var _utils_is_object_js__WEBPACK_IMPORTED_MODULE_4__ = __webpack_require__(8467);
-/* harmony import */ var _api_index_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(7084);
-/* harmony import */ var _api_CsvError_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(6892);
-/* harmony import */ var _api_normalize_options_js__WEBPACK_IMPORTED_MODULE_3__ = __webpack_require__(6845);
-/*
-CSV Parse
-
-Please look at the [project documentation](https://csv.js.org/parse/) for
-additional information.
-*/
-
-
-
-
-
-
-
-class Parser extends stream__WEBPACK_IMPORTED_MODULE_0__.Transform {
-  constructor(opts = {}) {
-    super({ ...{ readableObjectMode: true }, ...opts, encoding: null });
-    this.api = (0,_api_index_js__WEBPACK_IMPORTED_MODULE_1__/* .transform */ .p)({
-      on_skip: (err, chunk) => {
-        this.emit("skip", err, chunk);
-      },
-      ...opts,
-    });
-    // Backward compatibility
-    this.state = this.api.state;
-    this.options = this.api.options;
-    this.info = this.api.info;
-  }
-  // Implementation of `Transform._transform`
-  _transform(buf, _, callback) {
-    if (this.state.stop === true) {
-      return;
-    }
-    const err = this.api.parse(
-      buf,
-      false,
-      (record) => {
-        this.push(record);
-      },
-      () => {
-        this.push(null);
-        this.end();
-        // Fix #333 and break #410
-        //   ko: api.stream.iterator.coffee
-        //   ko with v21.4.0, ok with node v20.5.1: api.stream.finished # aborted (with generate())
-        //   ko: api.stream.finished # aborted (with Readable)
-        // this.destroy()
-        // Fix #410 and partially break #333
-        //   ok: api.stream.iterator.coffee
-        //   ok: api.stream.finished # aborted (with generate())
-        //   broken: api.stream.finished # aborted (with Readable)
-        this.on("end", this.destroy);
-      },
-    );
-    if (err !== undefined) {
-      this.state.stop = true;
-    }
-    callback(err);
-  }
-  // Implementation of `Transform._flush`
-  _flush(callback) {
-    if (this.state.stop === true) {
-      return;
-    }
-    const err = this.api.parse(
-      undefined,
-      true,
-      (record) => {
-        this.push(record);
-      },
-      () => {
-        this.push(null);
-        this.on("end", this.destroy);
-      },
-    );
-    callback(err);
-  }
-}
-
-const parse = function () {
-  let data, options, callback;
-  for (const i in arguments) {
-    const argument = arguments[i];
-    const type = typeof argument;
-    if (
-      data === undefined &&
-      (typeof argument === "string" || Buffer.isBuffer(argument))
-    ) {
-      data = argument;
-    } else if (options === undefined && (0,_utils_is_object_js__WEBPACK_IMPORTED_MODULE_4__/* .is_object */ .v)(argument)) {
-      options = argument;
-    } else if (callback === undefined && type === "function") {
-      callback = argument;
-    } else {
-      throw new _api_CsvError_js__WEBPACK_IMPORTED_MODULE_2__/* .CsvError */ .J(
-        "CSV_INVALID_ARGUMENT",
-        ["Invalid argument:", `got ${JSON.stringify(argument)} at index ${i}`],
-        options || {},
-      );
-    }
-  }
-  const parser = new Parser(options);
-  if (callback) {
-    const records =
-      options === undefined || options.objname === undefined
-        ? []
-        : Object.create(null);
-    parser.on("readable", function () {
-      let record;
-      while ((record = this.read()) !== null) {
-        if (options === undefined || options.objname === undefined) {
-          records.push(record);
-        } else {
-          Object.assign(records, {
-            [record[0]]: record[1],
-            // writable: true,
-            // enumerable: true,
-            // configurable: true
-          });
-        }
-      }
-    });
-    parser.on("error", function (err) {
-      callback(err, undefined, parser.api.__infoDataSet());
-    });
-    parser.on("end", function () {
-      callback(undefined, records, parser.api.__infoDataSet());
-    });
-  }
-  if (data !== undefined) {
-    const writer = function () {
-      parser.write(data);
-      parser.end();
-    };
-    // Support Deno, Rollup doesn't provide a shim for setImmediate
-    if (typeof setImmediate === "function") {
-      setImmediate(writer);
-    } else {
-      setTimeout(writer, 0);
-    }
-  }
-  return parser;
-};
-
-
 
 
 /***/ })

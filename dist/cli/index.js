@@ -1176,12 +1176,19 @@ const reproducibility_check = {
 
 
 
-/** Describes a point's inputs for a message, e.g. `depth_m = 5.1`. */
-function describePoint(point) {
+/**
+ * Describes a point's inputs for a message, e.g. `depth_m = 5.1`; a category input by its level
+ * (`site = "west"`), not by the code the scan gives it.
+ */
+function describePoint(point, context) {
     if (point === null)
         return '';
     return Object.entries(point.inputs)
-        .map(([name, v]) => `${(0,errors/* clip */.$Q)(name)} = ${(0,format/* formatNumber */.Z)(v)}`)
+        .map(([name, v]) => {
+        const levels = context.design.terms.find((t) => t.levels !== undefined && t.inputs[0] === name)?.levels;
+        const level = levels?.[v];
+        return `${(0,errors/* clip */.$Q)(name)} = ${level !== undefined ? JSON.stringify(level.slice(0, 80)) : (0,format/* formatNumber */.Z)(v)}`;
+    })
         .join(', ');
 }
 /** The chart data every swing outcome carries (see the README for its shape). */
@@ -1252,7 +1259,7 @@ const swing_check = {
                 detail: swingDetail(swing),
             };
         }
-        const where = describePoint(swing.worstInside);
+        const where = describePoint(swing.worstInside, context);
         return {
             value: swing.inside,
             message: swing.inside > 0
@@ -1294,7 +1301,7 @@ const swing_beyond_check = {
                 message: 'no input has two distinct training values, so there is no range to step beyond',
             };
         }
-        const where = describePoint(swing.worstBeyond);
+        const where = describePoint(swing.worstBeyond, context);
         return {
             value: swing.beyond,
             message: swing.beyond > 0
@@ -2339,8 +2346,12 @@ function limitOrderProblem(spec, direction) {
         return [wb, `${wb} ${warnBelow} is below ${fb} ${failBelow}; expected ${wb} >= ${fb} (a floor warns before it fails)`];
     const floor = Math.max(warnBelow ?? -Infinity, failBelow ?? -Infinity);
     const ceiling = Math.min(warnAbove ?? Infinity, failAbove ?? Infinity);
+    // Only explicit bounds hold both a floor and a ceiling: name the floor's own key (the one written).
     if (floor > ceiling)
-        return [b ? 'warn_below' : 'warn', `the floor ${floor} is above the ceiling ${ceiling}; every value would be out of bounds`];
+        return [
+            warnBelow === floor ? 'warn_below' : 'fail_below',
+            `the floor ${floor} is above the ceiling ${ceiling}; every value would be out of bounds`,
+        ];
     return null;
 }
 /**
@@ -9300,10 +9311,11 @@ const VERSION = '0.1.0';
 /* harmony export */   NQ: () => (/* binding */ peekSeparator),
 /* harmony export */   Zf: () => (/* binding */ decimalSeparatorError),
 /* harmony export */   rS: () => (/* binding */ splitLabelError),
+/* harmony export */   u_: () => (/* binding */ separatorOfHeader),
 /* harmony export */   ui: () => (/* binding */ DEFAULT_FORMAT),
 /* harmony export */   v0: () => (/* binding */ formatCellNumber)
 /* harmony export */ });
-/* unused harmony exports separatorOfHeader, formatProblem */
+/* unused harmony export formatProblem */
 /* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(4296);
 /* harmony import */ var _line_blocks_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(4113);
 /* harmony import */ var _csv_rules_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(8706);
@@ -10431,9 +10443,12 @@ function levelCodes(values, levels, unseen, where) {
     return out;
 }
 
+// EXTERNAL MODULE: ./src/data/csv-rules.ts
+var csv_rules = __nccwpck_require__(8706);
 // EXTERNAL MODULE: ./src/data/row-source.ts
 var row_source = __nccwpck_require__(7172);
 ;// CONCATENATED MODULE: ./src/data/load-model-data.ts
+
 
 
 
@@ -10468,7 +10483,12 @@ async function loadModelData(repo, descriptor, inputs, settings, options = {}) {
     // Category inputs are text: read apart (text-columns.ts) and coded (levels.ts), never as numbers.
     const categories = categoryColumns(descriptor);
     const numeric = inputs.filter((c) => !categories.has(c));
-    const columns = [...numeric, data.target, ...(weighting !== null && !inputs.includes(weighting.column) ? [weighting.column] : [])];
+    const textTarget = options.targetAsText === true;
+    const columns = [
+        ...numeric,
+        ...(textTarget ? [] : [data.target]),
+        ...(weighting !== null && !inputs.includes(weighting.column) ? [weighting.column] : []),
+    ];
     const levels = new Map();
     const maxBytes = settings.caps.maxFileBytes;
     const format = data.format;
@@ -10492,6 +10512,20 @@ async function loadModelData(repo, descriptor, inputs, settings, options = {}) {
         catch (error) {
             throw withAsker(error, descriptor);
         }
+        // Text columns (category inputs, a target of class labels) of the rows the numeric read kept.
+        const textNames = [...categories.keys(), ...(textTarget ? [data.target] : [])];
+        let text = null;
+        if (textNames.length > 0 && table.rows > 0) {
+            try {
+                text = await readCategoryText(repo, table, textNames, maxBytes, format?.separator ?? 'auto');
+            }
+            catch (error) {
+                throw withAsker(error, descriptor);
+            }
+            // Under `missing: drop` a missing cell in a text column drops its row, as in a numeric one.
+            if (format?.missing === 'drop')
+                table = dropMissingText(table, text);
+        }
         if (table.rows === 0) {
             const why = side
                 ? ` labelled ${(0,errors/* quoteValue */.cl)(side.keep)} in column ${(0,errors/* quoteValue */.cl)(side.column)}`
@@ -10505,8 +10539,7 @@ async function loadModelData(repo, descriptor, inputs, settings, options = {}) {
                 key,
             });
         }
-        if (categories.size > 0) {
-            const text = await readCategoryText(repo, table, [...categories.keys()], maxBytes);
+        if (text !== null) {
             for (const [name, term] of categories) {
                 const values = text.get(name);
                 if (!levels.has(name))
@@ -10524,13 +10557,14 @@ async function loadModelData(repo, descriptor, inputs, settings, options = {}) {
         }
         const rows = {
             inputs: inputs.map((c) => table.columns.get(c)),
-            y: table.columns.get(data.target),
+            y: textTarget ? new Float64Array(table.rows) : table.columns.get(data.target),
             lines: table.lines,
             rows: table.rows,
             file: table.file,
             ...(table.parts ? { parts: table.parts } : {}),
             ...(format?.missing === 'drop' ? { dropped: table.dropped } : {}),
             byName: table.columns,
+            ...(text !== null && textTarget ? { targetText: text.get(data.target) } : {}),
         };
         return weighting === null
             ? rows
@@ -10545,11 +10579,13 @@ async function loadModelData(repo, descriptor, inputs, settings, options = {}) {
         const trainLabel = trainParts === undefined ? data.train : (0,data_parts/* partsLabel */.xq)(trainParts);
         const why = categories.size > 0
             ? 'a category term'
-            : weighting !== null
-                ? `\`data.${weighting.kind}\``
-                : (data.targetTransform ?? null) !== null
-                    ? '`data.target_transform`'
-                    : null;
+            : textTarget
+                ? 'a target of text class labels'
+                : weighting !== null
+                    ? `\`data.${weighting.kind}\``
+                    : (data.targetTransform ?? null) !== null
+                        ? '`data.target_transform`'
+                        : null;
         if (why !== null) {
             throw new errors/* InputError */.dz('too-large-to-hold', `${trainParts === undefined ? 'the training file' : `the ${trainParts.length} training parts`} ${(0,errors/* clip */.$Q)(trainLabel)} ${trainParts === undefined ? 'is' : 'are'} too large to hold in memory and ${trainParts === undefined ? 'is' : 'are'} read as a stream, which a model with ${why} does not support yet; expected ${trainParts === undefined ? 'a smaller file' : 'smaller parts'}, or a model without it`, { file: descriptor.file, line: data.lines.train, key: 'data.train' });
         }
@@ -10605,7 +10641,7 @@ async function loadModelData(repo, descriptor, inputs, settings, options = {}) {
             ...(format?.missing === 'drop' ? { dropped: counts.dropped } : {}),
         };
         const holdout = await load(data.holdout, data.holdoutParts, data.lines.holdout, 'data.holdout');
-        const { byName: _unused, ...holdoutData } = holdout;
+        const { byName: _unused, targetText: _text, ...holdoutData } = holdout;
         const trainColumns = new Map(inputs.map((name, c) => [name, sample.inputs[c]]));
         return {
             train: sample,
@@ -10625,7 +10661,7 @@ async function loadModelData(repo, descriptor, inputs, settings, options = {}) {
     }
     const train = await load(data.train, data.trainParts, data.lines.train, 'data.train');
     const holdout = await load(data.holdout, data.holdoutParts, data.lines.holdout, 'data.holdout');
-    const { byName, ...trainData } = train;
+    const { byName, targetText: trainText, ...trainData } = train;
     if (trainData.weights !== undefined && !trainData.weights.some((w) => w > 0)) {
         throw new errors/* InputError */.dz('bad-weight', `every training row of ${trainData.file} has weight 0; expected at least one positive weight`, {
             file: descriptor.file,
@@ -10633,8 +10669,14 @@ async function loadModelData(repo, descriptor, inputs, settings, options = {}) {
             key: `data.${data.weighting?.kind}`,
         });
     }
-    const { byName: _unused, ...holdoutData } = holdout;
-    return { train: trainData, holdout: holdoutData, trainColumns: byName, levels };
+    const { byName: _unused, targetText: holdoutText, ...holdoutData } = holdout;
+    return {
+        train: trainData,
+        holdout: holdoutData,
+        trainColumns: byName,
+        levels,
+        ...(textTarget ? { targetText: { train: trainText ?? [], holdout: holdoutText ?? [] } } : {}),
+    };
 }
 /**
  * Adds a chunk's values of one column (the target, or an input) to running figures: mean and sum of squared deviations merged by the
@@ -10685,39 +10727,74 @@ function rowWeights(weighting, values, lines, rows, file, parts) {
 }
 /**
  * The text of the category columns of a table, file by file (each part apart, its lines made
- * table-wide as the numeric read made them), checked to give the same rows as the numbers.
- * @throws InputError `csv-rows` when a file gives other rows of text than of numbers
+ * table-wide as the numeric read made them): the text of each row the numeric read kept, found by
+ * its line (rows the numeric read left out, dropped for a missing cell or of the other side of a
+ * split column, are skipped), read with the table's separator.
+ * @throws InputError `csv-rows` when a row of numbers has no record of text on its line
  */
-async function readCategoryText(repo, table, names, maxBytes) {
+async function readCategoryText(repo, table, names, maxBytes, separator) {
     const files = table.parts ?? [{ file: table.file, lineOffset: 0 }];
     const out = new Map(names.map((n) => [n, []]));
     let row = 0;
     let left = maxBytes;
     // csv-parse comes with the text columns: loaded only when a model has text columns.
     const { readTextColumns } = await Promise.all(/* import() */[__nccwpck_require__.e(84), __nccwpck_require__.e(167)]).then(__nccwpck_require__.bind(__nccwpck_require__, 3167));
+    const rowsError = (file, texts) => {
+        // One file: the message as it always was; a part: its own count (the numbers' rows are the whole table's).
+        const numbers = table.parts === undefined ? `${table.rows} rows of numbers` : 'other rows of numbers';
+        return new errors/* InputError */.dz('csv-rows', `${table.parts === undefined ? file : (0,errors/* clip */.$Q)(file)} gives ${texts} rows of text for its category columns but ${numbers}; expected one record per line (no line breaks inside quoted category cells)`, { file });
+    };
     for (const part of files) {
-        const text = await readTextColumns(repo, part.file, names, Math.min(left, maxBytes));
+        const text = await readTextColumns(repo, part.file, names, Math.min(left, maxBytes), separator);
         left -= await repo.size(part.file);
         const n = text.lines.length;
-        let same = row + n <= table.rows;
-        for (let i = 0; same && i < n; i++)
-            same = text.lines[i] + part.lineOffset === table.lines[row + i];
-        if (!same) {
-            // One file: the message as it always was; a part: its own count (the numbers' rows are the whole table's).
-            const numbers = table.parts === undefined ? `${table.rows} rows of numbers` : 'other rows of numbers';
-            throw new errors/* InputError */.dz('csv-rows', `${table.parts === undefined ? part.file : (0,errors/* clip */.$Q)(part.file)} gives ${n} rows of text for its category columns but ${numbers}; expected one record per line (no line breaks inside quoted category cells)`, { file: part.file });
+        // Both line lists ascend: each row of numbers takes the record of text on its own line.
+        const taken = [];
+        for (let i = 0; i < n && row < table.rows; i++) {
+            const line = text.lines[i] + part.lineOffset;
+            if (table.lines[row] < line)
+                throw rowsError(part.file, n);
+            if (table.lines[row] === line) {
+                taken.push(i);
+                row++;
+            }
         }
         for (const name of names) {
             const values = out.get(name);
-            for (const v of text.columns.get(name))
-                values.push(v);
+            const cells = text.columns.get(name);
+            for (const i of taken)
+                values.push(cells[i]);
         }
-        row += n;
     }
     if (row !== table.rows) {
         throw new errors/* InputError */.dz('csv-rows', `${table.parts === undefined ? table.file : (0,errors/* clip */.$Q)(table.file)} gives ${row} rows of text for its category columns but ${table.rows} rows of numbers; expected one record per line (no line breaks inside quoted category cells)`, { file: table.parts?.[0]?.file ?? table.file });
     }
     return out;
+}
+/**
+ * The table without the rows with a missing cell in a text column (`data.missing: drop`), counted
+ * with the rows the numeric read dropped; `text` loses the same rows.
+ */
+function dropMissingText(table, text) {
+    const cellsOf = [...text.values()];
+    const keep = [];
+    for (let i = 0; i < table.rows; i++)
+        if (!cellsOf.some((cells) => (0,csv_rules/* isMissingCell */.lz)(cells[i])))
+            keep.push(i);
+    if (keep.length === table.rows)
+        return table;
+    for (const [name, values] of text)
+        text.set(name, keep.map((i) => values[i]));
+    const columns = new Map();
+    for (const [name, values] of table.columns)
+        columns.set(name, Float64Array.from(keep, (i) => values[i]));
+    return {
+        ...table,
+        rows: keep.length,
+        columns,
+        lines: Int32Array.from(keep, (i) => table.lines[i]),
+        dropped: table.dropped + table.rows - keep.length,
+    };
 }
 /**
  * A missing column names the descriptor line that asked for it: `data.target`, or the first term
@@ -11783,7 +11860,7 @@ async function* scan(open, path, settings, onHeader, headerOnly, recycle, counts
         }
     }
     // csv-parse is loaded only when a file needs it (most data files take the fast path).
-    const { generalChunks } = await Promise.all(/* import() */[__nccwpck_require__.e(84), __nccwpck_require__.e(462)]).then(__nccwpck_require__.bind(__nccwpck_require__, 6462));
+    const { generalChunks } = await Promise.all(/* import() */[__nccwpck_require__.e(84), __nccwpck_require__.e(898)]).then(__nccwpck_require__.bind(__nccwpck_require__, 4898));
     yield* generalChunks(first ?? open(), target, handedOut);
 }
 
@@ -12666,6 +12743,7 @@ function categoryTerm(spec, training, levels, file) {
         columnNames: kept.map((k) => `${spec.of}=${levels[k].slice(0, 80)}`),
         fixed: { levels: levels.length, reference },
         discreteValues: discrete,
+        levels: [...levels],
         admits: (_name, value) => Number.isInteger(value) && value >= 0 && value < levels.length,
         fill(inputs, m, out, offset) {
             for (let j = 0; j < kept.length; j++)
@@ -21850,11 +21928,18 @@ function emptySeries(data, why) {
 function partialCurvePoints(curves) {
     return Math.max(101, Math.min(_result_chart_types_js__WEBPACK_IMPORTED_MODULE_6__/* .CURVE_POINTS */ .M0, Math.floor(_result_chart_types_js__WEBPACK_IMPORTED_MODULE_6__/* .PARTIAL_CURVE_POINTS */ .WK / Math.max(1, curves))));
 }
-/** Predictions along input c over [lo, hi] at `points` grid points (plus `extra` x values), the others at `medians`. */
-function curveAlong(model, c, lo, hi, medians, extra, points) {
+/**
+ * Predictions along input c over [lo, hi] at `points` grid points (plus `extra` x values), the
+ * others at `medians`; at the values in `discrete` only when given (a category's level codes).
+ */
+function curveAlong(model, c, lo, hi, medians, extra, points, discrete) {
     const xs = [];
-    for (let t = 0; t < points; t++)
-        xs.push(t === points - 1 ? hi : lo + ((hi - lo) * t) / (points - 1));
+    if (discrete !== undefined)
+        for (const v of discrete)
+            xs.push(v);
+    else
+        for (let t = 0; t < points; t++)
+            xs.push(t === points - 1 ? hi : lo + ((hi - lo) * t) / (points - 1));
     for (const v of extra)
         if (v >= lo && v <= hi)
             xs.push(v);
@@ -22078,9 +22163,12 @@ function buildChartData(model, checks, maxPoints = _result_chart_types_js__WEBPA
         }
         const swing = inputs.length === 1 ? readSwing(checks, inputs[c]) : null;
         const swingCurve = swing?.curve ?? null;
-        const lo = swingCurve ? Math.min(swingCurve.x[0], tlo) : tlo - _result_chart_types_js__WEBPACK_IMPORTED_MODULE_6__/* .CURVE_MARGIN */ .L0 * (thi - tlo);
-        const hi = swingCurve ? Math.max(swingCurve.x[swingCurve.x.length - 1], thi) : thi + _result_chart_types_js__WEBPACK_IMPORTED_MODULE_6__/* .CURVE_MARGIN */ .L0 * (thi - tlo);
-        const { x, y } = curveAlong(model, c, lo, hi, medians, swingCurve ? swingCurve.x : [], points);
+        // A category input is drawn at its levels only (no margins, no points between levels), as swing scans it.
+        const discrete = model.design.terms.find((t) => t.discreteValues !== undefined && t.inputs.includes(inputs[c]))?.discreteValues;
+        const margin = discrete !== undefined ? 0 : _result_chart_types_js__WEBPACK_IMPORTED_MODULE_6__/* .CURVE_MARGIN */ .L0 * (thi - tlo);
+        const lo = swingCurve ? Math.min(swingCurve.x[0], tlo) : tlo - margin;
+        const hi = swingCurve ? Math.max(swingCurve.x[swingCurve.x.length - 1], thi) : thi + margin;
+        const { x, y } = curveAlong(model, c, lo, hi, medians, swingCurve ? swingCurve.x : [], points, discrete);
         // Keyed by column names (user text): no prototype, so `__proto__` is a name like any other.
         const others = Object.create(null);
         inputs.forEach((name, k) => {
@@ -22462,7 +22550,7 @@ function descriptorFromDocument(doc, file, settings) {
                 : {}),
             ...(raw.data.split ? { split: { ...raw.data.split, line: line(['data', 'split']) } } : {}),
             positive: raw.data.positive ?? null,
-            ...weightingOf(readWeighting(doc, file, raw.data, line)),
+            ...weightingOf(readWeighting(doc, file, raw, line)),
             ...readTargetTransform(doc, file, raw, line),
         },
         terms,
@@ -22509,6 +22597,9 @@ function readPredictions(doc, file, raw, line) {
     if (raw.fit?.refit_compare === true && raw.data.target_transform !== undefined) {
         throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.predictions, ['fit', 'refit_compare'], '`refit_compare` reports the refit on the target as written; expected no `refit_compare` beside `data.target_transform`');
     }
+    if (raw.fit?.refit === false && raw.task === 'classification') {
+        throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.predictions, ['fit', 'refit'], "`refit: false` scores a regression model's shipped coefficients as they are; a classifier is always refitted (its shipped `coefficients` are compared with the refit by `reproducibility`), so expected no `refit: false` on a classifier");
+    }
     if (raw.fit?.refit_compare === true && raw.task === 'classification') {
         throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.predictions, ['fit', 'refit_compare'], '`refit_compare` reports the refit of a regression model scored as shipped; expected no `refit_compare` on a classifier');
     }
@@ -22541,8 +22632,18 @@ function readPredictions(doc, file, raw, line) {
     };
     return { train: source('train'), holdout: source('holdout'), inputs: [...(p.inputs ?? [])], line: line(['predictions']) };
 }
-/** `data.weight` or `data.sigma` (the schema lets at most one through), or null. */
-function readWeighting(doc, file, data, line) {
+/**
+ * `data.weight` or `data.sigma` (the schema lets at most one through), or null.
+ * @throws InputError `weight-and-sigma` for both, or for either on a classifier (its fit takes no row weights)
+ */
+function readWeighting(doc, file, raw, line) {
+    const data = raw.data;
+    if (raw.task === 'classification') {
+        const key = data.weight !== undefined ? 'weight' : data.sigma !== undefined ? 'sigma' : null;
+        if (key !== null) {
+            throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.weighting, ['data', key], `a classifier is fitted without row weights, so \`${key}\` would be ignored; expected \`data.${key}\` only with \`task: regression\``);
+        }
+    }
     if (data.weight !== undefined && data.sigma !== undefined) {
         throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.weighting, ['data', 'sigma'], 'both `weight` and `sigma` are given; expected one of them (sigma means weight 1 / sigma^2)');
     }
@@ -23670,7 +23771,7 @@ async function evaluateWithin(repo, descriptor, settings, share, base, scale) {
             return await evaluatePredictions(repo, descriptor, settings, base);
         }
         if (descriptor.task === 'classification') {
-            const { evaluateClassifier } = await Promise.all(/* import() */[__nccwpck_require__.e(84), __nccwpck_require__.e(134)]).then(__nccwpck_require__.bind(__nccwpck_require__, 8134));
+            const { evaluateClassifier } = await __nccwpck_require__.e(/* import() */ 134).then(__nccwpck_require__.bind(__nccwpck_require__, 8134));
             return await evaluateClassifier(repo, descriptor, settings, base);
         }
         model = await fitModel(repo, descriptor, settings, scale);

@@ -118,9 +118,10 @@ describe('fit.refit_compare', () => {
         read(
           `version: 1\nname: x\ntask: classification\ndata:\n  train: a.csv\n  holdout: b.csv\n  target: y\n${terms}fit: { refit: false, refit_compare: true }\n`,
         ),
+      // A classifier is always refitted: its `refit: false` is the error, before `refit_compare`.
       {
         code: 'predictions-form',
-        key: 'fit.refit_compare',
+        key: 'fit.refit',
       },
     );
   });

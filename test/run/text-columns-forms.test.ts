@@ -55,7 +55,7 @@ function expectSameFit(model: ModelResult, plain: ModelResult): void {
   expect(model.coefficients).toEqual(plain.coefficients);
   // A classifier's metrics name its labels as written (`passed`, not `1`); every figure is the same.
   const figures = (m: ModelResult) => {
-    const { positive_label: _p, negative_label: _n, ...rest } = m.metrics ?? {};
+    const { positive_label: _p, negative_label: _n, ...rest } = (m.metrics ?? {}) as Record<string, unknown>;
     return rest;
   };
   expect(figures(model)).toEqual(figures(plain));
