@@ -32301,7 +32301,11 @@ function toIssue(e, root) {
                 expected = `a mapping with one key, the term kind (${orList(kinds)})`;
             else if (types.includes('object') && keys.length > 0)
                 expected += ` with keys among: ${keys.join(', ')}`;
-            return [{ path, pointAt: 'value', message: `expected ${expected}, ${got}` }];
+            // YAML reads 2, true or 1.5 unquoted as a number or a boolean: text that looks like one needs quotes.
+            const quote = types.length === 1 && types[0] === 'string' && (typeof e.data === 'number' || typeof e.data === 'boolean')
+                ? ` (write it in quotes, "${String(e.data)}", for the text)`
+                : '';
+            return [{ path, pointAt: 'value', message: `expected ${expected}, ${got}${quote}` }];
         }
         case 'enum':
             if (e.propertyName !== undefined)

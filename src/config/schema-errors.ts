@@ -227,7 +227,12 @@ function toIssue(e: ErrorObject, root: unknown): Issue[] {
       if (typeof e.data === 'number' && !Number.isFinite(e.data)) expected = `a finite ${types.includes('integer') ? 'integer' : 'number'}`;
       if (types.includes('object') && isTerm) expected = `a mapping with one key, the term kind (${orList(kinds)})`;
       else if (types.includes('object') && keys.length > 0) expected += ` with keys among: ${keys.join(', ')}`;
-      return [{ path, pointAt: 'value', message: `expected ${expected}, ${got}` }];
+      // YAML reads 2, true or 1.5 unquoted as a number or a boolean: text that looks like one needs quotes.
+      const quote =
+        types.length === 1 && types[0] === 'string' && (typeof e.data === 'number' || typeof e.data === 'boolean')
+          ? ` (write it in quotes, "${String(e.data)}", for the text)`
+          : '';
+      return [{ path, pointAt: 'value', message: `expected ${expected}, ${got}${quote}` }];
     }
     case 'enum':
       if ((e as ErrorObject & { propertyName?: string }).propertyName !== undefined) return []; // reported by propertyNames

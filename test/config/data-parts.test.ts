@@ -121,7 +121,7 @@ describe('data.train / data.holdout as parts', () => {
         line: 5,
       },
     );
-    expect(wrong.message).toBe('expected text, got 5');
+    expect(wrong.message).toBe('expected text, got 5 (write it in quotes, "5", for the text)');
     // An empty list is a schema error.
     await expectInputError(() => loadDescriptor(repo('  train: []\n  holdout: h.csv\n', files), F, defaultSettings()), {
       code: 'schema',

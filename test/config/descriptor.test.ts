@@ -212,6 +212,20 @@ describe('loadDescriptor: schema errors name file, line and key path', () => {
     { name: 'missing data.target', text: edit(7, ''), line: 4, key: 'data.target', message: /missing key `target`/ },
     { name: 'data path not text', text: edit(5, '  train: 3'), line: 5, key: 'data.train' },
     {
+      name: 'target not text (a number to YAML)',
+      text: edit(7, '  target: 2024'),
+      line: 7,
+      key: 'data.target',
+      message: /expected text, got 2024 \(write it in quotes, "2024", for the text\)/,
+    },
+    {
+      name: 'target not text (a boolean to YAML)',
+      text: edit(7, '  target: true'),
+      line: 7,
+      key: 'data.target',
+      message: /expected text, got true \(write it in quotes, "true", for the text\)/,
+    },
+    {
       name: 'unknown term kind',
       text: edit(9, '  - hinge: [humidity_pct]'),
       line: 9,
