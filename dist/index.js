@@ -31574,7 +31574,7 @@ const swing_spikes_check = {
 
 ;// CONCATENATED MODULE: ./src/checks/types.ts
 /** Whether a check applies to a task (see {@link Check.tasks}). */
-function appliesTo(check, task) {
+function types_appliesTo(check, task) {
     if (check.tasks)
         return check.tasks.includes(task);
     return task === 'regression' || check.measureClassifier !== undefined;
@@ -31650,12 +31650,19 @@ function validate(checks) {
     return checks;
 }
 /**
- * The limit keys of the registry with their defaults, directions and summaries, in registry
- * order: the source of src/config/generated/limit-keys.ts, of the JSON Schemas' `limits` and of
+ * The limit keys of the registry with their defaults, directions, summaries and the tasks their
+ * checks apply to ({@link appliesTo}), in registry order: the source of src/config/generated/limit-keys.ts, of the JSON Schemas' `limits` and of
  * docs/checks.md (test/tools/gen-validators.mjs writes them; tests keep them current).
  */
 function registryLimitKeys() {
-    return CHECKS.map((c) => ({ key: c.limitKey, defaultSpec: c.defaultLimit, direction: c.direction, description: c.limitSummary }));
+    const all = ['regression', 'classification'];
+    return CHECKS.map((c) => ({
+        key: c.limitKey,
+        defaultSpec: c.defaultLimit,
+        direction: c.direction,
+        description: c.limitSummary,
+        tasks: all.filter((task) => appliesTo(c, task)),
+    }));
 }
 /** The check with this id, or undefined. */
 function findCheck(id) {
@@ -31696,7 +31703,7 @@ function runCheck(check, context) {
  */
 function runClassifierCheck(check, context) {
     const measure = check.measureClassifier;
-    if (!appliesTo(check, 'classification') || measure === undefined) {
+    if (!types_appliesTo(check, 'classification') || measure === undefined) {
         return judgeCheck(check, context.descriptor, () => ({
             value: null,
             reason: 'not-for-classification',
@@ -31713,7 +31720,7 @@ function runClassifierCheck(check, context) {
 function runPredictionsCheck(check, context) {
     const { descriptor } = context;
     const measure = check.measurePredictions;
-    if (!appliesTo(check, descriptor.task)) {
+    if (!types_appliesTo(check, descriptor.task)) {
         return judgeCheck(check, descriptor, () => ({
             value: null,
             reason: descriptor.task === 'classification' ? 'not-for-classification' : 'not-for-regression',
@@ -31732,7 +31739,7 @@ function runPredictionsCheck(check, context) {
 }
 /** The checks that apply to a task, in report order (a regression model's report lists only these). */
 function checksFor(task) {
-    return CHECKS.filter((c) => task === 'classification' || appliesTo(c, task));
+    return CHECKS.filter((c) => task === 'classification' || types_appliesTo(c, task));
 }
 function judgeCheck(check, descriptor, measure) {
     const context = { descriptor };
@@ -32016,25 +32023,25 @@ function dataFilesField(data) {
 /* harmony export */ });
 /** Every limit key, in registry (report) order. */
 const LIMIT_KEYS = Object.freeze([
-    { key: "gap_ratio", defaultSpec: 1.5, direction: "above", description: "Hold-out RMSE divided by training RMSE." },
-    { key: "params_per_sample", defaultSpec: 0.1, direction: "above", description: "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter)." },
-    { key: "coefficient", defaultSpec: 25, direction: "above", description: "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns." },
-    { key: "base_change", defaultSpec: "off", direction: "above", description: "Relative change of the hold-out RMSE against the same model on the base branch." },
-    { key: "cv_ratio", defaultSpec: "off", direction: "above", description: "Pooled k-fold cross-validation RMSE divided by training RMSE." },
-    { key: "swing", defaultSpec: { "warn": 0.25, "fail": 0.5 }, direction: "above", description: "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths." },
-    { key: "swing_beyond", defaultSpec: { "warn": 1 }, direction: "above", description: "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation)." },
-    { key: "swing_spikes", defaultSpec: { "warn": 1.5, "fail": 2 }, direction: "above", description: "Total variation of the predictions between the training samples divided by the training targets' own total variation." },
-    { key: "leakage", defaultSpec: 0, direction: "above", description: "Hold-out rows that also appear in the training data (the default 0 fails when there is any)." },
-    { key: "reproducibility", defaultSpec: 0.01, direction: "above", description: "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target." },
-    { key: "condition", defaultSpec: { "warn": 100000000 }, direction: "above", description: "2-norm condition number of the column-scaled design matrix." },
-    { key: "complexity", defaultSpec: { "warn": 1.5 }, direction: "above", description: "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks." },
-    { key: "holdout_r2", defaultSpec: "off", direction: "below", description: "Hold-out R^2 (coefficient of determination)." },
-    { key: "holdout_rmse", defaultSpec: "off", direction: "above", description: "Hold-out RMSE in the target's units." },
-    { key: "holdout_mae", defaultSpec: "off", direction: "above", description: "Hold-out mean absolute error in the target's units." },
-    { key: "chi_square", defaultSpec: { "warn_below": 0.5, "warn_above": 2 }, direction: "above", description: "Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only)." },
-    { key: "separation", defaultSpec: { "warn": 0, "fail": 1 }, direction: "above", description: "Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete." },
-    { key: "events_per_parameter", defaultSpec: 10, direction: "below", description: "Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit." },
-    { key: "calibration_slope", defaultSpec: { "warn": 0.8, "fail": 0.6 }, direction: "below", description: "Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit." },
+    { key: "gap_ratio", defaultSpec: 1.5, direction: "above", description: "Hold-out RMSE divided by training RMSE.", tasks: ["regression", "classification"] },
+    { key: "params_per_sample", defaultSpec: 0.1, direction: "above", description: "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", tasks: ["regression"] },
+    { key: "coefficient", defaultSpec: 25, direction: "above", description: "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", tasks: ["regression", "classification"] },
+    { key: "base_change", defaultSpec: "off", direction: "above", description: "Relative change of the hold-out RMSE against the same model on the base branch.", tasks: ["regression", "classification"] },
+    { key: "cv_ratio", defaultSpec: "off", direction: "above", description: "Pooled k-fold cross-validation RMSE divided by training RMSE.", tasks: ["regression", "classification"] },
+    { key: "swing", defaultSpec: { "warn": 0.25, "fail": 0.5 }, direction: "above", description: "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", tasks: ["regression"] },
+    { key: "swing_beyond", defaultSpec: { "warn": 1 }, direction: "above", description: "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", tasks: ["regression"] },
+    { key: "swing_spikes", defaultSpec: { "warn": 1.5, "fail": 2 }, direction: "above", description: "Total variation of the predictions between the training samples divided by the training targets' own total variation.", tasks: ["regression"] },
+    { key: "leakage", defaultSpec: 0, direction: "above", description: "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", tasks: ["regression", "classification"] },
+    { key: "reproducibility", defaultSpec: 0.01, direction: "above", description: "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", tasks: ["regression", "classification"] },
+    { key: "condition", defaultSpec: { "warn": 100000000 }, direction: "above", description: "2-norm condition number of the column-scaled design matrix.", tasks: ["regression", "classification"] },
+    { key: "complexity", defaultSpec: { "warn": 1.5 }, direction: "above", description: "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", tasks: ["regression", "classification"] },
+    { key: "holdout_r2", defaultSpec: "off", direction: "below", description: "Hold-out R^2 (coefficient of determination).", tasks: ["regression"] },
+    { key: "holdout_rmse", defaultSpec: "off", direction: "above", description: "Hold-out RMSE in the target's units.", tasks: ["regression"] },
+    { key: "holdout_mae", defaultSpec: "off", direction: "above", description: "Hold-out mean absolute error in the target's units.", tasks: ["regression"] },
+    { key: "chi_square", defaultSpec: { "warn_below": 0.5, "warn_above": 2 }, direction: "above", description: "Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).", tasks: ["regression"] },
+    { key: "separation", defaultSpec: { "warn": 0, "fail": 1 }, direction: "above", description: "Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.", tasks: ["classification"] },
+    { key: "events_per_parameter", defaultSpec: 10, direction: "below", description: "Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit.", tasks: ["classification"] },
+    { key: "calibration_slope", defaultSpec: { "warn": 0.8, "fail": 0.6 }, direction: "below", description: "Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit.", tasks: ["classification"] },
 ]);
 
 
@@ -54353,6 +54360,7 @@ function normaliseGiven(given) {
 
 
 
+
 /** Most centres one `rbf` term may have (also the schema's cap on `count`). */
 const MAX_RBF_CENTERS = 10_000;
 /** Stable codes of the errors this module throws (besides YAML, schema and limit codes). */
@@ -54366,6 +54374,7 @@ const DESCRIPTOR_ERROR = Object.freeze({
     polynomial: 'polynomial-inputs',
     predictions: 'predictions-form',
     targetTransform: 'target-transform',
+    limitTask: 'limit-task',
 });
 /**
  * Loads one descriptor, validates it, resolves data paths (relative to the descriptor's
@@ -54424,6 +54433,7 @@ function descriptorFromDocument(doc, file, settings) {
     const termsLine = predictions !== null ? predictions.line : line(['terms']);
     const fitLine = raw.fit ? line(['fit']) : termsLine;
     const limits = readLimits(doc, file, raw.limits, ['limits']);
+    checkLimitTasks(doc, file, raw);
     if (raw.fit?.refit === false && !raw.coefficients) {
         throw (0,schema_errors/* errorAt */.Os)(doc, file, 'score-only-coefficients', ['fit', 'refit'], '`refit: false` scores the shipped coefficients, and the descriptor ships none; expected `coefficients` (one per column, intercept first) or `refit: true`');
     }
@@ -54478,6 +54488,24 @@ function descriptorFromDocument(doc, file, settings) {
 /** A data path as written, or the first of a list. */
 function firstWritten(written) {
     return typeof written === 'string' ? written : written[0];
+}
+/**
+ * A regression model's own limit for a check that applies to classifiers only (`separation`,
+ * `events_per_parameter`, `calibration_slope`) is an error at its key: no check would read it,
+ * and a limit that silently does nothing is worse than none. (A classifier lists the checks that
+ * do not apply to it as skipped; the settings file's limits apply to every model and are not judged here.)
+ * @throws InputError `limit-task`
+ */
+function checkLimitTasks(doc, file, raw) {
+    const task = raw.task ?? 'regression';
+    if (task !== 'regression')
+        return;
+    for (const key of Object.keys(raw.limits ?? {})) {
+        const info = limit_keys/* LIMIT_KEYS */.n.find((k) => k.key === key);
+        if (info === undefined || info.tasks.includes(task))
+            continue;
+        throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.limitTask, ['limits', key], `\`${key}\` is the limit of a check of classifiers only, and this model is a regression model, so no check would read it; expected no \`${key}\` here (or \`task: classification\` for a classifier)`);
+    }
 }
 /**
  * `predictions` (a model trained elsewhere) with the rules the schema cannot say: exactly one of

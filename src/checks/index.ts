@@ -68,8 +68,8 @@ function validate(checks: Check[]): Check[] {
 }
 
 /**
- * The limit keys of the registry with their defaults, directions and summaries, in registry
- * order: the source of src/config/generated/limit-keys.ts, of the JSON Schemas' `limits` and of
+ * The limit keys of the registry with their defaults, directions, summaries and the tasks their
+ * checks apply to ({@link appliesTo}), in registry order: the source of src/config/generated/limit-keys.ts, of the JSON Schemas' `limits` and of
  * docs/checks.md (test/tools/gen-validators.mjs writes them; tests keep them current).
  */
 export function registryLimitKeys(): {
@@ -77,8 +77,16 @@ export function registryLimitKeys(): {
   defaultSpec: Check['defaultLimit'];
   direction: Check['direction'];
   description: string;
+  tasks: Task[];
 }[] {
-  return CHECKS.map((c) => ({ key: c.limitKey, defaultSpec: c.defaultLimit, direction: c.direction, description: c.limitSummary }));
+  const all: Task[] = ['regression', 'classification'];
+  return CHECKS.map((c) => ({
+    key: c.limitKey,
+    defaultSpec: c.defaultLimit,
+    direction: c.direction,
+    description: c.limitSummary,
+    tasks: all.filter((task) => appliesTo(c, task)),
+  }));
 }
 
 /** The check with this id, or undefined. */

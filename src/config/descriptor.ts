@@ -6,6 +6,7 @@
 import { NOT_A_FILE } from '../repo/repo-path.js';
 import type { RepoReader } from '../repo/types.js';
 import { resolveDataFile, resolveDataPaths } from './data-paths.js';
+import { LIMIT_KEYS } from './generated/limit-keys.js';
 import { mergeLimits } from './limits.js';
 import { errorAt, SCHEMA_ERROR_CODE, schemaError, showValue } from './schema-errors.js';
 import { validateDescriptorValue } from './schemas.js';
@@ -44,6 +45,7 @@ export const DESCRIPTOR_ERROR = Object.freeze({
   polynomial: 'polynomial-inputs',
   predictions: 'predictions-form',
   targetTransform: 'target-transform',
+  limitTask: 'limit-task',
 });
 
 /**
@@ -102,6 +104,7 @@ export function descriptorFromDocument(doc: YamlDocument, file: string, settings
   const termsLine = predictions !== null ? predictions.line : line(['terms']);
   const fitLine = raw.fit ? line(['fit']) : termsLine;
   const limits = readLimits(doc, file, raw.limits, ['limits']);
+  checkLimitTasks(doc, file, raw);
   if (raw.fit?.refit === false && !raw.coefficients) {
     throw errorAt(
       doc,
@@ -164,6 +167,29 @@ export function descriptorFromDocument(doc: YamlDocument, file: string, settings
 /** A data path as written, or the first of a list. */
 function firstWritten(written: string | string[]): string {
   return typeof written === 'string' ? written : written[0];
+}
+
+/**
+ * A regression model's own limit for a check that applies to classifiers only (`separation`,
+ * `events_per_parameter`, `calibration_slope`) is an error at its key: no check would read it,
+ * and a limit that silently does nothing is worse than none. (A classifier lists the checks that
+ * do not apply to it as skipped; the settings file's limits apply to every model and are not judged here.)
+ * @throws InputError `limit-task`
+ */
+function checkLimitTasks(doc: YamlDocument, file: string, raw: RawDescriptor): void {
+  const task = raw.task ?? 'regression';
+  if (task !== 'regression') return;
+  for (const key of Object.keys(raw.limits ?? {})) {
+    const info = LIMIT_KEYS.find((k) => k.key === key);
+    if (info === undefined || info.tasks.includes(task)) continue;
+    throw errorAt(
+      doc,
+      file,
+      DESCRIPTOR_ERROR.limitTask,
+      ['limits', key],
+      `\`${key}\` is the limit of a check of classifiers only, and this model is a regression model, so no check would read it; expected no \`${key}\` here (or \`task: classification\` for a classifier)`,
+    );
+  }
 }
 
 /**

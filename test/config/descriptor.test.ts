@@ -488,3 +488,27 @@ describe('loadDescriptor: checks beyond the schema', () => {
     expect(d.data.holdout).toBe('../shared/holdout.csv');
   });
 });
+
+describe('loadDescriptor: limits of checks the model has no use for', () => {
+  const model = (task: string, limit: string) =>
+    `version: 1\nname: m\ntask: ${task}\ndata:\n  train: data/train.csv\n  holdout: ../shared/holdout.csv\n  target: a\nterms:\n  - linear: [b]\nlimits:\n  ${limit}\n`;
+
+  it('a regression model setting a classifier-only limit is an error at that key', async () => {
+    for (const key of ['calibration_slope', 'separation', 'events_per_parameter']) {
+      const error = await expectInputError(() => loadDescriptor(repoWith(model('regression', `${key}: off`)), F, defaultSettings()), {
+        code: 'limit-task',
+        file: F,
+        line: 11,
+        key: `limits.${key}`,
+      });
+      expect(error.message).toContain('a check of classifiers only');
+    }
+  });
+
+  it('a classifier may set them, and a regression model its own', async () => {
+    await expect(
+      loadDescriptor(repoWith(model('classification', 'calibration_slope: { fail: 0.5 }')), F, defaultSettings()),
+    ).resolves.toBeDefined();
+    await expect(loadDescriptor(repoWith(model('regression', 'gap_ratio: 1.2')), F, defaultSettings())).resolves.toBeDefined();
+  });
+});
