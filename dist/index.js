@@ -37037,7 +37037,7 @@ function selectKth(a, k) {
 // EXPORTS
 __nccwpck_require__.d(__webpack_exports__, {
   QA: () => (/* binding */ SWEEP_MAX_ROWS),
-  Q$: () => (/* binding */ changedSpec),
+  qZ: () => (/* binding */ designAtSetting),
   gs: () => (/* binding */ oneStandardErrorRule),
   pb: () => (/* binding */ subsample),
   j6: () => (/* binding */ sweepComplexity),
@@ -37285,6 +37285,17 @@ function changedSpec(spec, kind, value) {
     return { ...spec, harmonics: value };
 }
 /**
+ * The design with the swept term at one setting: the term's own spec when `current`, else
+ * {@link changedSpec}; its columns built from the training inputs (`trainColumns`, by name).
+ * @throws InputError when the data cannot carry the setting (e.g. more spline knots than distinct quantiles)
+ */
+function designAtSetting(design, target, setting, trainColumns, file) {
+    const spec = design.terms[target.term].spec;
+    const changed = setting.current ? spec : changedSpec(spec, target.kind, setting.value);
+    const terms = design.terms.map((t, i) => (i === target.term ? (0,design_terms/* createTerm */.P)(changed, trainColumns, file) : t));
+    return (0,design_matrix/* createDesign */.x)(terms, design.intercept);
+}
+/**
  * Rows the sweep uses at most: above this a deterministic even-stride subsample (the detail says
  * `subsampled: true` and gives `rows`). 50,000 rows estimate each setting's k-fold error to well
  * under its own standard error, at a quarter of the cost of 200,000 (common practice: the curve
@@ -37459,16 +37470,13 @@ function sweepComplexity(descriptor, design, train, fit, options = {}) {
         const scaling = (0,weighted_design/* rowScaling */.on)(rows);
         const scaledRows = scaling === null ? rows : { inputs: rows.inputs, y: scaling.y, rows: rows.rows };
         const trainColumns = new Map(design.inputs.map((name, c) => [name, train.inputs[c]]));
-        const spec = design.terms[target.term].spec;
-        const kind = target.kind;
-        for (const { value, current } of sweepSettings(spec, kind, options.maxDegree)) {
+        const swept = { kind: target.kind, term: target.term };
+        for (const { value, current } of sweepSettings(design.terms[target.term].spec, swept.kind, options.maxDegree)) {
             (0,deadline/* checkDeadline */.Ft)('complexity sweep');
             const label = `${target.kind} ${formatSetting(value)}`;
             let d;
             try {
-                const changed = current ? spec : changedSpec(spec, kind, value);
-                const terms = design.terms.map((t, i) => (i === target.term ? (0,design_terms/* createTerm */.P)(changed, trainColumns, descriptor.file) : t));
-                d = (0,design_matrix/* createDesign */.x)(terms, design.intercept);
+                d = designAtSetting(design, swept, { value, current }, trainColumns, descriptor.file);
             }
             catch (error) {
                 // A setting the data cannot carry (e.g. more spline knots than distinct quantiles) leaves a gap.

@@ -1585,10 +1585,6 @@ var data_labels = __webpack_require__(3909);
 var data_parts = __webpack_require__(6837);
 // EXTERNAL MODULE: ./src/design/column-spread.ts
 var column_spread = __webpack_require__(1552);
-// EXTERNAL MODULE: ./src/design/design-matrix.ts
-var design_matrix = __webpack_require__(6566);
-// EXTERNAL MODULE: ./src/design/terms/index.ts + 8 modules
-var design_terms = __webpack_require__(6872);
 // EXTERNAL MODULE: ./src/fit/logistic.ts + 1 modules
 var logistic = __webpack_require__(4702);
 // EXTERNAL MODULE: ./src/diagnostics/complexity.ts + 1 modules
@@ -1596,8 +1592,6 @@ var complexity = __webpack_require__(7070);
 // EXTERNAL MODULE: ./src/diagnostics/folds.ts
 var diagnostics_folds = __webpack_require__(9236);
 ;// CONCATENATED MODULE: ./src/diagnostics/classifier-complexity.ts
-
-
 
 
 
@@ -1639,14 +1633,11 @@ function sweepClassifier(descriptor, design, train) {
     }
     else {
         const trainColumns = new Map(design.inputs.map((name, c) => [name, train.inputs[c]]));
-        const spec = design.terms[target.term].spec;
-        const kind = target.kind;
-        for (const { value, current } of (0,complexity/* sweepSettings */._j)(spec, kind)) {
+        const swept = { kind: target.kind, term: target.term };
+        for (const { value, current } of (0,complexity/* sweepSettings */._j)(design.terms[target.term].spec, swept.kind)) {
             let changed;
             try {
-                const setting = current ? spec : (0,complexity/* changedSpec */.Q$)(spec, kind, value);
-                const terms = design.terms.map((t, i) => (i === target.term ? (0,design_terms/* createTerm */.P)(setting, trainColumns, descriptor.file) : t));
-                changed = (0,design_matrix/* createDesign */.x)(terms, design.intercept);
+                changed = (0,complexity/* designAtSetting */.qZ)(design, swept, { value, current }, trainColumns, descriptor.file);
             }
             catch (error) {
                 // A setting the data cannot carry (e.g. more spline knots than distinct quantiles) is left out.

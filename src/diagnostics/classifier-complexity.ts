@@ -8,10 +8,9 @@
  */
 import type { Descriptor } from '../config/types.js';
 import { InputError } from '../core/errors.js';
-import { createDesign, type Design } from '../design/design-matrix.js';
-import { createTerm, type Term } from '../design/terms/index.js';
+import type { Design } from '../design/design-matrix.js';
 import { firstStepsWithout, fitLogistic, outOfFoldDeviance, type LogisticRows } from '../fit/logistic.js';
-import { changedSpec, oneStandardErrorRule, subsample, sweepSettings, sweepTarget, type SweepKind } from './complexity.js';
+import { designAtSetting, oneStandardErrorRule, subsample, sweepSettings, sweepTarget, type SweepKind } from './complexity.js';
 import { assignFolds } from './folds.js';
 
 /** One point of a classifier's complexity sweep. */
@@ -67,14 +66,11 @@ export function sweepClassifier(descriptor: Descriptor, design: Design, train: L
     for (const l of lambdas) points.push({ value: l, current: l === ridge, design, ridge: l });
   } else {
     const trainColumns = new Map<string, Float64Array>(design.inputs.map((name, c) => [name, train.inputs[c]]));
-    const spec = design.terms[target.term].spec;
-    const kind = target.kind;
-    for (const { value, current } of sweepSettings(spec, kind)) {
+    const swept = { kind: target.kind, term: target.term };
+    for (const { value, current } of sweepSettings(design.terms[target.term].spec, swept.kind)) {
       let changed: Design;
       try {
-        const setting = current ? spec : changedSpec(spec, kind, value);
-        const terms: Term[] = design.terms.map((t, i) => (i === target.term ? createTerm(setting, trainColumns, descriptor.file) : t));
-        changed = createDesign(terms, design.intercept);
+        changed = designAtSetting(design, swept, { value, current }, trainColumns, descriptor.file);
       } catch (error) {
         // A setting the data cannot carry (e.g. more spline knots than distinct quantiles) is left out.
         if (!(error instanceof InputError)) throw error;

@@ -216,11 +216,29 @@ export function sweepSettings(
  * @param kind the sweep's kind (not `ridge`)
  * @param value the setting
  */
-export function changedSpec(spec: TermSpec, kind: Exclude<SweepKind, 'ridge'>, value: number): TermSpec {
+function changedSpec(spec: TermSpec, kind: Exclude<SweepKind, 'ridge'>, value: number): TermSpec {
   if (kind === 'degree') return { ...(spec as PolynomialTermSpec | MultiPolynomialTermSpec), degree: value };
   if (kind === 'width') return { ...(spec as RbfTermSpec), width: value };
   if (kind === 'knots') return { ...(spec as SplineTermSpec), knots: { kind: 'count', count: value } };
   return { ...(spec as FourierTermSpec), harmonics: value };
+}
+
+/**
+ * The design with the swept term at one setting: the term's own spec when `current`, else
+ * {@link changedSpec}; its columns built from the training inputs (`trainColumns`, by name).
+ * @throws InputError when the data cannot carry the setting (e.g. more spline knots than distinct quantiles)
+ */
+export function designAtSetting(
+  design: Design,
+  target: { kind: Exclude<SweepKind, 'ridge'>; term: number },
+  setting: { value: number; current: boolean },
+  trainColumns: Map<string, Float64Array>,
+  file: string,
+): Design {
+  const spec = design.terms[target.term].spec;
+  const changed = setting.current ? spec : changedSpec(spec, target.kind, setting.value);
+  const terms: Term[] = design.terms.map((t, i) => (i === target.term ? createTerm(changed, trainColumns, file) : t));
+  return createDesign(terms, design.intercept);
 }
 
 /**
@@ -427,16 +445,13 @@ export function sweepComplexity(
     const scaling = rowScaling(rows);
     const scaledRows: Rows = scaling === null ? rows : { inputs: rows.inputs, y: scaling.y, rows: rows.rows };
     const trainColumns = new Map<string, Float64Array>(design.inputs.map((name, c) => [name, train.inputs[c]]));
-    const spec = design.terms[target.term].spec;
-    const kind = target.kind;
-    for (const { value, current } of sweepSettings(spec, kind, options.maxDegree)) {
+    const swept = { kind: target.kind, term: target.term };
+    for (const { value, current } of sweepSettings(design.terms[target.term].spec, swept.kind, options.maxDegree)) {
       checkDeadline('complexity sweep');
       const label = `${target.kind} ${formatSetting(value)}`;
       let d: Design;
       try {
-        const changed = current ? spec : changedSpec(spec, kind, value);
-        const terms: Term[] = design.terms.map((t, i) => (i === target.term ? createTerm(changed, trainColumns, descriptor.file) : t));
-        d = createDesign(terms, design.intercept);
+        d = designAtSetting(design, swept, { value, current }, trainColumns, descriptor.file);
       } catch (error) {
         // A setting the data cannot carry (e.g. more spline knots than distinct quantiles) leaves a gap.
         if (!(error instanceof InputError)) throw error;
