@@ -221,11 +221,15 @@ async function readNumbers(repo, command, header, target) {
         throw new errors/* InputError */.dz(error.code, message, error.location);
     }
 }
-/** The text of a data file as written (decompressed when its name ends in `.gz`), within the plain-file size cap. */
+/**
+ * The text of a data file as the CSV readers read it (data/gzip-stream.ts `openDataFile`:
+ * decompressed when its name ends in `.gz`, within the plain-file size cap).
+ */
 async function fileText(repo, file) {
-    const bytes = await repo.read(file);
-    const plain = (0,gzip_stream/* isGzipPath */.ip)(file) ? (0,external_node_zlib_.gunzipSync)(bytes, { maxOutputLength: csv_rules/* DEFAULT_MAX_BYTES */.fS }) : bytes;
-    return new TextDecoder('utf-8').decode(plain).replace(/^\uFEFF/, '');
+    const pieces = [];
+    for await (const piece of (0,gzip_stream/* openDataFile */.fu)(repo, file, csv_rules/* DEFAULT_MAX_BYTES */.fS))
+        pieces.push(piece);
+    return new TextDecoder('utf-8').decode(Buffer.concat(pieces)).replace(/^\uFEFF/, '');
 }
 /**
  * The text of the data rows `indexes` of a CSV, from the rows' physical lines: the header (the

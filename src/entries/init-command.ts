@@ -6,7 +6,7 @@
  */
 import { existsSync } from 'node:fs';
 import path from 'node:path';
-import { gunzipSync, gzipSync } from 'node:zlib';
+import { gzipSync } from 'node:zlib';
 import { descriptorText, firstModelParameters, ratioLimitFor, settingsText } from '../config/init-files.js';
 import { DEFAULT_MODEL_PATTERNS, DEFAULT_SETTINGS_PATH } from '../config/settings-file.js';
 import { InputError, quoteValue } from '../core/errors.js';
@@ -15,7 +15,7 @@ import { nearestWord } from '../core/nearest.js';
 import { VERSION } from '../core/version.js';
 import { readHeader, readTable, type Table } from '../data/table.js';
 import { DECIMAL_COMMA_HINT, DEFAULT_MAX_BYTES, MISSING_HINT } from '../data/csv-rules.js';
-import { isGzipPath } from '../data/gzip-stream.js';
+import { isGzipPath, openDataFile } from '../data/gzip-stream.js';
 import type { CsvFormat } from '../data/csv-format.js';
 import { splitRows } from '../diagnostics/holdout-split.js';
 import { createFsRepository } from '../repo/fs-repository.js';
@@ -107,11 +107,14 @@ async function readNumbers(
   }
 }
 
-/** The text of a data file as written (decompressed when its name ends in `.gz`), within the plain-file size cap. */
+/**
+ * The text of a data file as the CSV readers read it (data/gzip-stream.ts `openDataFile`:
+ * decompressed when its name ends in `.gz`, within the plain-file size cap).
+ */
 async function fileText(repo: RepoReader, file: string): Promise<string> {
-  const bytes = await repo.read(file);
-  const plain = isGzipPath(file) ? gunzipSync(bytes, { maxOutputLength: DEFAULT_MAX_BYTES }) : bytes;
-  return new TextDecoder('utf-8').decode(plain).replace(/^\uFEFF/, '');
+  const pieces: Uint8Array[] = [];
+  for await (const piece of openDataFile(repo, file, DEFAULT_MAX_BYTES)) pieces.push(piece);
+  return new TextDecoder('utf-8').decode(Buffer.concat(pieces)).replace(/^\uFEFF/, '');
 }
 
 /**
